@@ -1,0 +1,58 @@
+/**
+ * Shared domain types of the spectral core. Plain data only, so results
+ * cross the server/browser boundary as JSON.
+ */
+
+/** A relative spectral power distribution on an increasing wavelength grid (nm). */
+export interface Spd {
+  wavelengths: number[];
+  values: number[];
+}
+
+export interface CriResult {
+  /** General colour rendering index, mean of R1..R8 (CIE 13.3-1995). */
+  ra: number;
+  /** Special indices R1..R14. */
+  ri: number[];
+  /** Distance of test and reference source in CIE 1960 u,v (CIE 13.3 §5.3). */
+  dc: number;
+  /** false when dc ≥ 5.4e-3: Ra is then not meaningful. */
+  valid: boolean;
+  /** Reference illuminant used: 'planckian' or 'daylight'. */
+  reference: 'planckian' | 'daylight';
+}
+
+export interface Tm30Bin {
+  rf: number;
+  /** Local chroma shift, as a fraction (−0.07 = −7 %). */
+  rcs: number;
+  /** Local hue shift, radians. */
+  rhs: number;
+  /** Mean test and reference a',b' of the bin (for the colour-vector graphic). */
+  testAB: [number, number];
+  refAB: [number, number];
+}
+
+export interface Tm30Result {
+  rf: number;
+  rg: number;
+  bins: Tm30Bin[];
+}
+
+export interface SpectrumEvaluation {
+  XYZ: [number, number, number];
+  x: number;
+  y: number;
+  u: number;
+  v: number;
+  uPrime: number;
+  vPrime: number;
+  cct: number;
+  duv: number;
+  cri: CriResult;
+  tm30: Tm30Result;
+  ler: number;
+  peakNm: number;
+  centroidNm: number;
+  fwhmNm: number;
+}
