@@ -1,0 +1,43 @@
+#!/usr/bin/env bash
+# `npm start`: install what is missing, start the private MariaDB and the local service fakes,
+# migrate, seed demo data into an empty database, build, and serve on 127.0.0.1.
+# Ctrl-C stops the app, the fakes and the database cleanly. Data is kept for the next start.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+bash scripts/ensure-tools.sh
+PF_PROFILE=dev . scripts/profile.sh
+
+pids=()
+cleanup() {
+  trap - INT TERM EXIT
+  echo; echo "stopping…"
+  for p in "${pids[@]}"; do kill -TERM "$p" 2>/dev/null || true; done
+  for p in "${pids[@]}"; do wait "$p" 2>/dev/null || true; done
+  [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh stop || true
+}
+trap cleanup INT TERM EXIT
+
+[ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh start
+node --import tsx scripts/fakes.ts & pids+=($!)
+npm run --silent db:migrate
+npm run --silent db:seed
+if [ ! -f build/index.js ] || [ -n "$(find src static package-lock.json svelte.config.js vite.config.ts tailwind.config.ts -newer build/index.js -print -quit)" ]; then
+  echo "build: vite build"
+  npm run --silent build >.runtime/build.log 2>&1 || { tail -40 .runtime/build.log; exit 1; }
+fi
+node build & pids+=($!)
+for _ in $(seq 1 100); do curl -fsS "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break; sleep 0.2; done
+cat <<TXT
+
+  Phosforge is running at  $ORIGIN
+  Caught e-mail (SMTP catcher inbox):  $MAIL_INBOX_URL
+
+  Demo sign-ins (password for all: phosforge-demo)
+    formulator  rhea.okafor@kestrelhollow.example
+    technician  tomas.brand@kestrelhollow.example
+    quality     ines.halloran@kestrelhollow.example
+    admin       admin@kestrelhollow.example
+
+  Ctrl-C stops the app and the database.
+TXT
+wait "${pids[@]}"

@@ -1,0 +1,45 @@
+#!/usr/bin/env bash
+# `npm test`: the same set-up as `npm start`, against a separate test database and its own
+# ports (so it can run while `npm start` is up), then svelte-check, Vitest (unit + integration
+# against the real MariaDB) and Playwright end-to-end tests in Debian's Chromium.
+# Stops everything it started, prints a summary, exits non-zero on any failure.
+set -uo pipefail
+cd "$(dirname "$0")/.."
+bash scripts/ensure-tools.sh --test || exit 1
+PF_PROFILE=test . scripts/profile.sh
+rm -rf "$PF_S3_DIR"
+
+pids=()
+declare -a summary=()
+failed=0
+cleanup() {
+  trap - INT TERM EXIT
+  for p in "${pids[@]}"; do kill -TERM "$p" 2>/dev/null || true; done
+  for p in "${pids[@]}"; do wait "$p" 2>/dev/null || true; done
+  [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh stop >/dev/null || true
+}
+trap cleanup INT TERM EXIT
+
+step() { # step <name> <command...>
+  local name="$1"; shift
+  local t0=$SECONDS
+  echo; echo "=== $name ==="
+  if "$@"; then summary+=("PASS  $name  ($((SECONDS - t0)) s)"); else summary+=("FAIL  $name  ($((SECONDS - t0)) s)"); failed=1; fi
+}
+
+if [ -z "${PF_EXTERNAL_DB:-}" ]; then
+  bash scripts/db.sh start || exit 1
+  # A fresh test database for every run.
+  bash scripts/db.sh sql -e "DROP DATABASE IF EXISTS \`$DB_NAME\`; CREATE DATABASE \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
+fi
+node --import tsx scripts/fakes.ts & pids+=($!)
+step "migrate + seed" bash -c "npm run --silent db:migrate && npm run --silent db:seed"
+step "svelte-check" npm run --silent check
+step "vitest (unit + integration)" npx vitest run
+step "build" bash -c "npm run --silent build > .runtime/build-test.log 2>&1 || { tail -40 .runtime/build-test.log; exit 1; }"
+step "playwright (e2e, Chromium)" npx playwright test
+
+echo; echo "=== summary ==="
+printf '%s\n' "${summary[@]}"
+if [ $failed -ne 0 ]; then echo "npm test: FAILED"; exit 1; fi
+echo "npm test: all green"

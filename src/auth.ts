@@ -1,0 +1,75 @@
+/**
+ * Sign-in through @auth/sveltekit: e-mail + password (Credentials provider, JWT sessions).
+ * Throttling and every attempt are recorded in MariaDB; the guard in hooks.server.ts re-reads
+ * the user on each request, so deactivation and role changes take effect at once.
+ */
+import { SvelteKitAuth, CredentialsSignin } from '@auth/sveltekit';
+import Credentials from '@auth/sveltekit/providers/credentials';
+import { z } from 'zod';
+import * as users from '$lib/server/db/users';
+import * as audit from '$lib/server/db/audit';
+import { verifyPassword, DUMMY_HASH } from '$lib/server/auth/passwords';
+import { isThrottled, recordAttempt } from '$lib/server/auth/throttle';
+
+const credentialsSchema = z.object({
+  email: z.string().trim().toLowerCase().max(254).pipe(z.email()),
+  password: z.string().min(1).max(200)
+});
+
+class GenericSignInError extends CredentialsSignin {
+  code = 'credentials';
+}
+
+function clientIp(request: Request): string | null {
+  return request.headers.get('x-forwarded-for')?.split(',')[0]?.trim() ?? null;
+}
+
+export const { handle, signIn, signOut } = SvelteKitAuth({
+  trustHost: true,
+  logger: {
+    // A wrong password is routine (it is recorded and audited); everything else is logged.
+    error(err) {
+      if (!(err instanceof CredentialsSignin)) console.error('[auth]', err.name, err.message);
+    },
+    warn() {},
+    debug() {}
+  },
+  session: { strategy: 'jwt', maxAge: 12 * 60 * 60 },
+  pages: { signIn: '/signin', error: '/signin' },
+  providers: [
+    Credentials({
+      credentials: { email: { label: 'E-mail' }, password: { label: 'Password', type: 'password' } },
+      authorize: async (raw, request) => {
+        const parsed = credentialsSchema.safeParse(raw);
+        if (!parsed.success) throw new GenericSignInError();
+        const { email, password } = parsed.data;
+        const ip = clientIp(request);
+        if (await isThrottled(email)) {
+          await recordAttempt(email, false, ip);
+          await audit.record({ actorEmail: email, entityType: 'session', action: 'sign-in-throttled', ip });
+          throw new GenericSignInError();
+        }
+        const user = await users.findWithHashByEmail(email);
+        const ok = await verifyPassword(password, user?.passwordHash || DUMMY_HASH);
+        if (!user || !ok || !user.active) {
+          await recordAttempt(email, false, ip);
+          await audit.record({ actorId: user?.id ?? null, actorEmail: email, entityType: 'session', action: 'sign-in-failed', ip });
+          throw new GenericSignInError();
+        }
+        await recordAttempt(email, true, ip);
+        await audit.record({ actorId: user.id, actorEmail: user.email, entityType: 'session', action: 'sign-in', ip });
+        return { id: String(user.id), email: user.email, name: user.name };
+      }
+    })
+  ],
+  callbacks: {
+    jwt({ token, user }) {
+      if (user?.id) token.uid = user.id;
+      return token;
+    },
+    session({ session, token }) {
+      if (typeof token.uid === 'string') session.user.id = token.uid;
+      return session;
+    }
+  }
+});

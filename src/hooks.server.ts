@@ -1,0 +1,84 @@
+import { sequence } from '@sveltejs/kit/hooks';
+import { error, json, redirect, type Handle, type HandleServerError } from '@sveltejs/kit';
+import { handle as authHandle } from './auth';
+import { decide } from '$lib/access/route-table';
+import * as users from '$lib/server/db/users';
+import { userForToken } from '$lib/server/auth/tokens';
+import { isDbUnavailable } from '$lib/server/db/index';
+import { securityHeaders } from '$lib/server/security-headers';
+
+/** Who is asking: a bearer token on /api, else the Auth.js session. Inactive users count as signed out. */
+async function identify(event: Parameters<Handle>[0]['event']): Promise<Response | null> {
+  event.locals.user = null;
+  event.locals.viaToken = false;
+  event.locals.denied = null;
+  const authz = event.request.headers.get('authorization');
+  if (event.url.pathname.startsWith('/api/') && authz?.toLowerCase().startsWith('bearer ')) {
+    const user = await userForToken(authz.slice(7).trim());
+    if (!user) return json({ error: 'The API token is unknown, expired or revoked, or its user is deactivated.' }, { status: 401 });
+    event.locals.user = user;
+    event.locals.viaToken = true;
+    return null;
+  }
+  const session = await event.locals.auth();
+  const id = Number(session?.user?.id);
+  if (Number.isInteger(id) && id > 0) {
+    const user = await users.get(id);
+    event.locals.user = user?.active ? user : null;
+  }
+  return null;
+}
+
+const guard: Handle = async ({ event, resolve }) => {
+  const isApi = event.url.pathname.startsWith('/api/');
+  if (event.route.id === '/api/health') return resolve(event);
+  try {
+    const early = await identify(event);
+    if (early) return early;
+  } catch (err) {
+    if (isDbUnavailable(err)) {
+      if (isApi) return json({ error: 'The database is not reachable; try again shortly.' }, { status: 503, headers: { 'retry-after': '5' } });
+      error(503, 'The database is not reachable; try again shortly.');
+    }
+    throw err;
+  }
+  const user = event.locals.user;
+  const decision = decide(event.route.id, event.request.method, user?.roles ?? null);
+  if (decision === 'allow') return resolve(event);
+  if (decision === 'signin') {
+    if (isApi) return json({ error: 'Sign-in or an API token is required.' }, { status: 401 });
+    const back = event.url.pathname + event.url.search;
+    redirect(303, `/signin?redirectTo=${encodeURIComponent(back)}`);
+  }
+  const reason = decision === 'unlisted'
+    ? 'This address is not open to any role.'
+    : `Your roles (${user?.roles.join(', ') || 'none'}) do not include access to this page or action.`;
+  if (isApi) return json({ error: 'Forbidden', details: reason }, { status: 403 });
+  if (event.request.method === 'GET' && !event.isDataRequest) {
+    event.locals.denied = reason;
+    return resolve(event);
+  }
+  error(403, { message: 'Forbidden', reason });
+};
+
+const headers: Handle = async ({ event, resolve }) => {
+  let response = await resolve(event);
+  try {
+    response.headers.set('x-frame-options', 'DENY');
+  } catch {
+    // Response.redirect() (used by Auth.js) has immutable headers: copy into a mutable response.
+    response = new Response(response.body, { status: response.status, statusText: response.statusText, headers: new Headers(response.headers) });
+  }
+  for (const [k, v] of Object.entries(securityHeaders(event.url.pathname))) {
+    if (!response.headers.has(k)) response.headers.set(k, v);
+  }
+  return response;
+};
+
+export const handle = sequence(headers, authHandle, guard);
+
+export const handleError: HandleServerError = ({ error: err, status }) => {
+  if (isDbUnavailable(err)) return { message: 'The database is not reachable; try again shortly.' };
+  if (status !== 404) console.error('[phosforge] unexpected error', err instanceof Error ? err.stack : err);
+  return { message: 'Something went wrong on our side. The error has been logged.' };
+};

@@ -1,0 +1,62 @@
+/**
+ * The only place that reads the environment. Typed, validated once, fails fast.
+ * Variables are documented in README.md ("Configuration").
+ */
+import { z } from 'zod';
+import { connectionFromEnv } from '../../../knexfile';
+
+const envSchema = z.object({
+  AUTH_SECRET: z.string().min(32, 'AUTH_SECRET must be at least 32 characters').optional(),
+  ORIGIN: z.string().url().optional(),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().positive().default(2525),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASS: z.string().optional(),
+  SMTP_SECURE: z.enum(['true', 'false']).default('false'),
+  MAIL_FROM: z.string().default('Phosforge <noreply@phosforge.invalid>'),
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_BUCKET: z.string().default('phosforge-files'),
+  S3_ACCESS_KEY_ID: z.string().default('S3RVER'),
+  S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
+  S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('true'),
+  NODE_ENV: z.string().default('development')
+});
+
+function load() {
+  const parsed = envSchema.safeParse(process.env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ');
+    throw new Error(`Phosforge configuration error: ${lines}`);
+  }
+  const env = parsed.data;
+  return {
+    authSecret: env.AUTH_SECRET,
+    origin: env.ORIGIN,
+    production: env.NODE_ENV === 'production',
+    db: connectionFromEnv(process.env),
+    mail: {
+      host: env.SMTP_HOST,
+      port: env.SMTP_PORT,
+      secure: env.SMTP_SECURE === 'true',
+      auth: env.SMTP_USER ? { user: env.SMTP_USER, pass: env.SMTP_PASS ?? '' } : undefined,
+      from: env.MAIL_FROM
+    },
+    storage: {
+      endpoint: env.S3_ENDPOINT,
+      region: env.S3_REGION,
+      bucket: env.S3_BUCKET,
+      accessKeyId: env.S3_ACCESS_KEY_ID,
+      secretAccessKey: env.S3_SECRET_ACCESS_KEY,
+      forcePathStyle: env.S3_FORCE_PATH_STYLE === 'true'
+    }
+  };
+}
+
+export type AppConfig = ReturnType<typeof load>;
+let cached: AppConfig | undefined;
+
+export function config(): AppConfig {
+  cached ??= load();
+  return cached;
+}

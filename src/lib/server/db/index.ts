@@ -1,0 +1,28 @@
+/** The one Knex instance of the app (created on first use). */
+import knexFactory, { type Knex } from 'knex';
+import { config } from '../config';
+
+let instance: Knex | undefined;
+
+export function db(): Knex {
+  instance ??= knexFactory({
+    client: 'mysql2',
+    connection: { ...config().db, supportBigNumbers: true, decimalNumbers: true },
+    pool: { min: 0, max: 20, acquireTimeoutMillis: 5_000 },
+    acquireConnectionTimeout: 5_000
+  });
+  return instance;
+}
+
+export async function closeDb(): Promise<void> {
+  if (instance) await instance.destroy();
+  instance = undefined;
+}
+
+/** Errors that mean "the database cannot be reached right now" (→ 503, not 500). */
+export function isDbUnavailable(err: unknown): boolean {
+  const code = (err as { code?: string } | null)?.code ?? '';
+  const msg = err instanceof Error ? err.message : '';
+  return ['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ETIMEDOUT', 'ECONNRESET', 'ER_CON_COUNT_ERROR', 'EPIPE'].includes(code)
+    || /Knex: Timeout acquiring a connection|Connection lost|connect ECONNREFUSED/i.test(msg);
+}

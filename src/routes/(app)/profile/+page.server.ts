@@ -1,0 +1,35 @@
+import { fail } from '@sveltejs/kit';
+import { z } from 'zod';
+import { requireUser } from '$lib/server/auth/require';
+import * as tokens from '$lib/server/auth/tokens';
+import * as audit from '$lib/server/db/audit';
+import type { Actions, PageServerLoad } from './$types';
+
+const createSchema = z.object({
+  name: z.string().trim().min(1, 'Give the token a name').max(80, 'At most 80 characters'),
+  days: z.coerce.number().int('Whole days').min(1, 'At least 1 day').max(365, 'At most 365 days')
+});
+
+export const load: PageServerLoad = async ({ locals }) => {
+  const user = requireUser(locals);
+  return { tokens: await tokens.listFor(user.id) };
+};
+
+export const actions: Actions = {
+  createToken: async ({ locals, request }) => {
+    const user = requireUser(locals);
+    const form = Object.fromEntries(await request.formData());
+    const parsed = createSchema.safeParse(form);
+    if (!parsed.success) return fail(400, { values: { name: String(form.name ?? ''), days: String(form.days ?? '') }, errors: z.flattenError(parsed.error).fieldErrors });
+    const { id, token } = await tokens.create(user.id, parsed.data.name, parsed.data.days);
+    await audit.record({ actorId: user.id, actorEmail: user.email, entityType: 'api_token', entityId: id, action: 'create', after: { name: parsed.data.name, days: parsed.data.days } });
+    return { created: { name: parsed.data.name, token } };
+  },
+  revokeToken: async ({ locals, request }) => {
+    const user = requireUser(locals);
+    const id = Number((await request.formData()).get('id'));
+    if (!Number.isInteger(id) || !(await tokens.revoke(user.id, id))) return fail(404, { revokeError: 'No such active token.' });
+    await audit.record({ actorId: user.id, actorEmail: user.email, entityType: 'api_token', entityId: id, action: 'revoke' });
+    return { revoked: id };
+  }
+};

@@ -1,0 +1,26 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { z } from 'zod';
+import * as invites from '$lib/server/db/invites';
+import * as accounts from '$lib/server/services/accounts';
+import { acceptSchema } from '$lib/schemas/accounts';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async ({ params }) => {
+  const open = await invites.findOpen(params.token);
+  return { invite: open ? { email: open.email, roles: open.roles } : null };
+};
+
+export const actions: Actions = {
+  accept: async ({ params, request }) => {
+    const form = Object.fromEntries(await request.formData());
+    const parsed = acceptSchema.safeParse(form);
+    if (!parsed.success) return fail(400, { name: String(form.name ?? ''), errors: z.flattenError(parsed.error).fieldErrors });
+    try {
+      await accounts.acceptInvite(params.token, parsed.data.name, parsed.data.password);
+    } catch (err) {
+      if (err instanceof accounts.AccountError) return fail(409, { name: parsed.data.name, error: err.message });
+      throw err;
+    }
+    redirect(303, '/signin?welcome=1');
+  }
+};
