@@ -5,6 +5,7 @@ export default defineConfig({
   plugins: [sveltekit()],
   test: {
     include: ['tests/**/*.test.ts'],
+    setupFiles: ['tests/setup-env.ts'],
     environment: 'node',
     testTimeout: 30_000,
     hookTimeout: 60_000,

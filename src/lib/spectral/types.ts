@@ -56,3 +56,17 @@ export interface SpectrumEvaluation {
   centroidNm: number;
   fwhmNm: number;
 }
+
+/** Options of `evaluateSpectrum`: skip the slower metrics on live/solver paths. */
+export interface EvaluateOptions {
+  /** Compute CIE 13.3 CRI (default true). */
+  cri?: boolean;
+  /** Compute TM-30 / CIE 224 (default true). */
+  tm30?: boolean;
+}
+
+/** Result when CRI or TM-30 may have been skipped: skipped parts are null. */
+export type PartialSpectrumEvaluation = Omit<SpectrumEvaluation, 'cri' | 'tm30'> & {
+  cri: CriResult | null;
+  tm30: Tm30Result | null;
+};

@@ -1,0 +1,95 @@
+/**
+ * Floors (minimum/maximum metric values) and objectives of a blend solve.
+ *
+ * Metrics: Ra and R9 (CIE 13.3-1995), Rf and Rg (ANSI/IES TM-30-20 = CIE 224:2017 for
+ * Rf), LER (lm/W, CIE 15:2004 photometry), all from the spectral core. Typical floor
+ * sets: "90 CRI" = Ra ≥ 90 and R9 ≥ 50; TM-30 P2 = Rf ≥ 75 [from memory], Rg ≥ 92
+ * (DOMAIN.md §3–4) [common practice]. A floor "binds" when the candidate sits within
+ * BINDING_MARGIN of it: the optimiser pushed against it.
+ */
+export interface Floors {
+  raMin?: number;
+  r9Min?: number;
+  rfMin?: number;
+  rgMin?: number;
+  rgMax?: number;
+  lerMin?: number;
+}
+
+export type Objective = 'maxLer' | 'maxRa' | 'maxRf' | 'minCost';
+
+export interface LoopMetrics {
+  ra: number;
+  r9: number;
+  ler: number;
+  rf: number | null;
+  rg: number | null;
+  costPer1000Lm: number | null;
+}
+
+type FloorKey = keyof Floors;
+
+interface FloorRule {
+  key: FloorKey;
+  metric: 'ra' | 'r9' | 'rf' | 'rg' | 'ler';
+  sense: 1 | -1;
+  label: string;
+}
+
+export const FLOOR_RULES: FloorRule[] = [
+  { key: 'raMin', metric: 'ra', sense: 1, label: 'Ra' },
+  { key: 'r9Min', metric: 'r9', sense: 1, label: 'R9' },
+  { key: 'rfMin', metric: 'rf', sense: 1, label: 'Rf' },
+  { key: 'rgMin', metric: 'rg', sense: 1, label: 'Rg' },
+  { key: 'rgMax', metric: 'rg', sense: -1, label: 'Rg' },
+  { key: 'lerMin', metric: 'ler', sense: 1, label: 'LER' }
+];
+
+/** Within this distance of its limit a floor is reported as binding (index points, lm/W). */
+export const BINDING_MARGIN = 0.5;
+
+export function needsTm30(floors: Floors, objective: Objective): boolean {
+  return objective === 'maxRf' || floors.rfMin !== undefined || floors.rgMin !== undefined || floors.rgMax !== undefined;
+}
+
+/** Sum of floor shortfalls (0 when every floor is met). */
+export function violation(floors: Floors, m: LoopMetrics): number {
+  let v = 0;
+  for (const r of FLOOR_RULES) {
+    const limit = floors[r.key];
+    const value = m[r.metric];
+    if (limit === undefined || value === null) continue;
+    v += Math.max(0, r.sense * (limit - value));
+  }
+  return v;
+}
+
+export function violatedFloors(floors: Floors, m: LoopMetrics): string[] {
+  return FLOOR_RULES.filter((r) => {
+    const limit = floors[r.key];
+    const value = m[r.metric];
+    return limit !== undefined && value !== null && r.sense * (limit - value) > 0;
+  }).map((r) => `${r.label} ${m[r.metric]?.toFixed(1)} ${r.sense > 0 ? '<' : '>'} ${floors[r.key]}`);
+}
+
+export function bindingFloors(floors: Floors, m: LoopMetrics): FloorKey[] {
+  return FLOOR_RULES.filter((r) => {
+    const limit = floors[r.key];
+    const value = m[r.metric];
+    return limit !== undefined && value !== null && Math.abs(value - limit) <= BINDING_MARGIN;
+  }).map((r) => r.key);
+}
+
+/** Objective as a value to maximise. */
+export function objectiveValue(objective: Objective, m: LoopMetrics): number {
+  switch (objective) {
+    case 'maxLer':
+      return m.ler;
+    case 'maxRa':
+      return m.ra;
+    case 'maxRf':
+      return m.rf ?? -Infinity;
+    case 'minCost':
+      return m.costPer1000Lm === null ? -Infinity : -m.costPer1000Lm;
+  }
+}

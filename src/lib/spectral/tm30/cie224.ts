@@ -1,0 +1,97 @@
+/**
+ * Colour fidelity index Rf (CIE 224:2017 "CIE 2017 Colour Fidelity Index for accurate scientific
+ * use" [CIE224-2017]) and the gamut index Rg with the 16-bin local indices of ANSI/IES TM-30-20
+ * "Method for Evaluating Light Source Color Rendition" [IES-TM30-20].
+ *  1. reference at the test CCT (`reference.ts`; CCT from the CIE 1931 2° observer);
+ *  2. XYZ10 of test, reference and the 99 CES (CIE 1964 10°, 380–780 nm, white Y10 = 100);
+ *  3. CAM02-UCS J'a'b' of each CES under each illuminant (`cam02ucs.ts`);
+ *  4. ΔE'_i, mean ΔE'; Rf = 10·ln(exp((100 − 6.73·ΔE')/10) + 1) (CIE 224 eq. 8–9);
+ *  5. 16 hue bins of 22.5° by reference hue; mean a',b' per bin (TM-30-20 §4.4);
+ *     Rg = 100·A_test/A_ref (polygon areas); Rf,hj from the bin mean ΔE';
+ *     Rcs,hj = (C_t,j − C_r,j)/C_r,j (fraction); Rhs,hj = h_t,j − h_r,j (radians, wrapped).
+ * Input: SPD on the working grid (any scale) and its CCT in K (valid about 1000–25000 K).
+ * Far from white (e.g. a blue pump alone, |Duv| ≳ 0.1) CIECAM02 responses go negative and
+ * Rf, Rg and some bins come out NaN: TM-30 is undefined there; callers show "—".
+ */
+import { cesUnderRaw, CES_COUNT, newCesSet, scaleToWhite100, tm30ReferenceSamples } from './reference';
+import { createCam02Ucs } from './cam02ucs';
+import type { Tm30Bin, Tm30Result } from '../types';
+
+export const TM30_BIN_COUNT = 16;
+/** CIE 224:2017 eq. 9 scale factor. */
+export const RF_SCALE = 6.73;
+
+const test = newCesSet();
+const ref = newCesSet();
+const jabT = new Float64Array(3 * CES_COUNT);
+const jabR = new Float64Array(3 * CES_COUNT);
+
+/** CIE 224:2017 eq. 9: Rf from a mean colour difference ΔE'. */
+export function rfFromDeltaE(deltaE: number): number {
+  return 10 * Math.log(Math.exp((100 - RF_SCALE * deltaE) / 10) + 1);
+}
+
+function polygonArea(a: Float64Array, b: Float64Array): number {
+  let s = 0;
+  for (let j = 0; j < a.length; j++) {
+    const k = (j + 1) % a.length;
+    s += a[j] * b[k] - a[k] * b[j];
+  }
+  return Math.abs(s) / 2;
+}
+
+export function tm30Cie224(spd: Float64Array, cctK: number): Tm30Result {
+  scaleToWhite100(cesUnderRaw(spd, test));
+  tm30ReferenceSamples(cctK, ref);
+  const camT = createCam02Ucs(test.white);
+  const camR = createCam02Ucs(ref.white);
+  const binCount = new Float64Array(TM30_BIN_COUNT);
+  const binDE = new Float64Array(TM30_BIN_COUNT);
+  const at = new Float64Array(TM30_BIN_COUNT);
+  const bt = new Float64Array(TM30_BIN_COUNT);
+  const ar = new Float64Array(TM30_BIN_COUNT);
+  const br = new Float64Array(TM30_BIN_COUNT);
+  const binWidth = (2 * Math.PI) / TM30_BIN_COUNT;
+  let sumDE = 0;
+  for (let i = 0; i < CES_COUNT; i++) {
+    const o = 3 * i;
+    camT(test.samples[o], test.samples[o + 1], test.samples[o + 2], jabT, o);
+    camR(ref.samples[o], ref.samples[o + 1], ref.samples[o + 2], jabR, o);
+    const dE = Math.hypot(jabT[o] - jabR[o], jabT[o + 1] - jabR[o + 1], jabT[o + 2] - jabR[o + 2]);
+    sumDE += dE;
+    let h = Math.atan2(jabR[o + 2], jabR[o + 1]);
+    if (h < 0) h += 2 * Math.PI;
+    const j = Math.min(Math.floor(h / binWidth), TM30_BIN_COUNT - 1);
+    binCount[j] += 1;
+    binDE[j] += dE;
+    at[j] += jabT[o + 1];
+    bt[j] += jabT[o + 2];
+    ar[j] += jabR[o + 1];
+    br[j] += jabR[o + 2];
+  }
+  const bins: Tm30Bin[] = [];
+  for (let j = 0; j < TM30_BIN_COUNT; j++) {
+    const n = binCount[j] || 1; // every bin holds CES for real sources; avoid 0/0 otherwise
+    at[j] /= n;
+    bt[j] /= n;
+    ar[j] /= n;
+    br[j] /= n;
+    const ct = Math.hypot(at[j], bt[j]);
+    const cr = Math.hypot(ar[j], br[j]);
+    let dh = Math.atan2(bt[j], at[j]) - Math.atan2(br[j], ar[j]);
+    if (dh > Math.PI) dh -= 2 * Math.PI;
+    if (dh <= -Math.PI) dh += 2 * Math.PI;
+    bins.push({
+      rf: rfFromDeltaE(binDE[j] / n),
+      rcs: cr > 0 ? (ct - cr) / cr : 0,
+      rhs: dh,
+      testAB: [at[j], bt[j]],
+      refAB: [ar[j], br[j]]
+    });
+  }
+  return {
+    rf: rfFromDeltaE(sumDE / CES_COUNT),
+    rg: (100 * polygonArea(at, bt)) / polygonArea(ar, br),
+    bins
+  };
+}

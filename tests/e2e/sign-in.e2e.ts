@@ -1,0 +1,88 @@
+import { test, expect, request } from '@playwright/test';
+import { DEMO, BASE, makeUser, postSignIn, signInThroughForm, signedInContext } from './support/accounts';
+import { ROLE_LABELS, type Role } from '../../src/lib/access/roles';
+
+test.describe('sign-in through the browser', () => {
+  for (const role of Object.keys(DEMO) as Role[]) {
+    test(`a ${role} signs in and sees the app shell for that role`, async ({ page }) => {
+      await signInThroughForm(page, DEMO[role]);
+      await expect(page.getByRole('navigation', { name: 'Main' })).toBeVisible();
+      await expect(page.getByText(ROLE_LABELS[role], { exact: false }).first()).toBeVisible();
+      const font = await page.evaluate(() => getComputedStyle(document.body).fontFamily);
+      expect(font).toContain('IBM Plex Sans');
+      const hasPeople = await page.getByRole('link', { name: 'People' }).count();
+      expect(hasPeople).toBe(role === 'admin' ? 1 : 0);
+      await page.getByRole('button', { name: 'Sign out' }).click();
+      await page.goto('/profile');
+      await expect(page).toHaveURL(/\/signin/);
+    });
+  }
+
+  test('a wrong password gets one generic message', async ({ page }) => {
+    await page.goto('/signin');
+    await page.getByLabel('E-mail').fill(DEMO.quality);
+    await page.getByLabel('Password').fill('not-the-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect(page.getByRole('alert')).toContainText('Sign-in failed');
+    await page.goto('/signin');
+    await page.getByLabel('E-mail').fill('nobody@kestrelhollow.example');
+    await page.getByLabel('Password').fill('whatever');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect(page.getByRole('alert')).toContainText('Sign-in failed');
+  });
+
+  test('a wrong role gets the 403 page inside the app shell', async ({ page }) => {
+    await signInThroughForm(page, DEMO.technician);
+    const res = await page.goto('/admin/users');
+    expect(res?.status()).toBe(403);
+    await expect(page.getByRole('heading', { name: 'Not open to your roles' })).toBeVisible();
+  });
+});
+
+test.describe('throttling and deactivation over HTTP', () => {
+  test('5 failures lock the account for 15 minutes, even for the right password', async () => {
+    const email = 'throttle.e2e@kestrelhollow.example';
+    await makeUser(email, ['formulator'], 'right-password-123');
+    const ctx = await request.newContext({ baseURL: BASE });
+    for (let i = 0; i < 5; i++) expect(await postSignIn(ctx, email, 'wrong')).toContain('error=CredentialsSignin');
+    expect(await postSignIn(ctx, email, 'right-password-123')).toContain('error=CredentialsSignin');
+    await ctx.dispose();
+  });
+
+  test('a deactivated user loses the session and the API token at once', async () => {
+    const email = 'deactivate.e2e@kestrelhollow.example';
+    const id = await makeUser(email, ['quality'], 'right-password-123');
+    const user = await signedInContext(email, 'right-password-123');
+    expect((await user.get('/api/v1/me')).status()).toBe(200);
+    const page = await user.post('/profile?/createToken', { headers: { Origin: BASE, 'x-sveltekit-action': 'true' }, form: { name: 'cli', days: '30' } });
+    const token = JSON.parse((await page.json()).data).find((v: unknown) => typeof v === 'string' && v.startsWith('pfk_'));
+    expect(token).toBeTruthy();
+    const bearer = await request.newContext({ baseURL: BASE, extraHTTPHeaders: { Authorization: `Bearer ${token}` } });
+    expect((await bearer.get('/api/v1/me')).status()).toBe(200);
+
+    const admin = await signedInContext(DEMO.admin);
+    const off = await admin.post('/admin/users?/setActive', { headers: { Origin: BASE }, form: { userId: String(id), active: 'false' } });
+    expect(off.status()).toBe(200);
+    expect((await user.get('/api/v1/me')).status()).toBe(401);
+    expect((await bearer.get('/api/v1/me')).status()).toBe(401);
+    const again = await request.newContext({ baseURL: BASE });
+    expect(await postSignIn(again, email, 'right-password-123')).toContain('error=CredentialsSignin');
+    await Promise.all([user.dispose(), bearer.dispose(), admin.dispose(), again.dispose()]);
+  });
+
+  test('a revoked token stops working', async ({ page }) => {
+    await signInThroughForm(page, DEMO.formulator);
+    await page.goto('/profile');
+    await page.getByLabel('Name').fill('revocation probe');
+    await page.getByRole('button', { name: 'Create token' }).click();
+    const token = (await page.getByTestId('new-token').textContent())!.trim();
+    const bearer = await request.newContext({ baseURL: BASE, extraHTTPHeaders: { Authorization: `Bearer ${token}` } });
+    const me = await bearer.get('/api/v1/me');
+    expect(me.status()).toBe(200);
+    expect((await me.json()).roles).toEqual(['formulator']);
+    await page.getByRole('row', { name: /revocation probe/ }).getByRole('button', { name: 'Revoke' }).click();
+    await expect(page.getByRole('row', { name: /revocation probe/ })).toContainText('revoked');
+    expect((await bearer.get('/api/v1/me')).status()).toBe(401);
+    await bearer.dispose();
+  });
+});
