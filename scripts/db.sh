@@ -5,7 +5,7 @@
 # the unix socket by the OS user who owns it; the app connects over TCP as a non-root user.
 set -euo pipefail
 cd "$(dirname "$0")/.."
-D="$(pwd)/${PF_DB_DIR:-.mariadb}"
+D="${PF_DB_DIR:-.mariadb}"; [[ "$D" = /* ]] || D="$(pwd)/$D"
 SOCK="$D/mysqld.sock"
 PORT="${PF_DB_PORT:-33306}"
 DB_NAME="${DB_NAME:-phosforge}"

@@ -6,4 +6,5 @@ const defaults: Record<string, string> = {
   S3_ENDPOINT: 'http://127.0.0.1:4570', S3_BUCKET: 'phosforge-files',
   AUTH_SECRET: 'test-secret-phosforge-at-least-32-characters-long'
 };
-if (process.env.PF_PROFILE !== 'test') for (const [k, v] of Object.entries(defaults)) process.env[k] = v;
+// Variables already set (npm test, scripts/sandbox.sh) win over these defaults.
+for (const [k, v] of Object.entries(defaults)) process.env[k] ??= v;

@@ -10,7 +10,7 @@ test.describe('sign-in through the browser', () => {
       await expect(page.getByText(ROLE_LABELS[role], { exact: false }).first()).toBeVisible();
       const font = await page.evaluate(() => getComputedStyle(document.body).fontFamily);
       expect(font).toContain('IBM Plex Sans');
-      const hasPeople = await page.getByRole('link', { name: 'People' }).count();
+      const hasPeople = await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'People' }).count();
       expect(hasPeople).toBe(role === 'admin' ? 1 : 0);
       await page.getByRole('button', { name: 'Sign out' }).click();
       await page.goto('/profile');

@@ -1,33 +1,27 @@
 /**
- * Who may use which route: the one table the guard in hooks.server.ts enforces (deny by default:
+ * Who may use which route: the one table (assembled from one file per feature in ./routes/) the guard in hooks.server.ts enforces (deny by default:
  * a route that is missing here answers 403 for everyone). Keys are SvelteKit route ids.
  * `sample` is a concrete path for the route-by-role tests; `methods` lists the roles per HTTP
  * method ('public' = no sign-in, 'signedIn' = any active user). Page form actions are POSTs.
  */
 import type { Role } from './roles';
+import type { Method, RouteRule } from './routes/shared';
+import { CORE_ROUTES } from './routes/core';
+import { MATERIALS_ROUTES } from './routes/materials';
+import { DESIGNER_ROUTES } from './routes/designer';
+import { FORMULATIONS_ROUTES } from './routes/formulations';
+import { BATCHES_ROUTES } from './routes/batches';
+import { QUALITY_ROUTES } from './routes/quality';
 
-export type Audience = 'public' | 'signedIn' | readonly Role[];
-export type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
-
-export interface RouteRule {
-  sample: string;
-  methods: Partial<Record<Method, Audience>>;
-  /** Shown in the navigation for these roles (pages only). */
-  nav?: { label: string; order: number };
-}
-
-const ALL: readonly Role[] = ['formulator', 'technician', 'quality', 'admin'];
-const ADMIN: readonly Role[] = ['admin'];
+export type { Audience, Method, RouteRule } from './routes/shared';
 
 export const ROUTE_TABLE: Record<string, RouteRule> = {
-  '/(app)': { sample: '/', methods: { GET: 'signedIn' } },
-  '/signin': { sample: '/signin', methods: { GET: 'public', POST: 'public' } },
-  '/signout': { sample: '/signout', methods: { POST: 'signedIn' } },
-  '/invite/[token]': { sample: '/invite/nonexistent-token', methods: { GET: 'public', POST: 'public' } },
-  '/(app)/profile': { sample: '/profile', methods: { GET: 'signedIn', POST: 'signedIn' }, nav: { label: 'Profile & tokens', order: 90 } },
-  '/(app)/admin/users': { sample: '/admin/users', methods: { GET: ADMIN, POST: ADMIN }, nav: { label: 'People', order: 80 } },
-  '/api/health': { sample: '/api/health', methods: { GET: 'public' } },
-  '/api/v1/me': { sample: '/api/v1/me', methods: { GET: ALL } }
+  ...CORE_ROUTES,
+  ...MATERIALS_ROUTES,
+  ...DESIGNER_ROUTES,
+  ...FORMULATIONS_ROUTES,
+  ...BATCHES_ROUTES,
+  ...QUALITY_ROUTES
 };
 
 /** Decision for one request. */

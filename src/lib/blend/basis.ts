@@ -8,6 +8,7 @@
  * any mix costs 3k multiply-adds. XYZ here are Σ S·x̄ Δλ (unscaled, Δλ = 1 nm).
  * CMFs: CIE 1931 2° observer, 1 nm, 360–830 nm, from the core's data tables.
  */
+import { BlendInputError } from './errors';
 import { gridIndex } from '../spectral/grid';
 import { CIE1931_2DEG_CMF } from '../spectral/data/cie1931-2deg-cmf';
 import { GRID_LENGTH, GRID_NM, centroidNm, normaliseToUnitPower, toGrid } from './grid';
@@ -56,7 +57,7 @@ export function pumpGrid(pump: PumpSpec): Float64Array {
     const { peakNm, fwhmNm, asymmetry } = pump.parametric;
     return splitGaussian(peakNm, fwhmNm, asymmetry ?? 0);
   }
-  throw new Error(`pump ${pump.name}: give a measured spectrum or parametric { peakNm, fwhmNm }`);
+  throw new BlendInputError(`pump ${pump.name}: give a measured spectrum or parametric { peakNm, fwhmNm }`);
 }
 
 function argmax(a: Float64Array): number {
@@ -82,11 +83,11 @@ export function prepareBasis(input: BlendComponents): Basis {
     const atPump = ex[pumpPeak];
     const max = ex[argmax(ex)];
     if (!(atPump > 1e-6 * max)) {
-      throw new Error(`${p.name}: excitation spectrum is ~0 at the pump peak (${GRID_NM[pumpPeak]} nm)`);
+      throw new BlendInputError(`${p.name}: excitation spectrum is ~0 at the pump peak (${GRID_NM[pumpPeak]} nm)`);
     }
     if (p.absorptionReferenceNm !== undefined) {
       const ref = ex[gridIndex(Math.round(p.absorptionReferenceNm))];
-      if (!(ref > 0)) throw new Error(`${p.name}: excitation is 0 at the absorption reference wavelength`);
+      if (!(ref > 0)) throw new BlendInputError(`${p.name}: excitation is 0 at the absorption reference wavelength`);
       alphaAtPump[i] *= atPump / ref;
     }
     for (let l = 0; l < ex.length; l++) ex[l] /= atPump;

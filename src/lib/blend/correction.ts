@@ -14,6 +14,7 @@
  *            the cautious first trim practised on lines [common practice]).
  * The predicted colour point includes the bias. Linear algebra: mathjs.
  */
+import { BlendInputError } from './errors';
 import { lusolve } from 'mathjs';
 import { uvToCct } from '../spectral/cct/index';
 import { xyToUv } from '../spectral/colorimetry/chromaticity';
@@ -63,7 +64,7 @@ export function correctRecipe(
   target: { x: number; y: number },
   options: { stepFraction?: number; maxIterations?: number } = {}
 ): CorrectionResult {
-  if (measuredPoints.length === 0) throw new Error('correction needs at least one measured point');
+  if (measuredPoints.length === 0) throw new BlendInputError('correction needs at least one measured point');
   const mx = measuredPoints.reduce((s, p) => s + p.x, 0) / measuredPoints.length;
   const my = measuredPoints.reduce((s, p) => s + p.y, 0) / measuredPoints.length;
   const { model, apply, n } = knobModel(basis, recipe);

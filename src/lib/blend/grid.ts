@@ -5,6 +5,7 @@
  * `toGrid` reuses the core's resampler (`spectral/resample.ts`): validated input, linear
  * interpolation inside the measured range, zero outside, small negatives clamped.
  */
+import { BlendInputError } from './errors';
 import { resampleToGrid } from '../spectral/resample';
 import { GRID_END_NM, GRID_LENGTH, GRID_START_NM, GRID_STEP_NM, GRID_WAVELENGTHS_NM } from '../spectral/grid';
 import type { Spd } from './types';
@@ -29,7 +30,7 @@ export function radiantPower(values: ArrayLike<number>): number {
 /** Scale a gridded SPD to unit radiant power; throws on an all-zero spectrum. */
 export function normaliseToUnitPower(values: Float64Array, label: string): Float64Array {
   const p = radiantPower(values);
-  if (!(p > 0)) throw new Error(`${label}: spectrum has no power on 360–830 nm`);
+  if (!(p > 0)) throw new BlendInputError(`${label}: spectrum has no power on 360–830 nm`);
   const out = new Float64Array(values.length);
   for (let i = 0; i < values.length; i++) out[i] = values[i] / p;
   return out;

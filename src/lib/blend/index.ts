@@ -39,3 +39,4 @@ export {
   type CorrectionRequest
 } from './schemas';
 export { DEMO_PUMPS, DEMO_PHOSPHORS, BLUE_PUMP, VIOLET_PUMP, demoPhosphor, type DemoPhosphor } from './demo-components';
+export { BlendInputError } from './errors';

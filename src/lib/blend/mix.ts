@@ -6,6 +6,7 @@
  * The returned SPD is per unit radiant power of output (optical) or per unit pump power
  * (loading); only its shape matters to the metrics.
  */
+import { BlendInputError } from './errors';
 import { evaluateGrid } from '../spectral/evaluate';
 import type { SpectrumEvaluation } from '../spectral/types';
 import { prepareBasis } from './basis';
@@ -32,7 +33,7 @@ export function mix(components: BlendComponents, ratios: MixRatios): MixResult {
   const basis = prepareBasis(components);
   if (ratios.kind === 'optical') {
     if (ratios.fractions.length !== basis.components.length) {
-      throw new Error(`fractions: expected ${basis.components.length} values (pump first), got ${ratios.fractions.length}`);
+      throw new BlendInputError(`fractions: expected ${basis.components.length} values (pump first), got ${ratios.fractions.length}`);
     }
     const w = normaliseRatios(ratios.fractions);
     const spd = superposeSpd(basis, w);
@@ -44,10 +45,10 @@ export function mix(components: BlendComponents, ratios: MixRatios): MixResult {
       sensitivities: opticalSensitivities(basis, w)
     };
   }
-  if (!basis.loading) throw new Error('loading ratios need absorptionPerWtPctMm on every phosphor');
+  if (!basis.loading) throw new BlendInputError('loading ratios need absorptionPerWtPctMm on every phosphor');
   const c = ratios.concentrationsWtPct;
   if (c.length !== components.phosphors.length) {
-    throw new Error(`concentrationsWtPct: expected ${components.phosphors.length} values, got ${c.length}`);
+    throw new BlendInputError(`concentrationsWtPct: expected ${components.phosphors.length} values, got ${c.length}`);
   }
   const p = ratios.loading;
   const res = beerLambertPhotonBudget(basis.loading, c, p.pathLengthMm, p.cascade ?? false, p.cascadePathFactor ?? 1);

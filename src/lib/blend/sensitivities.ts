@@ -7,6 +7,7 @@
  * These are the columns of the Jacobian used by formulators' two-knob corrections
  * (DOMAIN.md §6, common practice). CCT/Duv: Ohno 2014 (core).
  */
+import { BlendInputError } from './errors';
 import { uvToCct } from '../spectral/cct/index';
 import { xyToUv } from '../spectral/colorimetry/chromaticity';
 import type { Basis } from './basis';
@@ -33,7 +34,7 @@ export function opticalColourModel(basis: Basis): ColourModel {
 }
 
 export function loadingColourModel(basis: Basis, loading: LoadingParams): ColourModel {
-  if (!basis.loading) throw new Error('loading model needs an absorption coefficient for every phosphor');
+  if (!basis.loading) throw new BlendInputError('loading model needs an absorption coefficient for every phosphor');
   const lb = basis.loading;
   return (c) =>
     xyOf(tristimulus(beerLambertPhotonBudget(lb, c, loading.pathLengthMm, loading.cascade ?? false, loading.cascadePathFactor ?? 1).spd));

@@ -9,13 +9,14 @@
  * output; XYZ(S) = Σ wₖ XYZ(Êₖ) (linear), so x = X/(X+Y+Z) is a ratio of linear forms.
  * Re-absorption and shape changes are ignored here (see the loading model for those).
  */
+import { BlendInputError } from './errors';
 import type { Basis } from './basis';
 import { GRID_LENGTH } from './grid';
 
 export function normaliseRatios(ratios: number[]): number[] {
   const clean = ratios.map((r) => (Number.isFinite(r) && r > 0 ? r : 0));
   const s = clean.reduce((a, b) => a + b, 0);
-  if (!(s > 0)) throw new Error('ratios: at least one component must be > 0');
+  if (!(s > 0)) throw new BlendInputError('ratios: at least one component must be > 0');
   return clean.map((r) => r / s);
 }
 

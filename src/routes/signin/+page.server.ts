@@ -1,4 +1,5 @@
 import { redirect } from '@sveltejs/kit';
+import { AuthError } from '@auth/sveltekit';
 import { signIn } from '../../auth';
 import type { Actions, PageServerLoad } from './$types';
 
@@ -15,4 +16,17 @@ function safeRedirect(target: string | null): string {
   return target && target.startsWith('/') && !target.startsWith('//') ? target : '/';
 }
 
-export const actions: Actions = { default: signIn };
+export const actions: Actions = {
+  /** A refused sign-in (wrong password, unknown account, throttled, deactivated) shows one generic message. */
+  default: async (event) => {
+    try {
+      return await signIn(event);
+    } catch (err) {
+      if (err instanceof AuthError) {
+        const back = safeRedirect(event.url.searchParams.get('redirectTo'));
+        redirect(303, `/signin?error=CredentialsSignin${back !== '/' ? `&redirectTo=${encodeURIComponent(back)}` : ''}`);
+      }
+      throw err;
+    }
+  }
+};

@@ -16,6 +16,7 @@
  * power on 360–830 nm. Parameters θᵢ = ln αᵢ keep αᵢ > 0; standard errors by the delta
  * method, se(αᵢ) = αᵢ·se(θᵢ).
  */
+import { BlendInputError } from '../errors';
 import { gridIndex } from '../../spectral/grid';
 import { xyzToXy } from '../../spectral/colorimetry/chromaticity';
 import { tristimulus } from '../basis';
@@ -58,7 +59,7 @@ export function calibrateAbsorption(
   builds: CalibrationBuild[],
   opts: { pathLengthMm: number; cascade?: boolean; cascadePathFactor?: number; initialAlpha?: number[] }
 ): CalibrationReport {
-  if (builds.length === 0) throw new Error('calibration needs at least one measured build');
+  if (builds.length === 0) throw new BlendInputError('calibration needs at least one measured build');
   const n = basis.emission.length;
   const measured = builds.map((b, i) => normaliseToUnitPower(b.measured, `build ${i + 1}`));
   const start = (opts.initialAlpha ?? basis.absorptionPerWtPctMm).map((a) => Math.log(a > 0 ? a : 0.1));

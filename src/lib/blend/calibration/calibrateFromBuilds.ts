@@ -3,6 +3,7 @@
  * components as specs. Phosphors without `absorptionPerWtPctMm` start from 0.1 per
  * (wt %·mm) [invented start value; the fit moves it].
  */
+import { BlendInputError } from '../errors';
 import { prepareBasis } from '../basis';
 import { toGrid } from '../grid';
 import type { BlendComponents, LoadingParams, Spd } from '../types';
@@ -23,7 +24,7 @@ export function calibrateFromBuilds(
     phosphors: components.phosphors.map((p) => ({ ...p, absorptionPerWtPctMm: p.absorptionPerWtPctMm ?? 0.1 }))
   };
   const basis = prepareBasis(withStart);
-  if (!basis.loading) throw new Error('calibration: loading basis could not be built');
+  if (!basis.loading) throw new BlendInputError('calibration: loading basis could not be built');
   return calibrateAbsorption(
     basis.loading,
     builds.map((b) => ({ concentrationsWtPct: b.concentrationsWtPct, measured: toGrid(b.spd) })),

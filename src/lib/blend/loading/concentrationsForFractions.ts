@@ -9,6 +9,7 @@
  * Reports the residual so a caller sees when a wanted mix is not reachable (e.g. the
  * cascade caps a phosphor's share).
  */
+import { BlendInputError } from '../errors';
 import { centroidNm } from '../grid';
 import { levenbergMarquardt } from '../calibration/levenbergMarquardt';
 import { beerLambertPhotonBudget, type LoadingBasis, type LoadingResult } from './beerLambertPhotonBudget';
@@ -38,7 +39,7 @@ export function concentrationsForFractions(
   opts: LoadingOptions
 ): ConcentrationSolution {
   const n = basis.emission.length;
-  if (wantedFractions.length !== n + 1) throw new Error('fractions: pump + one per phosphor expected');
+  if (wantedFractions.length !== n + 1) throw new BlendInputError('fractions: pump + one per phosphor expected');
   const w0 = Math.max(wantedFractions[0], 1e-6);
   const pumpCentroid = centroidNm(basis.pump);
   const run = (c: number[]): LoadingResult =>

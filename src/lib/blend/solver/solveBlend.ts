@@ -12,6 +12,7 @@
  * Every candidate sits on the target colour point (the process spread, not the recipe,
  * should consume the tolerance) unless the target is out of gamut.
  */
+import { BlendInputError } from '../errors';
 import { uvToCct } from '../../spectral/cct/index';
 import { uvPrimeToXy, xyToUv, xyToUvPrime, xyzToUvPrime } from '../../spectral/colorimetry/chromaticity';
 import { prepareBasis } from '../basis';
@@ -56,7 +57,7 @@ const fmt = (v: number, d = 4) => v.toFixed(d);
 
 export function solveBlend(problem: SolveProblem): SolveResult {
   const n = problem.components.phosphors.length;
-  if (n < 2 || n > 5) throw new Error(`the solver needs 2–5 phosphors (got ${n})`);
+  if (n < 2 || n > 5) throw new BlendInputError(`the solver needs 2–5 phosphors (got ${n})`);
   const floors = problem.floors ?? {};
   const tolerance = problem.tolerance ?? { kind: 'sdcm', steps: 3 };
   const maxCandidates = problem.maxCandidates ?? 3;

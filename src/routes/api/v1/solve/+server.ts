@@ -1,0 +1,12 @@
+import { requireUser } from '$lib/server/auth/require';
+import { finiteJson, handleApi, readJson } from '$lib/server/api/body';
+import { solveBlend, solveProblemSchema } from '$lib/blend';
+import type { RequestHandler } from './$types';
+
+/** Blend problem (components, target, tolerance, floors, objective) → ranked candidates or the reason none exist. */
+export const POST: RequestHandler = (event) =>
+  handleApi(async () => {
+    requireUser(event.locals);
+    const body = await readJson(event, solveProblemSchema);
+    return finiteJson(solveBlend(body));
+  });

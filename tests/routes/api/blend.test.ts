@@ -1,0 +1,73 @@
+import { describe, expect, it } from 'vitest';
+import { POST as mixPost } from '../../../src/routes/api/v1/mix/+server';
+import { POST as solvePost } from '../../../src/routes/api/v1/solve/+server';
+import { POST as correctPost } from '../../../src/routes/api/v1/correct/+server';
+import { BLUE_PUMP, demoPhosphor } from '../../../src/lib/blend';
+import { cctDuvToXy } from '../../../src/lib/spectral';
+import { call, jsonEvent } from './support';
+
+const components = {
+  pump: BLUE_PUMP,
+  phosphors: [demoPhosphor('ph-gl530'), demoPhosphor('ph-yl568'), demoPhosphor('ph-rd625')]
+};
+
+describe('POST /api/v1/mix', () => {
+  it('returns an SPD and metrics for optical fractions', async () => {
+    const { status, body } = await call(mixPost, jsonEvent({ components, ratios: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2] } }));
+    expect(status).toBe(200);
+    expect(body.spd.wavelengths.length).toBe(body.spd.values.length);
+    expect(body.evaluation.cct).toBeGreaterThan(1500);
+    expect(body.opticalFractions.reduce((a: number, b: number) => a + b, 0)).toBeCloseTo(1, 9);
+  });
+
+  it('answers 422 when the fraction count does not match the components', async () => {
+    const { status, body } = await call(mixPost, jsonEvent({ components, ratios: { kind: 'optical', fractions: [0.5, 0.5] } }));
+    expect(status).toBe(422);
+    expect(body.error).toMatch(/expected 4 values/);
+  });
+
+  it('answers 400 for a negative fraction', async () => {
+    const { status } = await call(mixPost, jsonEvent({ components, ratios: { kind: 'optical', fractions: [-1, 0.3, 0.3, 0.2] } }));
+    expect(status).toBe(400);
+  });
+});
+
+describe('POST /api/v1/solve', () => {
+  it('finds a 3000 K blend inside 3 SDCM with its floors met', async () => {
+    const { status, body } = await call(solvePost, jsonEvent({
+      components,
+      target: { kind: 'cctDuv', cct: 3000, duv: 0 },
+      floors: { raMin: 80 },
+      objective: 'maxLer'
+    }));
+    expect(status).toBe(200);
+    expect(body.status).toBe('ok');
+    const best = body.candidates[0];
+    // ANSI C78.377: 3000 K nominal, and a 3-step MacAdam target is common practice.
+    expect(best.evaluation.cct).toBeGreaterThan(2870);
+    expect(best.evaluation.cct).toBeLessThan(3130);
+    expect(best.evaluation.cri.ra).toBeGreaterThanOrEqual(80);
+  });
+
+  it('answers 400 for an unknown objective', async () => {
+    const { status, body } = await call(solvePost, jsonEvent({ components, target: { kind: 'cctDuv', cct: 3000, duv: 0 }, objective: 'fastest' }));
+    expect(status).toBe(400);
+    expect(body.error).toMatch(/objective/);
+  });
+});
+
+describe('POST /api/v1/correct', () => {
+  it('returns corrected ratios for measured points off target', async () => {
+    const [tx, ty] = cctDuvToXy(3000, 0);
+    const target = { x: tx, y: ty };
+    const { status, body } = await call(correctPost, jsonEvent({
+      components,
+      recipe: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2] },
+      measured: { kind: 'xy', points: [{ x: target.x + 0.01, y: target.y + 0.005 }] },
+      target: { kind: 'cctDuv', cct: 3000, duv: 0 }
+    }));
+    expect(status).toBe(200);
+    expect(body.multipliers).toHaveLength(3);
+    expect(body.measuredMean.x).toBeCloseTo(target.x + 0.01, 9);
+  });
+});
