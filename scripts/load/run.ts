@@ -61,7 +61,7 @@ for (const s of scenarios) {
   const r = await runOne(s, token);
   rows.push(r);
   const goal = r.goalMs ? (r.p95 <= r.goalMs ? `  (p95 goal ${r.goalMs} ms: ok)` : `  (p95 goal ${r.goalMs} ms: MISSED)`) : '';
-  console.log(`${r.route.padEnd(34)} ${String(r.rps).padStart(8)} req/s  p50 ${String(r.p50).padStart(5)} ms  p95 ${String(r.p95).padStart(5)} ms  p99 ${String(r.p99).padStart(5)} ms  errors ${r.errors}${goal}`);
+  console.log(`${r.route.padEnd(34)} ${String(r.rps).padStart(8)} req/s  p50 ${r.p50.toFixed(1).padStart(7)} ms  p95 ${r.p95.toFixed(1).padStart(7)} ms  p99 ${r.p99.toFixed(1).padStart(7)} ms  errors ${r.errors}${goal}`);
 }
 console.log(JSON.stringify({ load: { connections, seconds, routes: rows } }));
 const failed = rows.some((r) => r.errors > 0);
