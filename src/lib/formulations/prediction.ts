@@ -4,10 +4,13 @@
  * CCT/Duv, CIE 13.3-1995 Ra/R1–R14, CIE 224:2017 Rf/Rg, LER), the ANSI C78.377 bin and the
  * distance to the revision's target in the units of its tolerance. Pure: no I/O.
  */
-import { chromaticityError, mix, resolveTarget, type BlendComponents } from '../blend';
-import { withinTolerance } from '../blend/solver/chromaticityError';
+// Narrow imports: the blend index also loads the solver, whose module set-up is slow on a cold start.
+import { mix } from '../blend/mix';
+import { resolveTarget } from '../blend/solver/resolveTarget';
+import { chromaticityError, withinTolerance } from '../blend/solver/chromaticityError';
 import { violatedFloors } from '../blend/solver/floors';
-import { findAnsiBin } from '../spectral';
+import type { BlendComponents } from '../blend/types';
+import { findAnsiBin } from '../spectral/ansi/c78377';
 import type { RevisionContent } from './content';
 
 /** Names the computation that produced a prediction; stored beside it so later readers know. */

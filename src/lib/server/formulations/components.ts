@@ -4,7 +4,7 @@
  * stored record matches the library at save time. Takes the Knex handle so seeds can use it too.
  */
 import type { Knex } from 'knex';
-import type { BlendComponents, PhosphorSpec, Spd } from '../../blend';
+import type { BlendComponents, PhosphorSpec, Spd } from '../../blend/types';
 import type { RevisionContent } from '../../formulations/content';
 import { ValidationError } from './errors';
 

@@ -3,8 +3,8 @@
  * the spectral core's prediction, the core's version and the content hash. Saves nothing.
  */
 import type { Knex } from 'knex';
-import { BlendInputError } from '../../blend';
-import { SpectrumInputError } from '../../spectral';
+import { BlendInputError } from '../../blend/errors';
+import { SpectrumInputError } from '../../spectral/errors';
 import { revisionContentSchema, type RevisionContent } from '../../formulations/content';
 import { PREDICTION_CORE_VERSION, predictRevision, type RevisionPrediction } from '../../formulations/prediction';
 import { loadRevisionComponents } from './components';
