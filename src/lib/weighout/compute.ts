@@ -106,10 +106,10 @@ export function computeWeighout(input: WeighoutInput): WeighoutResult {
   const b = Rat.fromNumber(input.silicone.ratioB);
   const sil = input.silicone;
   const drafts: Draft[] = [
-    { role: 'siliconeA', materialId: null, code: 'PART A', name: `${sil.name} — part A`, basisPct: null, ideal: S.mul(a).div(a.add(b)), tolerance: sil.toleranceA, path: 'silicone.toleranceA' },
+    { role: 'siliconeA', materialId: null, code: 'PART A', name: sil.name, basisPct: null, ideal: S.mul(a).div(a.add(b)), tolerance: sil.toleranceA, path: 'silicone.toleranceA' },
     ...input.phosphors.map((p, i): Draft => ({ role: 'phosphor', materialId: p.materialId, code: p.code, name: p.name, basisPct: phosphorPcts[i], ideal: onBasis(phosphorPcts[i]), tolerance: p.tolerance, path: `phosphors.${i}` })),
     ...input.additives.map((x, i): Draft => ({ role: 'additive', materialId: null, code: x.code, name: x.name, basisPct: additivePcts[i], ideal: onBasis(additivePcts[i]), tolerance: x.tolerance, path: `additives.${i}` })),
-    { role: 'siliconeB', materialId: null, code: 'PART B', name: `${sil.name} — part B`, basisPct: null, ideal: S.mul(b).div(a.add(b)), tolerance: sil.toleranceB, path: 'silicone.toleranceB' }
+    { role: 'siliconeB', materialId: null, code: 'PART B', name: sil.name, basisPct: null, ideal: S.mul(b).div(a.add(b)), tolerance: sil.toleranceB, path: 'silicone.toleranceB' }
   ];
 
   const steps = largestRemainder(drafts.map((d) => d.ideal.div(res)), size.steps);
