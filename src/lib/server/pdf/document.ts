@@ -2,8 +2,9 @@
 import PDFDocument from 'pdfkit';
 import { registerPlex } from './fonts';
 
-export const PAPER_SIZES = ['A4', 'LETTER'] as const;
-export type PaperSize = (typeof PAPER_SIZES)[number];
+import type { PaperSize } from '../../weighout/paper';
+
+export type { PaperSize } from '../../weighout/paper';
 
 export function newDocument(size: PaperSize, info: { title: string; subject: string; author: string }): PDFKit.PDFDocument {
   const doc = new PDFDocument({
