@@ -1,8 +1,8 @@
 /** Row → record mapping of batches and batch lines (snake_case columns to camelCase, decimals as exact strings). */
 import { Rat } from '../../weighout/rational';
 import type { BatchTarget } from '../../weighout/target';
-import type { ToleranceSpec, WeighoutInput, LoadingBasis } from '../../weighout/schema';
-import type { LineRole } from '../../weighout/compute';
+import type { WeighoutInput, LoadingBasis } from '../../weighout/schema';
+import type { PlannedLine } from '../../weighout/compute';
 import type { ActualStatus } from '../../weighout/actual';
 import type { BatchState } from '../../schemas/batches';
 
@@ -53,19 +53,9 @@ export interface Batch extends BatchSummary {
   updatedAt: Date;
 }
 
-export interface BatchLine {
+/** A stored line: the planned fields (as computed) plus the reading, lot, people and quality decision. */
+export interface BatchLine extends Pick<PlannedLine, 'seq' | 'role' | 'materialId' | 'code' | 'name' | 'basisPct' | 'idealG' | 'targetG' | 'lowG' | 'highG' | 'tolerance'> {
   id: number;
-  seq: number;
-  role: LineRole;
-  materialId: number | null;
-  code: string;
-  name: string;
-  basisPct: number | null;
-  idealG: string;
-  targetG: string;
-  lowG: string;
-  highG: string;
-  tolerance: ToleranceSpec;
   actualG: string | null;
   actualStatus: ActualStatus | null;
   lotId: number | null;
