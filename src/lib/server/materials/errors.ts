@@ -1,6 +1,6 @@
 /** Typed failures of the material library; `status` is the HTTP status pages and the API answer with. */
 export class MaterialError extends Error {
-  constructor(readonly status: 400 | 404 | 409 | 422, message: string, readonly details?: { line: number | null; message: string }[]) {
+  constructor(readonly status: 400 | 404 | 409 | 413 | 415 | 422, message: string, readonly details?: { line: number | null; message: string }[]) {
     super(message);
   }
 }
