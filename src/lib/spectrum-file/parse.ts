@@ -22,7 +22,11 @@ const MAX_HEADER_ROWS = 3;
 /** Errors listed before the rest are summarised. */
 const MAX_LISTED_ERRORS = 25;
 
-const fail = (errors: SpectrumFileError[]): SpectrumFileResult => ({ ok: false, errors: capped(errors) });
+/** Line errors in file order first, then whole-file errors. */
+const fail = (errors: SpectrumFileError[]): SpectrumFileResult => ({
+  ok: false,
+  errors: capped([...errors].sort((a, b) => (a.line ?? 1e12) - (b.line ?? 1e12)))
+});
 
 function capped(errors: SpectrumFileError[]): SpectrumFileError[] {
   if (errors.length <= MAX_LISTED_ERRORS) return errors;
