@@ -1,4 +1,4 @@
-import { test, expect, type Browser, type Page } from '@playwright/test';
+import { test, expect, request, type Browser, type Page } from '@playwright/test';
 import { DEMO, signedInContext, BASE, testDb } from './support/accounts';
 
 // The material library in the browser: a formulator creates a phosphor, uploads its spectrum
@@ -108,4 +108,20 @@ test('a stale edit is refused with a clear message and overwrites nothing', asyn
   await second.goto(`/library/${id}`);
   await expect(second.getByText('Cost per kg')).toBeVisible();
   await expect(second.locator('dd', { hasText: '120.00' })).toBeVisible();
+});
+
+test('an API token reads the library and a stale PUT answers 409', async () => {
+  const session = await signedInContext(DEMO.formulator);
+  const created = await session.post('/profile?/createToken', { headers: { Origin: BASE, 'x-sveltekit-action': 'true' }, form: { name: 'library e2e', days: '1' } });
+  const token = JSON.parse((await created.json()).data).find((v: unknown) => typeof v === 'string' && v.startsWith('pfk_'));
+  await session.dispose();
+  const api = await request.newContext({ baseURL: BASE, extraHTTPHeaders: { Authorization: `Bearer ${token}` } });
+  const list = await api.get('/api/v1/phosphors?q=YL-568');
+  expect(list.status()).toBe(200);
+  const [yl] = (await list.json()).items;
+  expect(yl).toMatchObject({ code: 'YL-568', kind: 'phosphor' });
+  const stale = await api.put(`/api/v1/phosphors/${yl.id}`, { data: { version: yl.version + 5, notes: 'stale' } });
+  expect(stale.status()).toBe(409);
+  expect((await stale.json()).error).toMatch(/changed by someone else/);
+  await api.dispose();
 });
