@@ -56,6 +56,10 @@ describe('component query of the designer', () => {
     expect(componentQuerySchema.safeParse({ pump: '1', phosphors: '2,2' }).success).toBe(false);
     expect(componentQuerySchema.safeParse({ pump: '1', phosphors: '1,2,3,4,5,6' }).success).toBe(false);
     expect(componentQuerySchema.safeParse({ pump: 'x', phosphors: '2' }).success).toBe(false);
-    expect(componentQuerySchema.safeParse({ pump: '1' }).success).toBe(false);
+    expect(componentQuerySchema.safeParse({ phosphors: '2' }).success).toBe(false);
+  });
+
+  it('accepts the pump alone', () => {
+    expect(componentQuerySchema.parse({ pump: '1' })).toEqual({ pump: 1, phosphors: [] });
   });
 });
