@@ -13,6 +13,7 @@ export const FORMULATIONS_ROUTES: RouteTable = {
   '/(app)/formulations/compare': { sample: '/formulations/compare', methods: { GET: ALL } },
   '/(app)/formulations/[id]': { sample: '/formulations/1', methods: { GET: ALL } },
   '/(app)/formulations/[id]/revisions/[revisionId]': { sample: '/formulations/999999/revisions/999999', methods: { GET: ALL, POST: REVISION_ACTORS } },
+  '/(app)/formulations/[id]/revisions/[revisionId]/attachments/[attachmentId]': { sample: '/formulations/999999/revisions/999999/attachments/999999', methods: { GET: ALL } },
   '/(app)/audit': { sample: '/audit', methods: { GET: QUALITY }, nav: { label: 'Audit trail', order: 75 } },
   '/(app)/audit/export': { sample: '/audit/export', methods: { GET: QUALITY } },
   '/api/v1/formulations': { sample: '/api/v1/formulations', methods: { GET: ALL, POST: FORMULATION_EDITORS } },

@@ -1,22 +1,12 @@
 /** Helpers of the formulation pages: editor choices, form → content, service refusals → form errors. */
 import { fail } from '@sveltejs/kit';
-import { db } from '../db/index';
+import { listMaterialOptions } from '../materials/components';
 import { formValuesToRaw, type FormValues } from '../../formulations/form-values';
 import { FormulationError, ValidationError } from './errors';
 import { listSiliconeSystems } from './silicone';
 
-export interface EditorOption {
-  id: number;
-  code: string;
-  name: string;
-}
-
-async function materialOptions(kind: 'pump' | 'phosphor'): Promise<EditorOption[]> {
-  return db()('materials').where({ kind }).whereNull('archived_at').orderBy('code').select('id', 'code', 'name');
-}
-
 export async function editorOptions() {
-  const [pumps, phosphors, silicones] = await Promise.all([materialOptions('pump'), materialOptions('phosphor'), listSiliconeSystems()]);
+  const [pumps, phosphors, silicones] = await Promise.all([listMaterialOptions('pump'), listMaterialOptions('phosphor'), listSiliconeSystems()]);
   return { pumps, phosphors, silicones };
 }
 

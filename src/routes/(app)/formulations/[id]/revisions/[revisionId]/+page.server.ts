@@ -8,6 +8,7 @@ import { currentApprovedRevision, getRevision, listAttachments, listSignatures }
 import { contentFromForm, editorOptions, formRefusal } from '$lib/server/formulations/page-support';
 import { createRevision, updateDraft, ValidationError } from '$lib/server/formulations/save';
 import { returnRevision, sign, submit, withdraw } from '$lib/server/formulations/workflow';
+import { addAttachment, removeAttachment } from '$lib/server/formulations/attachments';
 import { contentToFormValues, formDataToValues } from '$lib/formulations/form-values';
 import { allowedCommands } from '$lib/formulations/workflow-rules';
 import type { Actions, PageServerLoad } from './$types';
@@ -100,6 +101,29 @@ export const actions: Actions = {
       return { action: 'sign', done: s.meaning === 'approved' ? 'Signed and approved: this is now the current revision.' : s.meaning === 'returned' ? 'Signed and returned to the author.' : 'Review signature recorded.' };
     } catch (err) {
       return formRefusal(err, values, 'sign');
+    }
+  },
+  attach: async ({ locals, params, request }) => {
+    const user = requireUser(locals, ACTORS);
+    const rev = await revisionOf(params);
+    const fd = await request.formData();
+    const file = fd.get('file');
+    if (!(file instanceof File) || file.size === 0) return fail(400, { action: 'attach', error: 'Choose a file to attach.' });
+    try {
+      await addAttachment(user, rev.id, { name: file.name, body: Buffer.from(await file.arrayBuffer()) }, String(fd.get('label') ?? ''));
+      return { action: 'attach', done: `Attached ${file.name}.` };
+    } catch (err) {
+      return formRefusal(err, {}, 'attach');
+    }
+  },
+  detach: async ({ locals, params, request }) => {
+    const user = requireUser(locals, ACTORS);
+    const rev = await revisionOf(params);
+    try {
+      await removeAttachment(user, rev.id, Number((await request.formData()).get('attachmentId')));
+      return { action: 'detach', done: 'Attachment removed.' };
+    } catch (err) {
+      return formRefusal(err, {}, 'detach');
     }
   },
   newDraft: async ({ locals, params }) => {
