@@ -1,0 +1,21 @@
+/**
+ * Public API of the quality computations (pure TypeScript; no DOM, database or I/O):
+ * per-part metrics and verdicts, ANSI C78.377 binning, MacAdam-type steps, batch summary,
+ * histograms, predicted-vs-measured offsets, plot outlines and the blend correction.
+ */
+export type * from './types';
+export { SUMMARY_QUANTITIES } from './types';
+export { partMetrics } from './partMetrics';
+export { measureParts, MAX_PARTS_PER_UPLOAD, type PartColumns, type PartError, type MeasureResult } from './measureParts';
+export { qualityTarget, type Target, type ResolvedTarget } from './target';
+export { colourOffset, stepEllipseAt, type ColourCentre } from './colourSteps';
+export { judgePart, floorFailures, colourFailure, describeTolerance } from './acceptance';
+export { describe as describeValues } from './statistics';
+export { histogram, niceStep } from './histogram';
+export { predictedVsMeasured, colourPoint, type ColourPoint, type PredictionCheck } from './prediction';
+export { summariseBatch, type BatchSummary } from './summarise';
+export { ellipseOutline, toleranceOutline, planckianOutline, quadrangleOutline } from './outlines';
+export { judgeBatch, defaultAcceptance, type JudgedBatch } from './judgeBatch';
+export {
+  correctFromBatch, correctionRequest, correctedContent, revisionRecipe, DEFAULT_STEP_FRACTION, type BatchCorrection
+} from './correction';

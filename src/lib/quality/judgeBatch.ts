@@ -1,0 +1,27 @@
+/**
+ * A batch judged against its revision: target resolved once, every part judged, summary built.
+ * `defaultAcceptance` takes the revision's own tolerance and floors and requires the ANSI bin when
+ * the revision targets a bin; quality may instead choose a step ellipse for the batch.
+ */
+import type { RevisionContent } from '../formulations/content';
+import { judgePart } from './acceptance';
+import { summariseBatch, type BatchSummary } from './summarise';
+import { qualityTarget, type ResolvedTarget, type Target } from './target';
+import type { Acceptance, JudgedPart, MeasuredPart, Tolerance } from './types';
+
+export interface JudgedBatch {
+  target: ResolvedTarget;
+  acceptance: Acceptance;
+  parts: JudgedPart[];
+  summary: BatchSummary;
+}
+
+export function defaultAcceptance(content: Pick<RevisionContent, 'tolerance' | 'floors' | 'target'>, override?: Tolerance): Acceptance {
+  return { tolerance: override ?? content.tolerance, floors: content.floors, requireTargetBin: content.target.kind === 'ansiBin' };
+}
+
+export function judgeBatch(parts: readonly MeasuredPart[], target: Target, acceptance: Acceptance): JudgedBatch {
+  const t = qualityTarget(target);
+  const judged = parts.map((p) => ({ ...p, verdict: judgePart(p.metrics, t, acceptance) }));
+  return { target: t, acceptance, parts: judged, summary: summariseBatch(judged, t) };
+}
