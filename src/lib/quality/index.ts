@@ -19,3 +19,5 @@ export { judgeBatch, defaultAcceptance, type JudgedBatch } from './judgeBatch';
 export {
   correctFromBatch, correctionRequest, correctedContent, revisionRecipe, DEFAULT_STEP_FRACTION, type BatchCorrection
 } from './correction';
+export { fitDomain, type PlotDomain } from './plotDomain';
+export { chromaticityPlotModel, type ChromaticityPlotModel, type PlotPart, type PlotMarker } from './plotModel';
