@@ -21,3 +21,4 @@ export {
 } from './correction';
 export { fitDomain, type PlotDomain } from './plotDomain';
 export { chromaticityPlotModel, type ChromaticityPlotModel, type PlotPart, type PlotMarker } from './plotModel';
+export { recordMeasurementSummary, type RecordSignature, type RecordMeasurementSummary } from './recordSummary';
