@@ -6,7 +6,7 @@
 export type * from './types';
 export { SUMMARY_QUANTITIES } from './types';
 export { partMetrics } from './partMetrics';
-export { measureParts, MAX_PARTS_PER_UPLOAD, type PartColumns, type PartError, type MeasureResult } from './measureParts';
+export { measureParts, measurePartsPaced, measurePartsStepwise, MAX_PARTS_PER_UPLOAD, type PartColumns, type PartError, type MeasureResult } from './measureParts';
 export { qualityTarget, type Target, type ResolvedTarget } from './target';
 export { colourOffset, stepEllipseAt, type ColourCentre } from './colourSteps';
 export { judgePart, floorFailures, colourFailure, describeTolerance } from './acceptance';
@@ -22,3 +22,4 @@ export {
 export { fitDomain, type PlotDomain } from './plotDomain';
 export { chromaticityPlotModel, type ChromaticityPlotModel, type PlotPart, type PlotMarker } from './plotModel';
 export { recordMeasurementSummary, type RecordSignature, type RecordMeasurementSummary } from './recordSummary';
+export type * from './view';

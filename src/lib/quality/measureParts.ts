@@ -24,14 +24,16 @@ export type MeasureResult = { ok: true; parts: MeasuredPart[] } | { ok: false; e
 
 export const MAX_PARTS_PER_UPLOAD = 2000;
 
-export function measureParts(input: PartColumns, onProgress?: (done: number, total: number) => void): MeasureResult {
+/** Evaluates the parts one by one, yielding (done, total) after each; returns the result. */
+export function* measurePartsStepwise(input: PartColumns): Generator<{ done: number; total: number }, MeasureResult> {
   const total = input.columns.length;
   if (total === 0) return { ok: false, errors: [{ part: '(file)', column: 1, message: 'no intensity column: a file needs a wavelength column and at least one part column' }] };
   if (total > MAX_PARTS_PER_UPLOAD) return { ok: false, errors: [{ part: '(file)', column: 1, message: `${total} parts in one file; at most ${MAX_PARTS_PER_UPLOAD}` }] };
   const parts: MeasuredPart[] = [];
   const errors: PartError[] = [];
   const seen = new Map<string, number>();
-  input.columns.forEach((col, i) => {
+  for (let i = 0; i < total; i++) {
+    const col = input.columns[i];
     const label = col.name.trim();
     const column = i + 2;
     const prior = seen.get(label);
@@ -46,7 +48,27 @@ export function measureParts(input: PartColumns, onProgress?: (done: number, tot
         errors.push({ part: label, column, message: err.message });
       }
     }
-    onProgress?.(i + 1, total);
-  });
+    yield { done: i + 1, total };
+  }
   return errors.length ? { ok: false, errors } : { ok: true, parts };
+}
+
+export function measureParts(input: PartColumns, onProgress?: (done: number, total: number) => void): MeasureResult {
+  const steps = measurePartsStepwise(input);
+  for (;;) {
+    const next = steps.next();
+    if (next.done) return next.value;
+    onProgress?.(next.value.done, next.value.total);
+  }
+}
+
+/** Same, pausing every `every` parts (e.g. to let a server stream progress); `pause` is supplied by the caller. */
+export async function measurePartsPaced(input: PartColumns, pause: () => Promise<void>, onProgress?: (done: number, total: number) => void, every = 25): Promise<MeasureResult> {
+  const steps = measurePartsStepwise(input);
+  for (;;) {
+    const next = steps.next();
+    if (next.done) return next.value;
+    onProgress?.(next.value.done, next.value.total);
+    if (next.value.done % every === 0) await pause();
+  }
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { judgeBatch, measureParts } from '../../../src/lib/quality/index';
+import { judgeBatch, measureParts, measurePartsPaced } from '../../../src/lib/quality/index';
 import { CIE_ILLUMINANT_A } from '../../../src/lib/spectral/data/cie-illuminants';
 import { CIE_D65 } from '../../../src/lib/spectral/data/cie-d65';
 
@@ -45,6 +45,13 @@ describe('measuring a multi-part file', () => {
       { part: 'dark', column: 3, message: 'spectrum has zero power (no positive value)' },
       { part: 'A-1', column: 4, message: 'part name repeats column 2' }
     ]);
+  });
+
+  it('the paced form pauses every n parts and gives the same parts', async () => {
+    let pauses = 0;
+    const res = await measurePartsPaced(file, async () => { pauses++; }, undefined, 2);
+    expect(pauses).toBe(2);
+    expect(res.ok && res.parts.map((p) => p.label)).toEqual(['A-1', 'D65-1', 'A-2', 'D65-2']);
   });
 
   it('a file without part columns is refused', () => {
