@@ -4,7 +4,11 @@
 PF_PROFILE="${PF_PROFILE:-dev}"
 export PATH="/usr/sbin:$PATH"
 mkdir -p .runtime
-if [ "$PF_PROFILE" = "test" ]; then
+if [ "$PF_PROFILE" = "load" ]; then
+  : "${PF_DB_DIR:=.mariadb-load}" "${PF_DB_PORT:=33308}" "${DB_NAME:=phosforge_load}"
+  : "${PORT:=4174}" "${PF_SMTP_PORT:=2527}" "${PF_MAIL_WEB_PORT:=2582}" "${PF_S3_PORT:=4571}"
+  : "${AUTH_SECRET:=load-secret-phosforge-at-least-32-characters-long}"
+elif [ "$PF_PROFILE" = "test" ]; then
   : "${PF_DB_DIR:=.mariadb-test}" "${PF_DB_PORT:=33307}" "${DB_NAME:=phosforge_test}"
   : "${PORT:=4173}" "${PF_SMTP_PORT:=2526}" "${PF_MAIL_WEB_PORT:=2581}" "${PF_S3_PORT:=4570}"
   : "${AUTH_SECRET:=test-secret-phosforge-at-least-32-characters-long}"

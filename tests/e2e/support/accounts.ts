@@ -23,9 +23,17 @@ export async function makeUser(email: string, roles: Role[], password = 'throwaw
   const knex = testDb();
   try {
     await knex('sign_in_attempts').where({ email }).delete();
+    const hash = await bcrypt.hash(password, 4);
     const old = await knex('users').where({ email }).first('id');
-    if (old) await knex('users').where({ id: old.id }).delete();
-    const [id] = await knex('users').insert({ email, name: email.split('@')[0], password_hash: await bcrypt.hash(password, 4) });
+    // Audit rows keep their actor, so an existing account is reset rather than deleted.
+    let id: number;
+    if (old) {
+      id = old.id;
+      await knex('users').where({ id }).update({ password_hash: hash, active: true, deactivated_at: null });
+      await knex('user_roles').where({ user_id: id }).delete();
+    } else {
+      [id] = await knex('users').insert({ email, name: email.split('@')[0], password_hash: hash });
+    }
     await knex('user_roles').insert(roles.map((role) => ({ user_id: id, role })));
     return id;
   } finally {
@@ -34,9 +42,9 @@ export async function makeUser(email: string, roles: Role[], password = 'throwaw
 }
 
 /** Posts the credentials the way the sign-in form does; returns the final redirect location. */
-export async function postSignIn(ctx: APIRequestContext, email: string, password: string): Promise<string> {
+export async function postSignIn(ctx: APIRequestContext, email: string, password: string, origin = BASE): Promise<string> {
   const res = await ctx.post('/auth/callback/credentials', {
-    headers: { Origin: BASE }, form: { email, password, callbackUrl: '/' }, maxRedirects: 0
+    headers: { Origin: origin }, form: { email, password, callbackUrl: '/' }, maxRedirects: 0
   });
   expect(res.status()).toBe(302);
   return res.headers()['location'] ?? '';

@@ -43,6 +43,9 @@ export async function userForToken(token: string): Promise<User | null> {
   if (!row) return null;
   const user = await users.get(row.user_id);
   if (!user || !user.active) return null;
-  await db()('api_tokens').where({ id: row.id }).update({ last_used_at: db().fn.now() });
+  // Last use is kept to the minute: no write per request, so busy tokens do not contend on one row.
+  await db()('api_tokens').where({ id: row.id })
+    .andWhere((q) => q.whereNull('last_used_at').orWhere('last_used_at', '<', db().raw('NOW() - INTERVAL 1 MINUTE')))
+    .update({ last_used_at: db().fn.now() });
   return user;
 }

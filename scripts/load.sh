@@ -1,0 +1,30 @@
+#!/usr/bin/env bash
+# `npm run load`: a private database and app of its own (profile "load": .mariadb-load, app on 4174),
+# fresh demo data, a production build served by node, then scripts/load/run.ts drives the main API
+# routes with autocannon for a bounded time and prints requests/s, p50/p95/p99 and errors.
+# Env: LOAD_SECONDS (per route, default 10), LOAD_CONNECTIONS (default 50).
+set -uo pipefail
+cd "$(dirname "$0")/.."
+bash scripts/ensure-tools.sh || exit 1
+PF_PROFILE=load . scripts/profile.sh
+pids=()
+cleanup() {
+  trap - INT TERM EXIT
+  for p in "${pids[@]}"; do kill -TERM "$p" 2>/dev/null || true; done
+  for p in "${pids[@]}"; do wait "$p" 2>/dev/null || true; done
+  [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh stop >/dev/null || true
+}
+trap cleanup INT TERM EXIT
+if [ -z "${PF_EXTERNAL_DB:-}" ]; then
+  bash scripts/db.sh start >/dev/null || exit 1
+  bash scripts/db.sh sql -e "DROP DATABASE IF EXISTS \`$DB_NAME\`; CREATE DATABASE \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
+fi
+rm -rf "$PF_S3_DIR"
+node --import tsx scripts/fakes.ts >/dev/null & pids+=($!)
+npm run --silent db:migrate >/dev/null && npm run --silent db:seed || exit 1
+if [ ! -f build/index.js ] || [ -n "$(find src static package-lock.json svelte.config.js vite.config.ts -newer build/index.js -print -quit)" ]; then
+  npm run --silent build >.runtime/build-load.log 2>&1 || { tail -40 .runtime/build-load.log; exit 1; }
+fi
+NODE_ENV=production node build >.runtime/app-load.log 2>&1 & pids+=($!)
+for _ in $(seq 1 100); do curl -fsS "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break; sleep 0.2; done
+LOAD_URL="http://127.0.0.1:$PORT" node --import tsx scripts/load/run.ts

@@ -1,0 +1,32 @@
+/** The routes `npm run load` drives, with the status each must answer and the p95 goal where one is set. */
+import { BLUE_PUMP, demoPhosphor } from '../../src/lib/blend/index';
+
+export interface Scenario {
+  name: string;
+  method: 'GET' | 'POST';
+  path: string;
+  expect: number;
+  body?: () => unknown;
+  p95GoalMs?: number;
+}
+
+const components = { pump: BLUE_PUMP, phosphors: [demoPhosphor('ph-gl530'), demoPhosphor('ph-yl568'), demoPhosphor('ph-rd625')] };
+const wavelengths = Array.from({ length: 401 }, (_, i) => 380 + i);
+const band = (l: number, p: number, w: number) => Math.exp(-0.5 * ((l - p) / (w / 2.3548)) ** 2);
+let n = 0;
+
+export const scenarios: Scenario[] = [
+  {
+    name: 'evaluate', method: 'POST', path: '/api/v1/evaluate', expect: 200, p95GoalMs: 100,
+    // A slightly different white spectrum on every request, so nothing can be cached.
+    body: () => {
+      const r = 0.5 + ((n++ % 50) / 100);
+      return { spd: { wavelengths, values: wavelengths.map((l) => band(l, 450, 20) + 1.4 * band(l, 560, 110) + r * band(l, 625, 85)) } };
+    }
+  },
+  { name: 'mix', method: 'POST', path: '/api/v1/mix', expect: 200, body: () => ({ components, ratios: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2 + (n++ % 10) / 100] } }) },
+  {
+    name: 'solve', method: 'POST', path: '/api/v1/solve', expect: 200,
+    body: () => ({ components, target: { kind: 'cctDuv', cct: 3000 + (n++ % 5) * 100, duv: 0 }, floors: { raMin: 80 }, objective: 'maxLer' })
+  }
+];

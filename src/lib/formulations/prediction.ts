@@ -1,0 +1,92 @@
+/**
+ * The predicted metrics stored with a revision: the blend's SPD by optical superposition (`mix`,
+ * Ohno, Opt. Eng. 44 (2005) 111302) evaluated by the spectral core (CIE 15 colour point, Ohno 2014
+ * CCT/Duv, CIE 13.3-1995 Ra/R1–R14, CIE 224:2017 Rf/Rg, LER), the ANSI C78.377 bin and the
+ * distance to the revision's target in the units of its tolerance. Pure: no I/O.
+ */
+import { chromaticityError, mix, resolveTarget, type BlendComponents } from '../blend';
+import { withinTolerance } from '../blend/solver/chromaticityError';
+import { violatedFloors } from '../blend/solver/floors';
+import { findAnsiBin } from '../spectral';
+import type { RevisionContent } from './content';
+
+/** Names the computation that produced a prediction; stored beside it so later readers know. */
+export const PREDICTION_CORE_VERSION = 'phosforge-core 0.1.0 (optical superposition)';
+
+export interface RevisionPrediction {
+  x: number;
+  y: number;
+  uPrime: number;
+  vPrime: number;
+  cct: number;
+  duv: number;
+  ra: number | null;
+  r9: number | null;
+  ri: number[];
+  rf: number | null;
+  rg: number | null;
+  lerLmPerW: number;
+  peakNm: number;
+  ansiBin: number | null;
+  target: { x: number; y: number; cct: number; duv: number; label: string };
+  deltaUvPrime: number;
+  sdcm: number;
+  withinTolerance: boolean;
+  floorsMissed: string[];
+  /** Output SPD on the core's grid, scaled to peak 1 (for charts and comparisons). */
+  spd: { startNm: number; stepNm: number; values: number[] };
+}
+
+const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
+const round = (v: number, digits: number) => Number(v.toFixed(digits));
+
+/** Optical fractions in mix order: pump leak first, then the phosphors as listed. */
+export function opticalFractions(content: RevisionContent): number[] {
+  return [content.pumpLeakFraction, ...content.phosphors.map((p) => p.opticalFraction)];
+}
+
+/** Floors the prediction misses; Ra/R9 floors count as missed when CIE 13.3 is not meaningful (DC ≥ 5.4e-3). */
+function missedFloors(content: RevisionContent, m: { ra: number | null; r9: number | null; rf: number | null; rg: number | null; ler: number }): string[] {
+  const f = content.floors;
+  const undefinedCri = (f.raMin !== undefined || f.r9Min !== undefined) && m.ra === null
+    ? ['Ra/R9 not defined (colour point too far from the Planckian locus, CIE 13.3 §5.3)'] : [];
+  return [...undefinedCri, ...violatedFloors(f, { ra: m.ra ?? 100, r9: m.r9 ?? 100, rf: m.rf, rg: m.rg, ler: m.ler, costPer1000Lm: null })];
+}
+
+export function predictRevision(content: RevisionContent, components: BlendComponents): RevisionPrediction {
+  const result = mix(components, { kind: 'optical', fractions: opticalFractions(content) });
+  const e = result.evaluation;
+  const target = resolveTarget(content.target);
+  const err = chromaticityError(e.x, e.y, target.x, target.y);
+  const ra = e.cri.valid ? e.cri.ra : null;
+  const r9 = e.cri.valid ? e.cri.ri[8] : null;
+  const rf = finite(e.tm30.rf);
+  const rg = finite(e.tm30.rg);
+  const peak = Math.max(...result.spd.values);
+  return {
+    x: e.x,
+    y: e.y,
+    uPrime: e.uPrime,
+    vPrime: e.vPrime,
+    cct: e.cct,
+    duv: e.duv,
+    ra,
+    r9,
+    ri: e.cri.valid ? e.cri.ri : [],
+    rf,
+    rg,
+    lerLmPerW: e.ler,
+    peakNm: e.peakNm,
+    ansiBin: findAnsiBin(e.x, e.y)?.nominalCct ?? null,
+    target: { x: target.x, y: target.y, cct: target.cct, duv: target.duv, label: target.label },
+    deltaUvPrime: err.deltaUvPrime,
+    sdcm: err.sdcm,
+    withinTolerance: withinTolerance(err, content.tolerance),
+    floorsMissed: missedFloors(content, { ra, r9, rf, rg, ler: e.ler }),
+    spd: {
+      startNm: result.spd.wavelengths[0],
+      stepNm: result.spd.wavelengths[1] - result.spd.wavelengths[0],
+      values: result.spd.values.map((v) => round(peak > 0 ? v / peak : 0, 5))
+    }
+  };
+}

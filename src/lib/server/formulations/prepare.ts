@@ -1,0 +1,49 @@
+/**
+ * Validates a revision's content and computes what is stored with it: the refreshed content,
+ * the spectral core's prediction, the core's version and the content hash. Saves nothing.
+ */
+import type { Knex } from 'knex';
+import { BlendInputError } from '../../blend';
+import { SpectrumInputError } from '../../spectral';
+import { revisionContentSchema, type RevisionContent } from '../../formulations/content';
+import { PREDICTION_CORE_VERSION, predictRevision, type RevisionPrediction } from '../../formulations/prediction';
+import { loadRevisionComponents } from './components';
+import { ValidationError } from './errors';
+import { contentSha256 } from './hash';
+
+/** Pump leak + phosphor fractions must add up to 1 within this (rounding of four-decimal inputs). */
+export const FRACTION_SUM_TOLERANCE = 0.001;
+
+export interface PreparedRevision {
+  content: RevisionContent;
+  predicted: RevisionPrediction;
+  coreVersion: string;
+  sha256: string;
+}
+
+export function parseContent(raw: unknown): RevisionContent {
+  const parsed = revisionContentSchema.safeParse(raw);
+  if (!parsed.success) {
+    const issues = parsed.error.issues.map((i) => ({ path: i.path.join('.') || '(content)', message: i.message }));
+    throw new ValidationError(`Invalid revision content: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`, issues);
+  }
+  const c = parsed.data;
+  const sum = c.pumpLeakFraction + c.phosphors.reduce((s, p) => s + p.opticalFraction, 0);
+  if (Math.abs(sum - 1) > FRACTION_SUM_TOLERANCE) {
+    const message = `pump leak and phosphor optical fractions must add up to 1 (they add up to ${sum.toFixed(4)})`;
+    throw new ValidationError(message, [{ path: 'phosphors', message }]);
+  }
+  return c;
+}
+
+export async function prepareRevision(knex: Knex, raw: unknown): Promise<PreparedRevision> {
+  const loaded = await loadRevisionComponents(knex, parseContent(raw));
+  let predicted: RevisionPrediction;
+  try {
+    predicted = predictRevision(loaded.content, loaded.components);
+  } catch (err) {
+    if (err instanceof BlendInputError || err instanceof SpectrumInputError) throw new ValidationError(`The spectral core cannot evaluate this blend: ${err.message}`);
+    throw err;
+  }
+  return { content: loaded.content, predicted, coreVersion: PREDICTION_CORE_VERSION, sha256: contentSha256(loaded.content) };
+}

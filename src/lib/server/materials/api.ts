@@ -1,0 +1,138 @@
+/**
+ * Handlers of /api/v1/phosphors and /api/v1/pumps (one set, parameterised by kind). Route files
+ * only pick the handler. Errors are JSON { error, details? } with 400/404/409/413/415/422.
+ */
+import { json, type RequestEvent } from '@sveltejs/kit';
+import { z } from 'zod';
+import { requireUser } from '../auth/require';
+import { ApiError, finiteJson, handleApi, readJson } from '../api/body';
+import { materialFieldsSchema, materialUpdateApiSchema, spectrumKindSchema, versionSchema } from '../../schemas/materials';
+import { FORMULATION_EDITORS, ALL } from '../../access/routes/shared';
+import { MaterialError, notFound } from './errors';
+import * as records from './records';
+import * as editing from './editing';
+import * as detail from './detail';
+import { previewSpectrumFile, uploadSpectrum, type SpectrumFileInput } from './spectrum-upload';
+import { DEFAULT_MAX_BYTES } from '../../spectrum-file/parse';
+import type { MaterialKind } from './records';
+
+type Event = Pick<RequestEvent, 'request' | 'locals' | 'url'> & { params: Record<string, string> };
+
+/** handleApi plus the library's own errors. */
+export function materialApi(run: () => Promise<Response>): Promise<Response> {
+  return handleApi(async () => {
+    try {
+      return await run();
+    } catch (err) {
+      if (err instanceof MaterialError) return json({ error: err.message, ...(err.details ? { details: err.details } : {}) }, { status: err.status });
+      throw err;
+    }
+  });
+}
+
+const listQuerySchema = z.object({
+  q: z.string().max(100).optional(),
+  sort: z.enum(records.SORT_KEYS).optional(),
+  dir: z.enum(['asc', 'desc']).optional(),
+  archived: z.enum(['0', '1', 'true', 'false']).optional()
+});
+
+function idOf(event: Event): number {
+  const id = Number(event.params.id);
+  if (!Number.isInteger(id) || id <= 0) throw new ApiError(404, `No material with id ${event.params.id}.`);
+  return id;
+}
+
+async function materialOfKind(id: number, kind: MaterialKind) {
+  const m = await records.get(id);
+  if (!m || m.kind !== kind) throw notFound(id);
+  return m;
+}
+
+export function collection(kind: MaterialKind) {
+  return {
+    GET: (event: Event) => materialApi(async () => {
+      requireUser(event.locals, ALL);
+      const parsed = listQuerySchema.safeParse(Object.fromEntries(event.url.searchParams));
+      if (!parsed.success) throw new ApiError(400, `Invalid query: ${parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
+      const { q, sort, dir, archived } = parsed.data;
+      const list = await records.list({ kind, search: q, sort, dir, includeArchived: archived === '1' || archived === 'true' });
+      return finiteJson({ items: list.map((m) => detail.toApi(m)) });
+    }),
+    POST: (event: Event) => materialApi(async () => {
+      const user = requireUser(event.locals, FORMULATION_EDITORS);
+      const body = await readJson(event, materialFieldsSchema);
+      const id = await editing.create(user, kind, body);
+      const created = await detail.load(id);
+      return finiteJson(detail.toApi(created!.material, created!), { status: 201, headers: { location: `/api/v1/${kind}s/${id}` } });
+    })
+  };
+}
+
+export function item(kind: MaterialKind) {
+  return {
+    GET: (event: Event) => materialApi(async () => {
+      requireUser(event.locals, ALL);
+      const d = await detail.load(idOf(event));
+      if (!d || d.material.kind !== kind) throw notFound(event.params.id);
+      return finiteJson(detail.toApi(d.material, d));
+    }),
+    PUT: (event: Event) => materialApi(async () => {
+      const user = requireUser(event.locals, FORMULATION_EDITORS);
+      const id = idOf(event);
+      await materialOfKind(id, kind);
+      const { version, ...fields } = await readJson(event, materialUpdateApiSchema);
+      await editing.update(user, id, version, fields);
+      const d = await detail.load(id);
+      return finiteJson(detail.toApi(d!.material, d!));
+    }),
+    DELETE: (event: Event) => materialApi(async () => {
+      const user = requireUser(event.locals, FORMULATION_EDITORS);
+      const id = idOf(event);
+      await materialOfKind(id, kind);
+      await editing.remove(user, id);
+      return new Response(null, { status: 204 });
+    })
+  };
+}
+
+/** The file of an upload: multipart field `file`, or the raw body (text/csv, text/plain). */
+async function uploadedFile(request: Request): Promise<SpectrumFileInput> {
+  const declared = Number(request.headers.get('content-length') ?? '0');
+  if (declared > DEFAULT_MAX_BYTES + 64 * 1024) throw new ApiError(413, 'The upload is larger than the 2 MB limit for spectrum files. Nothing was saved.');
+  const type = request.headers.get('content-type') ?? '';
+  if (/^multipart\/form-data/i.test(type)) {
+    const file = (await request.formData()).get('file');
+    if (!(file instanceof File)) throw new ApiError(400, 'Send the spectrum file in the multipart field "file".');
+    return { name: file.name || 'spectrum.csv', contentType: file.type || 'text/plain', body: Buffer.from(await file.arrayBuffer()) };
+  }
+  if (/^text\/(csv|plain|tab-separated-values)\b/i.test(type)) {
+    return { name: request.headers.get('x-file-name')?.slice(0, 200) || 'spectrum.csv', contentType: type.split(';')[0], body: Buffer.from(await request.arrayBuffer()) };
+  }
+  throw new ApiError(415, 'Send the spectrum as multipart/form-data (field "file") or as a text/csv or text/plain body.');
+}
+
+const uploadQuerySchema = z.object({
+  kind: spectrumKindSchema.default('emission'),
+  version: versionSchema.optional(),
+  dryRun: z.enum(['0', '1', 'true', 'false']).optional()
+});
+
+export function spectrumUpload(kind: MaterialKind) {
+  return {
+    POST: (event: Event) => materialApi(async () => {
+      const user = requireUser(event.locals, FORMULATION_EDITORS);
+      const id = idOf(event);
+      await materialOfKind(id, kind);
+      const q = uploadQuerySchema.safeParse(Object.fromEntries(event.url.searchParams));
+      if (!q.success) throw new ApiError(400, `Invalid query: ${q.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
+      const file = await uploadedFile(event.request);
+      if (q.data.dryRun === '1' || q.data.dryRun === 'true') {
+        const p = previewSpectrumFile(file);
+        return finiteJson({ saved: false, points: p.spd.wavelengths.length, metrics: p.summary, warnings: p.warnings, spectrum: p.spd });
+      }
+      const r = await uploadSpectrum(user, id, q.data.kind, file, q.data.version);
+      return finiteJson({ saved: true, spectrumId: r.spectrumId, version: r.version, points: r.preview.spd.wavelengths.length, metrics: r.preview.summary, warnings: r.preview.warnings }, { status: 201 });
+    })
+  };
+}

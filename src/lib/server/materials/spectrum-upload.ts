@@ -1,0 +1,87 @@
+/**
+ * Spectrum upload: the file is read and validated completely before anything is written
+ * (parser: src/lib/spectrum-file/parse.ts; then the spectral core's own input rules). Only a
+ * valid file is stored: original to object storage, parsed spectrum to material_spectra, the
+ * material's pointer, peak and FWHM updated — one transaction; the object is removed if it fails.
+ */
+import { db } from '../db/index';
+import * as audit from '../db/audit';
+import { putFile } from '../storage/objects';
+import { DEFAULT_MAX_BYTES, formatBytes, parseSpectrumFile } from '../../spectrum-file/parse';
+import { summariseSpectrum, type SpectrumSummary } from '../../materials/spectrum-summary';
+import { SpectrumInputError } from '../../spectral/errors';
+import { MaterialError, notFound } from './errors';
+import { lockForEdit } from './editing';
+import * as records from './records';
+import * as spectra from './spectra';
+import type { Spd } from '../../spectral/types';
+import type { User } from '../db/users';
+import type { SpectrumKind } from './spectra';
+
+export interface SpectrumFileInput {
+  name: string;
+  contentType: string;
+  body: Buffer;
+}
+
+export interface SpectrumPreview {
+  spd: Spd;
+  summary: SpectrumSummary;
+  warnings: string[];
+  fileName: string;
+}
+
+/** Text of an upload: UTF-8, or Windows-1252 for older instrument exports (µ, ° in headers). */
+export function decodeText(body: Buffer): string {
+  try {
+    return new TextDecoder('utf-8', { fatal: true }).decode(body);
+  } catch {
+    return new TextDecoder('windows-1252').decode(body);
+  }
+}
+
+/** Parses and checks a file; throws MaterialError (413/422) naming the lines. Saves nothing. */
+export function previewSpectrumFile(file: SpectrumFileInput): SpectrumPreview {
+  if (file.body.length === 0) throw new MaterialError(422, 'The file is empty.');
+  if (file.body.length > DEFAULT_MAX_BYTES) {
+    throw new MaterialError(413, `The file is ${formatBytes(file.body.length)}; the limit is ${formatBytes(DEFAULT_MAX_BYTES)}. Nothing was saved.`);
+  }
+  const parsed = parseSpectrumFile(decodeText(file.body));
+  if (!parsed.ok) {
+    const n = parsed.errors.length;
+    throw new MaterialError(422, `${file.name} was not saved: ${n === 1 ? 'one problem' : `${n} problems`} in the file. ${parsed.errors[0].message}`, parsed.errors);
+  }
+  const spd = { wavelengths: parsed.wavelengths, values: parsed.columns[0].values };
+  try {
+    return { spd, summary: summariseSpectrum(spd), warnings: parsed.warnings, fileName: file.name };
+  } catch (err) {
+    if (err instanceof SpectrumInputError) throw new MaterialError(422, `${file.name} was not saved: ${err.message}.`, [{ line: null, message: err.message }]);
+    throw err;
+  }
+}
+
+/** Stores a checked spectrum file as the material's current emission or excitation spectrum. Returns the new version. */
+export async function uploadSpectrum(actor: User, materialId: number, kind: SpectrumKind, file: SpectrumFileInput, version?: number): Promise<{ spectrumId: number; version: number; preview: SpectrumPreview }> {
+  const material = await records.get(materialId);
+  if (!material) throw notFound(materialId);
+  if (kind === 'excitation' && material.kind === 'pump') throw new MaterialError(400, 'A pump has an emission spectrum only.');
+  const preview = previewSpectrumFile(file);
+  return db().transaction(async (trx) => {
+    const current = await lockForEdit(trx, materialId, version, 'given a new spectrum');
+    const fileId = await putFile({ body: file.body, originalName: file.name, contentType: file.contentType || 'text/plain', purpose: 'spectrum-source', entityType: 'material', entityId: materialId, uploadedBy: actor.id }, trx);
+    const spectrumId = await spectra.insert({ materialId, kind, spd: preview.spd, sourceFileId: fileId, origin: 'upload', createdBy: actor.id }, trx);
+    const shape = kind === 'emission' ? { peak_nm: round2(preview.summary.peakNm), fwhm_nm: round2(preview.summary.fwhmNm) } : {};
+    await trx('materials').where({ id: materialId, version: current.version }).update({
+      [kind === 'emission' ? 'emission_spectrum_id' : 'excitation_spectrum_id']: spectrumId,
+      ...shape, version: current.version + 1, updated_by: actor.id, updated_at: trx.fn.now(3)
+    });
+    await audit.record({
+      actorId: actor.id, actorEmail: actor.email, entityType: 'material', entityId: materialId, action: `${kind}-spectrum-upload`,
+      before: kind === 'emission' ? { peakNm: current.peakNm, fwhmNm: current.fwhmNm, spectrumId: current.emissionSpectrumId } : { spectrumId: current.excitationSpectrumId },
+      after: { spectrumId, file: file.name, points: preview.spd.wavelengths.length, ...(kind === 'emission' ? { peakNm: shape.peak_nm, fwhmNm: shape.fwhm_nm } : {}) }
+    }, trx);
+    return { spectrumId, version: current.version + 1, preview };
+  });
+}
+
+const round2 = (v: number) => Math.round(v * 100) / 100;

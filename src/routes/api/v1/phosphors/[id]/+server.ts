@@ -1,0 +1,8 @@
+import { item } from '$lib/server/materials/api';
+import type { RequestHandler } from './$types';
+
+/** One phosphor: read (with spectra and metrics), edit (body names the version read; stale → 409), delete (refused while used). */
+const handlers = item('phosphor');
+export const GET: RequestHandler = handlers.GET;
+export const PUT: RequestHandler = handlers.PUT;
+export const DELETE: RequestHandler = handlers.DELETE;
