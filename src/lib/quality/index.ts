@@ -15,7 +15,7 @@ export { histogram, niceStep } from './histogram';
 export { predictedVsMeasured, colourPoint, type ColourPoint, type PredictionCheck } from './prediction';
 export { summariseBatch, type BatchSummary } from './summarise';
 export { ellipseOutline, toleranceOutline, planckianOutline, quadrangleOutline } from './outlines';
-export { judgeBatch, defaultAcceptance, type JudgedBatch } from './judgeBatch';
+export { judgeBatch, defaultAcceptance, batchAcceptance, describeAcceptance, type JudgedBatch, type AcceptanceChoice } from './judgeBatch';
 export {
   correctFromBatch, correctionRequest, correctedContent, revisionRecipe, DEFAULT_STEP_FRACTION, type BatchCorrection
 } from './correction';

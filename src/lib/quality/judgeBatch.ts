@@ -4,7 +4,7 @@
  * the revision targets a bin; quality may instead choose a step ellipse for the batch.
  */
 import type { RevisionContent } from '../formulations/content';
-import { judgePart } from './acceptance';
+import { describeTolerance, judgePart } from './acceptance';
 import { summariseBatch, type BatchSummary } from './summarise';
 import { qualityTarget, type ResolvedTarget, type Target } from './target';
 import type { Acceptance, JudgedPart, MeasuredPart, Tolerance } from './types';
@@ -18,6 +18,24 @@ export interface JudgedBatch {
 
 export function defaultAcceptance(content: Pick<RevisionContent, 'tolerance' | 'floors' | 'target'>, override?: Tolerance): Acceptance {
   return { tolerance: override ?? content.tolerance, floors: content.floors, requireTargetBin: content.target.kind === 'ansiBin' };
+}
+
+/** Quality's choice for a batch: the revision's tolerance or an n-step ellipse, and the bin rule. */
+export interface AcceptanceChoice {
+  mode: 'revision' | 'steps';
+  steps: number | null;
+  requireTargetBin: boolean;
+}
+
+/** The acceptance in force: the revision's defaults unless quality chose otherwise for the batch. */
+export function batchAcceptance(content: Pick<RevisionContent, 'tolerance' | 'floors' | 'target'>, choice: AcceptanceChoice | null): Acceptance {
+  if (!choice) return defaultAcceptance(content);
+  const tolerance: Tolerance = choice.mode === 'steps' && choice.steps !== null ? { kind: 'sdcm', steps: choice.steps } : content.tolerance;
+  return { tolerance, floors: content.floors, requireTargetBin: choice.requireTargetBin };
+}
+
+export function describeAcceptance(a: Acceptance): string {
+  return `${describeTolerance(a.tolerance)}${a.requireTargetBin ? ', inside the target ANSI bin' : ''}`;
 }
 
 export function judgeBatch(parts: readonly MeasuredPart[], target: Target, acceptance: Acceptance): JudgedBatch {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { describeTolerance, judgePart, qualityTarget, type Acceptance } from '../../../src/lib/quality/index';
+import { batchAcceptance, describeAcceptance, describeTolerance, judgePart, qualityTarget, type Acceptance } from '../../../src/lib/quality/index';
 import { metricsAt } from './support';
 
 // Floors as formulators set them: "90 CRI" = Ra ≥ 90 and R9 ≥ 50 [common practice, DOMAIN.md §4];
@@ -52,5 +52,19 @@ describe('colour tolerance kinds', () => {
   it('labels', () => {
     expect(describeTolerance({ kind: 'sdcm', steps: 3 })).toBe('3-step ellipse');
     expect(describeTolerance({ kind: 'deltaUvPrime', value: 0.003 })).toBe('Δu′v′ ≤ 0.003');
+  });
+});
+
+describe('acceptance in force for a batch', () => {
+  const content = { target: { kind: 'ansiBin' as const, nominalCct: 3000 }, tolerance: { kind: 'deltaUvPrime' as const, value: 0.003 }, floors: { raMin: 90 } };
+  it('defaults to the revision tolerance and requires the bin for a bin target', () => {
+    const a = batchAcceptance(content, null);
+    expect(a).toEqual({ tolerance: { kind: 'deltaUvPrime', value: 0.003 }, floors: { raMin: 90 }, requireTargetBin: true });
+    expect(describeAcceptance(a)).toBe('Δu′v′ ≤ 0.003, inside the target ANSI bin');
+  });
+  it('a step ellipse chosen by quality replaces the colour tolerance only', () => {
+    const a = batchAcceptance(content, { mode: 'steps', steps: 3, requireTargetBin: false });
+    expect(a).toEqual({ tolerance: { kind: 'sdcm', steps: 3 }, floors: { raMin: 90 }, requireTargetBin: false });
+    expect(describeAcceptance(a)).toBe('3-step ellipse');
   });
 });
