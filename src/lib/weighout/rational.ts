@@ -11,6 +11,11 @@ function gcd(a: bigint, b: bigint): bigint {
   return x;
 }
 
+/** A number the exact arithmetic cannot take (non-finite, or beyond 40 digits/decimal places): bad input, not a fault. */
+export class ExactNumberError extends RangeError {
+  override readonly name = 'ExactNumberError';
+}
+
 export class Rat {
   readonly n: bigint;
   readonly d: bigint;
@@ -33,9 +38,9 @@ export class Rat {
 
   /** The decimal a number was written as (its shortest round-trip string), exactly. */
   static fromNumber(v: number): Rat {
-    if (!Number.isFinite(v)) throw new RangeError(`not a finite number: ${v}`);
+    if (!Number.isFinite(v)) throw new ExactNumberError(`${v} is not a finite number`);
     const r = Rat.parse(String(v));
-    if (!r) throw new RangeError(`not a decimal: ${v}`);
+    if (!r) throw new ExactNumberError(`${v} has more than 40 digits or decimal places, far beyond any balance`);
     return r;
   }
 

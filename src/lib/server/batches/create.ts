@@ -4,6 +4,7 @@ import { record } from '../db/audit';
 import { getRevision } from '../formulations/read';
 import type { User } from '../db/users';
 import { computeWeighout, type WeighoutPlan } from '../../weighout/compute';
+import { ExactNumberError } from '../../weighout/rational';
 import { weighoutInputFromRevision } from '../../weighout/from-revision';
 import { describeTarget } from '../../weighout/target';
 import type { WeighoutInput } from '../../weighout/schema';
@@ -27,7 +28,13 @@ export async function prepareBatch(req: CreateBatchRequest): Promise<PreparedBat
   }
   const built = weighoutInputFromRevision(revision.content, req);
   if (!built.ok) throw invalid(built.errors.map((e) => e.message).join('; '), built.errors);
-  const result = computeWeighout(built.input);
+  let result: ReturnType<typeof computeWeighout>;
+  try {
+    result = computeWeighout(built.input);
+  } catch (err) {
+    if (err instanceof ExactNumberError) throw invalid(`A number cannot be weighed exactly: ${err.message}.`);
+    throw err;
+  }
   if (!result.ok) throw impossible(result.errors);
   return { input: built.input, plan: result.plan, revision };
 }

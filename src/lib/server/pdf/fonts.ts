@@ -1,10 +1,12 @@
 /**
- * IBM Plex Sans for PDFs, embedded from @fontsource/ibm-plex-sans. pdfkit (fontkit) reads the
- * package's WOFF files (it cannot read WOFF2; the package ships no TTF). The files hold the
- * "latin" subset only, so pdfSafe() swaps the few symbols outside it for plain equivalents.
+ * IBM Plex Sans for PDFs, embedded from @fontsource/ibm-plex-sans. The package ships WOFF and
+ * WOFF2 only (no TTF); pdfkit cannot read WOFF2, so the WOFF files are used, unpacked once to an
+ * SFNT (woff.ts) so each PDF does not inflate them again. The files hold the "latin" subset
+ * only, so pdfSafe() swaps the few symbols outside it for plain equivalents.
  */
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
+import { woffToSfnt } from './woff';
 
 export const FONT = { regular: 'Plex', semibold: 'Plex-SemiBold' } as const;
 
@@ -12,7 +14,7 @@ const require = createRequire(import.meta.url);
 let files: { regular: Buffer; semibold: Buffer } | undefined;
 
 function load(weight: 400 | 600): Buffer {
-  return readFileSync(require.resolve(`@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-${weight}-normal.woff`));
+  return woffToSfnt(readFileSync(require.resolve(`@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-${weight}-normal.woff`)));
 }
 
 export function registerPlex(doc: PDFKit.PDFDocument): void {
