@@ -38,5 +38,9 @@ export const withdrawUploadSchema = z.object({
   reason: z.string().trim().min(3, 'give a reason (at least 3 characters)').max(500)
 });
 
-/** Largest measurement file accepted (bytes): 500 parts × 401 points at 6 digits is about 2.2 MB. */
-export const MAX_MEASUREMENT_FILE_BYTES = 20 * 1024 * 1024;
+/**
+ * Largest measurement file accepted (bytes): 500 parts × 401 points at 6 digits is about 2.2 MB. Kept
+ * under the server's request limit (BODY_SIZE_LIMIT, 3M in scripts/profile.sh) so a larger file gets
+ * this feature's own message; raise both together for bigger exports.
+ */
+export const MAX_MEASUREMENT_FILE_BYTES = Math.floor(2.9 * 1024 * 1024);

@@ -11,7 +11,7 @@ import { completeBatch } from '../../../src/lib/server/batches/complete';
 import { createBatchSchema } from '../../../src/lib/schemas/batches';
 import { loadBlendComponents } from '../../../src/lib/server/materials/components';
 import { getRevision } from '../../../src/lib/server/formulations/read';
-import { mix } from '../../../src/lib/blend/mix';
+import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';
 import { demoUser } from '../batches/support';
 
 export { DEMO_PASSWORD, demoUser } from '../batches/support';
@@ -47,27 +47,12 @@ export async function completedBatch(code = 'KH-W30-90'): Promise<{ batchId: num
   return { batchId: id, batchNumber, revisionId };
 }
 
-/**
- * CSV of `n` parts (380–780 nm, 1 nm; one column per part) from the revision's optical fractions,
- * the last phosphor scaled by `lastPhosphorScale` (the line's known bias), each phosphor scattered by
- * up to ±`scatter` (deterministic).
- */
+/** CSV of `n` synthetic parts of the revision (see src/lib/quality/syntheticParts.ts), labelled `${prefix}-001`… */
 export async function partsCsv(revisionId: number, n: number, prefix: string, lastPhosphorScale = 1, scatter = 0.01): Promise<string> {
   const rev = (await getRevision(revisionId))!;
   const components = await loadBlendComponents(rev.content.pump.materialId, rev.content.phosphors.map((p) => p.materialId));
-  const base = [rev.content.pumpLeakFraction, ...rev.content.phosphors.map((p) => p.opticalFraction)];
-  const wavelengths = Array.from({ length: 401 }, (_, i) => 380 + i);
-  const cols = Array.from({ length: n }, (_, k) => {
-    const fractions = base.map((f, i) => {
-      if (i === 0) return f;
-      const wobble = 1 + scatter * Math.sin(1.7 * (k + 1) * i);
-      return f * wobble * (i === base.length - 1 ? lastPhosphorScale : 1);
-    });
-    const spd = mix(components, { kind: 'optical', fractions }).spd;
-    return wavelengths.map((w) => spd.values[w - spd.wavelengths[0]]);
-  });
-  const header = ['Wavelength (nm)', ...cols.map((_, k) => `${prefix}-${String(k + 1).padStart(3, '0')}`)].join(',');
-  return [header, ...wavelengths.map((w, r) => [w, ...cols.map((c) => c[r].toPrecision(6))].join(','))].join('\n');
+  const fractions = [rev.content.pumpLeakFraction, ...rev.content.phosphors.map((p) => p.opticalFraction)];
+  return syntheticPartsCsv(components, fractions, { parts: n, prefix: `${prefix}-`, lastPhosphorScale, scatter });
 }
 
 export const csvFile = (text: string, name = 'sphere-export.csv') => ({ name, contentType: 'text/csv', body: Buffer.from(text, 'utf8') });

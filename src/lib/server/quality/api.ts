@@ -42,7 +42,7 @@ export function qualityApi(run: () => Promise<Response>): Promise<Response> {
 /** The file of an upload: multipart field `file`, or the raw body (text/csv, text/plain) named by `x-file-name`. */
 export async function uploadedFile(request: Request): Promise<MeasurementFile> {
   const declared = Number(request.headers.get('content-length') ?? '0');
-  if (declared > MAX_MEASUREMENT_FILE_BYTES + 64 * 1024) throw new ApiError(413, `The upload is larger than the ${MAX_MEASUREMENT_FILE_BYTES / 1024 / 1024} MB limit for measurement files. Nothing was saved.`);
+  if (declared > MAX_MEASUREMENT_FILE_BYTES + 64 * 1024) throw new ApiError(413, `The upload is larger than the ${(MAX_MEASUREMENT_FILE_BYTES / 1024 / 1024).toFixed(1)} MB limit for measurement files. Nothing was saved.`);
   const type = request.headers.get('content-type') ?? '';
   if (/^multipart\/form-data/i.test(type)) {
     const file = (await request.formData()).get('file');

@@ -5,6 +5,7 @@
  * storage), the upload and its parts saved — one transaction; the object is removed if it fails.
  * `onProgress` reports the phases and the parts measured so far (the API streams them).
  */
+import type { Knex } from 'knex';
 import { db } from '../db/index';
 import { record } from '../db/audit';
 import { putFile } from '../storage/objects';
@@ -64,6 +65,28 @@ export async function measureFile(file: MeasurementFile, onProgress?: (p: Upload
   return { parts: measured.parts, wavelengths: parsed.wavelengths, values: parsed.columns.map((c) => c.values), warnings: parsed.warnings };
 }
 
+type Measured = Awaited<ReturnType<typeof measureFile>>;
+
+/** Writes a checked file: the raw file to object storage, the upload and its parts (inside `trx`). */
+export async function insertMeasurements(trx: Knex.Transaction, batchId: number, file: MeasurementFile, m: Measured, uploadedBy: number): Promise<{ uploadId: number; storedFileId: number }> {
+  const storedFileId = await putFile({
+    body: file.body, originalName: file.name, contentType: file.contentType || 'text/plain', purpose: 'measurement',
+    entityType: 'batch', entityId: batchId, uploadedBy
+  }, trx);
+  const [uploadId] = await trx('measurement_uploads').insert({
+    batch_id: batchId, stored_file_id: storedFileId, original_name: file.name.slice(0, 255) || 'measurements', parts_count: m.parts.length,
+    wavelengths_json: JSON.stringify(m.wavelengths), warnings_json: JSON.stringify(m.warnings), core_version: QUALITY_CORE_VERSION, uploaded_by: uploadedBy
+  });
+  const rows = m.parts.map((p, i) => ({
+    upload_id: uploadId, batch_id: batchId, part_label: p.label.slice(0, 80), column_no: i + 2,
+    values_json: JSON.stringify(m.values[i]), metrics_json: JSON.stringify(p.metrics),
+    x: p.metrics.x, y: p.metrics.y, cct_k: p.metrics.cct, duv: p.metrics.duv, ra: p.metrics.ra, r9: p.metrics.r9,
+    ler_lm_per_w: p.metrics.ler, ansi_bin: findAnsiBin(p.metrics.x, p.metrics.y)?.nominalCct ?? null
+  }));
+  for (let i = 0; i < rows.length; i += CHUNK) await trx('part_measurements').insert(rows.slice(i, i + CHUNK));
+  return { uploadId, storedFileId };
+}
+
 /** Refuses early (before reading the file) when the caller or the batch cannot take measurements. */
 export async function precheckUpload(caller: Caller, batchId: number): Promise<void> {
   requireQuality(caller, 'Uploading measurements');
@@ -85,21 +108,7 @@ export async function uploadMeasurements(caller: Caller, batchId: number, file: 
       const list = repeated.slice(0, 10).join(', ') + (repeated.length > 10 ? ` and ${repeated.length - 10} more` : '');
       throw new QualityError(409, `${file.name} was not saved: ${repeated.length === 1 ? 'part' : 'parts'} ${list} already measured for batch ${locked.batch_number}. Withdraw the earlier upload first to measure again.`);
     }
-    const storedFileId = await putFile({
-      body: file.body, originalName: file.name, contentType: file.contentType || 'text/plain', purpose: 'measurement',
-      entityType: 'batch', entityId: batchId, uploadedBy: caller.id
-    }, trx);
-    const [uploadId] = await trx('measurement_uploads').insert({
-      batch_id: batchId, stored_file_id: storedFileId, original_name: file.name.slice(0, 255) || 'measurements', parts_count: m.parts.length,
-      wavelengths_json: JSON.stringify(m.wavelengths), warnings_json: JSON.stringify(m.warnings), core_version: QUALITY_CORE_VERSION, uploaded_by: caller.id
-    });
-    const rows = m.parts.map((p, i) => ({
-      upload_id: uploadId, batch_id: batchId, part_label: p.label.slice(0, 80), column_no: i + 2,
-      values_json: JSON.stringify(m.values[i]), metrics_json: JSON.stringify(p.metrics),
-      x: p.metrics.x, y: p.metrics.y, cct_k: p.metrics.cct, duv: p.metrics.duv, ra: p.metrics.ra, r9: p.metrics.r9,
-      ler_lm_per_w: p.metrics.ler, ansi_bin: findAnsiBin(p.metrics.x, p.metrics.y)?.nominalCct ?? null
-    }));
-    for (let i = 0; i < rows.length; i += CHUNK) await trx('part_measurements').insert(rows.slice(i, i + CHUNK));
+    const { uploadId, storedFileId } = await insertMeasurements(trx, batchId, file, m, caller.id);
     await record({
       actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: 'measurements-upload',
       after: { uploadId, storedFileId, file: file.name, parts: m.parts.length, coreVersion: QUALITY_CORE_VERSION }
