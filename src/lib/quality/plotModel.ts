@@ -3,7 +3,8 @@
  * every part (pass/fail), the target with its tolerance outline and reference step ellipses
  * (3, 5, 7 steps; ANSI C78.377 quadrangles are about 7-step ellipses — Ohno, CORM 2011, DOMAIN.md §1),
  * the ANSI C78.377-2017 Table 1 quadrangles plus the target's own, the Planckian locus, and markers
- * (measured mean, predicted point, corrected prediction).
+ * (measured mean, predicted point, corrected prediction). The first view fits the target, the
+ * tolerance, the parts and the markers; zooming out shows the whole bin and its neighbours.
  */
 import { ansiNominalQuadrangles } from '../spectral/ansi/c78377';
 import type { Pair } from '../spectral/colorimetry/chromaticity';
@@ -36,7 +37,7 @@ export interface ChromaticityPlotModel {
   quadrangles: { nominalCct: number; isTarget: boolean; points: Pair[] }[];
   locus: Pair[];
   markers: PlotMarker[];
-  /** Points the initial view must show (target bin, tolerance, parts, markers). */
+  /** Points the initial view must show (target, tolerance, parts, markers); the bin may run past the edges. */
   focus: Pair[];
 }
 
@@ -61,7 +62,6 @@ export function chromaticityPlotModel(batch: JudgedBatch, markers: PlotMarker[] 
   }));
   const focus: Pair[] = [
     [t.x, t.y],
-    ...(t.ansiBin ? t.ansiBin.corners : []),
     ...tolerancePts,
     ...parts.map((p): Pair => [p.x, p.y]),
     ...markers.map((m): Pair => [m.x, m.y])
