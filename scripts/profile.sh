@@ -27,8 +27,8 @@ fi
 : "${S3_ENDPOINT:=http://127.0.0.1:$PF_S3_PORT}" "${S3_BUCKET:=phosforge-files}" "${S3_REGION:=us-east-1}"
 : "${S3_ACCESS_KEY_ID:=S3RVER}" "${S3_SECRET_ACCESS_KEY:=S3RVER}" "${S3_FORCE_PATH_STYLE:=true}"
 : "${PF_S3_DIR:=.runtime/s3-$PF_PROFILE}"
-# Request bodies up to 3 MB reach the app, so uploads over the 2 MB file limit get its own message.
-: "${BODY_SIZE_LIMIT:=3M}"
+# Request bodies up to 12 MB reach the app, so uploads over the file limits (2 MB spectra, 10 MB PDFs) get its own message.
+: "${BODY_SIZE_LIMIT:=12M}"
 export PF_DB_FAST PF_PROFILE PF_DB_DIR PF_DB_PORT DB_NAME DB_HOST DB_PORT DB_USER DB_PASSWORD PORT HOST ORIGIN AUTH_SECRET \
   PF_SMTP_PORT PF_MAIL_WEB_PORT PF_S3_PORT PF_S3_DIR SMTP_HOST SMTP_PORT MAIL_FROM MAIL_INBOX_URL \
   S3_ENDPOINT S3_BUCKET S3_REGION S3_ACCESS_KEY_ID S3_SECRET_ACCESS_KEY S3_FORCE_PATH_STYLE BODY_SIZE_LIMIT

@@ -100,7 +100,7 @@ export function toleranceText(c: RevisionContent): string {
 export function compareSettings(a: RevisionContent, b: RevisionContent): SettingRow[] {
   const silicone = (c: RevisionContent) => `${c.silicone.name} (A:B ${c.silicone.ratioA}:${c.silicone.ratioB}, pot life ${c.silicone.potLifeMin} min)`;
   const rows: [string, (c: RevisionContent) => string][] = [
-    ['Pump', (c) => `${c.pump.code} ${c.pump.name}`],
+    ['Pump', (c) => (c.pump.name.startsWith(c.pump.code) ? c.pump.name : `${c.pump.code} ${c.pump.name}`)],
     ['Silicone', silicone],
     ['Target', targetText],
     ['Tolerance', toleranceText],

@@ -70,7 +70,17 @@ beforeAll(async () => {
   approvedContent = JSON.parse(rev.content_json);
   run = Date.now() % 1e6;
 });
-afterAll(async () => closeDb());
+afterAll(async () => {
+  // Probe materials are unused, so they go; probe formulations and batches stay (records are permanent).
+  const ids = (await db()('materials').where('code', 'like', `FZ-%`).select('id')).map((r) => r.id);
+  if (ids.length) {
+    await db()('materials').whereIn('id', ids).update({ emission_spectrum_id: null, excitation_spectrum_id: null });
+    await db()('material_spectra').whereIn('material_id', ids).delete();
+    await db()('material_lots').whereIn('material_id', ids).delete();
+    await db()('materials').whereIn('id', ids).delete();
+  }
+  await closeDb();
+});
 
 const cases = () => [
   {
@@ -78,7 +88,7 @@ const cases = () => [
     handler: phosphorPost,
     user: () => formulator,
     tables: ['materials', 'material_spectra', 'material_lots', 'stored_files'],
-    valid: (i: number) => ({ code: `FZ-${run}-${i}`, name: 'Fuzz probe phosphor', family: 'garnet, Ce-activated', iqe: 0.9, densityGCm3: 4.5, costPerKg: 900 })
+    valid: (i: number) => ({ code: `FZ-${run}-${i}`, name: 'Fuzz probe phosphor', family: 'fuzz probe family', iqe: 0.9, densityGCm3: 4.5, costPerKg: 900 })
   },
   {
     name: 'POST /api/v1/formulations',

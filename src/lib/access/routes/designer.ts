@@ -1,4 +1,8 @@
 /** Routes of the designer feature (owned by that feature; merged in ../route-table.ts). */
-import type { RouteTable } from './shared';
+import { ALL, FORMULATION_EDITORS, type RouteTable } from './shared';
 
-export const DESIGNER_ROUTES: RouteTable = {};
+export const DESIGNER_ROUTES: RouteTable = {
+  '/(app)/designer': { sample: '/designer', methods: { GET: FORMULATION_EDITORS, POST: FORMULATION_EDITORS }, nav: { label: 'Designer', order: 20 } },
+  // Library spectra as blend components; any role may read the library.
+  '/api/v1/blend-components': { sample: '/api/v1/blend-components', methods: { GET: ALL } }
+};

@@ -11,4 +11,11 @@ export function hrefWith(url: URL, changes: Record<string, string | number | nul
 
 export const utc = (d: Date | string | null | undefined): string => (d ? `${new Date(d).toISOString().slice(0, 16).replace('T', ' ')} UTC` : '—');
 
-export const fixed = (v: number | null | undefined, digits: number): string => (v === null || v === undefined || !Number.isFinite(v) ? '—' : v.toFixed(digits));
+/** A number at fixed digits; values that round to zero print without a minus sign. */
+export const fixed = (v: number | null | undefined, digits: number): string => {
+  if (v === null || v === undefined || !Number.isFinite(v)) return '—';
+  return (Math.abs(v) < 0.5 * 10 ** -digits ? 0 : v).toFixed(digits);
+};
+
+/** "B-450 royal blue chip" rather than "B-450 B-450 royal blue chip" when the name already starts with the code. */
+export const materialLabel = (m: { code: string; name: string }): string => (m.name.startsWith(m.code) ? m.name : `${m.code} ${m.name}`);

@@ -61,7 +61,7 @@ function toRow(r: Record<string, unknown>): AuditRow {
   };
 }
 
-export async function searchAudit(q: AuditQuery) {
+export async function searchAudit(q: AuditQuery): Promise<{ rows: AuditRow[]; total: number; page: number; pageSize: number; pages: number }> {
   const [{ n }] = await filtered(q).count({ n: '*' });
   const total = Number(n);
   const rows = await filtered(q).select(COLUMNS).orderBy('a.id', 'desc').limit(q.pageSize).offset((q.page - 1) * q.pageSize);

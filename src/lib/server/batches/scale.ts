@@ -5,7 +5,8 @@ import type { User } from '../db/users';
 import { computeWeighout } from '../../weighout/compute';
 import { scaleByFactor, scaleToMass } from '../../weighout/scale';
 import type { WeighoutInput } from '../../weighout/schema';
-import { impossible } from './errors';
+import { impossible, invalid } from './errors';
+import { ExactNumberError } from '../../weighout/rational';
 import { expectState, expectVersion, lockBatch } from './lock';
 import { lineRowsFor, planColumns } from './lines';
 import { decimalText, placesOf } from './records';
@@ -19,8 +20,15 @@ export async function scaleBatch(user: User, batchId: number, input: ScaleInput)
     expectState(row, ['planned'], 'be rescaled once weighing has started');
     const old: WeighoutInput = JSON.parse(row.input_json);
     const current = decimalText(row.batch_mass_g, placesOf(row.resolution_g));
-    const next = 'factor' in input ? scaleByFactor(old, current, input.factor) : scaleToMass(old, input.batchMassG);
-    const result = computeWeighout(next);
+    let next: WeighoutInput;
+    let result: ReturnType<typeof computeWeighout>;
+    try {
+      next = 'factor' in input ? scaleByFactor(old, current, input.factor) : scaleToMass(old, input.batchMassG);
+      result = computeWeighout(next);
+    } catch (err) {
+      if (err instanceof ExactNumberError) throw invalid(`A number cannot be weighed exactly: ${err.message}.`);
+      throw err;
+    }
     if (!result.ok) throw impossible(result.errors);
     await trx('batch_lines').where({ batch_id: batchId }).delete();
     await trx('batch_lines').insert(lineRowsFor(batchId, result.plan.lines));

@@ -1,0 +1,60 @@
+/**
+ * What the readout panel says about a blend (pure): pass/fail of every floor, where the point
+ * sits against the target (SDCM steps with the core's IEC 60081 ellipses, Δu′v′ per CIE 15:2004
+ * §8.1) and which ANSI C78.377-2017 Table 1 bin holds it.
+ * Ra and R9 are not meaningful when DC ≥ 5.4e-3 (CIE 13.3-1995 §5.3): such floors fail.
+ */
+import { chromaticityError, withinTolerance, type Tolerance } from '../blend/solver/chromaticityError';
+import { FLOOR_RULES, type Floors } from '../blend/solver/floors';
+import type { ResolvedTarget } from '../blend/solver/resolveTarget';
+import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
+import type { SpectrumEvaluation } from '../spectral/types';
+
+export interface FloorCheck {
+  key: keyof Floors;
+  label: string;
+  /** '≥' for a minimum, '≤' for a maximum. */
+  sense: '≥' | '≤';
+  limit: number;
+  value: number | null;
+  pass: boolean;
+  /** Why the value is missing, when it is. */
+  note: string | null;
+}
+
+function metricValue(e: SpectrumEvaluation, metric: 'ra' | 'r9' | 'rf' | 'rg' | 'ler'): number | null {
+  const v = metric === 'ra' ? e.cri.ra : metric === 'r9' ? e.cri.ri[8] : metric === 'rf' ? e.tm30.rf : metric === 'rg' ? e.tm30.rg : e.ler;
+  return Number.isFinite(v) ? v : null;
+}
+
+export function floorChecks(floors: Floors, e: SpectrumEvaluation): FloorCheck[] {
+  return FLOOR_RULES.filter((r) => floors[r.key] !== undefined).map((r) => {
+    const limit = floors[r.key] as number;
+    const criMetric = r.metric === 'ra' || r.metric === 'r9';
+    const value = criMetric && !e.cri.valid ? null : metricValue(e, r.metric);
+    const pass = value !== null && r.sense * (limit - value) <= 0;
+    const note = value !== null ? null : criMetric ? 'not defined: too far from the Planckian locus (CIE 13.3 §5.3)' : 'not defined for this spectrum';
+    return { key: r.key, label: r.label, sense: r.sense > 0 ? '≥' : '≤', limit, value, pass, note };
+  });
+}
+
+export interface TargetStanding {
+  sdcm: number;
+  deltaUvPrime: number;
+  withinTolerance: boolean;
+  /** Nominal CCT of the Table 1 bin holding the point, or null. */
+  ansiBin: number | null;
+  /** Inside the target's own quadrangle (only for bin targets). */
+  inTargetBin: boolean | null;
+}
+
+export function targetStanding(e: SpectrumEvaluation, target: ResolvedTarget, tolerance: Tolerance): TargetStanding {
+  const err = chromaticityError(e.x, e.y, target.x, target.y);
+  return {
+    sdcm: err.sdcm,
+    deltaUvPrime: err.deltaUvPrime,
+    withinTolerance: withinTolerance(err, tolerance),
+    ansiBin: findAnsiBin(e.x, e.y)?.nominalCct ?? null,
+    inTargetBin: target.ansiBin ? isInQuadrangle(e.x, e.y, target.ansiBin) : null
+  };
+}

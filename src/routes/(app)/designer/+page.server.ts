@@ -1,0 +1,56 @@
+import { fail } from '@sveltejs/kit';
+import { requireUser } from '$lib/server/auth/require';
+import { listMaterialOptions } from '$lib/server/materials/components';
+import { listSiliconeSystems } from '$lib/server/formulations/silicone';
+import { formulationListSchema, listFormulations } from '$lib/server/formulations/lists';
+import { getRevision } from '$lib/server/formulations/read';
+import { FormulationError, ValidationError } from '$lib/server/formulations/errors';
+import { fileBlend } from '$lib/server/designer/file-blend';
+import { filingFormSchema } from '$lib/designer/filing';
+import { FORMULATION_EDITORS } from '$lib/access/routes/shared';
+import type { Actions, PageServerLoad } from './$types';
+
+/** A revision opened in the designer (`?from=<revision id>`) to start the next revision from it. */
+async function openedRevision(param: string | null) {
+  const id = Number(param);
+  if (!param || !Number.isSafeInteger(id) || id <= 0) return null;
+  const rev = await getRevision(id);
+  if (!rev) return null;
+  return { id: rev.id, formulationId: rev.formulationId, code: rev.formulationCode, name: rev.formulationName, revisionNo: rev.revisionNo, state: rev.state, content: rev.content };
+}
+
+export const load: PageServerLoad = async ({ locals, url }) => {
+  requireUser(locals, FORMULATION_EDITORS);
+  const [pumps, phosphors, silicones, formulations, opened] = await Promise.all([
+    listMaterialOptions('pump'),
+    listMaterialOptions('phosphor'),
+    listSiliconeSystems(),
+    listFormulations(formulationListSchema.parse({ pageSize: 100, sort: 'code' })),
+    openedRevision(url.searchParams.get('from'))
+  ]);
+  return {
+    pumps,
+    phosphors,
+    silicones: silicones.map((s) => ({ id: s.id, name: s.name, ratioA: s.ratioA, ratioB: s.ratioB, potLifeMin: s.potLifeMin, safetyNote: s.safetyNote })),
+    formulations: formulations.rows.map((f) => ({ id: f.id, code: f.code, name: f.name })),
+    opened
+  };
+};
+
+export const actions: Actions = {
+  file: async ({ locals, request }) => {
+    const user = requireUser(locals, FORMULATION_EDITORS);
+    const raw = Object.fromEntries(await request.formData());
+    const parsed = filingFormSchema.safeParse(raw);
+    if (!parsed.success) {
+      return fail(400, { error: `Nothing was filed: ${parsed.error.issues.map((i) => i.message).join('; ')}.` });
+    }
+    try {
+      return { filed: await fileBlend(user, parsed.data) };
+    } catch (err) {
+      if (err instanceof ValidationError) return fail(400, { error: `Nothing was filed: ${err.message}` });
+      if (err instanceof FormulationError) return fail(err.status, { error: err.message });
+      throw err;
+    }
+  }
+};
