@@ -19,7 +19,7 @@ import { expectState, expectVersion, lockBatch } from '../batches/lock';
 import { recordMeasurementSummary } from '../../quality/index';
 import type { DispositionInput } from '../../schemas/quality';
 import { QualityError, conflict, forbidden, notFound } from './errors';
-import { requireQuality, type Caller } from './caller';
+import { canActOnMeasurements, requireQuality, type Caller } from './caller';
 import { computeResults, loadContext, type BatchQualityContext } from './results';
 import { signedJsonAndHash } from './signed-content';
 import { notifyDisposition } from './notify';
@@ -34,7 +34,7 @@ export async function batchAuthors(ctx: BatchQualityContext): Promise<Set<number
 /** Why this caller may not sign the batch now, or null. Used by the page to show or hide the form. */
 export async function dispositionRefusal(caller: Caller, ctx: BatchQualityContext): Promise<string | null> {
   const b = ctx.detail.batch;
-  if (!['quality', 'admin'].some((r) => caller.roles.includes(r as 'quality'))) return 'Release and rejection are signed by quality.';
+  if (!canActOnMeasurements(caller)) return 'Release and rejection are signed by quality.';
   if (b.state === 'released' || b.state === 'rejected') return `Batch ${b.batchNumber} is ${b.state}.`;
   if (b.state !== 'complete') return `Batch ${b.batchNumber} is ${b.state}: it can be released or rejected once the weigh-out is complete.`;
   if ((await batchAuthors(ctx)).has(caller.id)) return `You worked on batch ${b.batchNumber} (or wrote its revision): someone else in quality must sign it off.`;
