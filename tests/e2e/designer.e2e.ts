@@ -139,7 +139,7 @@ test('dragging a share slider re-evaluates every frame; frame times are recorded
   await page.mouse.down();
   const started = Date.now();
   for (let pass = 0; pass < 2; pass++) {
-    for (let i = 0; i <= 60; i++) await page.mouse.move(box.x + box.width * (0.2 + (pass % 2 === 0 ? i : 60 - i) * 0.01), y);
+    for (let i = 0; i <= 40; i++) await page.mouse.move(box.x + box.width * (0.2 + (pass % 2 === 0 ? i : 40 - i) * 0.015), y);
   }
   await page.mouse.up();
   const dragMs = Date.now() - started;
@@ -167,7 +167,7 @@ test('dragging a share slider re-evaluates every frame; frame times are recorded
       `frame time over ${worked.length} frames with an update: median ${median.toFixed(1)} ms, p95 ${pick(0.95).toFixed(1)} ms, max ${sorted[sorted.length - 1].toFixed(1)} ms ` +
       `(${(1000 / median).toFixed(0)} fps); evaluation (superposition + full core) median ${evals[Math.floor(evals.length / 2)]?.toFixed(2)} ms`
   );
-  expect(probe.inputs.length).toBeGreaterThan(60);
+  expect(probe.inputs.length).toBeGreaterThan(40);
   expect(worked.length).toBeGreaterThan(20);
   // 30 frames per second or better: median frame ≤ 33 ms (issue 6).
   expect(median).toBeLessThanOrEqual(33);

@@ -86,7 +86,15 @@ export class DesignerSession {
 
   wantedKey = $derived(this.pumpId === null ? '' : componentSetKey(this.pumpId, this.phosphorIds));
   ready = $derived(this.evaluator !== null && this.loadedKey === this.wantedKey && this.shares.length === this.phosphorIds.length + 1);
-  frame: LiveFrame | null = $derived(this.ready && this.evaluator ? this.evaluator.evaluate(this.shares) : null);
+  live = $derived.by((): { frame: LiveFrame | null; error: string | null } => {
+    if (!this.ready || !this.evaluator) return { frame: null, error: null };
+    try {
+      return { frame: this.evaluator.evaluate(this.shares), error: null };
+    } catch (err) {
+      return { frame: null, error: err instanceof Error ? err.message : String(err) };
+    }
+  });
+  frame: LiveFrame | null = $derived(this.live.frame);
   aimResult = $derived(resolveAim(this.aim));
   componentColours = $derived(this.evaluator ? this.evaluator.basis.components.map((c) => lightSwatchHex(c.xyz)) : []);
   get pump(): MaterialChoice | null {
