@@ -12,6 +12,9 @@ DB_NAME="${DB_NAME:-phosforge}"
 DB_USER="${DB_USER:-phosforge}"
 DB_PASSWORD="${DB_PASSWORD:-phosforge-local}"
 ME="$(id -un)"
+# Throwaway servers (tests, load runs) trade crash durability for speed; development data keeps full durability.
+FAST_OPTS=""
+[ "${PF_DB_FAST:-0}" = "1" ] && FAST_OPTS="--innodb-flush-log-at-trx-commit=0 --innodb-doublewrite=0 --sync-binlog=0"
 
 ping_db() { mariadb-admin --no-defaults --socket="$SOCK" -uroot ping >/dev/null 2>&1; }
 
@@ -29,7 +32,7 @@ case "${1:-}" in
       nohup mariadbd --no-defaults --datadir="$D/data" --socket="$SOCK" --pid-file="$D/mysqld.pid" \
         --port="$PORT" --bind-address=127.0.0.1 --skip-name-resolve --user="$ME" \
         --log-error="$D/error.log" --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \
-        --innodb-buffer-pool-size=128M --max-connections=300 >/dev/null 2>&1 &
+        --innodb-buffer-pool-size=128M --max-connections=300 $FAST_OPTS >/dev/null 2>&1 &
       for _ in $(seq 1 600); do ping_db && break; sleep 0.1; done
       ping_db || { echo "db: server did not answer; see $D/error.log" >&2; tail -20 "$D/error.log" >&2; exit 1; }
       echo "db: MariaDB up on 127.0.0.1:$PORT (data in $D)"

@@ -53,11 +53,14 @@ async function runOne(s: Scenario, token: string) {
 const formulator = await db()('users').where({ email: 'rhea.okafor@kestrelhollow.example' }).first('id');
 if (!formulator) throw new Error('load: the demo formulator is missing (seed the database first)');
 const { token } = await createToken(formulator.id, 'load run', 1);
+const approved = await db()('formulation_revisions').where({ state: 'approved' }).first('content_json');
+if (!approved) throw new Error('load: no approved demo revision to copy a draft from (seed the database first)');
+const draftContent = JSON.parse(approved.content_json);
 await closeDb();
 
 console.log(`load: ${connections} connections, ${seconds} s per route, ${base}`);
 const rows = [];
-for (const s of scenarios) {
+for (const s of scenarios(draftContent)) {
   const r = await runOne(s, token);
   rows.push(r);
   const goal = r.goalMs ? (r.p95 <= r.goalMs ? `  (p95 goal ${r.goalMs} ms: ok)` : `  (p95 goal ${r.goalMs} ms: MISSED)`) : '';

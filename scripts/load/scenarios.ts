@@ -15,7 +15,8 @@ const wavelengths = Array.from({ length: 401 }, (_, i) => 380 + i);
 const band = (l: number, p: number, w: number) => Math.exp(-0.5 * ((l - p) / (w / 2.3548)) ** 2);
 let n = 0;
 
-export const scenarios: Scenario[] = [
+/** `draftContent`: a valid revision content (taken from the demo data) for the create-draft route. */
+export const scenarios = (draftContent: unknown): Scenario[] => [
   {
     name: 'evaluate', method: 'POST', path: '/api/v1/evaluate', expect: 200, p95GoalMs: 100,
     // A slightly different white spectrum on every request, so nothing can be cached.
@@ -28,5 +29,10 @@ export const scenarios: Scenario[] = [
   {
     name: 'solve', method: 'POST', path: '/api/v1/solve', expect: 200,
     body: () => ({ components, target: { kind: 'cctDuv', cct: 3000 + (n++ % 5) * 100, duv: 0 }, floors: { raMin: 80 }, objective: 'maxLer' })
+  },
+  { name: 'list formulations', method: 'GET', path: '/api/v1/formulations?page=1', expect: 200, p95GoalMs: 100 },
+  {
+    name: 'create draft', method: 'POST', path: '/api/v1/formulations', expect: 201,
+    body: () => ({ name: `Load-run draft ${n++}`, description: 'made by npm run load', content: draftContent })
   }
 ];

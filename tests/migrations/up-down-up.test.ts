@@ -39,7 +39,7 @@ describe('migrations up → down → up', () => {
     expect(await tables()).toEqual([]);
     await knex.migrate.latest();
     expect(await tables()).toEqual(first);
-  });
+  }, 180_000);
 
   it('refuses UPDATE and DELETE on the audit trail', async () => {
     await knex('audit_events').insert({ entity_type: 'probe', action: 'create' });

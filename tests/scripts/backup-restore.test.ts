@@ -63,7 +63,7 @@ describe('npm run backup / npm run restore', () => {
     expect((triggers as { n: string }[]).map((r) => r.n)).toEqual(expect.arrayContaining(['audit_events_no_delete', 'audit_events_no_update']));
     const obj = await s3FromEnv().send(new GetObjectCommand({ Bucket: restoreBucket, Key: 'backup-check/marker.txt' }));
     expect(await obj.Body!.transformToString()).toBe('Kestrel Hollow backup marker ✓');
-  });
+  }, 180_000);
 
   it('refuses a folder that is not a backup and changes nothing', async () => {
     await expect(run('node', ['--import', 'tsx', 'scripts/backup/restore.ts', tmpdir(), '--yes'], { env: { ...process.env, DB_NAME: restoreDb } }))

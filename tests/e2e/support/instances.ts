@@ -6,6 +6,8 @@ const run = promisify(execFile);
 
 export interface AppInstance {
   url: string;
+  /** Everything the instance wrote to stdout and stderr so far. */
+  logs(): string;
   stop(): Promise<void>;
 }
 
@@ -26,12 +28,15 @@ async function waitFor(url: string, ms = 30_000): Promise<void> {
 /** Starts `node build` on a port with extra environment (e.g. another database). */
 export async function startApp(port: number, env: Record<string, string> = {}): Promise<AppInstance> {
   const url = `http://127.0.0.1:${port}`;
+  const origin = env.ORIGIN ?? url;
   const child: ChildProcess = spawn('node', ['build'], {
-    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', ORIGIN: url, ...env },
-    stdio: ['ignore', 'ignore', 'pipe']
+    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', ORIGIN: origin, ...env },
+    stdio: ['ignore', 'pipe', 'pipe']
   });
   let stderr = '';
-  child.stderr?.on('data', (d) => (stderr += d));
+  let output = '';
+  child.stderr?.on('data', (d) => { stderr += d; output += d; });
+  child.stdout?.on('data', (d) => (output += d));
   try {
     await waitFor(`${url}/api/health`);
   } catch (e) {
@@ -40,6 +45,7 @@ export async function startApp(port: number, env: Record<string, string> = {}): 
   }
   return {
     url,
+    logs: () => output,
     stop: () => new Promise<void>((ok) => {
       if (child.exitCode !== null) return ok();
       child.once('exit', () => ok());

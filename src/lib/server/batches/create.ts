@@ -1,0 +1,88 @@
+/** Plans a batch from an approved revision: validate → compute the weigh-out → save batch and lines (one transaction). */
+import { db } from '../db/index';
+import { record } from '../db/audit';
+import { getRevision } from '../formulations/read';
+import type { User } from '../db/users';
+import { computeWeighout, type WeighoutPlan } from '../../weighout/compute';
+import { ExactNumberError } from '../../weighout/rational';
+import { weighoutInputFromRevision } from '../../weighout/from-revision';
+import { describeTarget } from '../../weighout/target';
+import type { WeighoutInput } from '../../weighout/schema';
+import type { CreateBatchRequest } from '../../schemas/batches';
+import { conflict, impossible, invalid, notFound } from './errors';
+import { nextBatchNumber } from './number';
+import { lineRowsFor, planColumns } from './lines';
+
+export interface PreparedBatch { input: WeighoutInput; plan: WeighoutPlan }
+
+/** The plan a request would give, without saving (also used by the preview endpoint). */
+export async function prepareBatch(req: CreateBatchRequest): Promise<PreparedBatch & { revision: NonNullable<Awaited<ReturnType<typeof getRevision>>> }> {
+  const revision = await getRevision(req.revisionId);
+  if (!revision) throw notFound(`Formulation revision ${req.revisionId}`);
+  if (revision.state !== 'approved') {
+    throw conflict(`${revision.formulationCode} revision ${revision.revisionNo} is ${revision.state}: batches are made from the approved revision only.`);
+  }
+  const sysId = revision.content.silicone.siliconeSystemId;
+  if (req.siliconeSystemId != null && req.siliconeSystemId !== sysId) {
+    throw invalid(`The approved revision specifies the silicone system "${revision.content.silicone.name}"; a different silicone needs a new revision.`, [{ path: 'siliconeSystemId', message: 'must be the revision\'s silicone system' }]);
+  }
+  const built = weighoutInputFromRevision(revision.content, req);
+  if (!built.ok) throw invalid(built.errors.map((e) => e.message).join('; '), built.errors);
+  let result: ReturnType<typeof computeWeighout>;
+  try {
+    result = computeWeighout(built.input);
+  } catch (err) {
+    if (err instanceof ExactNumberError) throw invalid(`A number cannot be weighed exactly: ${err.message}.`);
+    throw err;
+  }
+  if (!result.ok) throw impossible(result.errors);
+  return { input: built.input, plan: result.plan, revision };
+}
+
+export async function createBatch(user: User, req: CreateBatchRequest): Promise<{ id: number; batchNumber: string }> {
+  const { input, plan, revision } = await prepareBatch(req);
+  const target = describeTarget(revision.content.target, revision.content.tolerance);
+  const s = revision.content.silicone;
+  for (let attempt = 0; ; attempt++) {
+    try {
+      return await db().transaction(async (trx) => {
+        const batchNumber = await nextBatchNumber(trx);
+        const [id] = await trx('batches').insert({
+          batch_number: batchNumber,
+          revision_id: revision.id,
+          formulation_code: revision.formulationCode,
+          formulation_name: revision.formulationName,
+          revision_no: revision.revisionNo,
+          state: 'planned',
+          sizing_kind: req.sizing.kind,
+          part_count: req.sizing.kind === 'parts' ? req.sizing.partCount : null,
+          dispense_mass_g: req.sizing.kind === 'parts' ? req.sizing.dispenseMassG : null,
+          yield_loss_pct: req.sizing.kind === 'parts' ? req.sizing.yieldLossPct : null,
+          loading_basis: req.loading.basis,
+          total_loading_pct: req.loading.mode === 'total' ? req.loading.totalPct : null,
+          ...planColumns(plan),
+          silicone_system_id: s.siliconeSystemId,
+          silicone_name: s.name,
+          ratio_a: s.ratioA,
+          ratio_b: s.ratioB,
+          pot_life_min: s.potLifeMin,
+          plant_limit_min: req.plantLimitMin ?? null,
+          resolution_g: plan.resolutionG,
+          min_weight_g: plan.minWeightG,
+          balance_ref: req.balance.ref || null,
+          input_json: JSON.stringify(input),
+          target_json: JSON.stringify(target),
+          notes: req.notes || null,
+          created_by: user.id
+        });
+        await trx('batch_lines').insert(lineRowsFor(id, plan.lines));
+        await record({ actorId: user.id, actorEmail: user.email, entityType: 'batch', entityId: id, action: 'create', after: { batchNumber, revisionId: revision.id, request: req, lines: plan.lines.map((l) => [l.code, l.targetG]) } }, trx);
+        return { id, batchNumber };
+      });
+    } catch (err) {
+      // Two batches planned in the same instant can pick the same number: try the next one.
+      if ((err as { code?: string }).code === 'ER_DUP_ENTRY' && attempt < 3) continue;
+      throw err;
+    }
+  }
+}

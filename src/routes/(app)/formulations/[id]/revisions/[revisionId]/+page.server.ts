@@ -1,0 +1,116 @@
+import { error, fail, redirect } from '@sveltejs/kit';
+import { z } from 'zod';
+import { requireUser } from '$lib/server/auth/require';
+import { db } from '$lib/server/db/index';
+import { eventsFor } from '$lib/server/audit/search';
+import { contentSha256 } from '$lib/server/formulations/hash';
+import { currentApprovedRevision, getRevision, listAttachments, listSignatures } from '$lib/server/formulations/read';
+import { contentFromForm, editorOptions, formRefusal } from '$lib/server/formulations/page-support';
+import { createRevision, updateDraft, ValidationError } from '$lib/server/formulations/save';
+import { returnRevision, sign, submit, withdraw } from '$lib/server/formulations/workflow';
+import { contentToFormValues, formDataToValues } from '$lib/formulations/form-values';
+import { allowedCommands } from '$lib/formulations/workflow-rules';
+import type { Actions, PageServerLoad } from './$types';
+
+const ACTORS = ['formulator', 'quality', 'admin'] as const;
+const version = z.coerce.number().int().positive('version missing: reload the page');
+const signSchema = z.object({
+  meaning: z.enum(['reviewed', 'approved', 'returned'], 'choose what your signature means'),
+  password: z.string().min(1, 're-enter your password to sign'),
+  comment: z.string().trim().max(2000).default(''),
+  version
+}).refine((s) => s.meaning !== 'returned' || s.comment.length >= 3, { message: 'say why the revision is returned', path: ['comment'] });
+const withdrawSchema = z.object({ reason: z.string().trim().min(3, 'say why the revision is withdrawn').max(2000), version });
+
+async function revisionOf(params: { id: string; revisionId: string }) {
+  const rev = await getRevision(Number(params.revisionId));
+  if (!rev || rev.formulationId !== Number(params.id)) error(404, 'No such revision of this formulation.');
+  return rev;
+}
+
+export const load: PageServerLoad = async ({ locals, params }) => {
+  const user = requireUser(locals);
+  const rev = await revisionOf(params);
+  const commands = allowedCommands(user, rev);
+  const [signatures, attachments, history, current, silicone] = await Promise.all([
+    listSignatures(rev.id), listAttachments(rev.id), eventsFor('formulation_revision', rev.id), currentApprovedRevision(rev.formulationId),
+    rev.content.silicone.siliconeSystemId ? db()('silicone_systems').where({ id: rev.content.silicone.siliconeSystemId }).first('safety_note', 'degas_notes') : null
+  ]);
+  return {
+    rev,
+    commands,
+    signatures,
+    attachments,
+    history,
+    currentId: current?.id ?? null,
+    hashVerified: contentSha256(rev.content) === rev.contentSha256,
+    canStartDraft: user.roles.some((r) => r === 'formulator' || r === 'admin'),
+    editor: commands.includes('edit') ? { values: contentToFormValues(rev.content), options: await editorOptions() } : null,
+    silicone: silicone ? { safetyNote: silicone.safety_note as string, degasNotes: silicone.degas_notes as string | null } : null
+  };
+};
+
+export const actions: Actions = {
+  save: async ({ locals, params, request }) => {
+    const user = requireUser(locals, ACTORS);
+    const rev = await revisionOf(params);
+    const values = formDataToValues(await request.formData());
+    try {
+      const saved = await updateDraft(user, rev.id, Number(values.version), contentFromForm(values));
+      return { action: 'save', saved: saved.version };
+    } catch (err) {
+      return formRefusal(err, values, 'save');
+    }
+  },
+  submit: async ({ locals, params, request }) => {
+    const user = requireUser(locals, ACTORS);
+    const rev = await revisionOf(params);
+    const parsed = version.safeParse((await request.formData()).get('version'));
+    if (!parsed.success) return fail(400, { action: 'submit', error: parsed.error.issues[0].message });
+    try {
+      await submit(user, rev.id, parsed.data);
+      return { action: 'submit', done: 'Submitted for review; quality has been notified.' };
+    } catch (err) {
+      return formRefusal(err, {}, 'submit');
+    }
+  },
+  withdraw: async ({ locals, params, request }) => {
+    const user = requireUser(locals, ACTORS);
+    const rev = await revisionOf(params);
+    const values = formDataToValues(await request.formData());
+    const parsed = withdrawSchema.safeParse(values);
+    if (!parsed.success) return fail(400, { action: 'withdraw', values, error: parsed.error.issues[0].message });
+    try {
+      await withdraw(user, rev.id, parsed.data.reason, parsed.data.version);
+      return { action: 'withdraw', done: 'Revision withdrawn.' };
+    } catch (err) {
+      return formRefusal(err, values, 'withdraw');
+    }
+  },
+  sign: async ({ locals, params, request }) => {
+    const user = requireUser(locals, ['quality', 'admin']);
+    const rev = await revisionOf(params);
+    const values = formDataToValues(await request.formData());
+    const parsed = signSchema.safeParse(values);
+    if (!parsed.success) return formRefusal(new ValidationError(parsed.error.issues.map((i) => i.message).join('; ')), values, 'sign');
+    const s = parsed.data;
+    try {
+      if (s.meaning === 'returned') await returnRevision(user, rev.id, { password: s.password, reason: s.comment }, s.version);
+      else await sign(user, rev.id, s.meaning, { password: s.password, comment: s.comment }, s.version);
+      return { action: 'sign', done: s.meaning === 'approved' ? 'Signed and approved: this is now the current revision.' : s.meaning === 'returned' ? 'Signed and returned to the author.' : 'Review signature recorded.' };
+    } catch (err) {
+      return formRefusal(err, values, 'sign');
+    }
+  },
+  newDraft: async ({ locals, params }) => {
+    const user = requireUser(locals, ['formulator', 'admin']);
+    const rev = await revisionOf(params);
+    let created;
+    try {
+      created = await createRevision(user, rev.formulationId, rev.content, rev.id);
+    } catch (err) {
+      return formRefusal(err, {}, 'newDraft');
+    }
+    redirect(303, `/formulations/${rev.formulationId}/revisions/${created.revisionId}`);
+  }
+};

@@ -1,0 +1,30 @@
+import { error, fail, redirect } from '@sveltejs/kit';
+import { requireUser } from '$lib/server/auth/require';
+import { FORMULATION_EDITORS } from '$lib/access/routes/shared';
+import * as editing from '$lib/server/materials/editing';
+import * as records from '$lib/server/materials/records';
+import { readMaterialForm, readVersion, valuesOf } from '$lib/server/materials/form';
+import { formGuard, pageId } from '$lib/server/materials/page-errors';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async ({ locals, params }) => {
+  requireUser(locals, FORMULATION_EDITORS);
+  const m = await records.get(pageId(params.id));
+  if (!m) error(404, 'No such material.');
+  return { material: { id: m.id, kind: m.kind, code: m.code, version: m.version, archived: m.archivedAt !== null, safetyNote: m.safetyNote }, values: valuesOf(m) };
+};
+
+export const actions: Actions = {
+  default: async ({ locals, request, params }) => {
+    const user = requireUser(locals, FORMULATION_EDITORS);
+    const fd = await request.formData();
+    const form = readMaterialForm(fd);
+    const version = readVersion(fd);
+    if (!form.ok) return fail(400, { values: form.values, errors: form.errors, error: 'Please correct the marked fields. Nothing was saved.' });
+    if (version === null) return fail(400, { values: form.values, errors: {}, error: 'The form lost its version number; reload the page.' });
+    const id = pageId(params.id);
+    const saved = await formGuard({ values: form.values, errors: {} }, () => editing.update(user, id, version, form.data));
+    if (typeof saved !== 'number') return saved;
+    redirect(303, `/library/${id}?saved=1`);
+  }
+};

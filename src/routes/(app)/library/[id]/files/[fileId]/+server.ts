@@ -1,0 +1,26 @@
+import { error } from '@sveltejs/kit';
+import { requireUser } from '$lib/server/auth/require';
+import { ALL } from '$lib/access/routes/shared';
+import { fileOfMaterial } from '$lib/server/materials/attachments';
+import { getFile, safeFileName } from '$lib/server/storage/objects';
+import { pageId } from '$lib/server/materials/page-errors';
+import type { RequestHandler } from './$types';
+
+/** Download of a material's stored file (data sheet, certificate, original spectrum export). */
+export const GET: RequestHandler = async ({ locals, params }) => {
+  requireUser(locals, ALL);
+  const row = await fileOfMaterial(pageId(params.id), pageId(params.fileId));
+  if (!row) error(404, 'No such file on this material.');
+  const file = await getFile(row.id);
+  if (!file) error(404, 'No such file.');
+  const pdf = file.row.contentType === 'application/pdf';
+  return new Response(new Uint8Array(file.body), {
+    headers: {
+      'content-type': pdf ? 'application/pdf' : 'text/plain; charset=utf-8',
+      'content-disposition': `attachment; filename="${safeFileName(file.row.originalName)}"`,
+      'content-length': String(file.body.length),
+      'x-content-type-options': 'nosniff',
+      'cache-control': 'private, no-store'
+    }
+  });
+};

@@ -1,0 +1,27 @@
+import { json } from '@sveltejs/kit';
+import { requireUser } from '$lib/server/auth/require';
+import { ApiError, readJson } from '$lib/server/api/body';
+import { batchApi } from '$lib/server/batches/api';
+import { createBatch } from '$lib/server/batches/create';
+import { listBatches } from '$lib/server/batches/read';
+import { LINE } from '$lib/access/routes/shared';
+import { createBatchSchema, listQuerySchema } from '$lib/schemas/batches';
+import type { RequestHandler } from './$types';
+
+/** Batches, newest first: ?state=, ?q= (batch number or lot), ?lot= (exact lot), ?revisionId=, ?limit=, ?offset=. */
+export const GET: RequestHandler = (event) =>
+  batchApi(async () => {
+    requireUser(event.locals);
+    const parsed = listQuerySchema.safeParse(Object.fromEntries(event.url.searchParams));
+    if (!parsed.success) throw new ApiError(400, `Invalid query: ${parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
+    return json(await listBatches(parsed.data));
+  });
+
+/** Plans a batch from an approved revision (technicians and admins). */
+export const POST: RequestHandler = (event) =>
+  batchApi(async () => {
+    const user = requireUser(event.locals, LINE);
+    const body = await readJson(event, createBatchSchema);
+    const created = await createBatch(user, body);
+    return json(created, { status: 201, headers: { location: `/api/v1/batches/${created.id}` } });
+  });

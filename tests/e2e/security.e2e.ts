@@ -1,0 +1,76 @@
+import { test, expect, request } from '@playwright/test';
+import { startApp, type AppInstance } from './support/instances';
+import { BASE, DEMO, DEMO_PASSWORD, makeUser, postSignIn, signedInContext, testDb } from './support/accounts';
+
+// Security checks beyond the route × role matrix (route-guard.e2e.ts): CSRF on form actions,
+// cookie flags in production, passwords never logged, security headers.
+
+test('form actions refuse a cross-site origin (CSRF)', async () => {
+  const ctx = await signedInContext(DEMO.admin);
+  const res = await ctx.post('/profile?/createToken', { headers: { Origin: 'https://evil.example' }, form: { name: 'csrf', days: '1' }, maxRedirects: 0 });
+  expect(res.status()).toBe(403);
+  const ok = await ctx.post('/profile?/createToken', { headers: { Origin: BASE, 'x-sveltekit-action': 'true' }, form: { name: 'same-site', days: '1' } });
+  expect(ok.status()).toBe(200);
+  await ctx.dispose();
+});
+
+test('pages carry a content security policy and refuse framing', async () => {
+  const ctx = await request.newContext({ baseURL: BASE });
+  const res = await ctx.get('/signin');
+  const h = res.headers();
+  expect(h['content-security-policy']).toMatch(/default-src 'self'/);
+  expect(h['content-security-policy']).toMatch(/frame-ancestors 'none'/);
+  expect(h['content-security-policy']).toMatch(/object-src 'none'/);
+  expect(h['x-frame-options']).toBe('DENY');
+  expect(h['x-content-type-options']).toBe('nosniff');
+  const api = await ctx.get('/api/health');
+  expect(api.headers()['x-frame-options']).toBe('DENY');
+  await ctx.dispose();
+});
+
+test.describe('production mode', () => {
+  let app: AppInstance;
+  const origin = 'https://phosforge.kestrelhollow.example';
+  test.beforeAll(async () => {
+    app = await startApp(4177, { NODE_ENV: 'production', ORIGIN: origin });
+  });
+  test.afterAll(async () => app?.stop());
+
+  test('session cookies are Secure, HttpOnly and SameSite behind an https origin', async () => {
+    const ctx = await request.newContext({ baseURL: app.url });
+    const res = await ctx.post('/auth/callback/credentials', { headers: { Origin: origin }, form: { email: DEMO.quality, password: DEMO_PASSWORD, callbackUrl: '/' }, maxRedirects: 0 });
+    expect(res.status()).toBe(302);
+    const cookies = res.headersArray().filter((h) => h.name.toLowerCase() === 'set-cookie').map((h) => h.value);
+    const session = cookies.find((c) => /session-token=/.test(c));
+    expect(session, cookies.join('\n')).toBeTruthy();
+    expect(session).toMatch(/^__Secure-/);
+    expect(session).toMatch(/;\s*Secure/i);
+    expect(session).toMatch(/;\s*HttpOnly/i);
+    expect(session).toMatch(/;\s*SameSite=Lax/i);
+    await ctx.dispose();
+  });
+
+  test('passwords never reach the logs or the audit trail', async () => {
+    const email = 'log.probe@kestrelhollow.example';
+    const right = 'Kestrel-right-Password-7731';
+    const wrong = 'Kestrel-wrong-Password-9902';
+    await makeUser(email, ['formulator'], right);
+    const ctx = await request.newContext({ baseURL: app.url });
+    await postSignIn(ctx, email, wrong, origin);
+    await postSignIn(ctx, email, right, origin);
+    await ctx.post('/signin', { headers: { Origin: origin }, form: { email, password: wrong }, maxRedirects: 0 });
+    await ctx.dispose();
+    expect(app.logs()).not.toContain(wrong);
+    expect(app.logs()).not.toContain(right);
+    const knex = testDb();
+    try {
+      const rows = await knex('audit_events').where({ actor_email: email });
+      expect(rows.length).toBeGreaterThan(0);
+      const text = JSON.stringify(rows);
+      expect(text).not.toContain(wrong);
+      expect(text).not.toContain(right);
+    } finally {
+      await knex.destroy();
+    }
+  });
+});
