@@ -92,9 +92,9 @@ test('a formulator builds a 3000 K blend, searches, puts a proposal on the desk 
     await knex.destroy();
   }
 
-  // Nothing unsaved: leaving does not ask.
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Profile & tokens' }).click();
-  await expect(page).toHaveURL(/\/profile$/);
+  // Nothing unsaved: leaving does not ask; the filed draft opens in the formulations pages.
+  await page.getByTestId('filed').getByRole('link', { name: 'Open the revision' }).click();
+  await expect(page.getByRole('heading', { name: `${code} · revision 1` })).toBeVisible();
 });
 
 /** The approved demo revision KH-W30-90 (seeds/03_formulations.ts): B-450 + GL-530 + YL-568 + RD-625. */
