@@ -66,8 +66,11 @@ export class DesignerSession {
   readonly phosphorOptions: MaterialChoice[];
 
   constructor(pumps: MaterialChoice[], phosphors: MaterialChoice[], opened: RevisionContent | null, openedAim: AimState | null) {
-    this.pumps = pumps;
-    this.phosphorOptions = phosphors;
+    // A revision may name materials that have since left the active library: keep them choosable.
+    const known = (list: MaterialChoice[], ref: { materialId: number; code: string; name: string }) =>
+      list.some((m) => m.id === ref.materialId) ? list : [...list, { id: ref.materialId, code: ref.code, name: `${ref.name} (archived)`, family: null, peakNm: null }];
+    this.pumps = opened ? known(pumps, opened.pump) : pumps;
+    this.phosphorOptions = opened ? opened.phosphors.reduce(known, phosphors) : phosphors;
     if (opened) {
       this.pumpId = opened.pump.materialId;
       this.phosphorIds = opened.phosphors.map((p) => p.materialId);
