@@ -123,22 +123,24 @@ export async function seed(knex: Knex): Promise<void> {
         await audit(trx, author, 'formulation_revision', revisionId, 'create', r.createdAt, null, { formulationId, revisionNo: i + 1, state: 'draft', contentSha256: sha });
         // Walk the revision through the same transitions the app makes (the lock trigger checks each one).
         if (r.submittedAt) {
-          await trx('formulation_revisions').where({ id: revisionId }).update({ state: 'submitted', submitted_at: new Date(r.submittedAt), submitted_by: author.id, version: 2 });
+          await trx('formulation_revisions').where({ id: revisionId }).update({ state: 'submitted', submitted_at: new Date(r.submittedAt), submitted_by: author.id, version: 2, updated_at: new Date(r.submittedAt) });
           await audit(trx, author, 'formulation_revision', revisionId, 'submit', r.submittedAt, { state: 'draft', version: 1 }, { state: 'submitted', version: 2, contentSha256: sha });
         }
         if (decided) {
           const [sigId] = await trx('revision_signatures').insert({ revision_id: revisionId, signer_id: quality.id, signer_name: quality.name, signer_email: quality.email, meaning: 'approved', comment: r.comment ?? null, signed_at: new Date(r.decidedAt!), content_sha256: sha });
           await audit(trx, quality, 'formulation_revision', revisionId, 'e-signature', r.decidedAt!, null, { signatureId: sigId, meaning: 'approved', contentSha256: sha });
           if (previous !== null) {
-            await trx('formulation_revisions').where({ id: previous }).update({ state: 'superseded', superseded_at: new Date(r.decidedAt!), version: 4 });
+            await trx('formulation_revisions').where({ id: previous }).update({ state: 'superseded', superseded_at: new Date(r.decidedAt!), version: 4, updated_at: new Date(r.decidedAt!) });
             await audit(trx, quality, 'formulation_revision', previous, 'supersede', r.decidedAt!, { state: 'approved', version: 3 }, { state: 'superseded', version: 4, supersededByRevisionId: revisionId });
           }
-          await trx('formulation_revisions').where({ id: revisionId }).update({ state: 'approved', decided_at: new Date(r.decidedAt!), decided_by: quality.id, supersedes_revision_id: previous, version: 3 });
+          await trx('formulation_revisions').where({ id: revisionId }).update({ state: 'approved', decided_at: new Date(r.decidedAt!), decided_by: quality.id, supersedes_revision_id: previous, version: 3, updated_at: new Date(r.decidedAt!) });
           await audit(trx, quality, 'formulation_revision', revisionId, 'approve', r.decidedAt!, { state: 'submitted', version: 2 }, { state: 'approved', version: 3, supersedesRevisionId: previous, contentSha256: sha });
         }
         console.log(`seed 03_formulations: ${f.code} rev ${i + 1} ${r.state}: ${Math.round(predicted.cct)} K, Duv ${predicted.duv.toFixed(4)}, Ra ${predicted.ra?.toFixed(1)}, R9 ${predicted.r9?.toFixed(1)}`);
         previous = revisionId;
       }
+      const last = f.revisions.flatMap((r) => [r.createdAt, r.submittedAt, r.decidedAt]).filter((d): d is string => Boolean(d)).sort().at(-1)!;
+      await trx('formulations').where({ id: formulationId }).update({ updated_at: new Date(last) });
     });
   }
 }
