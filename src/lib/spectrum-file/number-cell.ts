@@ -14,20 +14,24 @@ export function looksNumeric(field: string): boolean {
   return POINT_NUMBER.test(t) || COMMA_NUMBER.test(t);
 }
 
-export function numberCell(decimal: SpectrumFileDialect['decimal']) {
+/** One field as a number, or the reason it is not one (plain function: wide multi-part files have ~10⁵ fields). */
+export function readNumberCell(raw: string, decimal: SpectrumFileDialect['decimal']): { ok: true; value: number } | { ok: false; message: string } {
+  const s = raw.trim();
+  if (s === '') return { ok: false, message: 'is empty' };
   const pattern = decimal === 'comma' ? COMMA_NUMBER : POINT_NUMBER;
+  const n = pattern.test(s) ? Number(decimal === 'comma' ? s.replace(',', '.') : s) : NaN;
+  if (!Number.isFinite(n)) {
+    const shown = s.length > 24 ? `${s.slice(0, 24)}…` : s;
+    return { ok: false, message: `"${shown}" is not a number${decimal === 'comma' ? ' (decimal comma expected)' : ''}` };
+  }
+  return { ok: true, value: n };
+}
+
+export function numberCell(decimal: SpectrumFileDialect['decimal']) {
   return z.string().transform((raw, ctx) => {
-    const s = raw.trim();
-    if (s === '') {
-      ctx.addIssue({ code: 'custom', message: 'is empty' });
-      return z.NEVER;
-    }
-    const n = pattern.test(s) ? Number(decimal === 'comma' ? s.replace(',', '.') : s) : NaN;
-    if (!Number.isFinite(n)) {
-      const shown = s.length > 24 ? `${s.slice(0, 24)}…` : s;
-      ctx.addIssue({ code: 'custom', message: `"${shown}" is not a number${decimal === 'comma' ? ' (decimal comma expected)' : ''}` });
-      return z.NEVER;
-    }
-    return n;
+    const r = readNumberCell(raw, decimal);
+    if (r.ok) return r.value;
+    ctx.addIssue({ code: 'custom', message: r.message });
+    return z.NEVER;
   });
 }

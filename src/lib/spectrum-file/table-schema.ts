@@ -7,7 +7,7 @@
  */
 import { z } from 'zod';
 import { MAX_WAVELENGTH_NM, MIN_WAVELENGTH_NM, NEGATIVE_NOISE_FRACTION } from '../spectral/resample';
-import { numberCell } from './number-cell';
+import { readNumberCell } from './number-cell';
 import type { SpectrumFileDialect } from './types';
 
 export interface RawRow {
@@ -21,10 +21,10 @@ export interface NumericRow {
 }
 
 export function rowsSchema(decimal: SpectrumFileDialect['decimal'], columnNames: string[]) {
-  const cell = numberCell(decimal);
   const width = columnNames.length;
   return z.array(
-    z.object({ line: z.number(), cells: z.array(z.string()) }).transform((row, ctx): NumericRow => {
+    // Rows come from the field splitter (strings already); each field is read by readNumberCell.
+    z.custom<RawRow>((v) => typeof v === 'object' && v !== null && Array.isArray((v as RawRow).cells)).transform((row, ctx): NumericRow => {
       const cells = trimTrailingEmpty(row.cells);
       if (cells.length < width) {
         ctx.addIssue({ code: 'custom', message: `has ${cells.length} value${cells.length === 1 ? '' : 's'}; ${width} are expected (${columnNames.join(', ')})` });
@@ -36,9 +36,9 @@ export function rowsSchema(decimal: SpectrumFileDialect['decimal'], columnNames:
       }
       const values: number[] = [];
       cells.forEach((c, i) => {
-        const parsed = cell.safeParse(c);
-        if (parsed.success) values.push(parsed.data);
-        else ctx.addIssue({ code: 'custom', message: `column ${i + 1} (${columnNames[i]}): ${parsed.error.issues[0].message}` });
+        const parsed = readNumberCell(c, decimal);
+        if (parsed.ok) values.push(parsed.value);
+        else ctx.addIssue({ code: 'custom', message: `column ${i + 1} (${columnNames[i]}): ${parsed.message}` });
       });
       return values.length === width ? { line: row.line, values } : z.NEVER;
     })
@@ -57,7 +57,8 @@ export interface SpectrumLimits {
 }
 
 export function spectrumSchema(columnNames: string[], limits: SpectrumLimits) {
-  return z.array(z.object({ line: z.number(), values: z.array(z.number()) })).superRefine((rows, ctx) => {
+  // Rows come from rowsSchema (already numbers): only the whole-spectrum rules are checked here.
+  return z.custom<NumericRow[]>((v) => Array.isArray(v)).superRefine((rows, ctx) => {
     const at = (i: number, message: string) => ctx.addIssue({ code: 'custom', path: [i], message });
     if (rows.length < limits.minPoints) {
       ctx.addIssue({ code: 'custom', path: [], message: `The file holds ${rows.length} data point${rows.length === 1 ? '' : 's'}; at least ${limits.minPoints} are needed.` });
@@ -77,7 +78,8 @@ export function spectrumSchema(columnNames: string[], limits: SpectrumLimits) {
       }
     });
     for (let c = 1; c < columnNames.length; c++) {
-      const max = Math.max(...rows.map((r) => r.values[c]));
+      let max = -Infinity;
+      for (const r of rows) if (r.values[c] > max) max = r.values[c];
       if (!(max > 0)) {
         ctx.addIssue({ code: 'custom', path: [], message: `Column ${c + 1} (${columnNames[c]}) has no positive intensity.` });
         continue;

@@ -18,6 +18,14 @@ describe('live evaluation in the designer', () => {
     expect(frame.evaluation.tm30.rf).toBeCloseTo(ref.evaluation.tm30.rf, 9);
     expect(frame.computeMs).toBeGreaterThanOrEqual(0);
     expect(live.componentsXy).toHaveLength(4);
+    expect(frame.sensitivities.map((x) => x.dCct)).toEqual(ref.sensitivities.map((x) => x.dCct));
+  });
+
+  it('says which way each share moves the colour: more red phosphor lowers the CCT, more pump raises it', () => {
+    // Common practice: a red phosphor warms the light, blue pump leak cools it.
+    const [pump, , , red] = live.evaluate(shares).sensitivities;
+    expect(red.dCct).toBeLessThan(0);
+    expect(pump.dCct).toBeGreaterThan(0);
   });
 
   it('is near 3000 K for the demo warm-white fractions', () => {

@@ -25,10 +25,15 @@ function toUser(row: UserRow, roles: Role[]): User {
   return { id: row.id, email: row.email, name: row.name, active: Boolean(row.active), roles, createdAt: row.created_at };
 }
 
+/** One user with roles in a single round trip (runs on every request). */
 export async function get(id: number): Promise<User | null> {
-  const row: UserRow | undefined = await db()('users').where({ id }).first('id', 'email', 'name', 'active', 'created_at');
+  const row: (UserRow & { roles: string | null }) | undefined = await db()('users as u')
+    .leftJoin('user_roles as r', 'r.user_id', 'u.id')
+    .where('u.id', id)
+    .groupBy('u.id')
+    .first('u.id', 'u.email', 'u.name', 'u.active', 'u.created_at', db().raw('GROUP_CONCAT(r.role ORDER BY r.role) AS roles'));
   if (!row) return null;
-  return toUser(row, (await rolesOf([row.id])).get(row.id) ?? []);
+  return toUser(row, (row.roles ?? '').split(',').filter(isRole));
 }
 
 export async function findWithHashByEmail(email: string): Promise<(User & { passwordHash: string }) | null> {

@@ -66,8 +66,11 @@ export class DesignerSession {
   readonly phosphorOptions: MaterialChoice[];
 
   constructor(pumps: MaterialChoice[], phosphors: MaterialChoice[], opened: RevisionContent | null, openedAim: AimState | null) {
-    this.pumps = pumps;
-    this.phosphorOptions = phosphors;
+    // A revision may name materials that have since left the active library: keep them choosable.
+    const known = (list: MaterialChoice[], ref: { materialId: number; code: string; name: string }) =>
+      list.some((m) => m.id === ref.materialId) ? list : [...list, { id: ref.materialId, code: ref.code, name: `${ref.name} (archived)`, family: null, peakNm: null }];
+    this.pumps = opened ? known(pumps, opened.pump) : pumps;
+    this.phosphorOptions = opened ? opened.phosphors.reduce(known, phosphors) : phosphors;
     if (opened) {
       this.pumpId = opened.pump.materialId;
       this.phosphorIds = opened.phosphors.map((p) => p.materialId);
@@ -86,7 +89,15 @@ export class DesignerSession {
 
   wantedKey = $derived(this.pumpId === null ? '' : componentSetKey(this.pumpId, this.phosphorIds));
   ready = $derived(this.evaluator !== null && this.loadedKey === this.wantedKey && this.shares.length === this.phosphorIds.length + 1);
-  frame: LiveFrame | null = $derived(this.ready && this.evaluator ? this.evaluator.evaluate(this.shares) : null);
+  live = $derived.by((): { frame: LiveFrame | null; error: string | null } => {
+    if (!this.ready || !this.evaluator) return { frame: null, error: null };
+    try {
+      return { frame: this.evaluator.evaluate(this.shares), error: null };
+    } catch (err) {
+      return { frame: null, error: err instanceof Error ? err.message : String(err) };
+    }
+  });
+  frame: LiveFrame | null = $derived(this.live.frame);
   aimResult = $derived(resolveAim(this.aim));
   componentColours = $derived(this.evaluator ? this.evaluator.basis.components.map((c) => lightSwatchHex(c.xyz)) : []);
   get pump(): MaterialChoice | null {

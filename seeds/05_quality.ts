@@ -1,0 +1,46 @@
+/**
+ * Demo measurements of Kestrel Hollow Lighting (invented): 24 parts of the completed demo batch
+ * BT-261201-001, as one multi-column sphere export. The parts are synthetic (the blend model of the
+ * batch's revision with the red phosphor 4 % high and a ±2 % scatter, src/lib/quality/syntheticParts.ts),
+ * so a few miss the 3-step ellipse; the batch is left waiting for quality's decision. The raw file
+ * goes to object storage like an upload; without object storage the demo measurements are skipped.
+ * Idempotent: a batch that already has measurements is left alone.
+ */
+import type { Knex } from 'knex';
+import { revisionContentSchema } from '../src/lib/formulations/content';
+import { loadRevisionComponents } from '../src/lib/server/formulations/components';
+import { syntheticPartsCsv } from '../src/lib/quality/syntheticParts';
+import { insertMeasurements, measureFile } from '../src/lib/server/quality/upload';
+
+const BATCH = 'BT-261201-001';
+
+export async function seed(knex: Knex): Promise<void> {
+  if (!(await knex.schema.hasTable('measurement_uploads'))) return;
+  const batch = await knex('batches as b').join('formulation_revisions as r', 'r.id', 'b.revision_id')
+    .where({ 'b.batch_number': BATCH, 'b.state': 'complete' }).first('b.id', 'r.content_json');
+  const quality = await knex('users').where({ email: 'ines.halloran@kestrelhollow.example' }).first('id');
+  if (!batch || !quality) {
+    console.log(`seed 05_quality: no completed ${BATCH} or no quality user; demo measurements skipped.`);
+    return;
+  }
+  if (await knex('measurement_uploads').where({ batch_id: batch.id }).first('id')) return;
+  const content = revisionContentSchema.parse(JSON.parse(batch.content_json));
+  const loaded = await loadRevisionComponents(knex, content);
+  const fractions = [content.pumpLeakFraction, ...content.phosphors.map((p) => p.opticalFraction)];
+  const text = `# Integrating sphere export, ${BATCH}, 24 parts at 25 °C\n` +
+    syntheticPartsCsv(loaded.components, fractions, { parts: 24, prefix: `${BATCH}-P`, lastPhosphorScale: 1.04, scatter: 0.02 });
+  const file = { name: `${BATCH}-sphere.csv`, contentType: 'text/csv', body: Buffer.from(text, 'utf8') };
+  const measured = await measureFile(file);
+  try {
+    await knex.transaction(async (trx) => {
+      const { uploadId } = await insertMeasurements(trx, batch.id, file, measured, quality.id);
+      await trx('audit_events').insert({
+        actor_id: quality.id, actor_email: 'ines.halloran@kestrelhollow.example', entity_type: 'batch', entity_id: String(batch.id),
+        action: 'measurements-upload', after_json: JSON.stringify({ uploadId, parts: measured.parts.length, seed: true })
+      });
+    });
+    console.log(`seed 05_quality: ${BATCH} measured (${measured.parts.length} parts), waiting for a decision.`);
+  } catch (err) {
+    console.log(`seed 05_quality: demo measurements skipped (${(err as Error).message}).`);
+  }
+}

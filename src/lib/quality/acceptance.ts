@@ -1,0 +1,67 @@
+/**
+ * Pass/fail of one built part against its formulation revision:
+ *  colour  — within the allowed tolerance around the target: MacAdam-type steps, Δu′v′ or Δuv
+ *            (the revision's tolerance, or a step ellipse quality chose for the batch);
+ *  bin     — optionally inside the target's ANSI C78.377 quadrangle (Table 1 or flexible CCT);
+ *  floors  — the revision's floors on Ra, R9 (CIE 13.3), Rf, Rg (CIE 224 / TM-30) and LER.
+ * A floor on a metric the core could not give (CRI not meaningful far from the locus, TM-30 not
+ * finite) fails the part: an unknown value is not evidence of compliance [common practice].
+ */
+import { FLOOR_RULES } from '../blend/solver/floors';
+import type { ResolvedTarget } from '../blend/solver/resolveTarget';
+import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
+import { colourOffset } from './colourSteps';
+import type { Acceptance, ColourOffset, PartFailure, PartMetrics, PartVerdict, Tolerance } from './types';
+
+const TOLERANCE_SLACK = 1e-9;
+
+export function describeTolerance(t: Tolerance): string {
+  if (t.kind === 'sdcm') return `${t.steps}-step ellipse`;
+  if (t.kind === 'deltaUvPrime') return `Δu′v′ ≤ ${t.value}`;
+  return `Δuv ≤ ${t.value}`;
+}
+
+/** The colour failure message, or null when the offset is within tolerance. */
+export function colourFailure(o: ColourOffset, t: Tolerance): string | null {
+  if (t.kind === 'sdcm') return o.steps <= t.steps + TOLERANCE_SLACK ? null : `${o.steps.toFixed(1)} steps from target > ${t.steps}`;
+  if (t.kind === 'deltaUvPrime') return o.deltaUvPrime <= t.value + TOLERANCE_SLACK ? null : `Δu′v′ ${o.deltaUvPrime.toFixed(4)} > ${t.value}`;
+  return o.deltaUv <= t.value + TOLERANCE_SLACK ? null : `Δuv ${o.deltaUv.toFixed(4)} > ${t.value}`;
+}
+
+function metricValue(m: PartMetrics, metric: 'ra' | 'r9' | 'rf' | 'rg' | 'ler'): number | null {
+  if ((metric === 'ra' || metric === 'r9') && !m.criValid) return null;
+  return m[metric];
+}
+
+/** Floor failures, e.g. "Ra 78.4 < 80", "R9 not meaningful (source too far from the locus)". */
+export function floorFailures(m: PartMetrics, floors: Acceptance['floors']): PartFailure[] {
+  const out: PartFailure[] = [];
+  for (const r of FLOOR_RULES) {
+    const limit = floors[r.key];
+    if (limit === undefined) continue;
+    const value = metricValue(m, r.metric);
+    if (value === null) {
+      const message = r.metric === 'ra' || r.metric === 'r9' ? `${r.label} not meaningful (source too far from the Planckian locus)` : `${r.label} not available`;
+      out.push({ code: r.key, message });
+      continue;
+    }
+    if (r.sense * (limit - value) > 0) out.push({ code: r.key, message: `${r.label} ${value.toFixed(1)} ${r.sense > 0 ? '<' : '>'} ${limit}` });
+  }
+  return out;
+}
+
+export function judgePart(m: PartMetrics, target: ResolvedTarget, acceptance: Acceptance): PartVerdict {
+  const offset = colourOffset(m.x, m.y, target);
+  const bin = findAnsiBin(m.x, m.y)?.nominalCct ?? null;
+  const quad = target.ansiBin;
+  const inTargetBin = quad ? isInQuadrangle(m.x, m.y, quad) : null;
+  const failures: PartFailure[] = [];
+  const colour = colourFailure(offset, acceptance.tolerance);
+  if (colour) failures.push({ code: 'colour', message: colour });
+  if (acceptance.requireTargetBin && quad && !inTargetBin) {
+    const where = bin === null ? 'in no ANSI bin' : `in the ${bin} K bin`;
+    failures.push({ code: 'bin', message: `outside the ${quad.nominalCct} K bin (${where})` });
+  }
+  failures.push(...floorFailures(m, acceptance.floors));
+  return { pass: failures.length === 0, failures, ansiBin: bin, inTargetBin, offset };
+}

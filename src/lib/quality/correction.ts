@@ -1,0 +1,75 @@
+/**
+ * Blend correction from a measured batch: the revision's recipe, the batch's measured mean and
+ * the revision's target go to the blend solver's correction method (`correctBatch`: bias =
+ * measured − model, damped Gauss–Newton step on log-amounts; see blend/correction.ts), and the
+ * corrected ratios are written into a copy of the revision content for a new draft.
+ * Recipe: the loading model (wt % of slurry, Beer–Lambert) when the revision carries it and every
+ * phosphor has an absorption coefficient; otherwise the optical fractions (pump leak first).
+ * With the optical recipe the new wt % are unknown and left empty for the formulator.
+ */
+import { correctBatch, type CorrectionResponse } from '../blend/correctBatch';
+import type { Recipe } from '../blend/correction';
+import { mix } from '../blend/mix';
+import type { CorrectionRequest } from '../blend/schemas';
+import type { BlendComponents } from '../blend/types';
+import type { RevisionContent } from '../formulations/content';
+
+/** Default share of the full correction applied in one trim (0.5–0.8 is usual on lines) [common practice]. */
+export const DEFAULT_STEP_FRACTION = 0.8;
+
+export function revisionRecipe(content: RevisionContent, components: BlendComponents): Recipe {
+  const wt = content.phosphors.map((p) => p.wtPct);
+  const loadingReady = content.loading !== null && wt.every((w) => w !== null && w > 0)
+    && components.phosphors.every((p) => p.absorptionPerWtPctMm !== undefined);
+  if (loadingReady && content.loading) {
+    const { basis: _basis, ...loading } = content.loading;
+    return { kind: 'loading', concentrationsWtPct: wt as number[], loading };
+  }
+  return { kind: 'optical', fractions: [content.pumpLeakFraction, ...content.phosphors.map((p) => p.opticalFraction)] };
+}
+
+export function correctionRequest(
+  content: RevisionContent,
+  components: BlendComponents,
+  measuredMean: { x: number; y: number },
+  stepFraction = DEFAULT_STEP_FRACTION
+): CorrectionRequest {
+  return {
+    components,
+    recipe: revisionRecipe(content, components),
+    measured: { kind: 'xy', points: [measuredMean] },
+    target: content.target,
+    stepFraction
+  };
+}
+
+export interface BatchCorrection {
+  response: CorrectionResponse;
+  content: RevisionContent;
+}
+
+const round = (v: number, digits: number): number => Number(v.toFixed(digits));
+
+/** Corrected ratios written into a copy of the revision content (with a note saying where they came from). */
+export function correctedContent(content: RevisionContent, components: BlendComponents, res: CorrectionResponse, note: string): RevisionContent {
+  const recipe = res.recipe;
+  const fractions = recipe.kind === 'optical' ? recipe.fractions : mix(components, recipe).opticalFractions;
+  const wt = recipe.kind === 'loading' ? recipe.concentrationsWtPct : null;
+  return {
+    ...content,
+    pumpLeakFraction: round(fractions[0], 6),
+    phosphors: content.phosphors.map((p, i) => ({ ...p, opticalFraction: round(fractions[i + 1], 6), wtPct: wt ? round(wt[i], 4) : null })),
+    notes: [content.notes, note].filter((s) => s.trim()).join('\n\n').slice(0, 5000)
+  };
+}
+
+export function correctFromBatch(
+  content: RevisionContent,
+  components: BlendComponents,
+  measuredMean: { x: number; y: number },
+  note: string,
+  stepFraction = DEFAULT_STEP_FRACTION
+): BatchCorrection {
+  const response = correctBatch(correctionRequest(content, components, measuredMean, stepFraction));
+  return { response, content: correctedContent(content, components, response, note) };
+}

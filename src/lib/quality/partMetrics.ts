@@ -1,0 +1,33 @@
+/**
+ * Metrics of one measured part from its spectrum: every quantity of the spectral core
+ * (`evaluateSpectrum`: CIE 15 colorimetry, Ohno 2014 CCT/Duv, CIE 13.3 CRI, CIE 224 / TM-30,
+ * LER, peak/FWHM/centroid). Non-finite TM-30 values (far from white) become null so the
+ * result stays JSON-safe. Throws SpectrumInputError for a spectrum the core refuses.
+ */
+import { evaluateSpectrum } from '../spectral/evaluate';
+import type { Spd } from '../spectral/types';
+import type { PartMetrics } from './types';
+
+const finiteOrNull = (v: number | undefined): number | null => (v !== undefined && Number.isFinite(v) ? v : null);
+
+export function partMetrics(spd: Spd): PartMetrics {
+  const e = evaluateSpectrum(spd);
+  return {
+    x: e.x,
+    y: e.y,
+    uPrime: e.uPrime,
+    vPrime: e.vPrime,
+    cct: e.cct,
+    duv: e.duv,
+    ra: finiteOrNull(e.cri.ra),
+    r9: finiteOrNull(e.cri.ri[8]),
+    ri: e.cri.ri.map((r) => finiteOrNull(r)),
+    criValid: e.cri.valid,
+    rf: finiteOrNull(e.tm30.rf),
+    rg: finiteOrNull(e.tm30.rg),
+    ler: e.ler,
+    peakNm: e.peakNm,
+    fwhmNm: e.fwhmNm,
+    centroidNm: e.centroidNm
+  };
+}

@@ -1,0 +1,78 @@
+/**
+ * What the batch chromaticity plot draws, in CIE 1931 x,y (data only; the chart component draws it):
+ * every part (pass/fail), the target with its tolerance outline and reference step ellipses
+ * (3, 5, 7 steps; ANSI C78.377 quadrangles are about 7-step ellipses — Ohno, CORM 2011, DOMAIN.md §1),
+ * the ANSI C78.377-2017 Table 1 quadrangles plus the target's own, the Planckian locus, and markers
+ * (measured mean, predicted point, corrected prediction). The first view fits the target, the
+ * tolerance, the parts and the markers; zooming out shows the whole bin and its neighbours.
+ */
+import { ansiNominalQuadrangles } from '../spectral/ansi/c78377';
+import type { Pair } from '../spectral/colorimetry/chromaticity';
+import { describeTolerance } from './acceptance';
+import { stepEllipseAt } from './colourSteps';
+import type { JudgedBatch } from './judgeBatch';
+import { ellipseOutline, planckianOutline, quadrangleOutline, toleranceOutline } from './outlines';
+
+export interface PlotPart {
+  label: string;
+  x: number;
+  y: number;
+  pass: boolean;
+  steps: number;
+  cct: number;
+  duv: number;
+}
+
+export interface PlotMarker {
+  kind: 'mean' | 'predicted' | 'corrected';
+  label: string;
+  x: number;
+  y: number;
+}
+
+export interface ChromaticityPlotModel {
+  parts: PlotPart[];
+  target: { x: number; y: number; label: string };
+  outlines: { kind: 'tolerance' | 'steps'; label: string; points: Pair[] }[];
+  quadrangles: { nominalCct: number; isTarget: boolean; points: Pair[] }[];
+  locus: Pair[];
+  markers: PlotMarker[];
+  /** Points the initial view must show (target, tolerance, parts, markers); the bin may run past the edges. */
+  focus: Pair[];
+}
+
+const REFERENCE_STEPS = [3, 5, 7];
+const round = (p: Pair): Pair => [Number(p[0].toFixed(5)), Number(p[1].toFixed(5))];
+
+export function chromaticityPlotModel(batch: JudgedBatch, markers: PlotMarker[] = []): ChromaticityPlotModel {
+  const t = batch.target;
+  const tol = batch.acceptance.tolerance;
+  const tolerancePts = toleranceOutline(t, tol).map(round);
+  const ellipse = stepEllipseAt(t);
+  const outlines: ChromaticityPlotModel['outlines'] = [
+    { kind: 'tolerance', label: `Allowed: ${describeTolerance(tol)}`, points: tolerancePts },
+    ...REFERENCE_STEPS.filter((n) => !(tol.kind === 'sdcm' && tol.steps === n)).map((n) => ({
+      kind: 'steps' as const, label: `${n}-step ellipse`, points: ellipseOutline(ellipse, n, 72).map(round)
+    }))
+  ];
+  const quads = ansiNominalQuadrangles().map((q) => ({ nominalCct: q.nominalCct, isTarget: t.ansiBin?.nominalCct === q.nominalCct && t.ansiBin.cctMin === q.cctMin, points: quadrangleOutline(q).map(round) }));
+  if (t.ansiBin && !quads.some((q) => q.isTarget)) quads.push({ nominalCct: t.ansiBin.nominalCct, isTarget: true, points: quadrangleOutline(t.ansiBin).map(round) });
+  const parts = batch.parts.map((p) => ({
+    label: p.label, x: p.metrics.x, y: p.metrics.y, pass: p.verdict.pass, steps: p.verdict.offset.steps, cct: p.metrics.cct, duv: p.metrics.duv
+  }));
+  const focus: Pair[] = [
+    [t.x, t.y],
+    ...tolerancePts,
+    ...parts.map((p): Pair => [p.x, p.y]),
+    ...markers.map((m): Pair => [m.x, m.y])
+  ];
+  return {
+    parts,
+    target: { x: t.x, y: t.y, label: t.label },
+    outlines,
+    quadrangles: quads,
+    locus: planckianOutline(1800, 10000).map(round),
+    markers,
+    focus
+  };
+}

@@ -1,0 +1,70 @@
+/**
+ * The measurement summary printed on the batch record (label/value rows), from a batch summary,
+ * the acceptance rule, the predicted-vs-measured check and the disposition signature.
+ * Record practice: colour data summary, bin distribution, disposition and QA signature with printed
+ * name, date/time and meaning (ISO 9001:2015 §7.5; 21 CFR 11.50 as a model — DOMAIN.md §6).
+ */
+import { describeTolerance } from './acceptance';
+import type { PredictionCheck } from './prediction';
+import type { BatchSummary } from './summarise';
+import type { Acceptance, Stat } from './types';
+
+export interface RecordSignature {
+  decision: 'released' | 'rejected';
+  signerName: string;
+  meaning: string;
+  comment: string;
+  signedAtText: string;
+  contentSha256: string;
+}
+
+export interface RecordMeasurementSummary {
+  title: string;
+  rows: { label: string; value: string }[];
+  note?: string;
+}
+
+const stat = (s: Stat | null, digits: number, unit = ''): string =>
+  s ? `${s.mean.toFixed(digits)}${unit} (s ${s.sd.toFixed(digits)}, ${s.min.toFixed(digits)}–${s.max.toFixed(digits)}, n ${s.n})` : '—';
+
+export function recordMeasurementSummary(
+  summary: BatchSummary,
+  acceptance: Acceptance,
+  targetLabel: string,
+  prediction: PredictionCheck | null,
+  signature: RecordSignature | null
+): RecordMeasurementSummary {
+  const s = summary.stats;
+  const bins = summary.bins.map((b) => `${b.nominalCct === null ? 'no bin' : `${b.nominalCct} K`}: ${b.count}`).join(', ');
+  const rows = [
+    { label: 'Parts measured', value: String(summary.parts) },
+    { label: 'Yield', value: summary.yieldFraction === null ? '—' : `${(summary.yieldFraction * 100).toFixed(1)} % (${summary.passed} of ${summary.parts} pass)` },
+    { label: 'Target', value: targetLabel },
+    { label: 'Acceptance', value: `${describeTolerance(acceptance.tolerance)}${acceptance.requireTargetBin ? ', inside the target ANSI bin' : ''}` },
+    { label: 'x', value: stat(s.x, 4) },
+    { label: 'y', value: stat(s.y, 4) },
+    { label: 'CCT', value: stat(s.cct, 0, ' K') },
+    { label: 'Duv', value: stat(s.duv, 4) },
+    { label: 'Ra', value: stat(s.ra, 1) },
+    { label: 'R9', value: stat(s.r9, 1) },
+    { label: 'LER', value: stat(s.ler, 0, ' lm/W') },
+    { label: 'Mean point to target', value: summary.meanOffset ? `${summary.meanOffset.steps.toFixed(1)} steps (Δx ${summary.meanOffset.dx.toFixed(4)}, Δy ${summary.meanOffset.dy.toFixed(4)})` : '—' },
+    { label: 'ANSI C78.377 bins', value: bins || '—' }
+  ];
+  if (prediction) {
+    rows.push({ label: 'Measured − predicted', value: `Δx ${prediction.offset.dx.toFixed(4)}, Δy ${prediction.offset.dy.toFixed(4)}, ${prediction.offset.steps.toFixed(1)} steps` });
+  }
+  if (signature) {
+    rows.push(
+      { label: 'Disposition', value: signature.decision === 'released' ? 'RELEASED' : 'REJECTED' },
+      { label: 'Signed by', value: `${signature.signerName}, ${signature.signedAtText} — ${signature.meaning}` },
+      { label: 'Comment', value: signature.comment },
+      { label: 'Signed content SHA-256', value: signature.contentSha256 }
+    );
+  }
+  return {
+    title: 'Measurement summary and disposition',
+    rows,
+    note: 'Statistics: mean (sample standard deviation s, range, count). Steps: MacAdam-type steps of the 1-step ellipse at the target CCT.'
+  };
+}

@@ -1,0 +1,99 @@
+/**
+ * Shared types of the quality feature (pure data, JSON-safe): what is measured on one built
+ * part, how it is judged against a formulation revision, and what a batch summary holds.
+ * Units: x, y CIE 1931 2°; u′, v′ CIE 1976 UCS; CCT in K; Duv in CIE 1960 uv; LER in lm/W.
+ */
+import type { Tolerance } from '../blend/solver/chromaticityError';
+import type { Floors } from '../blend/solver/floors';
+
+export type { Tolerance, Floors };
+
+/** Everything the spectral core says about one measured part. */
+export interface PartMetrics {
+  x: number;
+  y: number;
+  uPrime: number;
+  vPrime: number;
+  cct: number;
+  duv: number;
+  /** CIE 13.3 Ra and R9; null when the core could not compute them. */
+  ra: number | null;
+  r9: number | null;
+  /** R1..R14. */
+  ri: (number | null)[];
+  /** false when the source is too far from the locus for CRI to mean anything (DC ≥ 5.4e-3). */
+  criValid: boolean;
+  /** CIE 224 / TM-30 fidelity and gamut; null when not finite (far from white). */
+  rf: number | null;
+  rg: number | null;
+  ler: number;
+  peakNm: number;
+  fwhmNm: number;
+  centroidNm: number;
+}
+
+/** A part's identity plus its metrics. */
+export interface MeasuredPart {
+  label: string;
+  metrics: PartMetrics;
+}
+
+/** How parts are judged: colour tolerance around the target, the revision's floors, and the bin rule. */
+export interface Acceptance {
+  tolerance: Tolerance;
+  floors: Floors;
+  /** The part must lie inside the target's ANSI C78.377 quadrangle. */
+  requireTargetBin: boolean;
+}
+
+/** Where a part sits relative to the target. */
+export interface ColourOffset {
+  dx: number;
+  dy: number;
+  deltaUvPrime: number;
+  deltaUv: number;
+  /** MacAdam-type steps from the target (1-step ellipse at the target CCT). */
+  steps: number;
+}
+
+/** What a failure is about: the colour tolerance, the target bin, or one floor (blend floor keys). */
+export type FailureCode = 'colour' | 'bin' | keyof Floors;
+
+export interface PartFailure {
+  code: FailureCode;
+  message: string;
+}
+
+export interface PartVerdict {
+  pass: boolean;
+  /** Reasons for a fail (code + readable message, e.g. "Ra 78.4 < 80"). Empty when the part passes. */
+  failures: PartFailure[];
+  /** Nominal CCT of the ANSI C78.377 Table 1 bin the part falls in; null = in no nominal bin. */
+  ansiBin: number | null;
+  /** Inside the target's own quadrangle (Table 1 or flexible); null when the target has no bin. */
+  inTargetBin: boolean | null;
+  offset: ColourOffset;
+}
+
+export interface JudgedPart extends MeasuredPart {
+  verdict: PartVerdict;
+}
+
+/** Descriptive statistics of one quantity over the parts that have it. */
+export interface Stat {
+  n: number;
+  mean: number;
+  /** Sample standard deviation (n − 1); 0 for a single part. */
+  sd: number;
+  min: number;
+  max: number;
+}
+
+export const SUMMARY_QUANTITIES = ['x', 'y', 'cct', 'duv', 'ra', 'r9', 'rf', 'rg', 'ler'] as const;
+export type SummaryQuantity = (typeof SUMMARY_QUANTITIES)[number];
+
+export interface HistogramBin {
+  x0: number;
+  x1: number;
+  count: number;
+}

@@ -1,0 +1,88 @@
+/**
+ * What the measurements page and API show for one batch (plain JSON; built on the server from the
+ * database and the quality computations, read by the Svelte components).
+ */
+import type { Floors } from '../blend/solver/floors';
+import type { ChromaticityPlotModel } from './plotModel';
+import type { ColourPoint, PredictionCheck } from './prediction';
+import type { BatchSummary } from './summarise';
+import type { PartMetrics, PartVerdict } from './types';
+
+export interface BatchHeaderView {
+  id: number;
+  batchNumber: string;
+  state: string;
+  version: number;
+  revisionId: number;
+  formulationId: number;
+  formulationCode: string;
+  formulationName: string;
+  revisionNo: number;
+}
+
+export interface AcceptanceView {
+  mode: 'revision' | 'steps';
+  steps: number | null;
+  requireTargetBin: boolean;
+  /** Readable rule in force, e.g. "3-step ellipse, inside the target ANSI bin". */
+  label: string;
+  revisionTolerance: string;
+  version: number;
+}
+
+export interface UploadView {
+  id: number;
+  originalName: string;
+  partsCount: number;
+  storedFileId: number;
+  uploadedByName: string;
+  createdAt: string;
+  withdrawnAt: string | null;
+  withdrawnByName: string | null;
+  withdrawReason: string | null;
+}
+
+export interface PartView {
+  id: number;
+  uploadId: number;
+  label: string;
+  metrics: PartMetrics;
+  verdict: PartVerdict;
+}
+
+export interface CorrectionView {
+  id: number;
+  revisionId: number;
+  revisionNo: number;
+  revisionState: string | null;
+  stepFraction: number;
+  measuredMean: { x: number; y: number };
+  predicted: ColourPoint;
+  createdByName: string;
+  createdAt: string;
+}
+
+export interface DispositionView {
+  decision: 'released' | 'rejected';
+  signerName: string;
+  signerEmail: string;
+  meaning: string;
+  comment: string;
+  signedAt: string;
+  contentSha256: string;
+  recordFileId: number | null;
+}
+
+export interface BatchResultsView {
+  batch: BatchHeaderView;
+  target: { label: string; x: number; y: number; cct: number; duv: number; ansiBin: number | null };
+  floors: Floors;
+  acceptance: AcceptanceView;
+  uploads: UploadView[];
+  parts: PartView[];
+  summary: BatchSummary;
+  prediction: PredictionCheck | null;
+  plot: ChromaticityPlotModel;
+  corrections: CorrectionView[];
+  disposition: DispositionView | null;
+}

@@ -1,0 +1,98 @@
+import { error, fail } from '@sveltejs/kit';
+import { z } from 'zod';
+import { requireUser } from '$lib/server/auth/require';
+import { QUALITY } from '$lib/access/routes/shared';
+import { acceptanceSchema, correctionSchema, dispositionSchema, withdrawUploadSchema } from '$lib/schemas/quality';
+import { refusalOf } from '$lib/server/quality/api';
+import { canActOnMeasurements } from '$lib/server/quality/caller';
+import { computeResults, loadContext } from '$lib/server/quality/results';
+import { dispositionRefusal, disposeBatch } from '$lib/server/quality/disposition';
+import { setAcceptance } from '$lib/server/quality/acceptance';
+import { uploadMeasurements, withdrawUpload } from '$lib/server/quality/upload';
+import { makeCorrectionDraft } from '$lib/server/quality/correction';
+import type { Actions, PageServerLoad } from './$types';
+
+function batchId(param: string): number {
+  const id = Number(param);
+  if (!Number.isSafeInteger(id) || id <= 0) error(404, `Batch ${param} was not found.`);
+  return id;
+}
+
+export const load: PageServerLoad = async ({ locals, params }) => {
+  const user = requireUser(locals);
+  const ctx = await loadContext(batchId(params.batchId));
+  if (!ctx) error(404, `Batch ${params.batchId} was not found.`);
+  const { view } = await computeResults(ctx);
+  return { results: view, canAct: canActOnMeasurements(user), dispositionBlocked: await dispositionRefusal(user, ctx) };
+};
+
+export const actions: Actions = {
+  upload: async ({ locals, params, request }) => {
+    const user = requireUser(locals, QUALITY);
+    const file = (await request.formData()).get('file');
+    if (!(file instanceof File) || file.size === 0) return fail(400, { uploadError: 'Choose a measurement file first.', uploadIssues: [] });
+    try {
+      const res = await uploadMeasurements(user, batchId(params.batchId), { name: file.name, contentType: file.type, body: Buffer.from(await file.arrayBuffer()) });
+      return { uploaded: { parts: res.parts, warnings: res.warnings } };
+    } catch (err) {
+      const r = refusalOf(err);
+      if (!r) throw err;
+      return fail(r.status, { uploadError: r.error, uploadIssues: (r.issues ?? []) as { line: number | null; message: string }[] });
+    }
+  },
+  setAcceptance: async ({ locals, params, request }) => {
+    const user = requireUser(locals, QUALITY);
+    const fd = await request.formData();
+    const parsed = acceptanceSchema.safeParse({ mode: fd.get('mode'), steps: fd.get('steps') ?? undefined, requireTargetBin: fd.get('requireTargetBin') ?? 'false', version: fd.get('version') });
+    if (!parsed.success) return fail(400, { acceptanceErrors: z.flattenError(parsed.error).fieldErrors });
+    try {
+      await setAcceptance(user, batchId(params.batchId), parsed.data);
+      return { acceptanceSaved: true };
+    } catch (err) {
+      const r = refusalOf(err);
+      if (!r) throw err;
+      return fail(r.status, { acceptanceErrors: { form: [r.error] } });
+    }
+  },
+  withdrawUpload: async ({ locals, params, request }) => {
+    const user = requireUser(locals, QUALITY);
+    const parsed = withdrawUploadSchema.safeParse(Object.fromEntries(await request.formData()));
+    if (!parsed.success) return fail(400, { withdrawError: z.flattenError(parsed.error).fieldErrors.reason?.[0] ?? 'Give a reason and the upload.' });
+    try {
+      await withdrawUpload(user, batchId(params.batchId), parsed.data.uploadId, parsed.data.reason);
+      return { withdrawn: parsed.data.uploadId };
+    } catch (err) {
+      const r = refusalOf(err);
+      if (!r) throw err;
+      return fail(r.status, { withdrawError: r.error });
+    }
+  },
+  correct: async ({ locals, params, request, url }) => {
+    const user = requireUser(locals, QUALITY);
+    const parsed = correctionSchema.safeParse(Object.fromEntries(await request.formData()));
+    if (!parsed.success) return fail(400, { correctionError: parsed.error.issues[0].message });
+    try {
+      return { corrected: await makeCorrectionDraft(user, batchId(params.batchId), parsed.data.stepFraction, url.origin) };
+    } catch (err) {
+      const r = refusalOf(err);
+      if (!r) throw err;
+      return fail(r.status, { correctionError: r.error });
+    }
+  },
+  dispose: async ({ locals, params, request, url }) => {
+    const user = requireUser(locals, QUALITY);
+    const fd = await request.formData();
+    const raw = { decision: String(fd.get('decision') ?? ''), meaning: String(fd.get('meaning') ?? ''), comment: String(fd.get('comment') ?? ''), password: String(fd.get('password') ?? ''), version: fd.get('version') };
+    const values = { decision: raw.decision, meaning: raw.meaning, comment: raw.comment };
+    const parsed = dispositionSchema.safeParse(raw);
+    if (!parsed.success) return fail(400, { disposition: { values, errors: z.flattenError(parsed.error).fieldErrors } });
+    try {
+      const out = await disposeBatch(user, batchId(params.batchId), parsed.data, url.origin);
+      return { disposed: out.decision };
+    } catch (err) {
+      const r = refusalOf(err);
+      if (!r) throw err;
+      return fail(r.status, { disposition: { values, errors: {}, error: r.error } });
+    }
+  }
+};
