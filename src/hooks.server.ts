@@ -1,5 +1,5 @@
 import { sequence } from '@sveltejs/kit/hooks';
-import { error, json, redirect, type Handle, type HandleServerError } from '@sveltejs/kit';
+import { error, json, redirect, type Handle, type HandleServerError, type ServerInit } from '@sveltejs/kit';
 import { handle as authHandle } from './auth';
 import { decide } from '$lib/access/route-table';
 import * as users from '$lib/server/db/users';
@@ -81,4 +81,9 @@ export const handleError: HandleServerError = ({ error: err, status }) => {
   if (isDbUnavailable(err)) return { message: 'The database is not reachable; try again shortly.' };
   if (status !== 404) console.error('[phosforge] unexpected error', err instanceof Error ? err.stack : err);
   return { message: 'Something went wrong on our side. The error has been logged.' };
+};
+
+/** Loads the blend solver (and mathjs behind it) before the first request, not during it. */
+export const init: ServerInit = async () => {
+  await import('$lib/blend');
 };
