@@ -22,6 +22,7 @@ function percentile(sorted: number[], p: number): number {
 async function runOne(s: Scenario, token: string) {
   const latencies: number[] = [];
   let unexpected = 0;
+  const statuses = new Map<number, number>();
   const instance = autocannon({
     url: base + s.path,
     method: s.method,
@@ -34,6 +35,7 @@ async function runOne(s: Scenario, token: string) {
   instance.on('response', (_client, status, _bytes, ms) => {
     latencies.push(ms);
     if (status !== s.expect) unexpected++;
+    statuses.set(status, (statuses.get(status) ?? 0) + 1);
   });
   const result = await instance;
   latencies.sort((a, b) => a - b);
@@ -46,6 +48,7 @@ async function runOne(s: Scenario, token: string) {
     p95: percentile(latencies, 95),
     p99: percentile(latencies, 99),
     errors: unexpected + result.errors + result.timeouts,
+    statuses: Object.fromEntries(statuses),
     goalMs: s.p95GoalMs ?? null
   };
 }
@@ -64,7 +67,7 @@ for (const s of scenarios(draftContent)) {
   const r = await runOne(s, token);
   rows.push(r);
   const goal = r.goalMs ? (r.p95 <= r.goalMs ? `  (p95 goal ${r.goalMs} ms: ok)` : `  (p95 goal ${r.goalMs} ms: MISSED)`) : '';
-  console.log(`${r.route.padEnd(34)} ${String(r.rps).padStart(8)} req/s  p50 ${r.p50.toFixed(1).padStart(7)} ms  p95 ${r.p95.toFixed(1).padStart(7)} ms  p99 ${r.p99.toFixed(1).padStart(7)} ms  errors ${r.errors}${goal}`);
+  console.log(`${r.route.padEnd(34)} ${String(r.rps).padStart(8)} req/s  p50 ${r.p50.toFixed(1).padStart(7)} ms  p95 ${r.p95.toFixed(1).padStart(7)} ms  p99 ${r.p99.toFixed(1).padStart(7)} ms  errors ${r.errors}${goal}${r.errors ? `  statuses ${JSON.stringify(r.statuses)}` : ''}`);
 }
 console.log(JSON.stringify({ load: { connections, seconds, routes: rows } }));
 const failed = rows.some((r) => r.errors > 0);

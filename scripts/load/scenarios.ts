@@ -14,6 +14,7 @@ const components = { pump: BLUE_PUMP, phosphors: [demoPhosphor('ph-gl530'), demo
 const wavelengths = Array.from({ length: 401 }, (_, i) => 380 + i);
 const band = (l: number, p: number, w: number) => Math.exp(-0.5 * ((l - p) / (w / 2.3548)) ** 2);
 let n = 0;
+const RUN = Date.now().toString(36).toUpperCase();
 
 /** `draftContent`: a valid revision content (taken from the demo data) for the create-draft route. */
 export const scenarios = (draftContent: unknown): Scenario[] => [
@@ -33,6 +34,6 @@ export const scenarios = (draftContent: unknown): Scenario[] => [
   { name: 'list formulations', method: 'GET', path: '/api/v1/formulations?page=1', expect: 200, p95GoalMs: 100 },
   {
     name: 'create draft', method: 'POST', path: '/api/v1/formulations', expect: 201,
-    body: () => ({ name: `Load-run draft ${n++}`, description: 'made by npm run load', content: draftContent })
+    body: () => ({ code: `LD-${RUN}-${n}`, name: `Load-run draft ${n++}`, description: 'made by npm run load', content: draftContent })
   }
 ];

@@ -81,18 +81,22 @@ export async function createFormulationWithDraft(caller: Caller, input: NewFormu
     throw new ValidationError(issues.map((i) => i.message).join('; '), issues);
   }
   const prepared = await prepareRevision(db(), input.content);
-  try {
-    return await db().transaction(async (trx) => {
-      const code = meta.data.code ?? (await suggestCode(trx, prepared.content, prepared.predicted.target.cct));
-      if (await trx('formulations').where({ code }).first('id')) throw new ConflictError(`The code ${code} is already taken; choose another.`);
-      const [formulationId] = await trx('formulations').insert({ code, name: meta.data.name, description: meta.data.description || null, created_by: caller.id });
-      await record({ actorId: caller.id, actorEmail: caller.email, entityType: 'formulation', entityId: formulationId, action: 'create', after: { code, name: meta.data.name, description: meta.data.description } }, trx);
-      const draft = await insertDraft(trx, caller, formulationId, prepared);
-      return { formulationId, code, ...draft };
-    });
-  } catch (err) {
-    if (isDuplicate(err)) throw new ConflictError('The code is already taken; choose another.');
-    throw err;
+  // A suggested code can be taken by a concurrent request between the check and the insert: try the next one.
+  for (let attempt = 0; ; attempt++) {
+    try {
+      return await db().transaction(async (trx) => {
+        const code = meta.data.code ?? (await suggestCode(trx, prepared.content, prepared.predicted.target.cct));
+        if (await trx('formulations').where({ code }).first('id')) throw new ConflictError(`The code ${code} is already taken; choose another.`);
+        const [formulationId] = await trx('formulations').insert({ code, name: meta.data.name, description: meta.data.description || null, created_by: caller.id });
+        await record({ actorId: caller.id, actorEmail: caller.email, entityType: 'formulation', entityId: formulationId, action: 'create', after: { code, name: meta.data.name, description: meta.data.description } }, trx);
+        const draft = await insertDraft(trx, caller, formulationId, prepared);
+        return { formulationId, code, ...draft };
+      });
+    } catch (err) {
+      if (isDuplicate(err) && meta.data.code === undefined && attempt < 5) continue;
+      if (isDuplicate(err)) throw new ConflictError('The code is already taken; choose another.');
+      throw err;
+    }
   }
 }
 
