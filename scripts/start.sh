@@ -12,7 +12,12 @@ cleanup() {
   trap - INT TERM EXIT
   echo; echo "stopping…"
   for p in "${pids[@]}"; do kill -TERM "$p" 2>/dev/null || true; done
-  for p in "${pids[@]}"; do wait "$p" 2>/dev/null || true; done
+  # Give each process 10 s to finish its requests, then stop it hard.
+  for _ in $(seq 1 50); do
+    alive=0; for p in "${pids[@]}"; do kill -0 "$p" 2>/dev/null && alive=1; done
+    [ $alive = 0 ] && break; sleep 0.2
+  done
+  for p in "${pids[@]}"; do kill -KILL "$p" 2>/dev/null || true; wait "$p" 2>/dev/null || true; done
   [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh stop || true
 }
 trap cleanup INT TERM EXIT

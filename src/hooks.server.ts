@@ -4,7 +4,7 @@ import { handle as authHandle } from './auth';
 import { decide } from '$lib/access/route-table';
 import * as users from '$lib/server/db/users';
 import { userForToken } from '$lib/server/auth/tokens';
-import { isDbUnavailable } from '$lib/server/db/index';
+import { closeDb, isDbUnavailable } from '$lib/server/db/index';
 import { securityHeaders } from '$lib/server/security-headers';
 
 /** Who is asking: a bearer token on /api, else the Auth.js session. Inactive users count as signed out. */
@@ -86,4 +86,7 @@ export const handleError: HandleServerError = ({ error: err, status }) => {
 /** Loads the blend solver (and mathjs behind it) before the first request, not during it. */
 export const init: ServerInit = async () => {
   await import('$lib/blend');
+  // adapter-node stops accepting requests on SIGINT/SIGTERM, then emits this: close the database
+  // pool so idle connections do not keep the process alive.
+  process.once('sveltekit:shutdown', () => void closeDb());
 };
