@@ -1,7 +1,7 @@
 /** Personal API tokens: random, shown once, stored as a SHA-256 hash, revocable, expiring. */
 import { createHash, randomBytes } from 'node:crypto';
 import { db } from '../db/index';
-import * as users from '../db/users';
+import { isRole } from '../../access/roles';
 import type { User } from '../db/users';
 
 export const TOKEN_PREFIX = 'pfk_';
@@ -38,14 +38,18 @@ export async function revoke(userId: number, id: number): Promise<boolean> {
 /** The active user a bearer token belongs to, or null (unknown, expired, revoked, or user deactivated). */
 export async function userForToken(token: string): Promise<User | null> {
   if (!token.startsWith(TOKEN_PREFIX) || token.length > 100) return null;
-  const row = await db()('api_tokens').where({ token_hash: sha256Hex(token) }).whereNull('revoked_at')
-    .andWhere('expires_at', '>', db().fn.now()).first('id', 'user_id');
-  if (!row) return null;
-  const user = await users.get(row.user_id);
-  if (!user || !user.active) return null;
+  // One round trip: the live token, its user and the roles.
+  const row = await db()('api_tokens as t')
+    .join('users as u', 'u.id', 't.user_id')
+    .leftJoin('user_roles as r', 'r.user_id', 'u.id')
+    .where('t.token_hash', sha256Hex(token)).whereNull('t.revoked_at').andWhere('t.expires_at', '>', db().fn.now())
+    .groupBy('t.id')
+    .first('t.id as token_id', 't.last_used_at', 'u.id', 'u.email', 'u.name', 'u.active', 'u.created_at',
+      db().raw('GROUP_CONCAT(r.role ORDER BY r.role) AS roles'));
+  if (!row || !row.active) return null;
   // Last use is kept to the minute: no write per request, so busy tokens do not contend on one row.
-  await db()('api_tokens').where({ id: row.id })
-    .andWhere((q) => q.whereNull('last_used_at').orWhere('last_used_at', '<', db().raw('NOW() - INTERVAL 1 MINUTE')))
-    .update({ last_used_at: db().fn.now() });
-  return user;
+  if (!row.last_used_at || Date.now() - new Date(row.last_used_at).getTime() > 60_000) {
+    await db()('api_tokens').where({ id: row.token_id }).update({ last_used_at: db().fn.now() });
+  }
+  return { id: row.id, email: row.email, name: row.name, active: true, roles: String(row.roles ?? '').split(',').filter(isRole), createdAt: row.created_at };
 }
