@@ -86,6 +86,9 @@ export const handleError: HandleServerError = ({ error: err, status }) => {
 /** Loads the blend solver (and mathjs behind it) before the first request, not during it. */
 export const init: ServerInit = async () => {
   await import('$lib/blend');
+  const { warmSolverPool, closeSolverPool } = await import('$lib/server/solver/pool');
+  warmSolverPool();
+  process.once('sveltekit:shutdown', () => void closeSolverPool());
   // adapter-node stops accepting requests on SIGINT/SIGTERM, then emits this: close the database
   // pool so idle connections do not keep the process alive.
   process.once('sveltekit:shutdown', () => void closeDb());

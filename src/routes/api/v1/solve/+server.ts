@@ -1,6 +1,7 @@
 import { requireUser } from '$lib/server/auth/require';
 import { finiteJson, handleApi, readJson } from '$lib/server/api/body';
-import { solveBlend, solveProblemSchema } from '$lib/blend';
+import { solveProblemSchema } from '$lib/blend';
+import { solveOffThread } from '$lib/server/solver/pool';
 import type { RequestHandler } from './$types';
 
 /** Blend problem (components, target, tolerance, floors, objective) → ranked candidates or the reason none exist. */
@@ -8,5 +9,5 @@ export const POST: RequestHandler = (event) =>
   handleApi(async () => {
     requireUser(event.locals);
     const body = await readJson(event, solveProblemSchema);
-    return finiteJson(solveBlend(body));
+    return finiteJson(await solveOffThread(body));
   });

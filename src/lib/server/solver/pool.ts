@@ -1,0 +1,78 @@
+/**
+ * A small pool of worker threads for the blend solver (one per core, at most 4) in the built app,
+ * which bundles the worker to build/solve-worker.js; in the dev server and unit tests the solver
+ * runs in the calling thread (PF_SOLVE_WORKERS=0 forces that in the built app too). Input errors
+ * keep their type across the thread boundary, so the API still answers 422 for them.
+ */
+import { existsSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import { resolve } from 'node:path';
+import { Worker } from 'node:worker_threads';
+import { BlendInputError } from '../../blend/errors';
+import { solveBlend, type SolveProblem, type SolveResult } from '../../blend/index';
+import { SpectrumInputError } from '../../spectral/errors';
+
+const WORKER_FILE = resolve(process.env.PF_SOLVE_WORKER ?? 'build/solve-worker.js');
+
+interface Slot { worker: Worker; busy: Set<number> }
+type Pending = { resolve: (r: SolveResult) => void; reject: (e: Error) => void };
+
+let slots: Slot[] | null = null;
+const pending = new Map<number, Pending>();
+let nextId = 1;
+
+function revive(error: { name: string; message: string }): Error {
+  if (error.name === 'BlendInputError') return new BlendInputError(error.message);
+  if (error.name === 'SpectrumInputError') return new SpectrumInputError(error.message);
+  return new Error(`solver worker: ${error.message}`);
+}
+
+function startSlot(): Slot {
+  const worker = new Worker(WORKER_FILE);
+  worker.unref();
+  const slot: Slot = { worker, busy: new Set<number>() };
+  worker.on('message', (m: { id: number; result?: SolveResult; error?: { name: string; message: string } }) => {
+    slot.busy.delete(m.id);
+    const p = pending.get(m.id);
+    pending.delete(m.id);
+    if (!p) return;
+    if (m.error) p.reject(revive(m.error));
+    else p.resolve(m.result!);
+  });
+  worker.on('error', (err) => {
+    // A crashed worker fails the requests it held and is replaced by a fresh one.
+    for (const id of slot.busy) { pending.get(id)?.reject(err); pending.delete(id); }
+    if (slots) slots = slots.map((s) => (s === slot ? startSlot() : s));
+  });
+  return slot;
+}
+
+/** Starts the workers ahead of the first request (they load the solver and mathjs, about 1–2 s). */
+export function warmSolverPool(): void {
+  if (usesWorkers()) slots ??= Array.from({ length: Math.max(1, Math.min(4, availableParallelism())) }, startSlot);
+}
+
+/** Workers only when this module runs from the built app (build/server/…); dev server and tests solve in-thread. */
+export function usesWorkers(): boolean {
+  const built = import.meta.url.includes('/build/server/');
+  return built && process.env.PF_SOLVE_WORKERS !== '0' && existsSync(WORKER_FILE);
+}
+
+/** Solves in a worker thread when the bundled worker exists, else in this thread. */
+export function solveOffThread(problem: SolveProblem): Promise<SolveResult> {
+  if (!usesWorkers()) return Promise.resolve().then(() => solveBlend(problem));
+  warmSolverPool();
+  const slot = slots!.reduce((a, b) => (b.busy.size < a.busy.size ? b : a));
+  const id = nextId++;
+  return new Promise<SolveResult>((resolvePromise, reject) => {
+    pending.set(id, { resolve: resolvePromise, reject });
+    slot.busy.add(id);
+    slot.worker.postMessage({ id, problem });
+  });
+}
+
+export async function closeSolverPool(): Promise<void> {
+  const s = slots;
+  slots = null;
+  if (s) await Promise.all(s.map((x) => x.worker.terminate()));
+}
