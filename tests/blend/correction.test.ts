@@ -12,7 +12,7 @@ import { xyOf } from '../../src/lib/blend/superposition';
 import { THREE } from './fixtures';
 
 // Source: measure → correct loop, damped Jacobian step with the model bias carried as an
-// offset (DOMAIN.md §6) [common practice].
+// offset [common practice].
 const target = resolveTarget({ kind: 'ansiBin', nominalCct: 3000 });
 const basis = prepareBasis(THREE);
 const loading = { pathLengthMm: 0.3 };

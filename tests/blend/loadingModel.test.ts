@@ -40,7 +40,7 @@ describe('Beer–Lambert (Beer 1852) pump transmission', () => {
   });
 });
 
-describe('physical sanity [common practice, DOMAIN.md §6]', () => {
+describe('physical sanity [common practice]', () => {
   it('more phosphor → less pump leak, monotonically', () => {
     let prev = Infinity;
     for (const s of [0.25, 0.5, 1, 2, 4]) {

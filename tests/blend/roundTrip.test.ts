@@ -31,7 +31,7 @@ describe('round trip: SPD from known ratios → solver hits its colour point', (
   }
 
   it('pump + 2 phosphors recovers the ratios themselves (unique solution)', () => {
-    // Source: 3 linear equations in 3 unknowns (DOMAIN.md §7; Ohno 2005) [from memory].
+    // Source: 3 linear equations in 3 unknowns (Ohno 2005) [from memory].
     const c = cases[0];
     const basis = prepareBasis(c.comps);
     const ev = evaluateGrid(superposeSpd(basis, c.w), { cri: false, tm30: false });

@@ -3,7 +3,7 @@ import { prepareBasis } from '../../src/lib/blend/basis';
 import { loadingSensitivities, opticalSensitivities } from '../../src/lib/blend/sensitivities';
 import { THREE } from './fixtures';
 
-// Source: formulators' heuristics, DOMAIN.md §6 [common practice]: more total phosphor →
+// Source: formulators' heuristics, [common practice]: more total phosphor →
 // x↑ y↑ (CCT↓); more red → x↑, y↓, Duv↓; more green/yellow → y↑ (Duv↑).
 const basis = prepareBasis(THREE);
 const w = [0.067, 0.19, 0.265, 0.478];

@@ -21,7 +21,7 @@ describe('targets outside the component gamut are reported, not faked', () => {
 
   it('floors no mix can meet give floorsNotMet with best values', () => {
     // Source: Ra ≤ 100 by definition (CIE 13.3-1995 eq. 5–6); a Ra 99.5 floor with three broad
-    // bands and a blue pump is far beyond typical pc-LEDs (DOMAIN.md §4) [from memory].
+    // bands and a blue pump is far beyond typical pc-LEDs [from memory].
     const r = solveBlend({ components: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 99.5 }, objective: 'maxLer' });
     expect(r.status).toBe('floorsNotMet');
     expect(r.reason).toMatch(/Ra ≥ 99.5/);

@@ -47,7 +47,7 @@ test('a formulator builds a 3000 K blend, searches, puts a proposal on the desk 
   expect(await proposals.count()).toBeGreaterThanOrEqual(2);
 
   await proposals.first().getByRole('button', { name: /Put on the desk/ }).click();
-  // The solver places every proposal on the target (blend/solver/solveBlend.ts); 90 CRI class: Ra ≥ 90, R9 ≥ 50 (DOMAIN.md §4, common practice).
+  // The solver places every proposal on the target (blend/solver/solveBlend.ts); 90 CRI class: Ra ≥ 90, R9 ≥ 50 (common practice).
   await expect(page.getByTestId('m-cct')).toHaveText('3000 K');
   await expect(page.getByTestId('m-bin')).toHaveText('3000 K');
   await expect(page.getByTestId('floor-raMin')).toContainText('pass');

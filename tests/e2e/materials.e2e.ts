@@ -1,5 +1,6 @@
 import { test, expect, request, type Browser, type Page } from '@playwright/test';
 import { DEMO, signedInContext, BASE, testDb } from './support/accounts';
+import { tokenFor } from './support/tokens';
 
 // The material library in the browser: a formulator creates a phosphor, uploads its spectrum
 // (a bad file first: nothing saved, the line is named), sees the preview and saves;
@@ -112,8 +113,7 @@ test('a stale edit is refused with a clear message and overwrites nothing', asyn
 
 test('an API token reads the library and a stale PUT answers 409', async () => {
   const session = await signedInContext(DEMO.formulator);
-  const created = await session.post('/profile?/createToken', { headers: { Origin: BASE, 'x-sveltekit-action': 'true' }, form: { name: 'library e2e', days: '1' } });
-  const token = JSON.parse((await created.json()).data).find((v: unknown) => typeof v === 'string' && v.startsWith('pfk_'));
+  const token = await tokenFor(session, 'library e2e');
   await session.dispose();
   const api = await request.newContext({ baseURL: BASE, extraHTTPHeaders: { Authorization: `Bearer ${token}` } });
   const list = await api.get('/api/v1/phosphors?q=YL-568');

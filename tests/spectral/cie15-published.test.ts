@@ -4,7 +4,7 @@ import { CIE_ILLUMINANTS_F, CIE_ILLUMINANT_A } from '../../src/lib/spectral/data
 import { CIE_D65 } from '../../src/lib/spectral/data/cie-d65';
 import { tableSpd } from './helpers';
 
-// Expected values: /work/shared/reference-data/published_checks.csv.
+// Expected values as printed in the published tables named below.
 // x,y: CIE 15:2004 table of F-illuminant chromaticities (4 decimals) and standard illuminant white
 // points (5 decimals, from memory). CCT (10 K) and Ra (integer) of F1–F12: nominal table values of
 // CIE 15:2004, FROM MEMORY. Tolerances: half a unit of the last printed digit plus a method

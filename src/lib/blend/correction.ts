@@ -1,7 +1,7 @@
 /**
  * Measure → correct: new ratios that move the mean colour of built parts back to target.
  *
- * Practice (DOMAIN.md §6, common practice): Δ = target − measured mean; Jacobian of
+ * Practice (common practice): Δ = target − measured mean; Jacobian of
  * (x, y) w.r.t. the recipe knobs; step Δp = J⁺Δ, damped and iterated. Here:
  *   knobs    sᵢ = ln of each phosphor's amount (optical: wᵢ relative to the pump leak;
  *            loading: cᵢ in wt %), so steps are relative and amounts stay positive;

@@ -3,7 +3,7 @@
  * ten phosphors of generic families. Names are invented; chemistry is described
  * generically. Spectra are analytic (Gaussian in energy for 5d→4f bands, split Gaussians
  * for chips, sums of narrow Gaussians for the Mn⁴⁺ line phosphor) sampled at 1 nm on
- * 360–830 nm. Peak, FWHM, IQE and density follow the typical ranges of DOMAIN.md §5
+ * 360–830 nm. Peak, FWHM, IQE and density follow the typical ranges of
  * (reviews: Smet et al., J. Electrochem. Soc. 158 (2011) R37; Pust et al., Nat. Mater.
  * 14 (2015) 454) [from memory]. Absorption coefficients (per wt %·mm of effective path,
  * referred to 450 nm) and prices per kg are invented orders of magnitude [invented].

@@ -5,7 +5,7 @@
  *   optical basis: wₖ → 1.01·wₖ, then renormalised to Σw = 1 (pump included as a knob);
  *   loading basis: cᵢ → 1.01·cᵢ (wt %), through the Beer–Lambert model.
  * These are the columns of the Jacobian used by formulators' two-knob corrections
- * (DOMAIN.md §6, common practice). CCT/Duv: Ohno 2014 (core).
+ * (common practice). CCT/Duv: Ohno 2014 (core).
  */
 import { BlendInputError } from './errors';
 import { uvToCct } from '../spectral/cct/index';

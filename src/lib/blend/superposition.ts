@@ -1,7 +1,7 @@
 /**
  * Optical superposition model of a blend (Ohno, "Spectral design considerations for
  * white LED color rendering", Opt. Eng. 44 (2005) 111302; Schubert, *Light-Emitting
- * Diodes*, 2nd ed. (2006), white-light chapters) [equations from memory, DOMAIN.md §7]:
+ * Diodes*, 2nd ed. (2006), white-light chapters) [equations from memory]:
  *
  *   S(λ) = Σₖ wₖ Êₖ(λ),   ∫Êₖ dλ = 1,   wₖ ≥ 0,   Σ wₖ = 1
  *

@@ -70,7 +70,7 @@ export interface LoadingParams {
    * both are effective, scattering-lengthened paths) [from memory; calibratable].
    */
   cascadePathFactor?: number;
-  /** Silicone density (g/cm³), default 1.1 [from memory, DOMAIN.md §6]. */
+  /** Silicone density (g/cm³), default 1.1 [from memory]. */
   siliconeDensityGPerCm3?: number;
   /**
    * Pump optical power per area of the layer (W/mm²), used only to turn wt % into

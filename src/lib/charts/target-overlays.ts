@@ -3,7 +3,7 @@
  *  - ANSI C78.377-2017 Table 1 quadrangles (core's `ansiNominalQuadrangles`); edges are straight
  *    in x,y and stay straight in u′,v′ (a projective map of x,y keeps lines);
  *  - MacAdam-type ellipses of n steps around the target: the core's 1-step IEC 60081 ellipse
- *    for the target CCT (`ellipseForCct`, values from memory, DOMAIN.md §8) scaled by n and
+ *    for the target CCT (`ellipseForCct`, values from memory) scaled by n and
  *    centred on the target; parametric x = xc + n·a·cos t·cos θ − n·b·sin t·sin θ,
  *    y = yc + n·a·cos t·sin θ + n·b·sin t·cos θ (MacAdam, JOSA 32 (1942) 247);
  *  - the reachable region of a component set: convex hull of the component chromaticities

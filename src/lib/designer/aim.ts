@@ -32,7 +32,7 @@ export interface AimState {
 /** Nominal CCTs of ANSI C78.377-2017 Table 1. */
 export const ANSI_NOMINAL_CCTS: number[] = ANSI_C78377_2017_TABLE1.map((r) => r.nominalCct);
 
-/** "90 CRI" market class at 3000 K: Ra ≥ 90, R9 ≥ 50 (DOMAIN.md §4) [common practice]. */
+/** "90 CRI" market class at 3000 K: Ra ≥ 90, R9 ≥ 50 [common practice]. */
 export const DEFAULT_AIM: AimState = {
   kind: 'cctDuv',
   cct: 3000,

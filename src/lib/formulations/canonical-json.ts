@@ -1,7 +1,7 @@
 /**
  * Canonical JSON of a revision's content: object keys sorted, no whitespace, numbers as
  * JavaScript writes them. The same content always gives the same text, so its SHA-256 can bind
- * an e-signature to exactly what was signed (model: 21 CFR 11.70, DOMAIN.md §6).
+ * an e-signature to exactly what was signed (model: 21 CFR 11.70).
  */
 export function canonicalJson(value: unknown): string {
   if (value === null || typeof value !== 'object') {

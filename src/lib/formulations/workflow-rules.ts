@@ -1,7 +1,7 @@
 /**
  * The revision state machine: which command moves a revision from which state to which, and who
  * may give it. One table, read by the server services (enforcement), the pages (which buttons to
- * show) and the tests. Practice (DOMAIN.md §6, common practice): draft → in review → approved /
+ * show) and the tests. Practice (common practice): draft → in review → approved /
  * returned; an approval supersedes the previous approved revision; nobody signs off their own work.
  */
 import type { Role } from '../access/roles';

@@ -1,7 +1,7 @@
 /**
  * What the batch chromaticity plot draws, in CIE 1931 x,y (data only; the chart component draws it):
  * every part (pass/fail), the target with its tolerance outline and reference step ellipses
- * (3, 5, 7 steps; ANSI C78.377 quadrangles are about 7-step ellipses — Ohno, CORM 2011, DOMAIN.md §1),
+ * (3, 5, 7 steps; ANSI C78.377 quadrangles are about 7-step ellipses — Ohno, CORM 2011),
  * the ANSI C78.377-2017 Table 1 quadrangles plus the target's own, the Planckian locus, and markers
  * (measured mean, predicted point, corrected prediction). The first view fits the target, the
  * tolerance, the parts and the markers; zooming out shows the whole bin and its neighbours.

@@ -2,7 +2,7 @@
  * The measurement summary printed on the batch record (label/value rows), from a batch summary,
  * the acceptance rule, the predicted-vs-measured check and the disposition signature.
  * Record practice: colour data summary, bin distribution, disposition and QA signature with printed
- * name, date/time and meaning (ISO 9001:2015 §7.5; 21 CFR 11.50 as a model — DOMAIN.md §6).
+ * name, date/time and meaning (ISO 9001:2015 §7.5; 21 CFR 11.50 as a model).
  */
 import { describeTolerance } from './acceptance';
 import type { PredictionCheck } from './prediction';

@@ -7,7 +7,7 @@ describe('colour-map scales: a known chromaticity lands on the right pixel', () 
   // Hand-worked: inner box 520 × 420 px; domain 0.3–0.5 on both axes → 2600 px/unit across,
   // 2100 px/unit down; the smaller wins (2100), so x is widened to 520/2100 = 0.247619 about 0.4.
   // Centre pixel (300, 250). The ANSI 3000 K centre x,y = (0.4339, 0.4033) (ANSI C78.377-2017 Table 1,
-  // via DOMAIN.md §1): x px = 300 + 0.0339·2100 = 371.19; y px = 250 − 0.0033·2100 = 243.07.
+  // via): x px = 300 + 0.0339·2100 = 371.19; y px = 250 − 0.0033·2100 = 243.07.
   const s = equalAspectScales(box, { x: [0.3, 0.5], y: [0.3, 0.5] });
 
   it('uses the same pixels per unit on both axes', () => {

@@ -4,7 +4,7 @@ import { sdcmSteps } from '../../../src/lib/spectral/ansi/macadam';
 import { xyToUvPrime } from '../../../src/lib/spectral/colorimetry/chromaticity';
 
 describe('ANSI C78.377 quadrangles on the colour map', () => {
-  // ANSI C78.377 3000 K corners (x,y) as published (DOMAIN.md §1 table, transcription of the standard):
+  // ANSI C78.377 3000 K corners (x,y) as published (public transcription of ANSI C78.377-2015 Table 1):
   const published3000 = [[0.4562, 0.426], [0.4303, 0.4173], [0.415, 0.3821], [0.4373, 0.3893]];
 
   it('draws the 3000 K bin at the published corners and marks it as the target bin', () => {
@@ -31,7 +31,7 @@ describe('ANSI C78.377 quadrangles on the colour map', () => {
 });
 
 describe('MacAdam-type ellipses around the target', () => {
-  // IEC 60081 F3000 1-step ellipse (DOMAIN.md §8, from memory): a = 0.00278, b = 0.00136, θ = 53.13°,
+  // IEC 60081 F3000 1-step ellipse (from memory): a = 0.00278, b = 0.00136, θ = 53.13°,
   // so cos θ = 0.6, sin θ = 0.8. The 7-step major-axis end lies 7·0.00278 = 0.01946 along (0.6, 0.8):
   // Δx = 0.011676, Δy = 0.015568 (hand-worked).
   it('puts the 7-step major-axis end where the hand calculation says', () => {

@@ -4,7 +4,7 @@ import { REVISION_STATES, type RevisionState } from '../../../src/lib/formulatio
 import type { Role } from '../../../src/lib/access/roles';
 import { ALLOWED, type Person } from './permission-table';
 
-// Revision control as practised for batch records (DOMAIN.md §6, common practice): draft → in review →
+// Revision control as practised for batch records (common practice): draft → in review →
 // approved / returned; approval supersedes the previous approved revision; nobody signs off their own work.
 const AUTHOR = 7;
 const OTHER = 8;

@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { batchAcceptance, describeAcceptance, describeTolerance, judgePart, qualityTarget, type Acceptance } from '../../../src/lib/quality/index';
 import { metricsAt } from './support';
 
-// Floors as formulators set them: "90 CRI" = Ra ≥ 90 and R9 ≥ 50 [common practice, DOMAIN.md §4];
-// TM-30 P2 Rg ≥ 92 (DOMAIN.md §3 [S]); CIE 13.3: Ra not meaningful when DC ≥ 5.4×10⁻³.
+// Floors as formulators set them: "90 CRI" = Ra ≥ 90 and R9 ≥ 50 [common practice];
+// TM-30 P2 Rg ≥ 92 ; CIE 13.3: Ra not meaningful when DC ≥ 5.4×10⁻³.
 const t = qualityTarget({ kind: 'ansiBin', nominalCct: 3000 });
 const base: Acceptance = { tolerance: { kind: 'sdcm', steps: 5 }, floors: { raMin: 90, r9Min: 50, rgMin: 92, lerMin: 280 }, requireTargetBin: true };
 const at = (over: Parameters<typeof metricsAt>[2]) => judgePart(metricsAt(t.x, t.y, over), t, base);

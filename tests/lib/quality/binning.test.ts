@@ -5,8 +5,8 @@ import { metricsAt } from './support';
 
 // Binning of measured parts against ANSI C78.377.
 // Centre and corner points (CIE 1931 x,y): ANSI C78.377-2015, public transcription quoted in
-// DOMAIN.md §1 (2700–6500 K; matches the 2008 edition and a US label-program table to ±0.0002).
-// Target CCT ± tolerance and Duv target ± 0.006: ANSI C78.377-2017 Table 1 (transcription, DOMAIN.md §1).
+// (2700–6500 K; matches the 2008 edition and a US label-program table to ±0.0002).
+// Target CCT ± tolerance and Duv target ± 0.006: ANSI C78.377-2017 Table 1 (transcription).
 type P = [number, number];
 const ansi2015: { nominal: number; centre: P; corners: [P, P, P, P] }[] = [
   { nominal: 2700, centre: [0.4578, 0.4101], corners: [[0.4813, 0.4319], [0.4562, 0.426], [0.4373, 0.3893], [0.4593, 0.3944]] },
@@ -39,7 +39,7 @@ describe('ANSI C78.377-2015 centre points fall in their own bin', () => {
 
 describe('ANSI C78.377-2017 Table 1 tolerances: CCT ± ΔT and Duv target ± 0.006', () => {
   // Points are placed by CCT/Duv (inverse of Ohno 2014 through the core); 15 K and 0.0005 Duv margins
-  // keep them clear of the straight-edge approximation of the curved band (≤ 0.0002 in x,y, DOMAIN.md §1).
+  // keep them clear of the straight-edge approximation of the curved band (≤ 0.0002 in x,y).
   it.each(table1)('%i K: inside just within each tolerance, outside just beyond', (nominal, cct, tol, duv) => {
     for (const inside of [cctDuvToXy(cct - tol + 15, duv), cctDuvToXy(cct + tol - 15, duv), cctDuvToXy(cct, duv + 0.0055), cctDuvToXy(cct, duv - 0.0055)]) {
       expect(verdictAt(nominal, inside).ansiBin).toBe(nominal);

@@ -13,7 +13,7 @@ import type { RevisionContent } from '../../../src/lib/formulations/content';
 import { xyToUvPrime } from '../../../src/lib/spectral/colorimetry/chromaticity';
 import { metricsAt } from './support';
 
-// Measure → correct loop (DOMAIN.md §6, common practice): Δ = target − measured mean, model
+// Measure → correct loop (common practice): Δ = target − measured mean, model
 // Jacobian, damped step; the blend solver's `correctBatch` does the step, quality feeds it the
 // measured mean of a synthetic batch built with a known bias and checks the predicted point moves
 // toward the target. Components are the invented demo set (green, yellow-green, red on a 450 nm chip).

@@ -7,7 +7,7 @@ import { metricsAt } from './support';
 // equals √((u/a)² + (v/b)²) with u = Δx·cosθ + Δy·sinθ, v = −Δx·sinθ + Δy·cosθ (rotation into the axes).
 
 // Published ellipse: ANSI 2700 K centre (0.4578, 0.4101), 3-step semi-axes a = 0.00810, b = 0.00420,
-// θ = 53.7° — seen on an LED package datasheet (DOMAIN.md §8 [S]). 1-step: a = 0.0027, b = 0.0014.
+// θ = 53.7° — seen on an LED package datasheet . 1-step: a = 0.0027, b = 0.0014.
 const ANSI_2700_3STEP: ChromaticityEllipse = { name: 'ANSI 2700 K 3-step', nominalCct: 2700, x: 0.4578, y: 0.4101, a: 0.0081, b: 0.0042, thetaDeg: 53.7, steps: 3 };
 const centre = { x: 0.4578, y: 0.4101, cct: 2725 };
 // cos 53.7° = 0.592013, sin 53.7° = 0.805928.
@@ -37,7 +37,7 @@ describe('steps from the published ANSI 2700 K 3-step ellipse, worked by hand', 
   });
 });
 
-describe('default ellipse: IEC 60081 F3000 1-step (a = 0.00278, b = 0.00136, θ = 53.13°; from memory, DOMAIN.md §8)', () => {
+describe('default ellipse: IEC 60081 F3000 1-step (a = 0.00278, b = 0.00136, θ = 53.13°; from memory)', () => {
   // At a 3000 K centre the ellipse is the F3000 row itself (no interpolation). cos 53.13° ≈ 0.6, sin ≈ 0.8.
   // Δ = (+0.002, −0.001): u = 0.0012 − 0.0008 = 0.0004, v = −0.0016 − 0.0006 = −0.0022;
   // n = √((0.0004/0.00278)² + (0.0022/0.00136)²) = √(0.020703 + 2.616782) = √2.637485 = 1.6240.

@@ -15,7 +15,7 @@ const parts: MeasuredPart[] = rows.map((r) => ({
   label: r.part,
   metrics: metricsAt(Number(r.x), Number(r.y), { cct: Number(r.cct), duv: Number(r.duv), ra: num(r.ra), r9: num(r.r9), rf: num(r.rf), rg: num(r.rg), ler: Number(r.ler) })
 }));
-// Target: ANSI C78.377 3000 K bin; floors of a "90 CRI" part (Ra ≥ 90) [common practice, DOMAIN.md §4].
+// Target: ANSI C78.377 3000 K bin; floors of a "90 CRI" part (Ra ≥ 90) [common practice].
 const batch = judgeBatch(parts, { kind: 'ansiBin', nominalCct: 3000 }, { tolerance: { kind: 'sdcm', steps: 7 }, floors: { raMin: 90 }, requireTargetBin: true });
 const s = batch.summary;
 
@@ -58,7 +58,7 @@ describe('summary statistics of five-parts.csv (worked by hand)', () => {
     expect(batch.parts[2].verdict.failures[0].message).toBe('Ra 88.0 < 90');
   });
 
-  it('every part lies in the 3000 K quadrangle (corners of ANSI C78.377-2015, DOMAIN.md §1)', () => {
+  it('every part lies in the 3000 K quadrangle (corners of ANSI C78.377-2015)', () => {
     expect(s.inTargetBin).toBe(5);
     expect(s.bins).toEqual([{ nominalCct: 3000, count: 5 }]);
   });

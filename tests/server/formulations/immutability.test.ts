@@ -6,7 +6,7 @@ import { ConflictError } from '../../../src/lib/server/formulations/errors';
 import { DEMO_PASSWORD, cast, uniqueCode, warmWhite, type Cast } from './support';
 
 // Once a revision leaves draft its record is fixed: the database refuses changes by trigger,
-// whatever path the change comes from (model: 21 CFR 11.10(e), DOMAIN.md §6).
+// whatever path the change comes from (model: 21 CFR 11.10(e)).
 let c: Cast;
 let submittedId = 0;
 let approvedId = 0;

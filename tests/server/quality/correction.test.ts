@@ -11,7 +11,7 @@ import type { User } from '../../../src/lib/server/db/users';
 import { caughtMail } from '../formulations/support';
 import { completedBatch, csvFile, demoUser, partsCsv } from './support';
 
-// Measure → correct loop (DOMAIN.md §6, common practice): the line put 15 % more red into every part
+// Measure → correct loop (common practice): the line put 15 % more red into every part
 // than the revision says (known bias); the correction should take red out and predict a point nearer
 // the target than the measured mean.
 let quality: User;
@@ -34,7 +34,7 @@ describe('correction draft from a biased batch', () => {
     const view = (await batchResults(b.batchId))!;
     expect(view.summary.meanOffset!.steps).toBeGreaterThan(3);
     expect(view.summary.yieldFraction).toBe(0);
-    expect(view.prediction!.offset.dx).toBeGreaterThan(0); // more red: x up (DOMAIN.md §6 heuristics)
+    expect(view.prediction!.offset.dx).toBeGreaterThan(0); // more red: x up (common practice)
   });
 
   it('makes a draft revision linked to the batch with less red, predicting a point nearer the target', async () => {

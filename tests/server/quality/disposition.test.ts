@@ -12,7 +12,7 @@ import { pdfToText } from '../pdf/pdf-text';
 import { caughtMail, recipients } from '../formulations/support';
 import { completedBatch, csvFile, demoUser, DEMO_PASSWORD, partsCsv } from './support';
 
-// E-signature rules as for revision approval (21 CFR 11 as the model, DOMAIN.md §6): quality role,
+// E-signature rules as for revision approval (21 CFR 11 as the model): quality role,
 // password re-entered, meaning and comment, SHA-256 of the signed content, nobody signs their own work.
 let quality: User;
 let admin: User;

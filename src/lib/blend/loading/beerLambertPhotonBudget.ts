@@ -5,7 +5,7 @@
  * Sources: Beer–Lambert attenuation (Beer 1852; Lambert 1760); the photon-budget form
  * used for phosphor-converted LEDs as in Tan et al., Sci. Rep. 8 (2018) (Beer–Lambert +
  * Mie layer model) and Schubert, *Light-Emitting Diodes*, 2nd ed. (2006), ch. on white
- * LEDs (Stokes loss) [equations below written from memory; see DOMAIN.md §7].
+ * LEDs (Stokes loss) [equations below written from memory].
  *
  * Per wavelength λ on the 1 nm grid (c in wt %, L in mm, α in 1/(wt %·mm)):
  *   αᵢ(λ) = αᵢ · exᵢ(λ)/exᵢ(λ_pump)       (αᵢ alone if no excitation spectrum is given)

@@ -3,7 +3,7 @@
  *   Δu′v′ — CIE 1976 UCS (CIE 15:2004 §8.1); Δuv — CIE 1960 UCS (the space of Duv,
  *   ANSI C78.377); SDCM — MacAdam-type steps from the core (`sdcmFromTarget`: 1-step
  *   IEC 60081 ellipses interpolated at the target CCT, centred on the target) [ellipse
- *   values from memory in the core's table, DOMAIN.md §8].
+ *   values from memory in the core's table].
  */
 import { sdcmFromTarget } from '../../spectral/ansi/macadam';
 import { uvToCct } from '../../spectral/cct/index';

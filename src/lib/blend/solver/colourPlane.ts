@@ -2,7 +2,7 @@
  * The set of mixes with a given chromaticity, as an affine subspace of the ratio vector.
  *
  * With component tristimulus values (Xⱼ, Yⱼ, Zⱼ), Σⱼ = Xⱼ + Yⱼ + Zⱼ, a mix w has
- * chromaticity (x_t, y_t) iff (DOMAIN.md §7; Ohno, Opt. Eng. 44 (2005) 111302):
+ * chromaticity (x_t, y_t) iff (Ohno, Opt. Eng. 44 (2005) 111302):
  *   Σ wⱼ(Xⱼ − x_t Σⱼ) = 0,   Σ wⱼ(Yⱼ − y_t Σⱼ) = 0,   and Σ wⱼ = 1 fixes the scale,
  * i.e. A w = b with A 3×k, b = (0, 0, 1). Solutions: w = w₀ + N z, w₀ = A⁺b (Moore–Penrose
  * pseudo-inverse), N an orthonormal basis of null(A) (last k − 3 columns of Q in the QR

@@ -4,7 +4,7 @@
  * Metrics: Ra and R9 (CIE 13.3-1995), Rf and Rg (ANSI/IES TM-30-20 = CIE 224:2017 for
  * Rf), LER (lm/W, CIE 15:2004 photometry), all from the spectral core. Typical floor
  * sets: "90 CRI" = Ra ≥ 90 and R9 ≥ 50; TM-30 P2 = Rf ≥ 75 [from memory], Rg ≥ 92
- * (DOMAIN.md §3–4) [common practice]. A floor "binds" when the candidate sits within
+ * [common practice]. A floor "binds" when the candidate sits within
  * BINDING_MARGIN of it: the optimiser pushed against it.
  */
 export interface Floors {

@@ -16,7 +16,7 @@
  * phosphors (ABSORBED_W_PER_G, invented scale) the mass per 1,000 lm is
  *   mᵢ = wᵢ · (1000/LER) / (IQEᵢ · λ̄_pump/λ̄ᵢ) / ABSORBED_W_PER_G.
  * The scale drops out of any ranking; only relative costs are meaningful.
- * Sources: Beer–Lambert photon budget (DOMAIN.md §7) [from memory]; densities [common practice].
+ * Sources: Beer–Lambert photon budget [from memory]; densities [common practice].
  */
 import type { Basis } from '../basis';
 import { concentrationsForFractions } from '../loading/concentrationsForFractions';

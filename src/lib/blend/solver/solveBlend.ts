@@ -2,7 +2,7 @@
  * Blend solver: ratios of pump + 2–5 phosphors that hit a target colour point and
  * maximise an objective subject to colour-rendition floors.
  *
- * Method (DOMAIN.md §7; Ohno, Opt. Eng. 44 (2005) 111302 for the linear colour
+ * Method (Ohno, Opt. Eng. 44 (2005) 111302 for the linear colour
  * constraint): (1) reachability — the target must lie in the convex hull of the component
  * chromaticities (u′v′; `convexHull.ts`); when it does not, the nearest hull point is used
  * if it is within tolerance, else status 'unreachable'. (2) The equal-chromaticity

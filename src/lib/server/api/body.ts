@@ -46,6 +46,16 @@ export async function readJson<S extends z.ZodType>(event: Pick<RequestEvent, 'r
   return parsed.data;
 }
 
+/** Query-string parameters validated with zod: bad values are a 400 naming them, never a silent default. */
+export function readQuery<S extends z.ZodType>(params: URLSearchParams, schema: S, fixed: Record<string, unknown> = {}): z.infer<S> {
+  const parsed = schema.safeParse({ ...Object.fromEntries(params), ...fixed });
+  if (!parsed.success) {
+    const issues = describeIssues(parsed.error);
+    throw new ApiError(400, `Invalid query: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`, issues);
+  }
+  return parsed.data;
+}
+
 /** Runs a handler; ApiError and SpectrumInputError become JSON errors, anything else propagates (500). */
 export async function handleApi(run: () => Promise<Response> | Response): Promise<Response> {
   try {

@@ -1,6 +1,6 @@
 /** Shared plumbing of the /api/v1/formulations endpoints: ids from the path, service errors → JSON. */
 import { z } from 'zod';
-import { ApiError, handleApi } from '../api/body';
+import { ApiError, handleApi, readQuery } from '../api/body';
 import { FormulationError, ValidationError } from './errors';
 import { getRevision } from './read';
 
@@ -36,7 +36,5 @@ export async function revisionFromPath(params: { id?: string; revisionId?: strin
 
 /** Query-string list parameters for the API: bad values are a 400, not a silent default. */
 export function apiListQuery<S extends z.ZodType>(schema: S, params: URLSearchParams, fixed: Record<string, unknown> = {}): z.infer<S> {
-  const parsed = schema.safeParse({ ...Object.fromEntries(params), ...fixed });
-  if (!parsed.success) throw new ApiError(400, `Invalid query: ${parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
-  return parsed.data;
+  return readQuery(params, schema, fixed);
 }

@@ -1,6 +1,6 @@
 /**
  * Re-authentication for an e-signature: the signer re-enters their password at the moment of
- * signing (model: 21 CFR 11.200(a), DOMAIN.md §6). A refusal is written to the audit trail.
+ * signing (model: 21 CFR 11.200(a)). A refusal is written to the audit trail.
  */
 import { verifyPassword, DUMMY_HASH } from '../auth/passwords';
 import { record } from '../db/audit';

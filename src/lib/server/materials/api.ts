@@ -5,7 +5,7 @@
 import { json, type RequestEvent } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '../auth/require';
-import { ApiError, finiteJson, handleApi, readJson } from '../api/body';
+import { ApiError, finiteJson, handleApi, readJson, readQuery } from '../api/body';
 import { materialFieldsSchema, materialUpdateApiSchema, spectrumKindSchema, versionSchema } from '../../schemas/materials';
 import { FORMULATION_EDITORS, ALL } from '../../access/routes/shared';
 import { MaterialError, notFound } from './errors';
@@ -53,9 +53,7 @@ export function collection(kind: MaterialKind) {
   return {
     GET: (event: Event) => materialApi(async () => {
       requireUser(event.locals, ALL);
-      const parsed = listQuerySchema.safeParse(Object.fromEntries(event.url.searchParams));
-      if (!parsed.success) throw new ApiError(400, `Invalid query: ${parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
-      const { q, sort, dir, archived } = parsed.data;
+      const { q, sort, dir, archived } = readQuery(event.url.searchParams, listQuerySchema);
       const list = await records.list({ kind, search: q, sort, dir, includeArchived: archived === '1' || archived === 'true' });
       return finiteJson({ items: list.map((m) => detail.toApi(m)) });
     }),
@@ -124,14 +122,13 @@ export function spectrumUpload(kind: MaterialKind) {
       const user = requireUser(event.locals, FORMULATION_EDITORS);
       const id = idOf(event);
       await materialOfKind(id, kind);
-      const q = uploadQuerySchema.safeParse(Object.fromEntries(event.url.searchParams));
-      if (!q.success) throw new ApiError(400, `Invalid query: ${q.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
+      const q = readQuery(event.url.searchParams, uploadQuerySchema);
       const file = await uploadedFile(event.request);
-      if (q.data.dryRun === '1' || q.data.dryRun === 'true') {
+      if (q.dryRun === '1' || q.dryRun === 'true') {
         const p = previewSpectrumFile(file);
         return finiteJson({ saved: false, points: p.spd.wavelengths.length, metrics: p.summary, warnings: p.warnings, spectrum: p.spd });
       }
-      const r = await uploadSpectrum(user, id, q.data.kind, file, q.data.version);
+      const r = await uploadSpectrum(user, id, q.kind, file, q.version);
       return finiteJson({ saved: true, spectrumId: r.spectrumId, version: r.version, points: r.preview.spd.wavelengths.length, metrics: r.preview.summary, warnings: r.preview.warnings }, { status: 201 });
     })
   };

@@ -5,7 +5,7 @@
  * revision); the SHA-256 of the signed canonical JSON is stored with it. In one transaction the
  * batch moves to released/rejected, the disposition row and the new batch record (PDF with the
  * measurement summary) are stored; then the formulator and the technicians are told by e-mail.
- * Model: 21 CFR 11.50/11.70/11.200 (DOMAIN.md §6).
+ * Model: 21 CFR 11.50/11.70/11.200.
  */
 import { db } from '../db/index';
 import { record } from '../db/audit';

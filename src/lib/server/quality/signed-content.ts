@@ -2,7 +2,7 @@
  * What a batch disposition signature binds to: the decision, meaning, comment, signer and time,
  * the acceptance in force, every measured part's result and the raw files' SHA-256 — as canonical
  * JSON (formulations' canonicalJson: sorted keys, no whitespace), hashed with SHA-256
- * (model: 21 CFR 11.70, signature bound to the record — DOMAIN.md §6).
+ * (model: 21 CFR 11.70, signature bound to the record).
  */
 import { createHash } from 'node:crypto';
 import { canonicalJson } from '../../formulations/canonical-json';

@@ -2,7 +2,7 @@
  * Chromaticity bins of ANSI C78.377-2017 "Specifications for the Chromaticity of Solid-State
  * Lighting Products" [ANSI-C78.377-2017].
  * Nominal-CCT quadrangles (Table 1): CCT limits from Table 1, Duv limits = DuvT(limit) ± 0.006
- * where DuvT is the flexible-CCT Duv target (DOMAIN.md §1; for 2700–6500 K this reproduces the
+ * where DuvT is the flexible-CCT Duv target (for 2700–6500 K this reproduces the
  * published corner points to ±0.0002). Corners mapped to CIE 1931 x,y with the exact inverse
  * (`cct/inverse.ts`); edges are straight lines in x,y. Order of corners: low-CCT/+Duv,
  * high-CCT/+Duv, high-CCT/−Duv, low-CCT/−Duv.

@@ -1,11 +1,11 @@
 /**
  * Colour difference in "steps" of a chromaticity ellipse (MacAdam ellipse / SDCM).
  * D. L. MacAdam, "Visual sensitivities to color differences in daylight", JOSA 32:247, 1942
- * [MacAdam1942]; metric form as in DOMAIN.md §8:
+ * [MacAdam1942]; metric form as in:
  *   n = √(g11 Δx² + 2 g12 Δx Δy + g22 Δy²)
  *   g11 = cos²θ/a² + sin²θ/b²,  g12 = sinθ cosθ (1/a² − 1/b²),  g22 = sin²θ/a² + cos²θ/b²
  * with a, b the 1-step semi-axes and θ the major-axis angle from +x.
- * Ellipse data: IEC 60081 1-step ellipses [IEC-60081], FROM MEMORY (DOMAIN.md §8 [M]);
+ * Ellipse data: IEC 60081 1-step ellipses [IEC-60081], FROM MEMORY [from memory];
  * the ANSI 2700 K 3-step example is seen on an LED datasheet [S]. Units: CIE 1931 x,y; θ in °.
  */
 import { IEC_60081_ELLIPSES, type ChromaticityEllipse } from '../data/chromaticity-ellipses';

@@ -1,6 +1,6 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
-import { ApiError, readJson } from '$lib/server/api/body';
+import { readJson, readQuery } from '$lib/server/api/body';
 import { batchApi } from '$lib/server/batches/api';
 import { createBatch } from '$lib/server/batches/create';
 import { listBatches } from '$lib/server/batches/read';
@@ -12,9 +12,7 @@ import type { RequestHandler } from './$types';
 export const GET: RequestHandler = (event) =>
   batchApi(async () => {
     requireUser(event.locals);
-    const parsed = listQuerySchema.safeParse(Object.fromEntries(event.url.searchParams));
-    if (!parsed.success) throw new ApiError(400, `Invalid query: ${parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
-    return json(await listBatches(parsed.data));
+    return json(await listBatches(readQuery(event.url.searchParams, listQuerySchema)));
   });
 
 /** Plans a batch from an approved revision (technicians and admins). */
