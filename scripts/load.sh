@@ -2,7 +2,7 @@
 # `npm run load`: a private database and app of its own (profile "load": .mariadb-load, app on 4174),
 # fresh demo data, a production build served by node, then scripts/load/run.ts drives the main API
 # routes with autocannon for a bounded time and prints requests/s, p50/p95/p99 and errors.
-# Env: LOAD_SECONDS (per route, default 10), LOAD_CONNECTIONS (default 50).
+# Env: LOAD_SECONDS (per route, default 10), LOAD_CONNECTIONS (default 50), LOAD_ONLY (names, comma-separated).
 set -uo pipefail
 cd "$(dirname "$0")/.."
 bash scripts/ensure-tools.sh || exit 1

@@ -2,7 +2,8 @@
  * Load run against a served app (started by scripts/load.sh): each scenario drives one API route
  * with autocannon on loopback for a bounded time and reports requests/s, latency p50/p95/p99 and
  * errors (any status other than the expected one, and socket errors/timeouts).
- * Env: LOAD_URL (app origin), LOAD_SECONDS (per scenario, default 10), LOAD_CONNECTIONS (default 50).
+ * Env: LOAD_URL (app origin), LOAD_SECONDS (per scenario, default 10), LOAD_CONNECTIONS (default 50),
+ * LOAD_ONLY (comma-separated scenario names, e.g. "evaluate,mix"; default all).
  */
 import autocannon from 'autocannon';
 import { create as createToken } from '../../src/lib/server/auth/tokens';
@@ -12,6 +13,7 @@ import { scenarios, type Scenario } from './scenarios';
 const base = process.env.LOAD_URL ?? 'http://127.0.0.1:4174';
 const seconds = Number(process.env.LOAD_SECONDS ?? 10);
 const connections = Number(process.env.LOAD_CONNECTIONS ?? 50);
+const only = (process.env.LOAD_ONLY ?? '').split(',').map((x) => x.trim()).filter(Boolean);
 
 function percentile(sorted: number[], p: number): number {
   if (sorted.length === 0) return NaN;
@@ -63,7 +65,7 @@ await closeDb();
 
 console.log(`load: ${connections} connections, ${seconds} s per route, ${base}`);
 const rows = [];
-for (const s of scenarios(draftContent)) {
+for (const s of scenarios(draftContent).filter((x) => only.length === 0 || only.includes(x.name))) {
   const r = await runOne(s, token);
   rows.push(r);
   const goal = r.goalMs ? (r.p95 <= r.goalMs ? `  (p95 goal ${r.goalMs} ms: ok)` : `  (p95 goal ${r.goalMs} ms: MISSED)`) : '';

@@ -20,11 +20,13 @@ const envSchema = z.object({
   S3_ACCESS_KEY_ID: z.string().default('S3RVER'),
   S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
   S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('true'),
+  DB_POOL_MAX: z.coerce.number().int().min(2, 'DB_POOL_MAX must be at least 2').max(500, 'DB_POOL_MAX must be at most 500').default(20),
   NODE_ENV: z.string().default('development')
 });
 
-function load() {
-  const parsed = envSchema.safeParse(process.env);
+/** The configuration from an environment (process.env in the app); throws a readable error. */
+export function loadConfig(source: NodeJS.ProcessEnv = process.env) {
+  const parsed = envSchema.safeParse(source);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ');
     throw new Error(`Phosforge configuration error: ${lines}`);
@@ -34,7 +36,8 @@ function load() {
     authSecret: env.AUTH_SECRET,
     origin: env.ORIGIN,
     production: env.NODE_ENV === 'production',
-    db: connectionFromEnv(process.env),
+    db: connectionFromEnv(source),
+    dbPoolMax: env.DB_POOL_MAX,
     mail: {
       host: env.SMTP_HOST,
       port: env.SMTP_PORT,
@@ -53,10 +56,10 @@ function load() {
   };
 }
 
-export type AppConfig = ReturnType<typeof load>;
+export type AppConfig = ReturnType<typeof loadConfig>;
 let cached: AppConfig | undefined;
 
 export function config(): AppConfig {
-  cached ??= load();
+  cached ??= loadConfig();
   return cached;
 }

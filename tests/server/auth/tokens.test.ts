@@ -49,4 +49,47 @@ describe('personal API tokens', () => {
     const d = await tokens.create(userId, 'someone else', 30);
     expect(await tokens.revoke(userId + 100000, d.id)).toBe(false);
   });
+
+  it('shares one lookup between simultaneous requests with the same token, each getting its own user object', async () => {
+    const e = await tokens.create(userId, 'busy client', 30);
+    await tokens.userForToken(e.token); // sets last use, so the calls below only read
+    let lookups = 0;
+    const count = (q: { sql: string }) => { if (/from `api_tokens`/i.test(q.sql) && /^select/i.test(q.sql)) lookups++; };
+    db().on('query', count);
+    try {
+      const all = await Promise.all(Array.from({ length: 20 }, () => tokens.userForToken(e.token)));
+      expect(all.every((u) => u?.id === userId)).toBe(true);
+      expect(new Set(all).size).toBe(20);
+      expect(lookups).toBe(1);
+      // A request after the shared lookup has settled reads again and sees a revocation at once.
+      await tokens.revoke(userId, e.id);
+      expect(await tokens.userForToken(e.token)).toBeNull();
+      expect(lookups).toBe(2);
+    } finally {
+      db().off('query', count);
+    }
+  });
+
+  it('does not share a lookup that started longer ago than the window', async () => {
+    const f = await tokens.create(userId, 'slow lookup', 30);
+    await tokens.userForToken(f.token);
+    let lookups = 0;
+    const count = (q: { sql: string }) => { if (/from `api_tokens`/i.test(q.sql) && /^select/i.test(q.sql)) lookups++; };
+    db().on('query', count);
+    const realNow = Date.now;
+    try {
+      const first = tokens.userForToken(f.token);
+      // The next request arrives (by the clock) just after the window has passed: it starts its own lookup.
+      const start = realNow();
+      Date.now = () => start + tokens.SHARE_WINDOW_MS + 1;
+      const second = tokens.userForToken(f.token);
+      Date.now = realNow;
+      expect((await first)?.id).toBe(userId);
+      expect((await second)?.id).toBe(userId);
+      expect(lookups).toBe(2);
+    } finally {
+      Date.now = realNow;
+      db().off('query', count);
+    }
+  });
 });

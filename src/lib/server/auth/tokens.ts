@@ -35,20 +35,47 @@ export async function revoke(userId: number, id: number): Promise<boolean> {
   return n > 0;
 }
 
-/** The active user a bearer token belongs to, or null (unknown, expired, revoked, or user deactivated). */
+interface TokenRow { token_id: number; last_used_at: Date | null; id: number; email: string; name: string; active: number | boolean; created_at: Date; roles: string | null }
+
+/** A request shares a lookup only if that lookup started at most this long before it. */
+export const SHARE_WINDOW_MS = 100;
+
+/** Lookups in flight, by token hash: requests that arrive while one is running share its answer. */
+const inFlight = new Map<string, { startedAt: number; row: Promise<TokenRow | undefined> }>();
+
+function lookUp(hash: string): Promise<TokenRow | undefined> {
+  const now = Date.now();
+  const running = inFlight.get(hash);
+  if (running && now - running.startedAt <= SHARE_WINDOW_MS) return running.row;
+  // One round trip: the live token, its user and the roles.
+  const entry = {
+    startedAt: now,
+    row: db()('api_tokens as t')
+      .join('users as u', 'u.id', 't.user_id')
+      .leftJoin('user_roles as r', 'r.user_id', 'u.id')
+      .where('t.token_hash', hash).whereNull('t.revoked_at').andWhere('t.expires_at', '>', db().fn.now())
+      .groupBy('t.id')
+      .first('t.id as token_id', 't.last_used_at', 'u.id', 'u.email', 'u.name', 'u.active', 'u.created_at',
+        db().raw('GROUP_CONCAT(r.role ORDER BY r.role) AS roles'))
+      .finally(() => { if (inFlight.get(hash) === entry) inFlight.delete(hash); }) as Promise<TokenRow | undefined>
+  };
+  inFlight.set(hash, entry);
+  return entry.row;
+}
+
+/**
+ * The active user a bearer token belongs to, or null (unknown, expired, revoked, or user deactivated).
+ * There is no cache, so a revocation or deactivation counts on every instance from the next lookup. A
+ * request that arrives while the same token's lookup is running, started at most SHARE_WINDOW_MS
+ * before, shares its answer: a busy client costs one query per round trip instead of one per request.
+ */
 export async function userForToken(token: string): Promise<User | null> {
   if (!token.startsWith(TOKEN_PREFIX) || token.length > 100) return null;
-  // One round trip: the live token, its user and the roles.
-  const row = await db()('api_tokens as t')
-    .join('users as u', 'u.id', 't.user_id')
-    .leftJoin('user_roles as r', 'r.user_id', 'u.id')
-    .where('t.token_hash', sha256Hex(token)).whereNull('t.revoked_at').andWhere('t.expires_at', '>', db().fn.now())
-    .groupBy('t.id')
-    .first('t.id as token_id', 't.last_used_at', 'u.id', 'u.email', 'u.name', 'u.active', 'u.created_at',
-      db().raw('GROUP_CONCAT(r.role ORDER BY r.role) AS roles'));
+  const row = await lookUp(sha256Hex(token));
   if (!row || !row.active) return null;
   // Last use is kept to the minute: no write per request, so busy tokens do not contend on one row.
   if (!row.last_used_at || Date.now() - new Date(row.last_used_at).getTime() > 60_000) {
+    row.last_used_at = new Date();
     await db()('api_tokens').where({ id: row.token_id }).update({ last_used_at: db().fn.now() });
   }
   return { id: row.id, email: row.email, name: row.name, active: true, roles: String(row.roles ?? '').split(',').filter(isRole), createdAt: row.created_at };

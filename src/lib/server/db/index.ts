@@ -8,7 +8,7 @@ export function db(): Knex {
   instance ??= knexFactory({
     client: 'mysql2',
     connection: { ...config().db, supportBigNumbers: true, decimalNumbers: true },
-    pool: { min: 0, max: 20, acquireTimeoutMillis: 5_000 },
+    pool: { min: 0, max: config().dbPoolMax, acquireTimeoutMillis: 5_000 },
     acquireConnectionTimeout: 5_000
   });
   return instance;

@@ -1,7 +1,8 @@
 /**
- * A small pool of worker threads for the blend solver (one per core, at most 4) in the built app,
- * which bundles the worker to build/solve-worker.js; in the dev server and unit tests the solver
- * runs in the calling thread (PF_SOLVE_WORKERS=0 forces that in the built app too). Input errors
+ * A small pool of worker threads for the blend solver (one per core, at most 4; PF_SOLVE_WORKERS=N
+ * sets the number) in the built app, which bundles the worker to build/solve-worker.js; in the dev
+ * server and unit tests the solver runs in the calling thread (PF_SOLVE_WORKERS=0 forces that in
+ * the built app too). Input errors
  * keep their type across the thread boundary, so the API still answers 422 for them.
  */
 import { existsSync } from 'node:fs';
@@ -49,13 +50,23 @@ function startSlot(): Slot {
 
 /** Starts the workers ahead of the first request (they load the solver and mathjs, about 1–2 s). */
 export function warmSolverPool(): void {
-  if (usesWorkers()) slots ??= Array.from({ length: Math.max(1, Math.min(4, availableParallelism())) }, startSlot);
+  if (usesWorkers()) slots ??= Array.from({ length: workerCount() }, startSlot);
+}
+
+/** PF_SOLVE_WORKERS (a whole number from 0 to 16) when set, else one per core (at most 4). */
+export function workerCount(setting = process.env.PF_SOLVE_WORKERS): number {
+  if (setting === undefined || setting.trim() === '') return Math.max(1, Math.min(4, availableParallelism()));
+  const n = Number(setting);
+  if (!Number.isInteger(n) || n < 0 || n > 16) {
+    throw new Error(`Phosforge configuration error: PF_SOLVE_WORKERS must be a whole number from 0 to 16 (got "${setting}")`);
+  }
+  return n;
 }
 
 /** Workers only when this module runs from the built app (build/server/…); dev server and tests solve in-thread. */
 export function usesWorkers(): boolean {
   const built = import.meta.url.includes('/build/server/');
-  return built && process.env.PF_SOLVE_WORKERS !== '0' && existsSync(WORKER_FILE);
+  return built && workerCount() > 0 && existsSync(WORKER_FILE);
 }
 
 /** Solves in a worker thread when the bundled worker exists, else in this thread. */
