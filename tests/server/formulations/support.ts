@@ -4,6 +4,9 @@ import * as users from '../../../src/lib/server/db/users';
 import type { User } from '../../../src/lib/server/db/users';
 import type { RevisionContent } from '../../../src/lib/formulations/content';
 import { ensureDemoMaterials } from '../../support/demo-materials';
+import type { CaughtMail } from '../../support/mail';
+
+export { caughtMail, type CaughtMail } from '../../support/mail';
 
 export const DEMO_PASSWORD = 'phosforge-demo';
 
@@ -51,29 +54,6 @@ export async function warmWhite(overrides: Partial<RevisionContent> = {}): Promi
 /** A formulation code no earlier run used. */
 export function uniqueCode(prefix = 'T'): string {
   return `${prefix}-${Date.now().toString(36).toUpperCase()}${Math.floor(Math.random() * 1296).toString(36).toUpperCase()}`;
-}
-
-export interface CaughtMail {
-  subject: string;
-  to: { address: string }[];
-  text: string;
-  html: string;
-}
-
-/** Mail caught by the local SMTP catcher (maildev REST API at MAIL_INBOX_URL), filtered by subject. */
-export async function caughtMail(subjectContains: string, expected = 1, timeoutMs = 4000): Promise<CaughtMail[]> {
-  const base = process.env.MAIL_INBOX_URL ?? 'http://127.0.0.1:2581';
-  const deadline = Date.now() + timeoutMs;
-  let found: CaughtMail[] = [];
-  while (Date.now() < deadline) {
-    let res = await fetch(`${base}/email`);
-    if (res.status === 404) res = await fetch(`${base}/api/email`);
-    const all = (await res.json()) as CaughtMail[];
-    found = all.filter((m) => m.subject.includes(subjectContains));
-    if (found.length >= expected) return found;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  return found;
 }
 
 export const recipients = (mails: CaughtMail[]) => mails.flatMap((m) => m.to.map((t) => t.address)).sort();
