@@ -5,6 +5,7 @@
  */
 import { SvelteKitAuth, CredentialsSignin } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
+import { getRequestEvent } from '$app/server';
 import { z } from 'zod';
 import * as users from '$lib/server/db/users';
 import * as audit from '$lib/server/db/audit';
@@ -20,8 +21,17 @@ class GenericSignInError extends CredentialsSignin {
   code = 'credentials';
 }
 
-function clientIp(request: Request): string | null {
-  return request.headers.get('x-forwarded-for')?.split(',')[0]?.trim() ?? null;
+/**
+ * The client address for the audit trail, as the adapter sees it: the socket's peer, or behind a
+ * reverse proxy the header named by ADDRESS_HEADER/XFF_DEPTH (adapter-node). A raw X-Forwarded-For
+ * is not trusted, since any client can send one.
+ */
+function clientIp(): string | null {
+  try {
+    return getRequestEvent().getClientAddress() || null;
+  } catch {
+    return null;
+  }
 }
 
 export const { handle, signIn, signOut } = SvelteKitAuth({
@@ -39,11 +49,11 @@ export const { handle, signIn, signOut } = SvelteKitAuth({
   providers: [
     Credentials({
       credentials: { email: { label: 'E-mail' }, password: { label: 'Password', type: 'password' } },
-      authorize: async (raw, request) => {
+      authorize: async (raw) => {
         const parsed = credentialsSchema.safeParse(raw);
         if (!parsed.success) throw new GenericSignInError();
         const { email, password } = parsed.data;
-        const ip = clientIp(request);
+        const ip = clientIp();
         if (await isThrottled(email)) {
           await recordAttempt(email, false, ip);
           await audit.record({ actorEmail: email, entityType: 'session', action: 'sign-in-throttled', ip });

@@ -1,5 +1,5 @@
 import { test, expect, request } from '@playwright/test';
-import { DEMO, BASE, makeUser, postSignIn, signInThroughForm, signedInContext } from './support/accounts';
+import { DEMO, BASE, makeUser, postSignIn, signInThroughForm, signedInContext, testDb } from './support/accounts';
 import { ROLE_LABELS, type Role } from '../../src/lib/access/roles';
 import { tokenFor } from './support/tokens';
 
@@ -84,4 +84,24 @@ test.describe('throttling and deactivation over HTTP', () => {
     expect((await bearer.get('/api/v1/me')).status()).toBe(401);
     await bearer.dispose();
   });
+});
+
+test('the audit trail records the connection address of a sign-in, not a client-sent X-Forwarded-For', async ({ page }) => {
+  // 203.0.113.0/24 is reserved for documentation (RFC 5737): no real client has it.
+  const email = 'address.probe@kestrelhollow.example';
+  await makeUser(email, ['quality'], 'address-probe-password-1');
+  const ctx = await request.newContext({ baseURL: BASE, extraHTTPHeaders: { 'X-Forwarded-For': '203.0.113.9' } });
+  await postSignIn(ctx, email, 'address-probe-password-1');
+  await page.setExtraHTTPHeaders({ 'X-Forwarded-For': '203.0.113.10' });
+  await signInThroughForm(page, email, 'address-probe-password-1');
+  await ctx.dispose();
+  const knex = testDb();
+  try {
+    const rows = await knex('audit_events').where({ actor_email: email, action: 'sign-in' }).orderBy('id', 'desc').limit(2).pluck('ip');
+    expect(rows).toEqual(['127.0.0.1', '127.0.0.1']);
+    const attempts = await knex('sign_in_attempts').where({ email, succeeded: true }).orderBy('id', 'desc').limit(2).pluck('ip');
+    expect(attempts).toEqual(['127.0.0.1', '127.0.0.1']);
+  } finally {
+    await knex.destroy();
+  }
 });
