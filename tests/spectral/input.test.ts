@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { evaluateSpectrum, resampleToGrid, SpectrumInputError, type Spd } from '../../src/lib/spectral/index';
+import { bandsSpd } from './helpers';
 
 const wl = [400, 450, 500, 550, 600, 650, 700];
 const ok = [1, 2, 3, 4, 3, 2, 1];
@@ -43,5 +44,26 @@ describe('input validation (SpectrumInputError, message says what is wrong)', ()
     expect(g[399 - 360]).toBe(0);
     expect(g[701 - 360]).toBe(0);
     expect(g[425 - 360]).toBeCloseTo(1.5, 12);
+  });
+});
+
+// Found by the upload fuzz: a file of finite but huge values (1e306) gave LER = Infinity, which the
+// measurement table cannot store (an error 500), and 1e308 or 1e-310 were refused as "no luminous power".
+describe('extreme magnitudes: every metric is scale-free, so finite input gives the same finite metrics', () => {
+  const band = bandsSpd([[450, 20, 1], [560, 110, 2.5]]);
+  const peak = Math.max(...band.values);
+  const white = { wavelengths: band.wavelengths, values: band.values.map((v) => v / peak) }; // maximum 1
+  const reference = evaluateSpectrum(white);
+  it.each([1e306, 1.7e308, 1e-200, 1e-310])('values × %s', (k) => {
+    const e = evaluateSpectrum({ wavelengths: white.wavelengths, values: white.values.map((v) => v * k) });
+    for (const key of ['x', 'y', 'cct', 'duv', 'ler', 'peakNm', 'fwhmNm', 'centroidNm'] as const) {
+      expect(Number.isFinite(e[key]), key).toBe(true);
+      expect(e[key]).toBeCloseTo(reference[key], 6);
+    }
+    expect(e.cri.ra).toBeCloseTo(reference.cri.ra, 6);
+  });
+
+  it('ordinary magnitudes pass through the resampler unchanged', () => {
+    expect(resampleToGrid({ wavelengths: wl, values: ok.map((v) => v * 1e100) })[425 - 360]).toBe(1e100 * 0.5 + 2e100 * 0.5);
   });
 });

@@ -69,8 +69,8 @@ export async function failureOf(p: Promise<unknown>): Promise<Error> {
   throw new Error('expected the write to fail, but it succeeded');
 }
 
-/** Runs `fn` and returns the error it throws together with the keys of every object it put into storage. */
-export async function failureWithPuts(fn: () => Promise<unknown>): Promise<{ error: Error; keys: string[] }> {
+/** Records the key of every object the app's storage client puts, until `stop()`. */
+export function watchPuts(): { keys: string[]; stop: () => void } {
   const client = s3();
   const keys: string[] = [];
   const original = client.send.bind(client);
@@ -78,10 +78,16 @@ export async function failureWithPuts(fn: () => Promise<unknown>): Promise<{ err
     if (command instanceof PutObjectCommand && command.input.Key) keys.push(command.input.Key);
     return (original as (...a: unknown[]) => unknown)(command, ...rest);
   }) as typeof client.send);
+  return { keys, stop: () => spy.mockRestore() };
+}
+
+/** Runs `fn` and returns the error it throws together with the keys of every object it put into storage. */
+export async function failureWithPuts(fn: () => Promise<unknown>): Promise<{ error: Error; keys: string[] }> {
+  const puts = watchPuts();
   try {
-    return { error: await failureOf(fn()), keys };
+    return { error: await failureOf(fn()), keys: puts.keys };
   } finally {
-    spy.mockRestore();
+    puts.stop();
   }
 }
 

@@ -11,7 +11,9 @@
  * equal lengths, ≥ 5 points, strictly increasing wavelengths, finite numbers, wavelengths
  * within 300–900 nm, some power inside 360–830 nm, no value below −1 % of the maximum.
  * Small negatives (dark-subtraction noise, ≥ −1 % of max) are clamped to 0.
- * Units: wavelengths in nm, values in any relative spectral power unit.
+ * Units: wavelengths in nm, values in any relative spectral power unit. Every metric is
+ * scale-free, so a spectrum whose maximum lies outside 1e−150…1e150 (where sums over the grid
+ * would overflow to Infinity or underflow to 0) is resampled relative to its maximum.
  */
 import { SpectrumInputError } from './errors';
 import { GRID_LENGTH, GRID_START_NM } from './grid';
@@ -22,6 +24,8 @@ export const MIN_WAVELENGTH_NM = 300;
 export const MAX_WAVELENGTH_NM = 900;
 /** Negative values down to this fraction of the maximum count as noise and are clamped. */
 export const NEGATIVE_NOISE_FRACTION = 0.01;
+/** Maxima beyond this factor from 1 are scaled to 1 before resampling (sums of 471 products stay finite and non-zero). */
+const SAFE_SCALE = 1e150;
 
 function isNumberArray(value: unknown): value is number[] {
   return Array.isArray(value) || ArrayBuffer.isView(value);
@@ -82,11 +86,13 @@ export function validateSpd(spd: unknown): asserts spd is Spd {
 
 /**
  * Resamples a validated spectrum onto the 1 nm grid 360–830 nm: linear inside the measured
- * range, zero outside; negatives (noise) clamped to 0. Throws when no power falls in 360–830 nm.
+ * range, zero outside; negatives (noise) clamped to 0; relative to the maximum when that is
+ * extreme (see the header). Throws when no power falls in 360–830 nm.
  */
 export function resampleToGrid(spd: Spd): Float64Array {
   validateSpd(spd);
   const { wavelengths, values } = spd;
+  const scale = scaleOf(values);
   const out = new Float64Array(GRID_LENGTH);
   const n = wavelengths.length;
   let k = 0;
@@ -98,7 +104,7 @@ export function resampleToGrid(spd: Spd): Float64Array {
     const w0 = wavelengths[k];
     const w1 = wavelengths[k + 1];
     const f = (wl - w0) / (w1 - w0);
-    const p = values[k] * (1 - f) + values[k + 1] * f;
+    const p = (values[k] / scale) * (1 - f) + (values[k + 1] / scale) * f;
     const clamped = p > 0 ? p : 0;
     out[i] = clamped;
     total += clamped;
@@ -107,4 +113,11 @@ export function resampleToGrid(spd: Spd): Float64Array {
     throw new SpectrumInputError('spectrum has no power inside 360–830 nm');
   }
   return out;
+}
+
+/** 1 for ordinary magnitudes (the values pass unchanged); the maximum when it is extreme. */
+function scaleOf(values: ArrayLike<number>): number {
+  let max = 0;
+  for (let i = 0; i < values.length; i++) if (values[i] > max) max = values[i];
+  return max > SAFE_SCALE || max < 1 / SAFE_SCALE ? max : 1;
 }

@@ -14,6 +14,11 @@ export function looksNumeric(field: string): boolean {
   return POINT_NUMBER.test(t) || COMMA_NUMBER.test(t);
 }
 
+/** A field as quoted in a message: at most 24 characters (a field may be a whole megabyte of text). */
+export function shownField(s: string): string {
+  return s.length > 24 ? `${s.slice(0, 24)}…` : s;
+}
+
 /** One field as a number, or the reason it is not one (plain function: wide multi-part files have ~10⁵ fields). */
 export function readNumberCell(raw: string, decimal: SpectrumFileDialect['decimal']): { ok: true; value: number } | { ok: false; message: string } {
   const s = raw.trim();
@@ -21,8 +26,7 @@ export function readNumberCell(raw: string, decimal: SpectrumFileDialect['decima
   const pattern = decimal === 'comma' ? COMMA_NUMBER : POINT_NUMBER;
   const n = pattern.test(s) ? Number(decimal === 'comma' ? s.replace(',', '.') : s) : NaN;
   if (!Number.isFinite(n)) {
-    const shown = s.length > 24 ? `${s.slice(0, 24)}…` : s;
-    return { ok: false, message: `"${shown}" is not a number${decimal === 'comma' ? ' (decimal comma expected)' : ''}` };
+    return { ok: false, message: `"${shownField(s)}" is not a number${decimal === 'comma' ? ' (decimal comma expected)' : ''}` };
   }
   return { ok: true, value: n };
 }

@@ -8,7 +8,7 @@
  */
 import Papa from 'papaparse';
 import { contentLines, DELIMITER_CHAR, detectDecimal, detectDelimiter, type SourceLine } from './dialect';
-import { looksNumeric } from './number-cell';
+import { looksNumeric, shownField } from './number-cell';
 import { rowsSchema, spectrumSchema, type RawRow } from './table-schema';
 import type { ParseOptions, SpectrumFileError, SpectrumFileResult } from './types';
 
@@ -44,10 +44,20 @@ export function formatBytes(n: number): string {
 function splitFields(lines: SourceLine[], delimiter: keyof typeof DELIMITER_CHAR): { rows: RawRow[]; errors: SpectrumFileError[] } {
   const texts = lines.map((l) => (delimiter === 'whitespace' ? l.text.trim().replace(/\s+/g, ' ') : l.text));
   const parsed = Papa.parse<string[]>(texts.join('\n'), { delimiter: DELIMITER_CHAR[delimiter], newline: '\n', skipEmptyLines: false });
-  const errors = parsed.errors.map((e) => ({
-    line: e.row !== undefined && lines[e.row] ? lines[e.row].line : null,
-    message: `Line ${e.row !== undefined && lines[e.row] ? lines[e.row].line : '?'}: ${e.message}`
-  }));
+  // A quote left open on one line swallows the following lines into one row: every row after it
+  // would name the wrong line, so the file is refused there and later problems are not listed.
+  const joined = parsed.data.findIndex((cells) => cells.some((c) => c.includes('\n')));
+  const aligned = joined === -1 ? parsed.data.length : joined;
+  const errors: SpectrumFileError[] = parsed.errors
+    .filter((e) => e.row === undefined || e.row < aligned)
+    .map((e) => {
+      const line = e.row !== undefined && lines[e.row] ? lines[e.row].line : null;
+      return { line, message: `Line ${line ?? '?'}: ${e.message}` };
+    });
+  if (joined !== -1) {
+    const line = lines[joined].line;
+    errors.push({ line, message: `Line ${line}: a quoted field opens here and is not closed on the same line (a field may not span lines).` });
+  }
   const rows = parsed.data.map((cells, i) => ({ line: lines[i]?.line ?? 0, cells: cells.map((c) => c.trim()) }));
   return { rows, errors };
 }
@@ -70,7 +80,7 @@ export function parseSpectrumFile(text: string, options: ParseOptions = {}): Spe
   if (first === split.rows.length) return fail([{ line: split.rows[0].line, message: `Line ${split.rows[0].line}: no numeric data found in the file; expected wavelength and intensity columns.` }]);
   if (first > MAX_HEADER_ROWS) {
     const r = split.rows[MAX_HEADER_ROWS];
-    return fail([{ line: r.line, message: `Line ${r.line}: "${r.cells[0]}" is not a number; at most ${MAX_HEADER_ROWS} header lines may precede the data (mark other lines as comments with #).` }]);
+    return fail([{ line: r.line, message: `Line ${r.line}: "${shownField(r.cells[0])}" is not a number; at most ${MAX_HEADER_ROWS} header lines may precede the data (mark other lines as comments with #).` }]);
   }
   const header = first > 0 ? split.rows[first - 1] : null;
   const dataRows = split.rows.slice(first);

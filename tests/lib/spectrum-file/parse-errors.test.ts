@@ -84,6 +84,21 @@ describe('spectrum files: refused files name the line', () => {
     expect(errors[0].message).toMatch(/no positive intensity/);
   });
 
+  // Found by the parser fuzz: a quote opened on one line and closed on a later one joined the lines
+  // into one row, so the file could pass with a point missing, and every later error named the line above its own.
+  it('a quote left open on a line, closed on a later line', () => {
+    const errors = errorsOf(withRow(4, '440,"0.2').replace('\n450,', '\n450",').replace('\n500,', '\nbad,'));
+    expect(errors).toEqual([{ line: 6, message: 'Line 6: a quoted field opens here and is not closed on the same line (a field may not span lines).' }]);
+    const unclosed = errorsOf(withRow(4, '440,"0.2'));
+    expect(unclosed.map((e) => e.line)).toEqual([6]);
+  });
+
+  it('a huge field is quoted shortened in the message', () => {
+    const errors = errorsOf(file('a', 'b', 'c', 'x'.repeat(100_000), ...rows(',')));
+    expect(errors[0].line).toBe(4);
+    expect(errors[0].message.length).toBeLessThan(200);
+  });
+
   it('lists every bad line, capped with a summary', () => {
     const body = WAVELENGTHS.map((w) => `${w},bad`);
     const errors = errorsOf(file(...body));

@@ -12,7 +12,8 @@ import { MaterialError, notFound } from './errors';
 import * as records from './records';
 import * as editing from './editing';
 import * as detail from './detail';
-import { previewSpectrumFile, uploadSpectrum, type SpectrumFileInput } from './spectrum-upload';
+import { readUploadedFile } from '../api/upload';
+import { previewSpectrumFile, uploadSpectrum } from './spectrum-upload';
 import { DEFAULT_MAX_BYTES } from '../../spectrum-file/parse';
 import type { MaterialKind } from './records';
 
@@ -94,21 +95,7 @@ export function item(kind: MaterialKind) {
   };
 }
 
-/** The file of an upload: multipart field `file`, or the raw body (text/csv, text/plain). */
-async function uploadedFile(request: Request): Promise<SpectrumFileInput> {
-  const declared = Number(request.headers.get('content-length') ?? '0');
-  if (declared > DEFAULT_MAX_BYTES + 64 * 1024) throw new ApiError(413, 'The upload is larger than the 2 MB limit for spectrum files. Nothing was saved.');
-  const type = request.headers.get('content-type') ?? '';
-  if (/^multipart\/form-data/i.test(type)) {
-    const file = (await request.formData()).get('file');
-    if (!(file instanceof File)) throw new ApiError(400, 'Send the spectrum file in the multipart field "file".');
-    return { name: file.name || 'spectrum.csv', contentType: file.type || 'text/plain', body: Buffer.from(await file.arrayBuffer()) };
-  }
-  if (/^text\/(csv|plain|tab-separated-values)\b/i.test(type)) {
-    return { name: request.headers.get('x-file-name')?.slice(0, 200) || 'spectrum.csv', contentType: type.split(';')[0], body: Buffer.from(await request.arrayBuffer()) };
-  }
-  throw new ApiError(415, 'Send the spectrum as multipart/form-data (field "file") or as a text/csv or text/plain body.');
-}
+const SPECTRUM_UPLOAD = { maxBytes: DEFAULT_MAX_BYTES, what: 'spectrum', defaultName: 'spectrum.csv' };
 
 const uploadQuerySchema = z.object({
   kind: spectrumKindSchema.default('emission'),
@@ -123,7 +110,7 @@ export function spectrumUpload(kind: MaterialKind) {
       const id = idOf(event);
       await materialOfKind(id, kind);
       const q = readQuery(event.url.searchParams, uploadQuerySchema);
-      const file = await uploadedFile(event.request);
+      const file = await readUploadedFile(event.request, SPECTRUM_UPLOAD);
       if (q.dryRun === '1' || q.dryRun === 'true') {
         const p = previewSpectrumFile(file);
         return finiteJson({ saved: false, points: p.spd.wavelengths.length, metrics: p.summary, warnings: p.warnings, spectrum: p.spd });

@@ -8,6 +8,7 @@ import { db } from '../db/index';
 import * as audit from '../db/audit';
 import { putFile } from '../storage/objects';
 import { DEFAULT_MAX_BYTES, formatBytes, parseSpectrumFile } from '../../spectrum-file/parse';
+import { decodeText } from '../../spectrum-file/decode';
 import { summariseSpectrum, type SpectrumSummary } from '../../materials/spectrum-summary';
 import { SpectrumInputError } from '../../spectral/errors';
 import { MaterialError, notFound } from './errors';
@@ -29,15 +30,6 @@ export interface SpectrumPreview {
   summary: SpectrumSummary;
   warnings: string[];
   fileName: string;
-}
-
-/** Text of an upload: UTF-8, or Windows-1252 for older instrument exports (µ, ° in headers). */
-export function decodeText(body: Buffer): string {
-  try {
-    return new TextDecoder('utf-8', { fatal: true }).decode(body);
-  } catch {
-    return new TextDecoder('windows-1252').decode(body);
-  }
 }
 
 /** Parses and checks a file; throws MaterialError (413/422) naming the lines. Saves nothing. */

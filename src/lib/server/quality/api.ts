@@ -5,6 +5,7 @@
  */
 import { json } from '@sveltejs/kit';
 import { ApiError, handleApi } from '../api/body';
+import { readUploadedFile } from '../api/upload';
 import { BatchError } from '../batches/errors';
 import { FormulationError } from '../formulations/errors';
 import { MaterialError } from '../materials/errors';
@@ -39,20 +40,9 @@ export function qualityApi(run: () => Promise<Response>): Promise<Response> {
   });
 }
 
-/** The file of an upload: multipart field `file`, or the raw body (text/csv, text/plain) named by `x-file-name`. */
-export async function uploadedFile(request: Request): Promise<MeasurementFile> {
-  const declared = Number(request.headers.get('content-length') ?? '0');
-  if (declared > MAX_MEASUREMENT_FILE_BYTES + 64 * 1024) throw new ApiError(413, `The upload is larger than the ${(MAX_MEASUREMENT_FILE_BYTES / 1024 / 1024).toFixed(1)} MB limit for measurement files. Nothing was saved.`);
-  const type = request.headers.get('content-type') ?? '';
-  if (/^multipart\/form-data/i.test(type)) {
-    const file = (await request.formData()).get('file');
-    if (!(file instanceof File)) throw new ApiError(400, 'Send the measurement file in the multipart field "file".');
-    return { name: file.name || 'measurements.csv', contentType: file.type || 'text/plain', body: Buffer.from(await file.arrayBuffer()) };
-  }
-  if (/^text\/(csv|plain|tab-separated-values)\b/i.test(type)) {
-    return { name: request.headers.get('x-file-name')?.slice(0, 200) || 'measurements.csv', contentType: type.split(';')[0], body: Buffer.from(await request.arrayBuffer()) };
-  }
-  throw new ApiError(415, 'Send the measurements as multipart/form-data (field "file") or as a text/csv or text/plain body.');
+/** The file of a measurement upload (see readUploadedFile: multipart `file`, or a text/csv body named by `x-file-name`). */
+export function uploadedFile(request: Request): Promise<MeasurementFile> {
+  return readUploadedFile(request, { maxBytes: MAX_MEASUREMENT_FILE_BYTES, what: 'measurement', defaultName: 'measurements.csv' });
 }
 
 /** Newline-delimited JSON stream: progress lines from `run`, then one `done` or `error` line. */

@@ -9,7 +9,7 @@ import type { Knex } from 'knex';
 import { db } from '../db/index';
 import { record } from '../db/audit';
 import { putFile } from '../storage/objects';
-import { decodeText } from '../materials/spectrum-upload';
+import { decodeText } from '../../spectrum-file/decode';
 import { formatBytes, parseSpectrumFile } from '../../spectrum-file/parse';
 import { measurePartsPaced, type MeasuredPart } from '../../quality/index';
 import { findAnsiBin } from '../../spectral/ansi/c78377';
