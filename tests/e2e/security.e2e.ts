@@ -73,3 +73,29 @@ test.describe('production mode', () => {
     }
   });
 });
+
+test('form posts with a body that is not a readable form are refused with 400, not an error', async () => {
+  const knex = testDb();
+  const batchId = (await knex('batches').where({ state: 'complete' }).first('id'))?.id ?? (await knex('batches').first('id')).id;
+  const materialId = (await knex('materials').first('id')).id;
+  await knex.destroy();
+  // A multipart body cut off before its closing boundary, as a dropped connection leaves it.
+  const cutOff = '--XYZ\r\nContent-Disposition: form-data; name="file"; filename="spd.csv"\r\nContent-Type: text/csv\r\n\r\n380,0.1\r\n381,0.2\r\n';
+  const headers = { Origin: BASE, 'content-type': 'multipart/form-data; boundary=XYZ', accept: 'text/html' };
+  const anonymous = await request.newContext({ baseURL: BASE });
+  expect((await anonymous.post('/signin', { headers, data: cutOff, maxRedirects: 0 })).status()).toBe(400);
+  await anonymous.dispose();
+  const cases: [string, string][] = [
+    [DEMO.formulator, '/profile?/createToken'],
+    [DEMO.formulator, `/library/${materialId}/spectrum?/preview`],
+    [DEMO.formulator, `/library/${materialId}?/addLot`],
+    [DEMO.quality, `/measurements/${batchId}?/upload`]
+  ];
+  for (const [who, url] of cases) {
+    const ctx = await signedInContext(who);
+    const res = await ctx.post(url, { headers, data: cutOff, maxRedirects: 0 });
+    expect(res.status(), `${url}: ${(await res.text()).slice(0, 200)}`).toBe(400);
+    expect(await res.text()).toContain('The form could not be read');
+    await ctx.dispose();
+  }
+});

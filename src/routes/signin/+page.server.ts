@@ -2,6 +2,7 @@ import { redirect } from '@sveltejs/kit';
 import { AuthError } from '@auth/sveltekit';
 import { signIn } from '../../auth';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = ({ locals, url }) => {
   if (locals.user) redirect(303, safeRedirect(url.searchParams.get('redirectTo')));
@@ -19,6 +20,8 @@ function safeRedirect(target: string | null): string {
 export const actions: Actions = {
   /** A refused sign-in (wrong password, unknown account, throttled, deactivated) shows one generic message. */
   default: async (event) => {
+    // Auth.js reads the body itself: a body that is not a form is a 400 before it does.
+    await readForm(event.request.clone());
     try {
       return await signIn(event);
     } catch (err) {

@@ -9,6 +9,7 @@ import { fileBlend } from '$lib/server/designer/file-blend';
 import { filingFormSchema } from '$lib/designer/filing';
 import { FORMULATION_EDITORS } from '$lib/access/routes/shared';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 /** A revision opened in the designer (`?from=<revision id>`) to start the next revision from it. */
 async function openedRevision(param: string | null) {
@@ -40,7 +41,7 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 export const actions: Actions = {
   file: async ({ locals, request }) => {
     const user = requireUser(locals, FORMULATION_EDITORS);
-    const raw = Object.fromEntries(await request.formData());
+    const raw = Object.fromEntries(await readForm(request));
     const parsed = filingFormSchema.safeParse(raw);
     if (!parsed.success) {
       return fail(400, { error: `Nothing was filed: ${parsed.error.issues.map((i) => i.message).join('; ')}.` });

@@ -4,6 +4,7 @@ import { requireUser } from '$lib/server/auth/require';
 import * as tokens from '$lib/server/auth/tokens';
 import * as audit from '$lib/server/db/audit';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 const createSchema = z.object({
   name: z.string().trim().min(1, 'Give the token a name').max(80, 'At most 80 characters'),
@@ -18,7 +19,7 @@ export const load: PageServerLoad = async ({ locals }) => {
 export const actions: Actions = {
   createToken: async ({ locals, request }) => {
     const user = requireUser(locals);
-    const form = Object.fromEntries(await request.formData());
+    const form = Object.fromEntries(await readForm(request));
     const parsed = createSchema.safeParse(form);
     if (!parsed.success) return fail(400, { values: { name: String(form.name ?? ''), days: String(form.days ?? '') }, errors: z.flattenError(parsed.error).fieldErrors });
     const { id, token } = await tokens.create(user.id, parsed.data.name, parsed.data.days);
@@ -27,7 +28,7 @@ export const actions: Actions = {
   },
   revokeToken: async ({ locals, request }) => {
     const user = requireUser(locals);
-    const id = Number((await request.formData()).get('id'));
+    const id = Number((await readForm(request)).get('id'));
     if (!Number.isInteger(id) || !(await tokens.revoke(user.id, id))) return fail(404, { revokeError: 'No such active token.' });
     await audit.record({ actorId: user.id, actorEmail: user.email, entityType: 'api_token', entityId: id, action: 'revoke' });
     return { revoked: id };

@@ -4,6 +4,7 @@ import * as invites from '$lib/server/db/invites';
 import * as accounts from '$lib/server/services/accounts';
 import { acceptSchema } from '$lib/schemas/accounts';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = async ({ params }) => {
   const open = await invites.findOpen(params.token);
@@ -12,7 +13,7 @@ export const load: PageServerLoad = async ({ params }) => {
 
 export const actions: Actions = {
   accept: async ({ params, request }) => {
-    const form = Object.fromEntries(await request.formData());
+    const form = Object.fromEntries(await readForm(request));
     const parsed = acceptSchema.safeParse(form);
     if (!parsed.success) return fail(400, { name: String(form.name ?? ''), errors: z.flattenError(parsed.error).fieldErrors });
     try {

@@ -6,6 +6,7 @@ import * as invites from '$lib/server/db/invites';
 import * as accounts from '$lib/server/services/accounts';
 import { inviteSchema, rolesSchema, activeSchema } from '$lib/schemas/accounts';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 const ADMIN = ['admin'] as const;
 
@@ -26,7 +27,7 @@ async function guarded<T>(fn: () => Promise<T>) {
 export const actions: Actions = {
   invite: async ({ locals, request, url }) => {
     const admin = requireUser(locals, ADMIN);
-    const fd = await request.formData();
+    const fd = await readForm(request);
     const raw = { email: String(fd.get('email') ?? ''), roles: fd.getAll('roles').map(String) };
     const parsed = inviteSchema.safeParse(raw);
     if (!parsed.success) return fail(400, { values: raw, errors: z.flattenError(parsed.error).fieldErrors });
@@ -37,14 +38,14 @@ export const actions: Actions = {
   },
   setRoles: async ({ locals, request }) => {
     const admin = requireUser(locals, ADMIN);
-    const fd = await request.formData();
+    const fd = await readForm(request);
     const parsed = rolesSchema.safeParse({ userId: fd.get('userId'), roles: fd.getAll('roles').map(String) });
     if (!parsed.success) return fail(400, { error: z.flattenError(parsed.error).fieldErrors.roles?.[0] ?? 'Invalid roles' });
     return guarded(async () => { await accounts.changeRoles(admin, parsed.data.userId, parsed.data.roles); return { saved: parsed.data.userId }; });
   },
   setActive: async ({ locals, request }) => {
     const admin = requireUser(locals, ADMIN);
-    const parsed = activeSchema.safeParse(Object.fromEntries(await request.formData()));
+    const parsed = activeSchema.safeParse(Object.fromEntries(await readForm(request)));
     if (!parsed.success) return fail(400, { error: 'Invalid request' });
     return guarded(async () => { await accounts.setActive(admin, parsed.data.userId, parsed.data.active === 'true'); return { saved: parsed.data.userId }; });
   }

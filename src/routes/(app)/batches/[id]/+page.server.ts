@@ -12,6 +12,7 @@ import { completeSchema, overrideLineSchema, recordLineSchema } from '$lib/schem
 import { LOADING_BASIS_LABELS } from '$lib/weighout/schema';
 import { WEIGHOUT_CAUTIONS, WEIGHOUT_CAUTION_TITLE } from '$lib/server/pdf/cautions';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
   const user = requireUser(locals);
@@ -44,7 +45,7 @@ async function run(action: string, values: Values, fn: () => Promise<unknown>) {
 }
 
 async function formValues(request: Request): Promise<Values> {
-  return Object.fromEntries([...(await request.formData())].map(([k, v]) => [k, String(v)]));
+  return Object.fromEntries([...(await readForm(request))].map(([k, v]) => [k, String(v)]));
 }
 
 const invalidForm = (action: string, values: Values, e: z.ZodError) =>

@@ -10,6 +10,7 @@ import { createBatchSchema } from '$lib/schemas/batches';
 import { defaultFields, fieldsToRequest } from '$lib/batches/plan-form';
 import { revisionLoadings } from '$lib/weighout/from-revision';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = async ({ locals, url }) => {
   requireUser(locals, LINE);
@@ -28,7 +29,7 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 export const actions: Actions = {
   plan: async ({ locals, request }) => {
     const user = requireUser(locals, LINE);
-    const values = Object.fromEntries([...(await request.formData())].map(([k, v]) => [k, String(v)]));
+    const values = Object.fromEntries([...(await readForm(request))].map(([k, v]) => [k, String(v)]));
     const revision = await getRevision(Number(values.revisionId));
     if (!revision) return fail(404, { values, error: 'Choose an approved formulation revision.', issues: [] });
     const parsed = createBatchSchema.safeParse(fieldsToRequest(values, revision.content.phosphors.length));

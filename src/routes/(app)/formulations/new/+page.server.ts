@@ -4,6 +4,7 @@ import { formDataToValues } from '$lib/formulations/form-values';
 import { contentFromForm, editorOptions, formRefusal } from '$lib/server/formulations/page-support';
 import { createFormulationWithDraft } from '$lib/server/formulations/save';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 const EDITORS = ['formulator', 'admin'] as const;
 
@@ -15,7 +16,7 @@ export const load: PageServerLoad = async ({ locals }) => {
 export const actions: Actions = {
   create: async ({ locals, request }) => {
     const user = requireUser(locals, EDITORS);
-    const values = formDataToValues(await request.formData());
+    const values = formDataToValues(await readForm(request));
     let created;
     try {
       created = await createFormulationWithDraft(user, { code: values.code || undefined, name: values.name ?? '', description: values.description ?? '', content: contentFromForm(values) });

@@ -10,6 +10,7 @@ import { formFile, formValues, readVersion } from '$lib/server/materials/form';
 import { formGuard, pageId } from '$lib/server/materials/page-errors';
 import { attachmentPurposeSchema, lotSchema } from '$lib/schemas/materials';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
   const user = requireUser(locals, ALL);
@@ -38,7 +39,7 @@ export const actions: Actions = {
   },
   addLot: async ({ locals, request, params }) => {
     const user = requireUser(locals, FORMULATION_EDITORS);
-    const fd = await request.formData();
+    const fd = await readForm(request);
     const values = formValues(fd, LOT_KEYS);
     const parsed = lotSchema.safeParse(values);
     if (!parsed.success) return fail(400, { action: 'addLot', lotValues: values, lotErrors: z.flattenError(parsed.error).fieldErrors, error: 'The lot was not added: please correct the marked fields.' });
@@ -48,14 +49,14 @@ export const actions: Actions = {
   },
   removeLot: async ({ locals, request, params }) => {
     const user = requireUser(locals, FORMULATION_EDITORS);
-    const lotId = idSchema.safeParse((await request.formData()).get('lotId'));
+    const lotId = idSchema.safeParse((await readForm(request)).get('lotId'));
     if (!lotId.success) return fail(400, { action: 'removeLot', error: 'Unknown lot.' });
     const r = await formGuard({ action: 'removeLot' }, () => lots.remove(user, pageId(params.id), lotId.data));
     return r ?? { action: 'removeLot', done: 'Lot removed.' };
   },
   addDocument: async ({ locals, request, params }) => {
     const user = requireUser(locals, FORMULATION_EDITORS);
-    const fd = await request.formData();
+    const fd = await readForm(request);
     const purpose = attachmentPurposeSchema.safeParse(fd.get('purpose'));
     if (!purpose.success) return fail(400, { action: 'addDocument', error: purpose.error.issues[0].message });
     const file = await formFile(fd, 'document');
@@ -65,7 +66,7 @@ export const actions: Actions = {
   },
   removeDocument: async ({ locals, request, params }) => {
     const user = requireUser(locals, FORMULATION_EDITORS);
-    const fileId = idSchema.safeParse((await request.formData()).get('fileId'));
+    const fileId = idSchema.safeParse((await readForm(request)).get('fileId'));
     if (!fileId.success) return fail(400, { action: 'removeDocument', error: 'Unknown document.' });
     const r = await formGuard({ action: 'removeDocument' }, () => attachments.remove(user, pageId(params.id), fileId.data));
     return r ?? { action: 'removeDocument', done: 'Document removed.' };
@@ -74,7 +75,7 @@ export const actions: Actions = {
 
 async function toggleArchive(locals: App.Locals, request: Request, rawId: string, archived: boolean) {
   const user = requireUser(locals, FORMULATION_EDITORS);
-  const version = readVersion(await request.formData());
+  const version = readVersion(await readForm(request));
   if (version === null) return fail(400, { action: 'archive', error: 'The form lost its version number; reload the page.' });
   const r = await formGuard({ action: 'archive' }, () => editing.setArchived(user, pageId(rawId), version, archived));
   return typeof r === 'number' ? { action: 'archive', done: archived ? 'Archived: it no longer appears in pick lists.' : 'Restored to the active library.' } : r;

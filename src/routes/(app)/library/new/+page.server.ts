@@ -5,6 +5,7 @@ import * as editing from '$lib/server/materials/editing';
 import { readMaterialForm } from '$lib/server/materials/form';
 import { formGuard } from '$lib/server/materials/page-errors';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 const kindOf = (url: URL): 'pump' | 'phosphor' => (url.searchParams.get('kind') === 'pump' ? 'pump' : 'phosphor');
 
@@ -17,7 +18,7 @@ export const actions: Actions = {
   default: async ({ locals, request, url }) => {
     const user = requireUser(locals, FORMULATION_EDITORS);
     const kind = kindOf(url);
-    const form = readMaterialForm(await request.formData());
+    const form = readMaterialForm(await readForm(request));
     if (!form.ok) return fail(400, { values: form.values, errors: form.errors, error: 'Please correct the marked fields. Nothing was saved.' });
     const id = await formGuard({ values: form.values, errors: {} }, () => editing.create(user, kind, form.data));
     if (typeof id !== 'number') return id;

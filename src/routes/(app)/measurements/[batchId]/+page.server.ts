@@ -11,6 +11,7 @@ import { setAcceptance } from '$lib/server/quality/acceptance';
 import { uploadMeasurements, withdrawUpload } from '$lib/server/quality/upload';
 import { makeCorrectionDraft } from '$lib/server/quality/correction';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 function batchId(param: string): number {
   const id = Number(param);
@@ -29,7 +30,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 export const actions: Actions = {
   upload: async ({ locals, params, request }) => {
     const user = requireUser(locals, QUALITY);
-    const file = (await request.formData()).get('file');
+    const file = (await readForm(request)).get('file');
     if (!(file instanceof File) || file.size === 0) return fail(400, { uploadError: 'Choose a measurement file first.', uploadIssues: [] });
     try {
       const res = await uploadMeasurements(user, batchId(params.batchId), { name: file.name, contentType: file.type, body: Buffer.from(await file.arrayBuffer()) });
@@ -42,7 +43,7 @@ export const actions: Actions = {
   },
   setAcceptance: async ({ locals, params, request }) => {
     const user = requireUser(locals, QUALITY);
-    const fd = await request.formData();
+    const fd = await readForm(request);
     const parsed = acceptanceSchema.safeParse({ mode: fd.get('mode'), steps: fd.get('steps') ?? undefined, requireTargetBin: fd.get('requireTargetBin') ?? 'false', version: fd.get('version') });
     if (!parsed.success) return fail(400, { acceptanceErrors: z.flattenError(parsed.error).fieldErrors });
     try {
@@ -56,7 +57,7 @@ export const actions: Actions = {
   },
   withdrawUpload: async ({ locals, params, request }) => {
     const user = requireUser(locals, QUALITY);
-    const parsed = withdrawUploadSchema.safeParse(Object.fromEntries(await request.formData()));
+    const parsed = withdrawUploadSchema.safeParse(Object.fromEntries(await readForm(request)));
     if (!parsed.success) return fail(400, { withdrawError: z.flattenError(parsed.error).fieldErrors.reason?.[0] ?? 'Give a reason and the upload.' });
     try {
       await withdrawUpload(user, batchId(params.batchId), parsed.data.uploadId, parsed.data.reason);
@@ -69,7 +70,7 @@ export const actions: Actions = {
   },
   correct: async ({ locals, params, request, url }) => {
     const user = requireUser(locals, QUALITY);
-    const parsed = correctionSchema.safeParse(Object.fromEntries(await request.formData()));
+    const parsed = correctionSchema.safeParse(Object.fromEntries(await readForm(request)));
     if (!parsed.success) return fail(400, { correctionError: parsed.error.issues[0].message });
     try {
       return { corrected: await makeCorrectionDraft(user, batchId(params.batchId), parsed.data.stepFraction, url.origin) };
@@ -81,7 +82,7 @@ export const actions: Actions = {
   },
   dispose: async ({ locals, params, request, url }) => {
     const user = requireUser(locals, QUALITY);
-    const fd = await request.formData();
+    const fd = await readForm(request);
     const raw = { decision: String(fd.get('decision') ?? ''), meaning: String(fd.get('meaning') ?? ''), comment: String(fd.get('comment') ?? ''), password: String(fd.get('password') ?? ''), version: fd.get('version') };
     const values = { decision: raw.decision, meaning: raw.meaning, comment: raw.comment };
     const parsed = dispositionSchema.safeParse(raw);

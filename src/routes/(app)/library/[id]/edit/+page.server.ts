@@ -6,6 +6,7 @@ import * as records from '$lib/server/materials/records';
 import { readMaterialForm, readVersion, valuesOf } from '$lib/server/materials/form';
 import { formGuard, pageId } from '$lib/server/materials/page-errors';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
   requireUser(locals, FORMULATION_EDITORS);
@@ -17,7 +18,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 export const actions: Actions = {
   default: async ({ locals, request, params }) => {
     const user = requireUser(locals, FORMULATION_EDITORS);
-    const fd = await request.formData();
+    const fd = await readForm(request);
     const form = readMaterialForm(fd);
     const version = readVersion(fd);
     if (!form.ok) return fail(400, { values: form.values, errors: form.errors, error: 'Please correct the marked fields. Nothing was saved.' });

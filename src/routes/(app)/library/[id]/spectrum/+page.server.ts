@@ -7,6 +7,7 @@ import { formGuard, pageId } from '$lib/server/materials/page-errors';
 import { previewSpectrumFile, uploadSpectrum } from '$lib/server/materials/spectrum-upload';
 import { spectrumKindSchema } from '$lib/schemas/materials';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
   requireUser(locals, FORMULATION_EDITORS);
@@ -21,7 +22,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 };
 
 async function readUpload(request: Request) {
-  const fd = await request.formData();
+  const fd = await readForm(request);
   const kind = spectrumKindSchema.safeParse(fd.get('kind') ?? 'emission');
   const file = await formFile(fd, 'file');
   return { fd, kind: kind.success ? kind.data : null, file };

@@ -12,6 +12,7 @@ import { addAttachment, removeAttachment } from '$lib/server/formulations/attach
 import { contentToFormValues, formDataToValues } from '$lib/formulations/form-values';
 import { allowedCommands } from '$lib/formulations/workflow-rules';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/forms/read-form';
 
 const ACTORS = ['formulator', 'quality', 'admin'] as const;
 const version = z.coerce.number().int().positive('version missing: reload the page');
@@ -55,7 +56,7 @@ export const actions: Actions = {
   save: async ({ locals, params, request }) => {
     const user = requireUser(locals, ACTORS);
     const rev = await revisionOf(params);
-    const values = formDataToValues(await request.formData());
+    const values = formDataToValues(await readForm(request));
     try {
       const saved = await updateDraft(user, rev.id, Number(values.version), contentFromForm(values));
       return { action: 'save', saved: saved.version };
@@ -66,7 +67,7 @@ export const actions: Actions = {
   submit: async ({ locals, params, request }) => {
     const user = requireUser(locals, ACTORS);
     const rev = await revisionOf(params);
-    const parsed = version.safeParse((await request.formData()).get('version'));
+    const parsed = version.safeParse((await readForm(request)).get('version'));
     if (!parsed.success) return fail(400, { action: 'submit', error: parsed.error.issues[0].message });
     try {
       await submit(user, rev.id, parsed.data);
@@ -78,7 +79,7 @@ export const actions: Actions = {
   withdraw: async ({ locals, params, request }) => {
     const user = requireUser(locals, ACTORS);
     const rev = await revisionOf(params);
-    const values = formDataToValues(await request.formData());
+    const values = formDataToValues(await readForm(request));
     const parsed = withdrawSchema.safeParse(values);
     if (!parsed.success) return fail(400, { action: 'withdraw', values, error: parsed.error.issues[0].message });
     try {
@@ -91,7 +92,7 @@ export const actions: Actions = {
   sign: async ({ locals, params, request }) => {
     const user = requireUser(locals, ['quality', 'admin']);
     const rev = await revisionOf(params);
-    const values = formDataToValues(await request.formData());
+    const values = formDataToValues(await readForm(request));
     const parsed = signSchema.safeParse(values);
     if (!parsed.success) return formRefusal(new ValidationError(parsed.error.issues.map((i) => i.message).join('; ')), values, 'sign');
     const s = parsed.data;
@@ -106,7 +107,7 @@ export const actions: Actions = {
   attach: async ({ locals, params, request }) => {
     const user = requireUser(locals, ACTORS);
     const rev = await revisionOf(params);
-    const fd = await request.formData();
+    const fd = await readForm(request);
     const file = fd.get('file');
     if (!(file instanceof File) || file.size === 0) return fail(400, { action: 'attach', error: 'Choose a file to attach.' });
     try {
@@ -120,7 +121,7 @@ export const actions: Actions = {
     const user = requireUser(locals, ACTORS);
     const rev = await revisionOf(params);
     try {
-      await removeAttachment(user, rev.id, Number((await request.formData()).get('attachmentId')));
+      await removeAttachment(user, rev.id, Number((await readForm(request)).get('attachmentId')));
       return { action: 'detach', done: 'Attachment removed.' };
     } catch (err) {
       return formRefusal(err, {}, 'detach');
