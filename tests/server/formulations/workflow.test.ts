@@ -155,10 +155,10 @@ describe('formulation revisions: life cycle through the services', () => {
   it('creates a correction draft from a batch, based on the revision the batch used', async () => {
     const d = await submitted(c.rhea);
     await sign(c.ines, d.revisionId, 'approved', sig);
-    const corr = await createCorrectionDraft(c.ines, d.revisionId, await warmWhite({ notes: 'trim after batch' }), 4242);
+    const corr = await createCorrectionDraft(c.ines, d.revisionId, await warmWhite({ notes: 'trim after batch' }), 4242, async () => undefined);
     const rev = (await getRevision(corr.revisionId))!;
     expect(rev).toMatchObject({ revisionNo: 2, state: 'draft', basedOnRevisionId: d.revisionId, sourceBatchId: 4242, createdBy: c.ines.id });
-    await expect(createCorrectionDraft(c.tomas, d.revisionId, await warmWhite(), 4242)).rejects.toBeInstanceOf(PermissionError);
+    await expect(createCorrectionDraft(c.tomas, d.revisionId, await warmWhite(), 4242, async () => undefined)).rejects.toBeInstanceOf(PermissionError);
   });
 
   it('refuses approving an older revision once a newer one is approved', async () => {

@@ -10,6 +10,7 @@ import { xyToUvPrime } from '../../../src/lib/spectral/colorimetry/chromaticity'
 import type { User } from '../../../src/lib/server/db/users';
 import { caughtMail } from '../formulations/support';
 import { completedBatch, csvFile, demoUser, partsCsv } from './support';
+import { INJECTED, dropLeftoverFaults, failureOf, snapshot, withFailingWrite, type Fault } from '../../support/faults';
 
 // Measure → correct loop (common practice): the line put 15 % more red into every part
 // than the revision says (known bias); the correction should take red out and predict a point nearer
@@ -56,6 +57,16 @@ describe('correction draft from a biased batch', () => {
     expect((await batchResults(b.batchId))!.plot.markers.map((m) => m.kind)).toContain('corrected');
     const mails = await caughtMail(`from batch ${b.batchNumber}`);
     expect(mails.map((m) => m.to[0].address)).toContain('rhea.okafor@kestrelhollow.example');
+  });
+
+  it('a failure while recording the correction leaves no draft, no correction and no audit event', async () => {
+    const tables = ['formulation_revisions', 'batch_corrections', 'audit_events'] as const;
+    await dropLeftoverFaults();
+    const before = await snapshot(tables);
+    const fault: Fault = { label: 'the correction record', table: 'batch_corrections', event: 'INSERT' };
+    const err = await withFailingWrite(fault, () => failureOf(makeCorrectionDraft(quality, b.batchId, 0.5, 'http://local')));
+    expect(err.message).toContain(INJECTED);
+    expect(await snapshot(tables)).toEqual(before);
   });
 
   it('needs measured parts', async () => {

@@ -113,13 +113,20 @@ export async function createRevision(caller: Caller, formulationId: number, cont
 }
 
 /** A draft made from a batch's results (quality's correction); based on the revision the batch was built from. */
-export async function createCorrectionDraft(caller: Caller, revisionId: number, content: unknown, sourceBatchId: number): Promise<{ revisionId: number; revisionNo: number }> {
+export async function createCorrectionDraft<T>(
+  caller: Caller, revisionId: number, content: unknown, sourceBatchId: number,
+  /** Writes that belong with the draft (the batch's correction record): same transaction, so both or neither. */
+  alongside: (trx: Knex.Transaction, draft: { revisionId: number; revisionNo: number }) => Promise<T>
+): Promise<{ revisionId: number; revisionNo: number; alongside: T }> {
   requireRoles(caller, CORRECTORS, 'A correction draft');
   if (!Number.isSafeInteger(sourceBatchId) || sourceBatchId <= 0) throw new ValidationError('sourceBatchId: a batch id is required');
   const base = await db()('formulation_revisions').where({ id: revisionId }).first('formulation_id');
   if (!base) throw new NotFoundError(`Revision ${revisionId} does not exist.`);
   const prepared = await prepareRevision(db(), content);
-  return db().transaction((trx) => insertDraft(trx, caller, base.formulation_id, prepared, { basedOnRevisionId: revisionId, sourceBatchId }));
+  return db().transaction(async (trx) => {
+    const draft = await insertDraft(trx, caller, base.formulation_id, prepared, { basedOnRevisionId: revisionId, sourceBatchId });
+    return { ...draft, alongside: await alongside(trx, draft) };
+  });
 }
 
 /** Saves a draft's new content if `version` is still current; otherwise ConflictError and nothing changes. */

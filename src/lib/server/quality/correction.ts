@@ -4,7 +4,6 @@
  * new draft revision linked to the batch (formulations' createCorrectionDraft), for the formulator
  * to review. The correction (mean used, step share, predicted new point) is kept with the batch.
  */
-import { db } from '../db/index';
 import { record } from '../db/audit';
 import { send } from '../mail/index';
 import * as users from '../db/users';
@@ -45,18 +44,22 @@ export async function makeCorrectionDraft(caller: Caller, batchId: number, stepF
     if (err instanceof BlendInputError) throw new QualityError(422, `The correction cannot be computed: ${err.message}`);
     throw err;
   }
-  const draft = await createCorrectionDraft(caller, ctx.revision.id, corrected.content, batchId);
   const r = corrected.response;
-  const [correctionId] = await db()('batch_corrections').insert({
-    batch_id: batchId, revision_id: draft.revisionId, step_fraction: stepFraction, measured_x: mean.x, measured_y: mean.y,
-    parts_count: judged.summary.parts, predicted_x: r.predicted.x, predicted_y: r.predicted.y, predicted_cct_k: r.predicted.cct,
-    predicted_duv: r.predicted.duv, created_by: caller.id,
-    detail_json: JSON.stringify({ recipeKind: r.recipe.kind, multipliers: r.multipliers, bias: r.bias, errorBefore: r.errorBefore, errorAfter: r.errorAfter, converged: r.converged })
+  // The draft, the batch's correction record and its audit event are written together or not at all.
+  const draft = await createCorrectionDraft(caller, ctx.revision.id, corrected.content, batchId, async (trx, d) => {
+    const [id] = await trx('batch_corrections').insert({
+      batch_id: batchId, revision_id: d.revisionId, step_fraction: stepFraction, measured_x: mean.x, measured_y: mean.y,
+      parts_count: judged.summary.parts, predicted_x: r.predicted.x, predicted_y: r.predicted.y, predicted_cct_k: r.predicted.cct,
+      predicted_duv: r.predicted.duv, created_by: caller.id,
+      detail_json: JSON.stringify({ recipeKind: r.recipe.kind, multipliers: r.multipliers, bias: r.bias, errorBefore: r.errorBefore, errorAfter: r.errorAfter, converged: r.converged })
+    });
+    await record({
+      actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: 'correction-draft',
+      after: { correctionId: id, revisionId: d.revisionId, revisionNo: d.revisionNo, stepFraction, measuredMean: mean, predicted: r.predicted }
+    }, trx);
+    return id as number;
   });
-  await record({
-    actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: 'correction-draft',
-    after: { correctionId, revisionId: draft.revisionId, revisionNo: draft.revisionNo, stepFraction, measuredMean: mean, predicted: r.predicted }
-  });
+  const correctionId = draft.alongside;
   const author = await users.get(ctx.revision.createdBy);
   if (author?.active) {
     await send(correctionDraftMessage({
