@@ -1,15 +1,16 @@
 #!/usr/bin/env bash
 # `npm run backup [-- <dir>]` / `npm run restore -- <dir> [--yes]`: consistent dump of the database
-# plus the object-store files, and the way back. Uses the development profile unless PF_PROFILE or
-# DATABASE_URL / S3_* say otherwise; starts the private server and the fakes when they are not up.
+# plus the object-store files, and the way back. `npm run storage:sweep`: bucket vs stored_files.
+# Uses the development profile unless PF_PROFILE or DATABASE_URL / S3_* say otherwise; starts the
+# private server and the fakes when they are not up.
 set -euo pipefail
 cd "$(dirname "$0")/.."
-what="${1:?usage: backup.sh backup|restore [args]}"; shift
+what="${1:?usage: backup.sh backup|restore|sweep [args]}"; shift
 PF_PROFILE="${PF_PROFILE:-dev}" . scripts/profile.sh
 [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh start >/dev/null
 fakes=""
 if [ "${S3_ENDPOINT#http://127.0.0.1}" != "$S3_ENDPOINT" ] && ! (exec 3<>"/dev/tcp/127.0.0.1/$PF_S3_PORT") 2>/dev/null; then
-  node --import tsx scripts/fakes.ts >.runtime/fakes-backup.log 2>&1 & fakes=$!
+  node --openssl-legacy-provider --import tsx scripts/fakes.ts >.runtime/fakes-backup.log 2>&1 & fakes=$!
   for _ in $(seq 1 50); do (exec 3<>"/dev/tcp/127.0.0.1/$PF_S3_PORT") 2>/dev/null && break; sleep 0.2; done
 fi
 status=0

@@ -3,10 +3,16 @@
  *  - an SMTP catcher (maildev) with a web inbox, for mail sent through nodemailer;
  *  - an S3-compatible object store (s3rver), used through @aws-sdk/client-s3.
  * Runs until SIGINT/SIGTERM. Ports and folders come from scripts/profile.sh.
+ * Start it with `node --openssl-legacy-provider`: s3rver makes its listing continuation tokens with
+ * DES, which OpenSSL 3 keeps in its legacy provider; without it every listing past one page fails.
  */
 import { mkdirSync } from 'node:fs';
 import { MailDev } from 'maildev';
 import S3rver from 's3rver';
+
+if (!process.execArgv.includes('--openssl-legacy-provider')) {
+  console.warn('fakes: started without --openssl-legacy-provider; object listings longer than one page will fail');
+}
 
 const smtpPort = Number(process.env.PF_SMTP_PORT ?? 2525);
 const webPort = Number(process.env.PF_MAIL_WEB_PORT ?? 2580);

@@ -20,7 +20,7 @@ if [ -z "${PF_EXTERNAL_DB:-}" ]; then
   bash scripts/db.sh sql -e "DROP DATABASE IF EXISTS \`$DB_NAME\`; CREATE DATABASE \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
 fi
 rm -rf "$PF_S3_DIR"
-node --import tsx scripts/fakes.ts >/dev/null & pids+=($!)
+node --openssl-legacy-provider --import tsx scripts/fakes.ts >/dev/null & pids+=($!)
 npm run --silent db:migrate >/dev/null && npm run --silent db:seed || exit 1
 if [ ! -f build/index.js ] || [ -n "$(find src static package-lock.json svelte.config.js vite.config.ts -newer build/index.js -print -quit)" ]; then
   npm run --silent build >.runtime/build-load.log 2>&1 || { tail -40 .runtime/build-load.log; exit 1; }

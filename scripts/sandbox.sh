@@ -26,7 +26,7 @@ if [ -z "${PF_EXTERNAL_DB:-}" ]; then
 fi
 # Fakes on the development ports, shared by every sandbox (started once, left running).
 if ! (exec 3<>"/dev/tcp/127.0.0.1/$PF_S3_PORT") 2>/dev/null; then
-  nohup node --import tsx scripts/fakes.ts >.runtime/fakes-sandbox.log 2>&1 &
+  nohup node --openssl-legacy-provider --import tsx scripts/fakes.ts >.runtime/fakes-sandbox.log 2>&1 &
   for _ in $(seq 1 50); do (exec 3<>"/dev/tcp/127.0.0.1/$PF_S3_PORT") 2>/dev/null && break; sleep 0.2; done
 fi
 npm run --silent db:migrate >/dev/null

@@ -23,7 +23,7 @@ cleanup() {
 trap cleanup INT TERM EXIT
 
 [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh start
-node --import tsx scripts/fakes.ts & pids+=($!)
+node --openssl-legacy-provider --import tsx scripts/fakes.ts & pids+=($!)
 npm run --silent db:migrate
 npm run --silent db:seed
 if [ ! -f build/index.js ] || [ -n "$(find src static package-lock.json svelte.config.js vite.config.ts tailwind.config.ts -newer build/index.js -print -quit)" ]; then

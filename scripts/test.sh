@@ -32,7 +32,7 @@ if [ -z "${PF_EXTERNAL_DB:-}" ]; then
   # A fresh test database for every run.
   bash scripts/db.sh sql -e "DROP DATABASE IF EXISTS \`$DB_NAME\`; CREATE DATABASE \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
 fi
-node --import tsx scripts/fakes.ts & pids+=($!)
+node --openssl-legacy-provider --import tsx scripts/fakes.ts & pids+=($!)
 step "migrate + seed" bash -c "npm run --silent db:migrate && npm run --silent db:seed"
 step "svelte-check" npm run --silent check
 step "vitest (unit + integration)" npx vitest run
