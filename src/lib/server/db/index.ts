@@ -19,10 +19,16 @@ export async function closeDb(): Promise<void> {
   instance = undefined;
 }
 
-/** Errors that mean "the database cannot be reached right now" (→ 503, not 500). */
+/**
+ * Errors that mean "the database cannot be reached right now" (→ 503, not 500). A reset or broken
+ * socket counts only when the database driver marks it fatal: a client that drops its own upload
+ * also ends in ECONNRESET, and that is not an outage.
+ */
 export function isDbUnavailable(err: unknown): boolean {
-  const code = (err as { code?: string } | null)?.code ?? '';
+  const e = (err ?? {}) as { code?: string; fatal?: boolean };
+  const code = e.code ?? '';
   const msg = err instanceof Error ? err.message : '';
-  return ['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ETIMEDOUT', 'ECONNRESET', 'ER_CON_COUNT_ERROR', 'EPIPE'].includes(code)
+  if (['ECONNRESET', 'EPIPE', 'ETIMEDOUT'].includes(code)) return e.fatal === true;
+  return ['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ER_CON_COUNT_ERROR'].includes(code)
     || /Knex: Timeout acquiring a connection|Connection lost|connect ECONNREFUSED/i.test(msg);
 }
