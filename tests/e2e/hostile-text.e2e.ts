@@ -76,7 +76,7 @@ test('markup and SQL typed into every text field are stored and shown literally'
     const revRow = await knex('formulation_revisions').where({ id: revisionId }).first('content_json');
     expect(JSON.parse(revRow.content_json).notes).toBe(content.notes);
     // The notice to the author carries the reason as typed in its text part and escaped in its HTML part.
-    const [notice] = await waitForMail((m) => m.text.includes(reason));
+    const [notice] = await waitForMail((m) => m.text.includes(reason), 1, 10_000);
     expect(notice, 'a notice mail carries the reason').toBeDefined();
     expect(notice.html).toContain('&lt;script&gt;window.__pfInjected=1&lt;/script&gt;');
     expect(notice.html).not.toContain(MARKUP);
