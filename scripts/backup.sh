@@ -7,11 +7,12 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 what="${1:?usage: backup.sh backup|restore|sweep [args]}"; shift
 PF_PROFILE="${PF_PROFILE:-dev}" . scripts/profile.sh
+. scripts/processes.sh
 [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh start >/dev/null
 fakes=""
-if [ "${S3_ENDPOINT#http://127.0.0.1}" != "$S3_ENDPOINT" ] && ! (exec 3<>"/dev/tcp/127.0.0.1/$PF_S3_PORT") 2>/dev/null; then
-  node --openssl-legacy-provider --import tsx scripts/fakes.ts >.runtime/fakes-backup.log 2>&1 & fakes=$!
-  for _ in $(seq 1 50); do (exec 3<>"/dev/tcp/127.0.0.1/$PF_S3_PORT") 2>/dev/null && break; sleep 0.2; done
+if [ "${S3_ENDPOINT#http://127.0.0.1}" != "$S3_ENDPOINT" ] && ! fakes_up; then
+  "${FAKES[@]}" >.runtime/fakes-backup.log 2>&1 & fakes=$!
+  wait_for_fakes
 fi
 status=0
 node --import tsx "scripts/backup/$what.ts" "$@" || status=$?

@@ -7,20 +7,11 @@ set -uo pipefail
 cd "$(dirname "$0")/.."
 bash scripts/ensure-tools.sh || exit 1
 PF_PROFILE=load . scripts/profile.sh
-pids=()
-cleanup() {
-  trap - INT TERM EXIT
-  for p in "${pids[@]}"; do kill -TERM "$p" 2>/dev/null || true; done
-  for p in "${pids[@]}"; do wait "$p" 2>/dev/null || true; done
-  [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh stop >/dev/null || true
-}
-trap cleanup INT TERM EXIT
-if [ -z "${PF_EXTERNAL_DB:-}" ]; then
-  bash scripts/db.sh start >/dev/null || exit 1
-  bash scripts/db.sh sql -e "DROP DATABASE IF EXISTS \`$DB_NAME\`; CREATE DATABASE \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
-fi
+. scripts/processes.sh
+trap stop_started INT TERM EXIT
+fresh_database || exit 1
 rm -rf "$PF_S3_DIR"
-node --openssl-legacy-provider --import tsx scripts/fakes.ts >/dev/null & pids+=($!)
+"${FAKES[@]}" >/dev/null & pids+=($!)
 npm run --silent db:migrate >/dev/null && npm run --silent db:seed || exit 1
 if [ ! -f build/index.js ] || [ -n "$(find src static package-lock.json svelte.config.js vite.config.ts -newer build/index.js -print -quit)" ]; then
   npm run --silent build >.runtime/build-load.log 2>&1 || { tail -40 .runtime/build-load.log; exit 1; }

@@ -11,6 +11,7 @@ name="${1:?usage: sandbox.sh <name> [--fresh] <command...>}"; shift
 fresh=0; if [ "${1:-}" = "--fresh" ]; then fresh=1; shift; fi
 [[ "$name" =~ ^[a-z0-9]+$ ]] || { echo "sandbox: name must be lowercase letters/digits" >&2; exit 2; }
 PF_PROFILE=dev . scripts/profile.sh
+. scripts/processes.sh
 export DB_NAME="phosforge_$name"
 # Ports derived from the name so two sandboxes do not collide (app 5200–5999).
 h=$(printf '%s' "$name" | cksum | cut -d' ' -f1)
@@ -25,9 +26,9 @@ if [ -z "${PF_EXTERNAL_DB:-}" ]; then
   bash scripts/db.sh sql -e "CREATE DATABASE IF NOT EXISTS \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
 fi
 # Fakes on the development ports, shared by every sandbox (started once, left running).
-if ! (exec 3<>"/dev/tcp/127.0.0.1/$PF_S3_PORT") 2>/dev/null; then
-  nohup node --openssl-legacy-provider --import tsx scripts/fakes.ts >.runtime/fakes-sandbox.log 2>&1 &
-  for _ in $(seq 1 50); do (exec 3<>"/dev/tcp/127.0.0.1/$PF_S3_PORT") 2>/dev/null && break; sleep 0.2; done
+if ! fakes_up; then
+  nohup "${FAKES[@]}" >.runtime/fakes-sandbox.log 2>&1 &
+  wait_for_fakes
 fi
 npm run --silent db:migrate >/dev/null
 npm run --silent db:seed

@@ -6,24 +6,11 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 bash scripts/ensure-tools.sh
 PF_PROFILE=dev . scripts/profile.sh
-
-pids=()
-cleanup() {
-  trap - INT TERM EXIT
-  echo; echo "stopping…"
-  for p in "${pids[@]}"; do kill -TERM "$p" 2>/dev/null || true; done
-  # Give each process 10 s to finish its requests, then stop it hard.
-  for _ in $(seq 1 50); do
-    alive=0; for p in "${pids[@]}"; do kill -0 "$p" 2>/dev/null && alive=1; done
-    [ $alive = 0 ] && break; sleep 0.2
-  done
-  for p in "${pids[@]}"; do kill -KILL "$p" 2>/dev/null || true; wait "$p" 2>/dev/null || true; done
-  [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh stop || true
-}
-trap cleanup INT TERM EXIT
+. scripts/processes.sh
+trap 'echo; echo "stopping…"; stop_started' INT TERM EXIT
 
 [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh start
-node --openssl-legacy-provider --import tsx scripts/fakes.ts & pids+=($!)
+"${FAKES[@]}" & pids+=($!)
 npm run --silent db:migrate
 npm run --silent db:seed
 if [ ! -f build/index.js ] || [ -n "$(find src static package-lock.json svelte.config.js vite.config.ts tailwind.config.ts -newer build/index.js -print -quit)" ]; then

@@ -9,16 +9,10 @@ bash scripts/ensure-tools.sh --test || exit 1
 PF_PROFILE=test . scripts/profile.sh
 rm -rf "$PF_S3_DIR"
 
-pids=()
+. scripts/processes.sh
 declare -a summary=()
 failed=0
-cleanup() {
-  trap - INT TERM EXIT
-  for p in "${pids[@]}"; do kill -TERM "$p" 2>/dev/null || true; done
-  for p in "${pids[@]}"; do wait "$p" 2>/dev/null || true; done
-  [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh stop >/dev/null || true
-}
-trap cleanup INT TERM EXIT
+trap stop_started INT TERM EXIT
 
 step() { # step <name> <command...>
   local name="$1"; shift
@@ -27,12 +21,9 @@ step() { # step <name> <command...>
   if "$@"; then summary+=("PASS  $name  ($((SECONDS - t0)) s)"); else summary+=("FAIL  $name  ($((SECONDS - t0)) s)"); failed=1; fi
 }
 
-if [ -z "${PF_EXTERNAL_DB:-}" ]; then
-  bash scripts/db.sh start || exit 1
-  # A fresh test database for every run.
-  bash scripts/db.sh sql -e "DROP DATABASE IF EXISTS \`$DB_NAME\`; CREATE DATABASE \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
-fi
-node --openssl-legacy-provider --import tsx scripts/fakes.ts & pids+=($!)
+# A fresh test database for every run.
+fresh_database || exit 1
+"${FAKES[@]}" & pids+=($!)
 step "migrate + seed" bash -c "npm run --silent db:migrate && npm run --silent db:seed"
 step "svelte-check" npm run --silent check
 step "vitest (unit + integration)" npx vitest run

@@ -13,8 +13,8 @@ import {
 } from '../../src/lib/spectral/index';
 import { ANSI_2700K_3STEP } from '../../src/lib/spectral/data/chromaticity-ellipses';
 
-//: centre and corner points, CIE 1931 x,y. 2700–6500 K from a public transcription
-// of ANSI C78.377-2015 [S]; 2200/2500 K were computed from the 2017 edition's flexible-CCT rule (not printed values; from memory).
+// Published quadrangles: centre and corner points, CIE 1931 x,y. 2700–6500 K from a public
+// transcription of ANSI C78.377-2015 Table 1 [S]; 2200/2500 K were computed from the 2017 edition's flexible-CCT rule (not printed values; from memory).
 type P = [number, number];
 const published: { nominal: number; centre: P; corners: [P, P, P, P]; source: string }[] = [
   { nominal: 2200, centre: [0.5019, 0.4155], corners: [[0.5259, 0.4343], [0.5046, 0.4347], [0.48, 0.397], [0.4993, 0.3968]], source: 'computed from the flexible-CCT rule (from memory)' },

@@ -4,8 +4,8 @@ import { cctDuvToXy } from '../../../src/lib/spectral/index';
 import { metricsAt } from './support';
 
 // Binning of measured parts against ANSI C78.377.
-// Centre and corner points (CIE 1931 x,y): ANSI C78.377-2015, public transcription quoted in
-// (2700–6500 K; matches the 2008 edition and a US label-program table to ±0.0002).
+// Centre and corner points (CIE 1931 x,y): ANSI C78.377-2015 Table 1 as given in a public
+// transcription (2700–6500 K; matches the 2008 edition and a US label-program table to ±0.0002).
 // Target CCT ± tolerance and Duv target ± 0.006: ANSI C78.377-2017 Table 1 (transcription).
 type P = [number, number];
 const ansi2015: { nominal: number; centre: P; corners: [P, P, P, P] }[] = [
