@@ -5,6 +5,8 @@
 import { z } from 'zod';
 import { connectionFromEnv } from '../../../knexfile';
 
+const SOLVE_WORKERS_RULE = 'PF_SOLVE_WORKERS must be a whole number from 0 to 16';
+
 const envSchema = z.object({
   AUTH_SECRET: z.string().min(32, 'AUTH_SECRET must be at least 32 characters').optional(),
   ORIGIN: z.string().url().optional(),
@@ -21,6 +23,8 @@ const envSchema = z.object({
   S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
   S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('true'),
   DB_POOL_MAX: z.coerce.number().int().min(2, 'DB_POOL_MAX must be at least 2').max(500, 'DB_POOL_MAX must be at most 500').default(20),
+  PF_SOLVE_WORKERS: z.preprocess((v) => (v === '' ? undefined : v),
+    z.coerce.number(SOLVE_WORKERS_RULE).int(SOLVE_WORKERS_RULE).min(0, SOLVE_WORKERS_RULE).max(16, SOLVE_WORKERS_RULE).optional()),
   NODE_ENV: z.string().default('development')
 });
 
@@ -38,6 +42,8 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env) {
     production: env.NODE_ENV === 'production',
     db: connectionFromEnv(source),
     dbPoolMax: env.DB_POOL_MAX,
+    /** Solver worker threads per instance; null = one per core (at most 4). */
+    solveWorkers: env.PF_SOLVE_WORKERS ?? null,
     mail: {
       host: env.SMTP_HOST,
       port: env.SMTP_PORT,

@@ -2,13 +2,14 @@
  * A small pool of worker threads for the blend solver (one per core, at most 4; PF_SOLVE_WORKERS=N
  * sets the number) in the built app, which bundles the worker to build/solve-worker.js; in the dev
  * server and unit tests the solver runs in the calling thread (PF_SOLVE_WORKERS=0 forces that in
- * the built app too). Input errors
- * keep their type across the thread boundary, so the API still answers 422 for them.
+ * the built app too). Input errors keep their type across the thread boundary, so the API still
+ * answers 422 for them.
  */
 import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
 import { Worker } from 'node:worker_threads';
+import { config } from '../config';
 import { BlendInputError } from '../../blend/errors';
 import { solveBlend, type SolveProblem, type SolveResult } from '../../blend/index';
 import { SpectrumInputError } from '../../spectral/errors';
@@ -53,14 +54,9 @@ export function warmSolverPool(): void {
   if (usesWorkers()) slots ??= Array.from({ length: workerCount() }, startSlot);
 }
 
-/** PF_SOLVE_WORKERS (a whole number from 0 to 16) when set, else one per core (at most 4). */
-export function workerCount(setting = process.env.PF_SOLVE_WORKERS): number {
-  if (setting === undefined || setting.trim() === '') return Math.max(1, Math.min(4, availableParallelism()));
-  const n = Number(setting);
-  if (!Number.isInteger(n) || n < 0 || n > 16) {
-    throw new Error(`Phosforge configuration error: PF_SOLVE_WORKERS must be a whole number from 0 to 16 (got "${setting}")`);
-  }
-  return n;
+/** The configured number (PF_SOLVE_WORKERS, validated in config) when set, else one per core (at most 4). */
+export function workerCount(setting: number | null = config().solveWorkers): number {
+  return setting ?? Math.max(1, Math.min(4, availableParallelism()));
 }
 
 /** Workers only when this module runs from the built app (build/server/…); dev server and tests solve in-thread. */
