@@ -8,10 +8,11 @@ import { spawn } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { createWriteStream, mkdirSync, writeFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
-import { GetObjectCommand, ListObjectsV2Command } from '@aws-sdk/client-s3';
+import { GetObjectCommand } from '@aws-sdk/client-s3';
 import knexFactory from 'knex';
 import { connectionFromEnv } from '../../knexfile';
 import { bucketFromEnv, s3FromEnv } from './s3';
+import { listObjects } from '../../src/lib/server/storage/list';
 
 const stamp = new Date().toISOString().replace(/[:.]/g, '-');
 const dir = resolve(process.argv[2] ?? join('backups', stamp));
@@ -52,21 +53,15 @@ async function copyObjects(): Promise<{ key: string; bytes: number; sha256: stri
   const s3 = s3FromEnv();
   const Bucket = bucketFromEnv();
   const out: { key: string; bytes: number; sha256: string }[] = [];
-  let token: string | undefined;
-  do {
-    const page = await s3.send(new ListObjectsV2Command({ Bucket, ContinuationToken: token }));
-    for (const o of page.Contents ?? []) {
-      const key = o.Key!;
-      const res = await s3.send(new GetObjectCommand({ Bucket, Key: key }));
-      const body = Buffer.from(await res.Body!.transformToByteArray());
-      const file = join(dir, 'objects', key);
-      if (!file.startsWith(join(dir, 'objects'))) throw new Error(`refusing object key outside the backup folder: ${key}`);
-      mkdirSync(dirname(file), { recursive: true });
-      writeFileSync(file, body);
-      out.push({ key, bytes: body.length, sha256: createHash('sha256').update(body).digest('hex') });
-    }
-    token = page.IsTruncated ? page.NextContinuationToken : undefined;
-  } while (token);
+  for (const { key } of await listObjects(s3, Bucket)) {
+    const res = await s3.send(new GetObjectCommand({ Bucket, Key: key }));
+    const body = Buffer.from(await res.Body!.transformToByteArray());
+    const file = join(dir, 'objects', key);
+    if (!file.startsWith(join(dir, 'objects'))) throw new Error(`refusing object key outside the backup folder: ${key}`);
+    mkdirSync(dirname(file), { recursive: true });
+    writeFileSync(file, body);
+    out.push({ key, bytes: body.length, sha256: createHash('sha256').update(body).digest('hex') });
+  }
   return out;
 }
 

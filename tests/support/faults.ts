@@ -4,10 +4,11 @@
  * standard way for a trigger to refuse a row), table snapshots compare "before" and "after"
  * exactly, and the app's S3 client is watched so every object it put can be looked up afterwards.
  */
-import { HeadObjectCommand, ListObjectsV2Command, PutObjectCommand } from '@aws-sdk/client-s3';
+import { HeadObjectCommand, PutObjectCommand } from '@aws-sdk/client-s3';
 import { expect, vi } from 'vitest';
 import { db } from '../../src/lib/server/db/index';
 import { bucket, s3 } from '../../src/lib/server/storage/client';
+import { listObjects } from '../../src/lib/server/storage/list';
 
 export const INJECTED = 'injected fault (test)';
 const TRIGGER_PREFIX = 'test_fault_';
@@ -103,14 +104,7 @@ export async function objectExists(key: string): Promise<boolean> {
 
 /** Keys under `prefix` whose name contains `text` (the bucket is shared by every sandbox, so tests look for their own names). */
 export async function keysContaining(prefix: string, text: string): Promise<string[]> {
-  const found: string[] = [];
-  let token: string | undefined;
-  do {
-    const page = await s3().send(new ListObjectsV2Command({ Bucket: bucket(), Prefix: prefix, ContinuationToken: token }));
-    for (const o of page.Contents ?? []) if (o.Key?.includes(text)) found.push(o.Key);
-    token = page.IsTruncated ? page.NextContinuationToken : undefined;
-  } while (token);
-  return found;
+  return (await listObjects(s3(), bucket(), prefix)).map((o) => o.key).filter((k) => k.includes(text));
 }
 
 /** Waits until none of `keys` is in object storage (clean-up runs once the rollback is done); returns the wait in ms. */

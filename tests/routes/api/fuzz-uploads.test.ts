@@ -169,7 +169,7 @@ describe('upload routes under hostile input: no 500, no partial save, no stored 
     batchId = (await completedBatch()).batchId;
   });
   afterAll(async () => {
-    // The accepted uploads' objects go too (the development bucket is shared and lists poorly past 1,000 keys).
+    // The accepted uploads' objects go too: the development bucket is shared by every sandbox.
     for (const m of Object.values(material)) if (m.id) await editing.remove(formulator, m.id);
     if (batchId) await removeMeasurements(batchId);
     await closeDb();

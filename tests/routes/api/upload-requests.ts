@@ -162,14 +162,10 @@ export async function checksums(tables: readonly string[]): Promise<string> {
   return rows.map((r) => `${r.Table.split('.').pop()}=${r.Checksum}`).join(' ');
 }
 
-/**
- * Keys of the objects whose name holds `mark`, put under `purpose` in the given months. Listed per
- * first hex digit of the object id (keys are purpose/YYYY-MM/uuid-name): the local S3 fake cannot
- * continue a listing past 1,000 keys, and the development bucket is shared by every sandbox.
- */
+/** Keys of the objects whose name holds `mark`, put under `purpose` in the given months (keys are purpose/YYYY-MM/uuid-name). */
 export async function markedObjects(purpose: string, months: string[], mark: string): Promise<string[]> {
   const keys: string[] = [];
-  for (const month of new Set(months)) for (const hex of '0123456789abcdef') keys.push(...(await keysContaining(`${purpose}/${month}/${hex}`, mark)));
+  for (const month of new Set(months)) keys.push(...(await keysContaining(`${purpose}/${month}/`, mark)));
   return keys;
 }
 

@@ -4,8 +4,9 @@
  * object is a lost file. The sweep lists both: orphans older than a safety margin (so uploads in
  * flight are never touched) may be removed; missing objects are reported, never "fixed".
  */
-import { ListObjectsV2Command, type S3Client } from '@aws-sdk/client-s3';
+import type { S3Client } from '@aws-sdk/client-s3';
 import type { Knex } from 'knex';
+import { listObjects } from './list';
 
 export interface SweepOptions {
   /** Only objects last written longer ago than this count as orphans (default 24 h). */
@@ -28,21 +29,10 @@ export interface SweepReport {
 
 export const DEFAULT_SWEEP_MARGIN_MS = 24 * 3_600_000;
 
-async function listAll(s3: S3Client, bucket: string): Promise<{ key: string; bytes: number; lastModified: Date }[]> {
-  const out: { key: string; bytes: number; lastModified: Date }[] = [];
-  let token: string | undefined;
-  do {
-    const page = await s3.send(new ListObjectsV2Command({ Bucket: bucket, ContinuationToken: token }));
-    for (const o of page.Contents ?? []) out.push({ key: o.Key!, bytes: o.Size ?? 0, lastModified: o.LastModified ?? new Date(0) });
-    token = page.IsTruncated ? page.NextContinuationToken : undefined;
-  } while (token);
-  return out;
-}
-
 export async function sweepStorage(knex: Knex, s3: S3Client, bucket: string, options: SweepOptions): Promise<SweepReport> {
   const margin = options.olderThanMs ?? DEFAULT_SWEEP_MARGIN_MS;
   // Objects first, rows second: a row committed between the two reads still protects its object.
-  const objects = await listAll(s3, bucket);
+  const objects = await listObjects(s3, bucket);
   const rows: { id: number; storage_key: string; purpose: string }[] = await knex('stored_files').select('id', 'storage_key', 'purpose');
   const referenced = new Set(rows.map((r) => r.storage_key));
   const present = new Set(objects.map((o) => o.key));
