@@ -5,6 +5,7 @@
  * (default 24) are removed only with --remove. Exits 1 when a row's object is missing.
  */
 import { DeleteObjectCommand } from '@aws-sdk/client-s3';
+import { parseArgs } from 'node:util';
 import knexFactory from 'knex';
 import { z } from 'zod';
 import { connectionFromEnv } from '../../knexfile';
@@ -13,27 +14,18 @@ import { sweepStorage } from '../../src/lib/server/storage/sweep';
 
 const argsSchema = z.object({
   remove: z.boolean(),
-  olderThanHours: z.number('--older-than-hours needs a number of hours').min(0, '--older-than-hours must be 0 or more').max(24 * 365)
+  olderThanHours: z.string().regex(/^\d+(\.\d+)?$/, '--older-than-hours needs a number of hours (0 or more)').transform(Number)
+    .pipe(z.number().max(24 * 365, '--older-than-hours: at most a year'))
 });
 
-function parseArgs(argv: string[]) {
-  let remove = false;
-  let olderThanHours: unknown = 24;
-  for (let i = 0; i < argv.length; i++) {
-    if (argv[i] === '--remove') remove = true;
-    else if (argv[i] === '--older-than-hours') olderThanHours = Number(argv[++i]);
-    else throw new Error(`storage:sweep: unknown argument "${argv[i]}" (use --remove, --older-than-hours N)`);
-  }
-  const parsed = argsSchema.safeParse({ remove, olderThanHours });
-  if (!parsed.success) throw new Error(`storage:sweep: ${parsed.error.issues.map((i) => i.message).join('; ')}`);
-  return parsed.data;
-}
-
-let args: ReturnType<typeof parseArgs>;
+let args: z.infer<typeof argsSchema>;
 try {
-  args = parseArgs(process.argv.slice(2));
+  const { values } = parseArgs({ options: { remove: { type: 'boolean', default: false }, 'older-than-hours': { type: 'string', default: '24' } } });
+  const parsed = argsSchema.safeParse({ remove: values.remove, olderThanHours: values['older-than-hours'] });
+  if (!parsed.success) throw new Error(parsed.error.issues.map((i) => i.message).join('; '));
+  args = parsed.data;
 } catch (err) {
-  console.error((err as Error).message);
+  console.error(`storage:sweep: ${(err as Error).message} (use --remove, --older-than-hours N)`);
   process.exit(2);
 }
 const knex = knexFactory({ client: 'mysql2', connection: connectionFromEnv() });
