@@ -1,6 +1,6 @@
-import { test, expect, type APIRequestContext, type Page } from '@playwright/test';
+import { test, expect, type Page } from '@playwright/test';
 import { BASE, DEMO, DEMO_PASSWORD, signInThroughForm, signedInContext, testDb } from './support/accounts';
-import { completedBatch } from './support/batches';
+import { completedBatch, json } from './support/batches';
 import { waitForMail } from '../support/mail';
 import { DISPOSITION_MEANINGS } from '../../src/lib/schemas/quality';
 
@@ -16,9 +16,6 @@ const SQL = `'; DROP TABLE materials; -- " OR 1=1 -- \\ %_`;
 const hostile = (field: string) => `${field} ${MARKUP} ${SQL} ${RUN}`;
 /** For fields limited to 80 characters (lot numbers). */
 const shortHostile = (field: string) => `${field}<b>x</b>'"; --%_${RUN}`;
-
-const json = (ctx: APIRequestContext, url: string, data: object, method: 'post' | 'put' = 'post') =>
-  ctx[method](url, { data, headers: { 'content-type': 'application/json', Origin: BASE } });
 
 /** The page shows each text as characters: no element made from it, no script run, no dialog. */
 async function expectShownLiterally(page: Page, url: string, texts: string[]): Promise<void> {
