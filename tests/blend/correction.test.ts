@@ -5,8 +5,7 @@ import { correctBatch } from '../../src/lib/blend/correctBatch';
 import { tristimulus } from '../../src/lib/blend/basis';
 import { beerLambertPhotonBudget } from '../../src/lib/blend/loading/beerLambertPhotonBudget';
 import { concentrationsForFractions } from '../../src/lib/blend/loading/concentrationsForFractions';
-import { chromaticityError } from '../../src/lib/blend/solver/chromaticityError';
-import { resolveTarget } from '../../src/lib/blend/solver/resolveTarget';
+import { colourDistance, resolveTarget } from '../../src/lib/aim/index';
 import { solveBlend } from '../../src/lib/blend/solver/solveBlend';
 import { xyOf } from '../../src/lib/blend/superposition';
 import { THREE } from './fixtures';
@@ -22,7 +21,7 @@ const recipeC = concentrationsForFractions(basis.loading!, solved.candidates[0].
 /** The "real line": the red absorbs 20 % more and the green 10 % less than the model thinks. */
 const TRUE_ALPHA = basis.loading!.absorptionPerWtPctMm.map((a, i) => a * [0.9, 1, 1.2][i]);
 const build = (c: number[]) => xyOf(tristimulus(beerLambertPhotonBudget({ ...basis.loading!, absorptionPerWtPctMm: TRUE_ALPHA }, c, 0.3).spd));
-const err = ([x, y]: [number, number]) => chromaticityError(x, y, target.x, target.y).deltaUvPrime;
+const err = ([x, y]: [number, number]) => colourDistance(x, y, target).deltaUvPrime;
 
 describe('correction of a biased batch', () => {
   it('loading recipe: the corrected recipe, built on the biased line, lands nearer the target', () => {

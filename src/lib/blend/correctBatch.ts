@@ -9,7 +9,7 @@ import { prepareBasis } from './basis';
 import { type CorrectionResult, correctRecipe } from './correction';
 import type { CorrectionRequest } from './schemas';
 import { type Sensitivity, loadingSensitivities, opticalSensitivities } from './sensitivities';
-import { resolveTarget } from './solver/resolveTarget';
+import { resolveTarget } from '../aim/target';
 
 export interface CorrectionResponse extends CorrectionResult {
   target: { x: number; y: number; cct: number; duv: number; label: string };

@@ -20,9 +20,9 @@ import { uvToCct } from '../spectral/cct/index';
 import { xyToUv } from '../spectral/colorimetry/chromaticity';
 import type { Basis } from './basis';
 import { type ColourModel, RELATIVE_STEP, loadingColourModel, opticalColourModel } from './sensitivities';
-import { chromaticityError } from './solver/chromaticityError';
+import { colourDistance, type ColourCentre, type ColourDistance } from '../aim/distance';
 import { normaliseRatios } from './superposition';
-import type { ChromaticityError, LoadingParams } from './types';
+import type { LoadingParams } from './types';
 
 export type Recipe =
   | { kind: 'optical'; fractions: number[] }
@@ -35,8 +35,8 @@ export interface CorrectionResult {
   bias: { dx: number; dy: number };
   measuredMean: { x: number; y: number };
   predicted: { x: number; y: number; cct: number; duv: number };
-  errorBefore: ChromaticityError;
-  errorAfter: ChromaticityError;
+  errorBefore: ColourDistance;
+  errorAfter: ColourDistance;
   iterations: number;
   converged: boolean;
 }
@@ -61,7 +61,7 @@ export function correctRecipe(
   basis: Basis,
   recipe: Recipe,
   measuredPoints: { x: number; y: number }[],
-  target: { x: number; y: number },
+  target: ColourCentre,
   options: { stepFraction?: number; maxIterations?: number } = {}
 ): CorrectionResult {
   if (measuredPoints.length === 0) throw new BlendInputError('correction needs at least one measured point');
@@ -101,8 +101,8 @@ export function correctRecipe(
     bias,
     measuredMean: { x: mx, y: my },
     predicted: { ...predicted, cct, duv },
-    errorBefore: chromaticityError(mx, my, target.x, target.y),
-    errorAfter: chromaticityError(predicted.x, predicted.y, target.x, target.y),
+    errorBefore: colourDistance(mx, my, target),
+    errorAfter: colourDistance(predicted.x, predicted.y, target),
     iterations: it,
     converged
   };

@@ -8,11 +8,6 @@ export type * from './types';
 export { mix, type MixRatios, type MixResult } from './mix';
 export { solveBlend, type SolveProblem, type SolveResult, type SolveStatus } from './solver/solveBlend';
 export type { SolveCandidate, CandidateComponent } from './solver/buildCandidate';
-export type { Target, ResolvedTarget } from './solver/resolveTarget';
-export { resolveTarget } from './solver/resolveTarget';
-export type { Tolerance } from './solver/chromaticityError';
-export { chromaticityError } from './solver/chromaticityError';
-export type { Floors, Objective } from './solver/floors';
 export { correctRecipe, type Recipe, type CorrectionResult } from './correction';
 export { correctBatch, type CorrectionResponse } from './correctBatch';
 export { opticalSensitivities, loadingSensitivities, type Sensitivity } from './sensitivities';
@@ -30,9 +25,6 @@ export {
   pumpSchema,
   phosphorSchema,
   loadingParamsSchema,
-  targetSchema,
-  toleranceSchema,
-  floorsSchema,
   recipeSchema,
   type MixRequest,
   type SolveProblemInput,

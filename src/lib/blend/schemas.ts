@@ -5,6 +5,7 @@
  * (increasing wavelengths, 300–900 nm, power) and throws SpectrumInputError (→ 422).
  */
 import { z } from 'zod';
+import { floorsSchema, targetSchema, toleranceSchema } from '../aim/schema';
 
 export const spdSchema = z
   .object({
@@ -68,29 +69,6 @@ export const recipeSchema = z.discriminatedUnion('kind', [
 ]);
 
 export const mixRequestSchema = z.object({ components: componentsFor(1), ratios: recipeSchema });
-
-export const targetSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('cctDuv'), cct: z.number().min(1000, 'CCT must be 1000–20000 K').max(20000, 'CCT must be 1000–20000 K'), duv: z.number().min(-0.05, 'Duv must be within ±0.05').max(0.05, 'Duv must be within ±0.05') }),
-  z.object({ kind: z.literal('xy'), x: z.number().gt(0).lt(1), y: z.number().gt(0).lt(1) }),
-  z.object({ kind: z.literal('ansiBin'), nominalCct: z.number().int().min(2200, 'ANSI nominal CCT 2200–6500 K').max(6500, 'ANSI nominal CCT 2200–6500 K') })
-]);
-
-export const toleranceSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('deltaUvPrime'), value: z.number().gt(0).max(0.05) }),
-  z.object({ kind: z.literal('deltaUv'), value: z.number().gt(0).max(0.05) }),
-  z.object({ kind: z.literal('sdcm'), steps: z.number().gt(0).max(20) })
-]);
-
-export const floorsSchema = z
-  .object({
-    raMin: z.number().max(100).optional(),
-    r9Min: z.number().max(100).optional(),
-    rfMin: z.number().max(100).optional(),
-    rgMin: z.number().min(50).max(150).optional(),
-    rgMax: z.number().min(50).max(150).optional(),
-    lerMin: z.number().min(0).max(683).optional()
-  })
-  .refine((f) => f.rgMin === undefined || f.rgMax === undefined || f.rgMin <= f.rgMax, 'rgMin must not exceed rgMax');
 
 export const solveProblemSchema = z.object({
   components: componentsFor(2),

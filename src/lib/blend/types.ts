@@ -79,13 +79,3 @@ export interface LoadingParams {
    */
   pumpIrradianceWPerMm2?: number;
 }
-
-/** A colour point with everything needed to compare it with a target. */
-export interface ChromaticityError {
-  /** Distance in CIE 1976 u'v'. */
-  deltaUvPrime: number;
-  /** Distance in CIE 1960 uv (the Duv space). */
-  deltaUv: number;
-  /** MacAdam-type steps (core's IEC 60081 ellipses, interpolated at the target CCT). */
-  sdcm: number;
-}

@@ -3,10 +3,7 @@
  * tolerance in SDCM steps and floors (Ra, R9, Rf, LER), as edited in the form, turned into
  * the blend model's Target / Tolerance / Floors through the same zod schemas the API uses.
  */
-import { floorsSchema, targetSchema } from '../blend/schemas';
-import { resolveTarget, type ResolvedTarget, type Target } from '../blend/solver/resolveTarget';
-import type { Tolerance } from '../blend/solver/chromaticityError';
-import type { Floors, Objective } from '../blend/solver/floors';
+import { floorsSchema, resolveTarget, targetSchema, type Floors, type Objective, type ResolvedTarget, type Target, type Tolerance } from '../aim/index';
 import { ANSI_C78377_2017_TABLE1 } from '../spectral/data/ansi-c78377-2017';
 
 export type TargetKind = Target['kind'];

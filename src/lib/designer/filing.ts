@@ -4,7 +4,7 @@
  * The server adds the material codes and the silicone system from its own tables.
  */
 import { z } from 'zod';
-import { floorsSchema, targetSchema, toleranceSchema } from '../blend/schemas';
+import { floorsSchema, targetSchema, toleranceSchema } from '../aim/index';
 import type { MaterialRef, RevisionContent, SiliconeSpec } from '../formulations/content';
 import { roundedShares } from './shares';
 

@@ -4,9 +4,7 @@
  * §8.1) and which ANSI C78.377-2017 Table 1 bin holds it.
  * Ra and R9 are not meaningful when DC ≥ 5.4e-3 (CIE 13.3-1995 §5.3): such floors fail.
  */
-import { chromaticityError, withinTolerance, type Tolerance } from '../blend/solver/chromaticityError';
-import { FLOOR_RULES, type Floors } from '../blend/solver/floors';
-import type { ResolvedTarget } from '../blend/solver/resolveTarget';
+import { colourDistance, FLOOR_RULES, withinTolerance, type Floors, type ResolvedTarget, type Tolerance } from '../aim/index';
 import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
 import type { SpectrumEvaluation } from '../spectral/types';
 
@@ -39,7 +37,8 @@ export function floorChecks(floors: Floors, e: SpectrumEvaluation): FloorCheck[]
 }
 
 export interface TargetStanding {
-  sdcm: number;
+  /** MacAdam-type steps from the target. */
+  steps: number;
   deltaUvPrime: number;
   withinTolerance: boolean;
   /** Nominal CCT of the Table 1 bin holding the point, or null. */
@@ -49,9 +48,9 @@ export interface TargetStanding {
 }
 
 export function targetStanding(e: SpectrumEvaluation, target: ResolvedTarget, tolerance: Tolerance): TargetStanding {
-  const err = chromaticityError(e.x, e.y, target.x, target.y);
+  const err = colourDistance(e.x, e.y, target);
   return {
-    sdcm: err.sdcm,
+    steps: err.steps,
     deltaUvPrime: err.deltaUvPrime,
     withinTolerance: withinTolerance(err, tolerance),
     ansiBin: findAnsiBin(e.x, e.y)?.nominalCct ?? null,

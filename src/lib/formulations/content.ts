@@ -5,7 +5,8 @@
  * record stays readable after a material is renamed or archived.
  */
 import { z } from 'zod';
-import { floorsSchema, loadingParamsSchema, targetSchema, toleranceSchema } from '../blend/schemas';
+import { floorsSchema, targetSchema, toleranceSchema } from '../aim/schema';
+import { loadingParamsSchema } from '../blend/schemas';
 
 export const materialRefSchema = z.object({
   materialId: z.number().int().positive(),

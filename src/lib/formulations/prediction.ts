@@ -6,9 +6,7 @@
  */
 // Narrow imports: the blend index also loads the solver, whose module set-up is slow on a cold start.
 import { mix } from '../blend/mix';
-import { resolveTarget } from '../blend/solver/resolveTarget';
-import { chromaticityError, withinTolerance } from '../blend/solver/chromaticityError';
-import { violatedFloors } from '../blend/solver/floors';
+import { colourDistance, resolveTarget, violatedFloors, withinTolerance } from '../aim/index';
 import type { BlendComponents } from '../blend/types';
 import { findAnsiBin } from '../spectral/ansi/c78377';
 import type { RevisionContent } from './content';
@@ -33,6 +31,7 @@ export interface RevisionPrediction {
   ansiBin: number | null;
   target: { x: number; y: number; cct: number; duv: number; label: string };
   deltaUvPrime: number;
+  /** MacAdam-type steps from the target; kept under this name in the stored prediction JSON of every revision. */
   sdcm: number;
   withinTolerance: boolean;
   floorsMissed: string[];
@@ -60,7 +59,7 @@ export function predictRevision(content: RevisionContent, components: BlendCompo
   const result = mix(components, { kind: 'optical', fractions: opticalFractions(content) });
   const e = result.evaluation;
   const target = resolveTarget(content.target);
-  const err = chromaticityError(e.x, e.y, target.x, target.y);
+  const err = colourDistance(e.x, e.y, target);
   const ra = e.cri.valid ? e.cri.ra : null;
   const r9 = e.cri.valid ? e.cri.ri[8] : null;
   const rf = finite(e.tm30.rf);
@@ -83,7 +82,7 @@ export function predictRevision(content: RevisionContent, components: BlendCompo
     ansiBin: findAnsiBin(e.x, e.y)?.nominalCct ?? null,
     target: { x: target.x, y: target.y, cct: target.cct, duv: target.duv, label: target.label },
     deltaUvPrime: err.deltaUvPrime,
-    sdcm: err.sdcm,
+    sdcm: err.steps,
     withinTolerance: withinTolerance(err, content.tolerance),
     floorsMissed: missedFloors(content, { ra, r9, rf, rg, ler: e.ler }),
     spd: {

@@ -7,13 +7,9 @@
  * A floor on a metric the core could not give (CRI not meaningful far from the locus, TM-30 not
  * finite) fails the part: an unknown value is not evidence of compliance [common practice].
  */
-import { FLOOR_RULES } from '../blend/solver/floors';
-import type { ResolvedTarget } from '../blend/solver/resolveTarget';
+import { colourDistance, FLOOR_RULES, withinTolerance, type ColourDistance, type ResolvedTarget, type Tolerance } from '../aim/index';
 import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
-import { colourOffset } from './colourSteps';
-import type { Acceptance, ColourOffset, PartFailure, PartMetrics, PartVerdict, Tolerance } from './types';
-
-const TOLERANCE_SLACK = 1e-9;
+import type { Acceptance, PartFailure, PartMetrics, PartVerdict } from './types';
 
 export function describeTolerance(t: Tolerance): string {
   if (t.kind === 'sdcm') return `${t.steps}-step ellipse`;
@@ -22,10 +18,11 @@ export function describeTolerance(t: Tolerance): string {
 }
 
 /** The colour failure message, or null when the offset is within tolerance. */
-export function colourFailure(o: ColourOffset, t: Tolerance): string | null {
-  if (t.kind === 'sdcm') return o.steps <= t.steps + TOLERANCE_SLACK ? null : `${o.steps.toFixed(1)} steps from target > ${t.steps}`;
-  if (t.kind === 'deltaUvPrime') return o.deltaUvPrime <= t.value + TOLERANCE_SLACK ? null : `Δu′v′ ${o.deltaUvPrime.toFixed(4)} > ${t.value}`;
-  return o.deltaUv <= t.value + TOLERANCE_SLACK ? null : `Δuv ${o.deltaUv.toFixed(4)} > ${t.value}`;
+export function colourFailure(o: ColourDistance, t: Tolerance): string | null {
+  if (withinTolerance(o, t)) return null;
+  if (t.kind === 'sdcm') return `${o.steps.toFixed(1)} steps from target > ${t.steps}`;
+  if (t.kind === 'deltaUvPrime') return `Δu′v′ ${o.deltaUvPrime.toFixed(4)} > ${t.value}`;
+  return `Δuv ${o.deltaUv.toFixed(4)} > ${t.value}`;
 }
 
 function metricValue(m: PartMetrics, metric: 'ra' | 'r9' | 'rf' | 'rg' | 'ler'): number | null {
@@ -51,7 +48,7 @@ export function floorFailures(m: PartMetrics, floors: Acceptance['floors']): Par
 }
 
 export function judgePart(m: PartMetrics, target: ResolvedTarget, acceptance: Acceptance): PartVerdict {
-  const offset = colourOffset(m.x, m.y, target);
+  const offset = colourDistance(m.x, m.y, target);
   const bin = findAnsiBin(m.x, m.y)?.nominalCct ?? null;
   const quad = target.ansiBin;
   const inTargetBin = quad ? isInQuadrangle(m.x, m.y, quad) : null;

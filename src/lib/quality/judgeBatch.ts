@@ -3,11 +3,12 @@
  * `defaultAcceptance` takes the revision's own tolerance and floors and requires the ANSI bin when
  * the revision targets a bin; quality may instead choose a step ellipse for the batch.
  */
+import type { ResolvedTarget, Target, Tolerance } from '../aim/index';
 import type { RevisionContent } from '../formulations/content';
 import { describeTolerance, judgePart } from './acceptance';
 import { summariseBatch, type BatchSummary } from './summarise';
-import { qualityTarget, type ResolvedTarget, type Target } from './target';
-import type { Acceptance, JudgedPart, MeasuredPart, Tolerance } from './types';
+import { qualityTarget } from './target';
+import type { Acceptance, JudgedPart, MeasuredPart } from './types';
 
 export interface JudgedBatch {
   target: ResolvedTarget;

@@ -6,12 +6,11 @@
  *  - the Planckian locus between two CCTs (exact Planck × CIE 1931 2°, via the core);
  *  - an ANSI C78.377 quadrangle (straight edges in x,y between the core's corners).
  */
+import { stepEllipseAt, type ColourCentre, type Tolerance } from '../aim/index';
 import type { AnsiQuadrangle } from '../spectral/ansi/c78377';
 import type { ChromaticityEllipse } from '../spectral/ansi/macadam';
 import { cctDuvToXy } from '../spectral/cct/inverse';
 import { uvPrimeToXy, uvToXy, xyToUv, xyToUvPrime, type Pair } from '../spectral/colorimetry/chromaticity';
-import { stepEllipseAt, type ColourCentre } from './colourSteps';
-import type { Tolerance } from './types';
 
 /** Ellipse of `steps` steps (the ellipse's own axes are at `ellipse.steps ?? 1` steps). */
 export function ellipseOutline(ellipse: ChromaticityEllipse, steps: number, points = 96): Pair[] {

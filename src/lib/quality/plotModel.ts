@@ -6,10 +6,10 @@
  * (measured mean, predicted point, corrected prediction). The first view fits the target, the
  * tolerance, the parts and the markers; zooming out shows the whole bin and its neighbours.
  */
+import { stepEllipseAt } from '../aim/index';
 import { ansiNominalQuadrangles } from '../spectral/ansi/c78377';
 import type { Pair } from '../spectral/colorimetry/chromaticity';
 import { describeTolerance } from './acceptance';
-import { stepEllipseAt } from './colourSteps';
 import type { JudgedBatch } from './judgeBatch';
 import { ellipseOutline, planckianOutline, quadrangleOutline, toleranceOutline } from './outlines';
 

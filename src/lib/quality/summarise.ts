@@ -4,12 +4,11 @@
  * offset from the target; distribution over ANSI C78.377 Table 1 bins; failure counts by reason;
  * histogram data of CCT and Ra.
  */
-import type { ResolvedTarget } from '../blend/solver/resolveTarget';
-import { colourOffset } from './colourSteps';
+import { colourDistance, type ColourDistance, type ResolvedTarget } from '../aim/index';
 import { histogram } from './histogram';
 import { colourPoint, type ColourPoint } from './prediction';
 import { describe } from './statistics';
-import { SUMMARY_QUANTITIES, type ColourOffset, type FailureCode, type HistogramBin, type JudgedPart, type Stat, type SummaryQuantity } from './types';
+import { SUMMARY_QUANTITIES, type FailureCode, type HistogramBin, type JudgedPart, type Stat, type SummaryQuantity } from './types';
 
 export interface BatchSummary {
   parts: number;
@@ -20,7 +19,7 @@ export interface BatchSummary {
   /** Mean x,y of the parts and the CCT/Duv of that point. */
   meanPoint: ColourPoint | null;
   /** Mean point − target. */
-  meanOffset: ColourOffset | null;
+  meanOffset: ColourDistance | null;
   /** Parts per ANSI Table 1 bin (null = in no bin), in rising CCT, no-bin last. */
   bins: { nominalCct: number | null; count: number }[];
   /** Parts inside the target quadrangle; null when the target has no bin. */
@@ -54,7 +53,7 @@ export function summariseBatch(parts: readonly JudgedPart[], target: ResolvedTar
     yieldFraction: parts.length ? passed / parts.length : null,
     stats,
     meanPoint,
-    meanOffset: meanPoint ? colourOffset(meanPoint.x, meanPoint.y, target) : null,
+    meanOffset: meanPoint ? colourDistance(meanPoint.x, meanPoint.y, target) : null,
     bins,
     inTargetBin: target.ansiBin ? inTarget : null,
     failures: [...failureCounts.entries()].map(([code, count]) => ({ code, count })).sort((a, b) => b.count - a.count),

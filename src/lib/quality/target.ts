@@ -4,10 +4,8 @@
  * flexible-CCT rule), plus the ANSI quadrangle it belongs to. A CCT/Duv or x,y target that lies
  * inside a Table 1 quadrangle takes that quadrangle as its bin; otherwise it has none.
  */
-import { resolveTarget, type ResolvedTarget, type Target } from '../blend/solver/resolveTarget';
+import { resolveTarget, type ResolvedTarget, type Target } from '../aim/index';
 import { ansiNominalQuadrangles, isInQuadrangle } from '../spectral/ansi/c78377';
-
-export type { Target, ResolvedTarget };
 
 export function qualityTarget(target: Target): ResolvedTarget {
   const t = resolveTarget(target);

@@ -3,10 +3,7 @@
  * part, how it is judged against a formulation revision, and what a batch summary holds.
  * Units: x, y CIE 1931 2°; u′, v′ CIE 1976 UCS; CCT in K; Duv in CIE 1960 uv; LER in lm/W.
  */
-import type { Tolerance } from '../blend/solver/chromaticityError';
-import type { Floors } from '../blend/solver/floors';
-
-export type { Tolerance, Floors };
+import type { ColourDistance, Floors, Tolerance } from '../aim/index';
 
 /** Everything the spectral core says about one measured part. */
 export interface PartMetrics {
@@ -46,16 +43,6 @@ export interface Acceptance {
   requireTargetBin: boolean;
 }
 
-/** Where a part sits relative to the target. */
-export interface ColourOffset {
-  dx: number;
-  dy: number;
-  deltaUvPrime: number;
-  deltaUv: number;
-  /** MacAdam-type steps from the target (1-step ellipse at the target CCT). */
-  steps: number;
-}
-
 /** What a failure is about: the colour tolerance, the target bin, or one floor (blend floor keys). */
 export type FailureCode = 'colour' | 'bin' | keyof Floors;
 
@@ -72,7 +59,8 @@ export interface PartVerdict {
   ansiBin: number | null;
   /** Inside the target's own quadrangle (Table 1 or flexible); null when the target has no bin. */
   inTargetBin: boolean | null;
-  offset: ColourOffset;
+  /** Where the part sits relative to the target (MacAdam-type steps at the target CCT). */
+  offset: ColourDistance;
 }
 
 export interface JudgedPart extends MeasuredPart {

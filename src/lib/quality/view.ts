@@ -2,7 +2,7 @@
  * What the measurements page and API show for one batch (plain JSON; built on the server from the
  * database and the quality computations, read by the Svelte components).
  */
-import type { Floors } from '../blend/solver/floors';
+import type { Floors } from '../aim/index';
 import type { ChromaticityPlotModel } from './plotModel';
 import type { ColourPoint, PredictionCheck } from './prediction';
 import type { BatchSummary } from './summarise';

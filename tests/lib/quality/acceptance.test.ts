@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { stepEllipseAt } from '../../../src/lib/aim/index';
 import { batchAcceptance, describeAcceptance, describeTolerance, judgePart, qualityTarget, type Acceptance } from '../../../src/lib/quality/index';
 import { metricsAt } from './support';
 
@@ -66,5 +67,27 @@ describe('acceptance in force for a batch', () => {
     const a = batchAcceptance(content, { mode: 'steps', steps: 3, requireTargetBin: false });
     expect(a).toEqual({ tolerance: { kind: 'sdcm', steps: 3 }, floors: { raMin: 90 }, requireTargetBin: false });
     expect(describeAcceptance(a)).toBe('3-step ellipse');
+  });
+});
+
+describe('step tolerance in pass/fail', () => {
+  // Target: ANSI 2700 K bin centre (Table 1: 2725 K, Duv 0). A point 2 steps and one 4 steps out along
+  // the default ellipse's major axis, judged against a 3-step tolerance.
+  const t2700 = qualityTarget({ kind: 'ansiBin', nominalCct: 2700 });
+  const e = stepEllipseAt(t2700);
+  const along = (n: number) => {
+    const th = (e.thetaDeg * Math.PI) / 180;
+    return metricsAt(t2700.x + n * e.a * Math.cos(th), t2700.y + n * e.a * Math.sin(th));
+  };
+  const acceptance = { tolerance: { kind: 'sdcm' as const, steps: 3 }, floors: {}, requireTargetBin: true };
+  it('2 steps passes a 3-step tolerance', () => {
+    const v = judgePart(along(2), t2700, acceptance);
+    expect(v.offset.steps).toBeCloseTo(2, 6);
+    expect(v.pass).toBe(true);
+  });
+  it('4 steps fails it, saying by how much', () => {
+    const v = judgePart(along(4), t2700, acceptance);
+    expect(v.pass).toBe(false);
+    expect(v.failures).toEqual([{ code: 'colour', message: '4.0 steps from target > 3' }]);
   });
 });

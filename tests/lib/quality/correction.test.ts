@@ -5,7 +5,7 @@ import { prepareBasis, tristimulus } from '../../../src/lib/blend/basis';
 import { beerLambertPhotonBudget } from '../../../src/lib/blend/loading/beerLambertPhotonBudget';
 import { concentrationsForFractions } from '../../../src/lib/blend/loading/concentrationsForFractions';
 import { solveBlend } from '../../../src/lib/blend/solver/solveBlend';
-import { resolveTarget } from '../../../src/lib/blend/solver/resolveTarget';
+import { resolveTarget } from '../../../src/lib/aim/index';
 import { xyOf } from '../../../src/lib/blend/superposition';
 import { BLUE_PUMP, demoPhosphor } from '../../../src/lib/blend/demo-components';
 import type { BlendComponents } from '../../../src/lib/blend/types';

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { ellipseOutline, planckianOutline, predictedVsMeasured, qualityTarget, quadrangleOutline, stepEllipseAt, toleranceOutline, colourOffset } from '../../../src/lib/quality/index';
+import { colourDistance, stepEllipseAt } from '../../../src/lib/aim/index';
+import { ellipseOutline, planckianOutline, predictedVsMeasured, qualityTarget, quadrangleOutline, toleranceOutline } from '../../../src/lib/quality/index';
 
 describe('predicted vs measured (worked by hand)', () => {
   // Predicted (0.4339, 0.4033) = ANSI 3000 K centre (C78.377-2015); measured mean (0.4370, 0.4010).
@@ -16,7 +17,7 @@ describe('predicted vs measured (worked by hand)', () => {
   it('steps use the ellipse at the predicted CCT (about 3045 K: between the F3000 and F3500 rows)', () => {
     expect(c.predicted.cct).toBeGreaterThan(3000);
     expect(c.predicted.cct).toBeLessThan(3100);
-    expect(c.offset.steps).toBeCloseTo(colourOffset(0.437, 0.401, c.predicted).steps, 12);
+    expect(c.offset.steps).toBeCloseTo(colourDistance(0.437, 0.401, c.predicted).steps, 12);
     expect(c.measured.cct).toBeGreaterThan(c.predicted.cct - 200);
   });
 });
@@ -24,10 +25,10 @@ describe('predicted vs measured (worked by hand)', () => {
 describe('plot outlines', () => {
   const t = qualityTarget({ kind: 'ansiBin', nominalCct: 3000 });
   it('every point of an n-step ellipse outline is n steps from its centre', () => {
-    for (const [x, y] of ellipseOutline(stepEllipseAt(t), 3)) expect(colourOffset(x, y, t).steps).toBeCloseTo(3, 9);
+    for (const [x, y] of ellipseOutline(stepEllipseAt(t), 3)) expect(colourDistance(x, y, t).steps).toBeCloseTo(3, 9);
   });
   it('a Δu′v′ outline is a circle of that radius in u′v′', () => {
-    for (const [x, y] of toleranceOutline(t, { kind: 'deltaUvPrime', value: 0.004 })) expect(colourOffset(x, y, t).deltaUvPrime).toBeCloseTo(0.004, 9);
+    for (const [x, y] of toleranceOutline(t, { kind: 'deltaUvPrime', value: 0.004 })) expect(colourDistance(x, y, t).deltaUvPrime).toBeCloseTo(0.004, 9);
   });
   it('the quadrangle outline is closed and the locus runs from warm (high x) to cool', () => {
     const q = quadrangleOutline(t.ansiBin!);

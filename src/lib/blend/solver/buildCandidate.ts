@@ -9,12 +9,12 @@ import type { SpectrumEvaluation } from '../../spectral/types';
 import type { Basis } from '../basis';
 import { concentrationsForFractions } from '../loading/concentrationsForFractions';
 import { superposeSpd } from '../superposition';
-import type { ChromaticityError, LoadingParams } from '../types';
-import { type Tolerance, chromaticityError, withinTolerance } from './chromaticityError';
-import { type Floors, type Objective, bindingFloors, violatedFloors } from './floors';
+import type { LoadingParams } from '../types';
+import { type ColourDistance, type Tolerance, colourDistance, withinTolerance } from '../../aim/distance';
+import { type Floors, type Objective, bindingFloors, violatedFloors } from '../../aim/floors';
 import { loopMetricsOf } from './loopMetrics';
 import { type CostBasis, costBasisFor, phosphorCostPer1000Lm } from './phosphorCost';
-import type { ResolvedTarget } from './resolveTarget';
+import type { ResolvedTarget } from '../../aim/target';
 
 /** A component whose optical fraction is below this is reported as unused. */
 export const UNUSED_FRACTION = 1e-4;
@@ -36,7 +36,7 @@ export interface SolveCandidate {
   /** wt % of each phosphor in the slurry (loading model), or null. */
   concentrationsWtPct: number[] | null;
   evaluation: SpectrumEvaluation;
-  chromaticityError: ChromaticityError;
+  chromaticityError: ColourDistance;
   withinTolerance: boolean;
   /** Inside the target's ANSI quadrangle (null when the target is not a bin). */
   inAnsiBin: boolean | null;
@@ -62,7 +62,7 @@ export function buildCandidate(ctx: CandidateContext, fractions: number[]): Solv
   const evaluation = evaluateGrid(superposeSpd(basis, fractions));
   const cost = phosphorCostPer1000Lm(basis, fractions, evaluation.ler, loading);
   const { metrics, criValid } = loopMetricsOf(evaluation, cost);
-  const error = chromaticityError(evaluation.x, evaluation.y, target.x, target.y);
+  const error = colourDistance(evaluation.x, evaluation.y, target);
   let concentrations: number[] | null = null;
   const notes: string[] = [];
   if (loading && basis.loading) {

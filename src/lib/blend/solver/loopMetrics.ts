@@ -9,7 +9,7 @@ import type { PartialSpectrumEvaluation } from '../../spectral/types';
 import type { Basis } from '../basis';
 import { superposeSpd } from '../superposition';
 import type { LoadingParams } from '../types';
-import { type Floors, type LoopMetrics, type Objective, needsTm30, violation } from './floors';
+import { type Floors, type LoopMetrics, type Objective, needsTm30, violation } from '../../aim/floors';
 import { phosphorCostPer1000Lm } from './phosphorCost';
 
 export interface LoopPoint {

@@ -11,7 +11,7 @@
  * Returns every evaluated point (for "best achievable" reports) and the local optima.
  */
 import { type ColourPlane, coordinatesOf, ratiosAt } from './colourPlane';
-import { type Floors, type Objective, objectiveValue, violation } from './floors';
+import { type Floors, type Objective, objectiveValue, violation } from '../../aim/floors';
 import type { LoopEvaluator, LoopPoint } from './loopMetrics';
 import { nelderMead } from './nelderMead';
 

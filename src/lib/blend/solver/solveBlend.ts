@@ -18,12 +18,12 @@ import { uvPrimeToXy, xyToUv, xyToUvPrime, xyzToUvPrime } from '../../spectral/c
 import { prepareBasis } from '../basis';
 import type { BlendComponents, LoadingParams } from '../types';
 import { type CandidateContext, type SolveCandidate, buildCandidate } from './buildCandidate';
-import { type Tolerance, chromaticityError, withinTolerance } from './chromaticityError';
+import { type Tolerance, colourDistance, withinTolerance } from '../../aim/distance';
 import { colourPlane } from './colourPlane';
 import { type Point, convexHull, nearestInHull } from './convexHull';
-import { type Floors, type Objective, FLOOR_RULES } from './floors';
+import { type Floors, type Objective, FLOOR_RULES } from '../../aim/floors';
 import { makeLoopEvaluator, type LoopPoint } from './loopMetrics';
-import { type Target, resolveTarget } from './resolveTarget';
+import { type Target, resolveTarget } from '../../aim/target';
 import { distance, meritOf, searchPolytope } from './searchPolytope';
 
 export interface SolveProblem {
@@ -66,7 +66,7 @@ export function solveBlend(problem: SolveProblem): SolveResult {
   const hull = convexHull(basis.components.map((c) => xyzToUvPrime(...c.xyz) as Point));
   const near = nearestInHull(hull, xyToUvPrime(target.x, target.y) as Point);
   const [sx, sy] = near.distance > 0 ? uvPrimeToXy(...near.point) : [target.x, target.y];
-  const gapError = chromaticityError(sx, sy, target.x, target.y);
+  const gapError = colourDistance(sx, sy, target);
   const outOfGamut = near.distance > 0 && !withinTolerance(gapError, tolerance);
   const plane = colourPlane(basis.components.map((c) => c.xyz), [sx, sy]);
   const loop = makeLoopEvaluator(basis, floors, problem.objective, problem.loading);
@@ -99,7 +99,7 @@ export function solveBlend(problem: SolveProblem): SolveResult {
       reason:
         `${target.label} (x ${fmt(target.x)}, y ${fmt(target.y)}) lies outside the colour gamut of these components. ` +
         `Nearest reachable point: x ${fmt(sx)}, y ${fmt(sy)} (${Math.round(solvedCct.cct)} K, Duv ${fmt(solvedCct.duv)}), ` +
-        `Δu′v′ ${fmt(gapError.deltaUvPrime)} (${gapError.sdcm.toFixed(1)} SDCM) from the target — beyond the tolerance. ` +
+        `Δu′v′ ${fmt(gapError.deltaUvPrime)} (${gapError.steps.toFixed(1)} SDCM) from the target — beyond the tolerance. ` +
         'Add a component on the far side of the target (e.g. a redder or greener phosphor) or change the target.',
       candidates
     };

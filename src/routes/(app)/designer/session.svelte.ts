@@ -5,7 +5,8 @@
  */
 import { superposeSpd } from '$lib/blend/superposition';
 import { gridToSpd } from '$lib/blend/grid';
-import { concentrationsForFractions, type BlendComponents, type SolveCandidate, type SolveResult, type Objective } from '$lib/blend';
+import { concentrationsForFractions, type BlendComponents, type SolveCandidate, type SolveResult } from '$lib/blend';
+import type { Objective } from '$lib/aim';
 import { createLiveEvaluator, type LiveEvaluator, type LiveFrame } from '$lib/designer/live-evaluator';
 import { DEFAULT_AIM, resolveAim, type AimState } from '$lib/designer/aim';
 import { roundedShares, setShare, normaliseShares } from '$lib/designer/shares';

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { colourOffset, judgePart, qualityTarget, stepEllipseAt } from '../../../src/lib/quality/index';
-import type { ChromaticityEllipse } from '../../../src/lib/spectral/index';
-import { metricsAt } from './support';
+import { colourDistance, stepEllipseAt } from '../../src/lib/aim/index';
+import type { ChromaticityEllipse } from '../../src/lib/spectral/index';
 
 // Steps by the ellipse metric n = √(g11Δx² + 2g12ΔxΔy + g22Δy²) (MacAdam, JOSA 32:247, 1942), which
 // equals √((u/a)² + (v/b)²) with u = Δx·cosθ + Δy·sinθ, v = −Δx·sinθ + Δy·cosθ (rotation into the axes).
@@ -29,7 +28,7 @@ describe('steps from the published ANSI 2700 K 3-step ellipse, worked by hand', 
     { name: 'Δ = (−0.0020, +0.0025)', d: [-0.002, 0.0025], expected: 2.2298, tol: 1e-4 }
   ];
   it.each(cases)('$name', ({ d, expected, tol }) => {
-    const o = colourOffset(centre.x + d[0], centre.y + d[1], centre, ANSI_2700_3STEP);
+    const o = colourDistance(centre.x + d[0], centre.y + d[1], centre, ANSI_2700_3STEP);
     expect(o.steps).toBeCloseTo(expected, 3);
     expect(Math.abs(o.steps - expected)).toBeLessThanOrEqual(tol);
     expect(o.dx).toBeCloseTo(d[0], 12);
@@ -47,28 +46,6 @@ describe('default ellipse: IEC 60081 F3000 1-step (a = 0.00278, b = 0.00136, θ 
     expect([e.a, e.b, e.thetaDeg]).toEqual([0.00278, 0.00136, 53.13]);
   });
   it('Δ = (+0.002, −0.001) is 1.624 steps', () => {
-    expect(colourOffset(0.442, 0.402, c3000).steps).toBeCloseTo(1.624, 3);
-  });
-});
-
-describe('step tolerance in pass/fail', () => {
-  // Target: ANSI 2700 K bin centre (Table 1: 2725 K, Duv 0). A point 2 steps and one 4 steps out along
-  // the default ellipse's major axis, judged against a 3-step tolerance.
-  const t = qualityTarget({ kind: 'ansiBin', nominalCct: 2700 });
-  const e = stepEllipseAt(t);
-  const along = (n: number) => {
-    const th = (e.thetaDeg * Math.PI) / 180;
-    return metricsAt(t.x + n * e.a * Math.cos(th), t.y + n * e.a * Math.sin(th));
-  };
-  const acceptance = { tolerance: { kind: 'sdcm' as const, steps: 3 }, floors: {}, requireTargetBin: true };
-  it('2 steps passes a 3-step tolerance', () => {
-    const v = judgePart(along(2), t, acceptance);
-    expect(v.offset.steps).toBeCloseTo(2, 6);
-    expect(v.pass).toBe(true);
-  });
-  it('4 steps fails it, saying by how much', () => {
-    const v = judgePart(along(4), t, acceptance);
-    expect(v.pass).toBe(false);
-    expect(v.failures).toEqual([{ code: 'colour', message: '4.0 steps from target > 3' }]);
+    expect(colourDistance(0.442, 0.402, c3000).steps).toBeCloseTo(1.624, 3);
   });
 });

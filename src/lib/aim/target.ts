@@ -1,14 +1,14 @@
 /**
- * Target colour point of a solve: CCT + Duv, x,y, or the centre of an ANSI C78.377 bin.
+ * Target colour point of an aim (solve, designer, revision, weigh-out, quality): CCT + Duv, x,y, or the centre of an ANSI C78.377 bin.
  *
  * CCT/Duv → x,y by the core's inverse of Ohno 2014 (Ohno, LEUKOS 10 (2014) 47–55, §4).
  * ANSI bins: ANSI C78.377-2017 Table 1 quadrangles for the nominal CCTs of the table,
  * otherwise the flexible-CCT quadrangle (2200–6500 K in 100 K steps) — both from the
  * core (`spectral/ansi/c78377.ts`); the target is the quadrangle centre (target CCT, Duv).
  */
-import { ansiFlexibleQuadrangle, ansiNominalQuadrangles, type AnsiQuadrangle } from '../../spectral/ansi/c78377';
-import { cctDuvToXy, uvToCct } from '../../spectral/cct/index';
-import { xyToUv } from '../../spectral/colorimetry/chromaticity';
+import { ansiFlexibleQuadrangle, ansiNominalQuadrangles, type AnsiQuadrangle } from '../spectral/ansi/c78377';
+import { cctDuvToXy, uvToCct } from '../spectral/cct/index';
+import { xyToUv } from '../spectral/colorimetry/chromaticity';
 
 export type Target =
   | { kind: 'cctDuv'; cct: number; duv: number }

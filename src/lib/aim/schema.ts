@@ -1,0 +1,29 @@
+/**
+ * zod schemas of the aim: target (CCT + Duv, x,y or ANSI C78.377 bin), colour tolerance (Δu′v′, Δuv or
+ * MacAdam-type steps) and metric floors (Ra, R9, Rf, Rg, LER). Shared by the solve and correction API
+ * bodies, the revision content, the designer and quality.
+ */
+import { z } from 'zod';
+
+export const targetSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('cctDuv'), cct: z.number().min(1000, 'CCT must be 1000–20000 K').max(20000, 'CCT must be 1000–20000 K'), duv: z.number().min(-0.05, 'Duv must be within ±0.05').max(0.05, 'Duv must be within ±0.05') }),
+  z.object({ kind: z.literal('xy'), x: z.number().gt(0).lt(1), y: z.number().gt(0).lt(1) }),
+  z.object({ kind: z.literal('ansiBin'), nominalCct: z.number().int().min(2200, 'ANSI nominal CCT 2200–6500 K').max(6500, 'ANSI nominal CCT 2200–6500 K') })
+]);
+
+export const toleranceSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('deltaUvPrime'), value: z.number().gt(0).max(0.05) }),
+  z.object({ kind: z.literal('deltaUv'), value: z.number().gt(0).max(0.05) }),
+  z.object({ kind: z.literal('sdcm'), steps: z.number().gt(0).max(20) })
+]);
+
+export const floorsSchema = z
+  .object({
+    raMin: z.number().max(100).optional(),
+    r9Min: z.number().max(100).optional(),
+    rfMin: z.number().max(100).optional(),
+    rgMin: z.number().min(50).max(150).optional(),
+    rgMax: z.number().min(50).max(150).optional(),
+    lerMin: z.number().min(0).max(683).optional()
+  })
+  .refine((f) => f.rgMin === undefined || f.rgMax === undefined || f.rgMin <= f.rgMax, 'rgMin must not exceed rgMax');
