@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { colourDistance, stepEllipseAt } from '../../src/lib/aim/index';
-import type { ChromaticityEllipse } from '../../src/lib/spectral/index';
+import { colourDistance, resolveTarget, stepEllipseAt, withinTolerance } from '../../src/lib/aim/index';
+import { uvToCct, xyToUv, type ChromaticityEllipse } from '../../src/lib/spectral/index';
 
 // Steps by the ellipse metric n = √(g11Δx² + 2g12ΔxΔy + g22Δy²) (MacAdam, JOSA 32:247, 1942), which
 // equals √((u/a)² + (v/b)²) with u = Δx·cosθ + Δy·sinθ, v = −Δx·sinθ + Δy·cosθ (rotation into the axes).
@@ -48,4 +48,65 @@ describe('default ellipse: IEC 60081 F3000 1-step (a = 0.00278, b = 0.00136, θ 
   it('Δ = (+0.002, −0.001) is 1.624 steps', () => {
     expect(colourDistance(0.442, 0.402, c3000).steps).toBeCloseTo(1.624, 3);
   });
+});
+
+describe('Δu′v′ and Δuv from the CIE formulas, worked by hand', () => {
+  // CIE 15:2004 eq. 8.1–8.2: u′ = 4x/(−2x + 12y + 3), v′ = 9y/(−2x + 12y + 3); CIE 1960: u = u′, v = 6y/(−2x + 12y + 3).
+  // Centre: the ANSI C78.377-2015 3000 K centre (0.4339, 0.4033); point (0.4400, 0.4033).
+  // Denominators 6.9718 (centre) and 6.9596 (point); u′ 0.248946 → 0.252888, v′ 0.520626 → 0.521539,
+  // v 0.347084 → 0.347692. Δu′v′ = √(0.0039423² + 0.0009126²) = 0.0040466; Δuv = √(0.0039423² + 0.0006084²) = 0.0039890.
+  const centre = { x: 0.4339, y: 0.4033, cct: 3045 };
+  const d = colourDistance(0.44, 0.4033, centre);
+  it('Δu′v′ = 0.0040466', () => expect(d.deltaUvPrime).toBeCloseTo(0.0040466, 7));
+  it('Δuv = 0.0039890', () => expect(d.deltaUv).toBeCloseTo(0.003989, 7));
+  it('dx, dy are the plain x,y differences', () => {
+    expect(d.dx).toBeCloseTo(0.0061, 12);
+    expect(d.dy).toBeCloseTo(0, 12);
+  });
+  it('the centre itself is 0 in every unit', () => {
+    expect(colourDistance(centre.x, centre.y, centre)).toEqual({ dx: 0, dy: 0, deltaUvPrime: 0, deltaUv: 0, steps: 0 });
+  });
+});
+
+// The solver once took the ellipse shape at a CCT recomputed from the target's x,y, quality at the CCT the
+// target states (for an ANSI bin the Table 1 target CCT). One function now takes the stated CCT, so the
+// designer, the revision and the batch report quote the same steps for the same point.
+describe('the ellipse shape follows the CCT the target states', () => {
+  // IEC 60081 1-step ellipses (from memory): the 2700 K and 6500 K shapes differ in size and angle, so
+  // the same offset counts differently around the same x,y when a different CCT is stated.
+  it('same x,y, different stated CCT → different steps', () => {
+    const at2700 = colourDistance(0.44, 0.405, { x: 0.4378, y: 0.4041, cct: 2700 }).steps;
+    const at6500 = colourDistance(0.44, 0.405, { x: 0.4378, y: 0.4041, cct: 6500 }).steps;
+    expect(Math.abs(at2700 - at6500)).toBeGreaterThan(0.1);
+  });
+  // ANSI C78.377-2017 Table 1: each nominal bin centre lies at its target CCT (within 1 %, far inside the
+  // table's ±ΔT); the stated and the recomputed CCT then give the same steps to within 1e-4, far below the
+  // 0.1 step to which steps are quoted [common practice].
+  it.each([2700, 3000, 3500, 4000, 4500, 5000, 5700, 6500])('ANSI %i K bin: stated vs recomputed CCT agree to 1e-4 steps', (nominalCct) => {
+    const t = resolveTarget({ kind: 'ansiBin', nominalCct });
+    const recomputed = uvToCct(...xyToUv(t.x, t.y)).cct;
+    expect(Math.abs(recomputed - t.cct) / t.cct).toBeLessThan(0.01);
+    const e = stepEllipseAt(t);
+    const th = (e.thetaDeg * Math.PI) / 180;
+    const [x, y] = [t.x + 3 * e.a * Math.cos(th), t.y + 3 * e.a * Math.sin(th)];
+    const stated = colourDistance(x, y, t).steps;
+    const other = colourDistance(x, y, { ...t, cct: recomputed }).steps;
+    expect(stated).toBeCloseTo(3, 9);
+    expect(Math.abs(stated - other)).toBeLessThan(1e-4);
+  });
+});
+
+// One tolerance judgement for the solver, the designer, the revision and quality: a distance on the
+// tolerance counts as within it [common practice: a limit "≤ n" includes n].
+describe('within tolerance, in the tolerance’s own units', () => {
+  const centre = { x: 0.4339, y: 0.4033, cct: 3045 };
+  const d = colourDistance(0.44, 0.4033, centre);
+  it.each([
+    { name: 'steps: on the limit is within', t: { kind: 'sdcm' as const, steps: d.steps }, within: true },
+    { name: 'steps: just past the limit is outside', t: { kind: 'sdcm' as const, steps: d.steps * (1 - 1e-6) }, within: false },
+    { name: 'Δu′v′ 0.0041 holds 0.0040466', t: { kind: 'deltaUvPrime' as const, value: 0.0041 }, within: true },
+    { name: 'Δu′v′ 0.0040 does not', t: { kind: 'deltaUvPrime' as const, value: 0.004 }, within: false },
+    { name: 'Δuv 0.0040 holds 0.0039890', t: { kind: 'deltaUv' as const, value: 0.004 }, within: true },
+    { name: 'Δuv 0.0039 does not', t: { kind: 'deltaUv' as const, value: 0.0039 }, within: false }
+  ])('$name', ({ t, within }) => expect(withinTolerance(d, t)).toBe(within));
 });
