@@ -1,10 +1,9 @@
 /**
- * Fit a package model from builds and store it as the next version of its name, in one
- * transaction with its audit event. A fit that is refused (not identifiable, bad spectrum) or
+ * Fit a package model from builds and store it as the next version of its name (store.ts: one
+ * transaction with its audit event). A fit that is refused (not identifiable, bad spectrum) or
  * does not converge saves nothing and says why.
  */
 import { db } from '../db/index';
-import * as audit from '../db/audit';
 import { ApiError } from '../api/body';
 import { MaterialError } from '../materials/errors';
 import { loadBlendComponents } from '../materials/components';
@@ -14,13 +13,13 @@ import { xyzToXy } from '../../spectral/colorimetry/chromaticity';
 import { fitPackageModel, type PackageModelFit } from '../../blend/calibration/fitPackageModel';
 import type { PackageBuild } from '../../blend/calibration/packageBuilds';
 import type { User } from '../db/users';
-import * as records from './records';
+import { storeModel } from './store';
 import type { BuildInput, PackageFitInput } from './schema';
 
 /** Start value for a phosphor without a library absorption coefficient [invented; the fit moves it]. */
 const DEFAULT_START_ALPHA = 0.1;
 
-function toBuild(b: BuildInput): PackageBuild {
+export function toPackageBuild(b: BuildInput): PackageBuild {
   const spd = b.spectrum ? toGrid(b.spectrum) : undefined;
   const xy: [number, number] = b.x !== undefined && b.y !== undefined ? [b.x, b.y] : xyzToXy(...tristimulus(spd!));
   return {
@@ -52,7 +51,7 @@ export async function runFit(input: PackageFitInput): Promise<PackageModelFit> {
   const spec = await components(input);
   const start = { ...spec, phosphors: spec.phosphors.map((p) => ({ ...p, absorptionPerWtPctMm: p.absorptionPerWtPctMm ?? DEFAULT_START_ALPHA })) };
   const basis = prepareBasis(start).loading!;
-  const fit = fitPackageModel(basis, input.builds.map(toBuild), {
+  const fit = fitPackageModel(basis, input.builds.map(toPackageBuild), {
     pathLengthMm: input.pathLengthMm,
     ...(input.dispenseMassMg !== undefined ? { dispenseMassMg: input.dispenseMassMg } : {}),
     cascade: input.cascade,
@@ -69,21 +68,6 @@ export async function createByFit(actor: User, input: PackageFitInput): Promise<
   const fit = await runFit(input);
   const codes: { id: number; code: string }[] = await db()('materials').whereIn('id', input.phosphorIds).select('id', 'code');
   const phosphors = input.phosphorIds.map((id) => ({ materialId: id, code: codes.find((c) => Number(c.id) === id)?.code ?? String(id) }));
-  const { parameters, uncertainty, fitted, ...report } = fit;
-  const stored: records.StoredParameters = { parameters, uncertainty, fitted };
-  return db().transaction(async (trx) => {
-    const version = await records.nextVersion(trx, input.name);
-    const [id] = await trx('package_models').insert({
-      name: input.name, version, package_type: input.packageType, dispense_geometry: input.dispenseGeometry,
-      path_length_mm: input.pathLengthMm, dispense_mass_mg: input.dispenseMassMg ?? null, pump_material_id: input.pumpId,
-      phosphors_json: JSON.stringify(phosphors), cascade: input.cascade, parameters_json: JSON.stringify(stored),
-      fit_json: JSON.stringify(report), builds_json: JSON.stringify(input.builds), rms_steps: fit.rmsSteps, max_steps: fit.maxSteps,
-      created_by: actor.id
-    });
-    await audit.record({
-      actorId: actor.id, actorEmail: actor.email, entityType: 'package-model', entityId: id, action: 'create-by-fit',
-      after: { name: input.name, version, parameters, uncertainty, rmsSteps: fit.rmsSteps, builds: input.builds.length }
-    }, trx);
-    return id;
-  });
+  const ref = await db().transaction((trx) => storeModel(trx, actor, input, fit, phosphors));
+  return ref.id;
 }
