@@ -86,6 +86,28 @@ describe('package calibration recovers synthetic truth (Levenberg 1944; Marquard
     expect(() => calibratePackage(lb, same, { ...geometry, fitEscape: true })).toThrow(/two or more loadings/);
   });
 
+  it('measured spectra instead of x,y (colour and shape compared): recovers the truth noiselessly', () => {
+    const builds = RECIPES.map(({ c, L }, i) => {
+      const o = packageObservables(packageSpd(lb, TRUTH, c, L));
+      return { label: `spd ${i + 1}`, concentrationsWtPct: c, pathLengthMm: L, measuredXy: o.xy, measuredSpd: o.spd.map((v) => v * 3.7), outputLmPerPumpW: o.lmPerPumpW };
+    });
+    const fit = calibratePackage(lb, builds.slice(0, 4), { ...geometry, fitEscape: true, fitIqeScale: true });
+    expect(fit.converged).toBe(true);
+    expect(Math.abs(fit.parameters.pumpEscape / 1.3 - 1)).toBeLessThan(1e-3);
+    expect(Math.abs(fit.parameters.iqeScale / 0.92 - 1)).toBeLessThan(1e-3);
+  });
+
+  it('with re-absorption in the model: recovers α and escape from cascade builds', () => {
+    const builds = RECIPES.slice(0, 4).map(({ c, L }, i) => {
+      const o = packageObservables(packageSpd(lb, TRUTH, c, L, { cascade: true }));
+      return { label: `cascade ${i + 1}`, concentrationsWtPct: c, pathLengthMm: L, measuredXy: o.xy, outputWPerPumpW: o.wPerPumpW };
+    });
+    const fit = calibratePackage(lb, builds, { ...geometry, cascade: true, fitEscape: true, fitIqeScale: true });
+    expect(fit.converged).toBe(true);
+    fit.parameters.absorptionPerWtPctMm.forEach((a, i) => expect(Math.abs(a / TRUTH.absorptionPerWtPctMm[i] - 1)).toBeLessThan(1e-3));
+    expect(Math.abs(fit.parameters.pumpEscape / 1.3 - 1)).toBeLessThan(1e-3);
+  });
+
   it('dispense mass stands for path at a fixed footprint: same fit as the path it implies', () => {
     const builds = synthetic(0, 0).map(({ pathLengthMm, ...b }) => ({ ...b, dispenseMassMg: (pathLengthMm! / 0.3) * 12 }));
     const fit = calibratePackage(lb, builds, { pathLengthMm: 0.3, dispenseMassMg: 12, fitEscape: true, fitIqeScale: true });
