@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { prepareBasis } from '../../src/lib/blend/basis';
 import { fitPackageModel } from '../../src/lib/blend/calibration/fitPackageModel';
 import { calibratePackage } from '../../src/lib/blend/calibration/calibratePackage';
@@ -73,6 +74,12 @@ describe('package calibration recovers synthetic truth (Levenberg 1944; Marquard
     expect(Math.max(...full.builds.map((b) => b.steps))).toBeLessThan(0.5);
   });
 
+  it('issue case fitted with α alone: the stated uncertainty reflects the misfit (≥ 1 % of α, not 0.2 %)', () => {
+    const m = fitPackageModel(lb, synthetic(0, 0), { ...geometry, fitEscape: false }, { resamples: 12, seed: 2 });
+    expect(m.maxSteps).toBeGreaterThan(1);
+    m.uncertainty.absorptionPerWtPctMm.forEach((u, i) => expect(u / m.parameters.absorptionPerWtPctMm[i]).toBeGreaterThan(0.01));
+  });
+
   it('colour only: escape is fitted, the IQE scale is refused without a measured output', () => {
     const builds = synthetic(0, 0).map(({ outputWPerPumpW: _o, ...b }) => b);
     expect(() => calibratePackage(lb, builds, { ...geometry, fitIqeScale: true })).toThrow(BlendInputError);
@@ -127,4 +134,29 @@ describe('bootstrap over builds (Efron 1979) is reproducible with a seed', () =>
     expect(c.pumpEscape.sd).not.toBe(a.pumpEscape.sd);
     expect(a.used + a.failed).toBe(12);
   });
+});
+
+describe('round trip: any plausible truth → builds → fit → the same truth (property, fast-check)', () => {
+  it('noiseless builds at two paths recover α, escape and IQE scale to 1e-3', () => {
+    const truth = fc.record({
+      alpha: fc.tuple(fc.double({ min: 0.1, max: 0.8, noNaN: true }), fc.double({ min: 0.1, max: 0.8, noNaN: true }), fc.double({ min: 0.1, max: 0.8, noNaN: true })),
+      escape: fc.double({ min: 0.7, max: 1.6, noNaN: true }),
+      iqe: fc.double({ min: 0.8, max: 1.05, noNaN: true })
+    });
+    fc.assert(
+      fc.property(truth, ({ alpha, escape, iqe }) => {
+        const t: PackageParameters = { absorptionPerWtPctMm: alpha, pumpEscape: escape, iqeScale: iqe };
+        const builds = RECIPES.slice(0, 4).map(({ c, L }, i) => {
+          const o = packageObservables(packageSpd(lb, t, c, L));
+          return { label: `b${i}`, concentrationsWtPct: c, pathLengthMm: L, measuredXy: o.xy, outputWPerPumpW: o.wPerPumpW };
+        });
+        const fit = calibratePackage(lb, builds, { ...geometry, fitEscape: true, fitIqeScale: true });
+        expect(fit.converged).toBe(true);
+        fit.parameters.absorptionPerWtPctMm.forEach((a, i) => expect(Math.abs(a / alpha[i] - 1)).toBeLessThan(1e-3));
+        expect(Math.abs(fit.parameters.pumpEscape / escape - 1)).toBeLessThan(1e-3);
+        expect(Math.abs(fit.parameters.iqeScale / iqe - 1)).toBeLessThan(1e-3);
+      }),
+      { numRuns: 20, seed: 20261204 }
+    );
+  }, 60_000);
 });

@@ -68,6 +68,14 @@ export async function createByFit(actor: User, input: PackageFitInput): Promise<
   const fit = await runFit(input);
   const codes: { id: number; code: string }[] = await db()('materials').whereIn('id', input.phosphorIds).select('id', 'code');
   const phosphors = input.phosphorIds.map((id) => ({ materialId: id, code: codes.find((c) => Number(c.id) === id)?.code ?? String(id) }));
-  const ref = await db().transaction((trx) => storeModel(trx, actor, input, fit, phosphors));
-  return ref.id;
+  try {
+    const ref = await db().transaction((trx) => storeModel(trx, actor, input, fit, phosphors));
+    return ref.id;
+  } catch (err) {
+    const code = (err as { code?: string })?.code;
+    if (code === 'ER_DUP_ENTRY' || code === 'ER_LOCK_DEADLOCK') {
+      throw new ApiError(409, `Another fit of ${input.name} was saved at the same moment. Nothing was saved: run the fit again to save the next version.`);
+    }
+    throw err;
+  }
 }

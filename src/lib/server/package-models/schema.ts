@@ -9,6 +9,9 @@ import { spdSchema } from '../../blend/schemas';
 const positive = (label: string, max: number, unit: string) =>
   z.number(`${label} must be a number`).gt(0, `${label} must be above 0 ${unit}`).max(max, `${label}: at most ${max} ${unit}`);
 
+/** Bootstrap work per request: builds × resamples (each refit runs the loading model for every build). */
+const MAX_BOOTSTRAP_FITS = 2000;
+
 export const buildSchema = z
   .object({
     label: z.string('Build label must be text').trim().min(1, 'Build label is required').max(60, 'Build label: at most 60 characters'),
@@ -45,6 +48,9 @@ export const packageFitSchema = z
     builds: z.array(buildSchema).min(2, 'Give at least two builds').max(40, 'At most 40 builds per fit')
   })
   .superRefine((body, ctx) => {
+    if (body.builds.length * body.bootstrap.resamples > MAX_BOOTSTRAP_FITS) {
+      ctx.addIssue({ code: 'custom', path: ['bootstrap', 'resamples'], message: `Builds × resamples must stay within ${MAX_BOOTSTRAP_FITS}; use fewer resamples` });
+    }
     body.builds.forEach((b, i) => {
       if (b.concentrationsWtPct.length !== body.phosphorIds.length) {
         ctx.addIssue({ code: 'custom', path: ['builds', i, 'concentrationsWtPct'], message: `${b.label}: give ${body.phosphorIds.length} wt % values, one per phosphor` });
