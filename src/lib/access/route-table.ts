@@ -12,6 +12,7 @@ import { DESIGNER_ROUTES } from './routes/designer';
 import { FORMULATIONS_ROUTES } from './routes/formulations';
 import { BATCHES_ROUTES } from './routes/batches';
 import { QUALITY_ROUTES } from './routes/quality';
+import { PACKAGE_MODELS_ROUTES } from './routes/package-models';
 
 export type { Audience, Method, RouteRule } from './routes/shared';
 
@@ -21,7 +22,8 @@ export const ROUTE_TABLE: Record<string, RouteRule> = {
   ...DESIGNER_ROUTES,
   ...FORMULATIONS_ROUTES,
   ...BATCHES_ROUTES,
-  ...QUALITY_ROUTES
+  ...QUALITY_ROUTES,
+  ...PACKAGE_MODELS_ROUTES
 };
 
 /** Decision for one request. */

@@ -16,6 +16,7 @@ export { beerLambertPhotonBudget, type LoadingResult } from './loading/beerLambe
 export { concentrationsForFractions, type ConcentrationSolution } from './loading/concentrationsForFractions';
 export { calibrateAbsorption, type CalibrationReport, type CalibrationBuild } from './calibration/calibrateAbsorption';
 export { calibrateFromBuilds, type MeasuredBuild } from './calibration/calibrateFromBuilds';
+export { fitPackageModel, type PackageModelFit, type PackageModelRef } from './calibration/fitPackageModel';
 export { phosphorCostPer1000Lm, type CostBasis } from './solver/phosphorCost';
 export {
   mixRequestSchema,

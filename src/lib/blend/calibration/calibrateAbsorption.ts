@@ -22,7 +22,7 @@ import { xyzToXy } from '../../spectral/colorimetry/chromaticity';
 import { tristimulus } from '../basis';
 import { normaliseToUnitPower } from '../grid';
 import { beerLambertPhotonBudget, type LoadingBasis } from '../loading/beerLambertPhotonBudget';
-import { levenbergMarquardt } from './levenbergMarquardt';
+import { levenbergMarquardt, type LmStopReason } from './levenbergMarquardt';
 
 export interface CalibrationBuild {
   concentrationsWtPct: number[];
@@ -46,6 +46,8 @@ export interface CalibrationReport {
   }[];
   iterations: number;
   converged: boolean;
+  /** Why the fit stopped (Levenberg–Marquardt stopping test or failure). */
+  reason: LmStopReason;
 }
 
 const FIT_START = gridIndex(380);
@@ -128,6 +130,7 @@ export function calibrateAbsorption(
     pathLengthMm: opts.pathLengthMm,
     builds: perBuild,
     iterations: lm.iterations,
-    converged: lm.converged && alpha.length === n
+    converged: lm.converged && alpha.length === n,
+    reason: lm.reason
   };
 }
