@@ -3,7 +3,7 @@
  * `defaultAcceptance` takes the revision's own tolerance and floors and requires the ANSI bin when
  * the revision targets a bin; quality may instead choose a step ellipse for the batch.
  */
-import type { RevisionContent } from '../formulations/content';
+import type { RevisionContent } from '../recipe';
 import { describeTolerance, judgePart } from './acceptance';
 import { summariseBatch, type BatchSummary } from './summarise';
 import { qualityTarget, type ResolvedTarget, type Target } from './target';

@@ -7,7 +7,7 @@ import { z } from 'zod';
 import type { Knex } from 'knex';
 import { db } from '../db/index';
 import { record } from '../db/audit';
-import type { RevisionContent } from '../../formulations/content';
+import type { RevisionContent } from '../../recipe';
 import { ConflictError, NotFoundError, ValidationError } from './errors';
 import { checkVersion, enforce, requireRoles, type Caller } from './guard';
 import { prepareRevision, type PreparedRevision } from './prepare';
