@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import {
-  CONTENT_VERSION, RECIPE_VERSIONS, RecipeContentError, createRecipeReader, fractionsWithLeak, parseRecipe,
+  CONTENT_VERSION, RECIPE_VERSIONS, RecipeContentError, checkRecipe, createRecipeReader, fractionsWithLeak, parseRecipe,
   revisionContentV1Schema, type ContentVersion, type RevisionContentV1
 } from '../../src/lib/recipe';
 import { compareRatios, compareSettings } from '../../src/lib/formulations/compare';
@@ -121,5 +121,12 @@ describe('content that cannot be read gets an error naming what is wrong', () =>
   it.each(cases)('$name', ({ input, message }) => {
     expect(() => parseRecipe(input)).toThrow(RecipeContentError);
     expect(() => parseRecipe(input)).toThrow(message);
+  });
+});
+
+describe('content sent in a request', () => {
+  it('is checked as a value: JSON text is not taken for content there', () => {
+    expect(checkRecipe(JSON.parse(V1_ROW)).ok).toBe(true);
+    expect(checkRecipe(V1_ROW)).toMatchObject({ ok: false, issues: [{ path: '(content)', message: 'expected a JSON object' }] });
   });
 });

@@ -17,6 +17,8 @@ export interface RecipeReader<T> {
   /** The current content; throws RecipeContentError naming what is wrong. */
   parse(json: unknown): T;
   safeParse(json: unknown): UpgradeResult<T>;
+  /** A parsed value only (a request body's content): JSON text is refused like any other non-object. */
+  check(value: unknown): UpgradeResult<T>;
 }
 
 /** A reader over a chain of versions (the product's chain below; tests may build a longer one). */
@@ -34,6 +36,7 @@ export function createRecipeReader<T>(chain: ContentVersionChain<T>): RecipeRead
   };
   return {
     safeParse,
+    check: (value) => upgradeContent(chain, value),
     parse(json) {
       const result = safeParse(json);
       if (!result.ok) throw new RecipeContentError(result.message, result.issues, result.storedVersion);
@@ -52,4 +55,9 @@ export function parseRecipe(json: unknown): RevisionContent {
 /** As parseRecipe, with the failure returned instead of thrown (for request bodies). */
 export function safeParseRecipe(json: unknown): UpgradeResult<RevisionContent> {
   return reader.safeParse(json);
+}
+
+/** Content sent in a request (a parsed value, any known version) → the current content, or what is wrong. */
+export function checkRecipe(value: unknown): UpgradeResult<RevisionContent> {
+  return reader.check(value);
 }

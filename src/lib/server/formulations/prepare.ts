@@ -5,7 +5,7 @@
 import type { Knex } from 'knex';
 import { BlendInputError } from '../../blend/errors';
 import { SpectrumInputError } from '../../spectral/errors';
-import { fractionsWithLeak, safeParseRecipe, type RevisionContent } from '../../recipe';
+import { checkRecipe, fractionsWithLeak, type RevisionContent } from '../../recipe';
 import { PREDICTION_CORE_VERSION, predictRevision, type RevisionPrediction } from '../../formulations/prediction';
 import { loadRevisionComponents } from './components';
 import { ValidationError } from './errors';
@@ -22,7 +22,7 @@ export interface PreparedRevision {
 }
 
 export function parseContent(raw: unknown): RevisionContent {
-  const parsed = safeParseRecipe(raw);
+  const parsed = checkRecipe(raw);
   if (!parsed.ok) {
     const issues = parsed.issues;
     throw new ValidationError(`Invalid revision content: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`, issues);
