@@ -5,7 +5,8 @@
  *
  * - `schema.ts`: version 1 of the content (`contentVersion: 1`; stored rows without the tag are version 1).
  * - `upgrade.ts`: the chain of versions and their upgraders; `RevisionContent` is the current content.
- * - `read.ts`: `parseRecipe` (stored JSON text or a parsed value → current content), on every read.
+ * - `read.ts`: `parseRecipe` (stored JSON text or a parsed value → current content), on every read;
+ *   `checkRecipe` for content sent in a request (a value, never text).
  * - `accessors.ts`: the recipe lines (`fractionsWithLeak`, `phosphorLines`, `loadingOf`, …), each with
  *   an optional pump-bin key.
  *
