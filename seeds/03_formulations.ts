@@ -6,7 +6,8 @@
  * wt % with the loading model at an effective path of 0.3 mm. Idempotent (keyed by name / code).
  */
 import type { Knex } from 'knex';
-import { revisionContentSchema, type RevisionContent, type RevisionState } from '../src/lib/formulations/content';
+import { parseRecipe, type RevisionContent } from '../src/lib/recipe';
+import type { RevisionState } from '../src/lib/formulations/workflow-rules';
 import { PREDICTION_CORE_VERSION, predictRevision } from '../src/lib/formulations/prediction';
 import { loadRevisionComponents } from '../src/lib/server/formulations/components';
 import { contentSha256 } from '../src/lib/server/formulations/hash';
@@ -111,7 +112,7 @@ export async function seed(knex: Knex): Promise<void> {
           floors: r.floors,
           notes: r.notes
         };
-        const loaded = await loadRevisionComponents(trx, revisionContentSchema.parse(raw));
+        const loaded = await loadRevisionComponents(trx, parseRecipe(raw));
         const predicted = predictRevision(loaded.content, loaded.components);
         const sha = contentSha256(loaded.content);
         const decided = r.state === 'approved' || r.state === 'superseded';

@@ -10,7 +10,7 @@ import { weighoutInputFromRevision } from '../src/lib/weighout/from-revision';
 import { describeTarget } from '../src/lib/weighout/target';
 import { checkActual } from '../src/lib/weighout/actual';
 import { Rat } from '../src/lib/weighout/rational';
-import { revisionContentSchema } from '../src/lib/formulations/content';
+import { parseRecipe } from '../src/lib/recipe';
 import type { CreateBatchRequest } from '../src/lib/schemas/batches';
 
 const email = (handle: string) => `${handle}@kestrelhollow.example`;
@@ -47,7 +47,7 @@ export async function seed(knex: Knex): Promise<void> {
     console.log('seed 04_batches: no approved KH-W30-90 revision; demo batches skipped.');
     return;
   }
-  const content = revisionContentSchema.parse(JSON.parse(rev.content_json));
+  const content = parseRecipe(rev.content_json);
   const people = new Map((await knex('users').whereIn('email', ['tomas.brand', 'mira.castellan', 'ines.halloran'].map(email)).select('id', 'email', 'name')).map((u) => [u.email.split('@')[0] as string, u as { id: number; email: string; name: string }]));
   if (people.size < 3) return;
   for (const b of DEMO) {

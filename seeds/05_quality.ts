@@ -7,7 +7,7 @@
  * Idempotent: a batch that already has measurements is left alone.
  */
 import type { Knex } from 'knex';
-import { revisionContentSchema } from '../src/lib/formulations/content';
+import { fractionsWithLeak, parseRecipe } from '../src/lib/recipe';
 import { loadRevisionComponents } from '../src/lib/server/formulations/components';
 import { syntheticPartsCsv } from '../src/lib/quality/syntheticParts';
 import { insertMeasurements, measureFile } from '../src/lib/server/quality/upload';
@@ -24,9 +24,9 @@ export async function seed(knex: Knex): Promise<void> {
     return;
   }
   if (await knex('measurement_uploads').where({ batch_id: batch.id }).first('id')) return;
-  const content = revisionContentSchema.parse(JSON.parse(batch.content_json));
+  const content = parseRecipe(batch.content_json);
   const loaded = await loadRevisionComponents(knex, content);
-  const fractions = [content.pumpLeakFraction, ...content.phosphors.map((p) => p.opticalFraction)];
+  const fractions = fractionsWithLeak(content);
   const text = `# Integrating sphere export, ${BATCH}, 24 parts at 25 °C\n` +
     syntheticPartsCsv(loaded.components, fractions, { parts: 24, prefix: `${BATCH}-P`, lastPhosphorScale: 1.04, scatter: 0.02 });
   const file = { name: `${BATCH}-sphere.csv`, contentType: 'text/csv', body: Buffer.from(text, 'utf8') };

@@ -8,6 +8,7 @@
 import autocannon from 'autocannon';
 import { create as createToken } from '../../src/lib/server/auth/tokens';
 import { closeDb, db } from '../../src/lib/server/db/index';
+import { parseRecipe } from '../../src/lib/recipe';
 import { scenarios, type Scenario } from './scenarios';
 
 const base = process.env.LOAD_URL ?? 'http://127.0.0.1:4174';
@@ -60,7 +61,7 @@ if (!formulator) throw new Error('load: the demo formulator is missing (seed the
 const { token } = await createToken(formulator.id, 'load run', 1);
 const approved = await db()('formulation_revisions').where({ state: 'approved' }).first('content_json');
 if (!approved) throw new Error('load: no approved demo revision to copy a draft from (seed the database first)');
-const draftContent = JSON.parse(approved.content_json);
+const draftContent = parseRecipe(approved.content_json);
 await closeDb();
 
 console.log(`load: ${connections} connections, ${seconds} s per route, ${base}`);

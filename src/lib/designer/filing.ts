@@ -1,11 +1,11 @@
 /**
  * Filing a designed blend as a formulation revision (pure part): the zod schemas of the form the
- * designer posts, and the revision content (src/lib/formulations/content.ts) built from it.
+ * designer posts, and the revision content (src/lib/recipe) built from it.
  * The server adds the material codes and the silicone system from its own tables.
  */
 import { z } from 'zod';
 import { floorsSchema, targetSchema, toleranceSchema } from '../aim/index';
-import type { MaterialRef, RevisionContent, SiliconeSpec } from '../formulations/content';
+import { CONTENT_VERSION, type MaterialRef, type RevisionContent, type SiliconeSpec } from '../recipe';
 import { roundedShares } from './shares';
 
 const materialId = z.number().int().positive();
@@ -67,6 +67,7 @@ export type FilingForm = z.infer<typeof filingFormSchema>;
 export function revisionContentFrom(blend: DesignedBlend, refs: { pump: MaterialRef; phosphors: MaterialRef[] }, silicone: SiliconeSpec, notes: string): RevisionContent {
   const shares = roundedShares(blend.fractions, 4);
   return {
+    contentVersion: CONTENT_VERSION,
     pump: refs.pump,
     phosphors: refs.phosphors.map((p, i) => ({
       ...p,

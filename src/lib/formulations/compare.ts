@@ -2,7 +2,7 @@
  * Side-by-side comparison of two revisions: phosphor ratios, predicted metrics and settings, each
  * row flagged when the two differ by more than the metric's display resolution. Pure.
  */
-import type { RevisionContent } from './content';
+import type { RevisionContent } from '../recipe';
 import type { RevisionPrediction } from './prediction';
 
 export interface Side {

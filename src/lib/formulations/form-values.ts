@@ -4,7 +4,7 @@
  * silicone system are named by id; their codes, names and properties are filled in from the
  * library on save). Pure, shared by the pages and their tests.
  */
-import type { RevisionContent } from './content';
+import type { RevisionContent } from '../recipe';
 
 export const MAX_PHOSPHORS = 5;
 export type FormValues = Record<string, string>;

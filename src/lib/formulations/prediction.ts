@@ -9,7 +9,7 @@ import { mix } from '../blend/mix';
 import { colourDistance, resolveTarget, violatedFloors, withinTolerance } from '../aim/index';
 import type { BlendComponents } from '../blend/types';
 import { findAnsiBin } from '../spectral/ansi/c78377';
-import type { RevisionContent } from './content';
+import { fractionsWithLeak, type RevisionContent } from '../recipe';
 
 /** Names the computation that produced a prediction; stored beside it so later readers know. */
 export const PREDICTION_CORE_VERSION = 'phosforge-core 0.1.0 (optical superposition)';
@@ -42,11 +42,6 @@ export interface RevisionPrediction {
 const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
 const round = (v: number, digits: number) => Number(v.toFixed(digits));
 
-/** Optical fractions in mix order: pump leak first, then the phosphors as listed. */
-export function opticalFractions(content: RevisionContent): number[] {
-  return [content.pumpLeakFraction, ...content.phosphors.map((p) => p.opticalFraction)];
-}
-
 /** Floors the prediction misses; Ra/R9 floors count as missed when CIE 13.3 is not meaningful (DC ≥ 5.4e-3). */
 function missedFloors(content: RevisionContent, m: { ra: number | null; r9: number | null; rf: number | null; rg: number | null; ler: number }): string[] {
   const f = content.floors;
@@ -56,7 +51,7 @@ function missedFloors(content: RevisionContent, m: { ra: number | null; r9: numb
 }
 
 export function predictRevision(content: RevisionContent, components: BlendComponents): RevisionPrediction {
-  const result = mix(components, { kind: 'optical', fractions: opticalFractions(content) });
+  const result = mix(components, { kind: 'optical', fractions: fractionsWithLeak(content) });
   const e = result.evaluation;
   const target = resolveTarget(content.target);
   const err = colourDistance(e.x, e.y, target);

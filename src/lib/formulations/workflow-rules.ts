@@ -5,7 +5,10 @@
  * returned; an approval supersedes the previous approved revision; nobody signs off their own work.
  */
 import type { Role } from '../access/roles';
-import type { RevisionState } from './content';
+
+/** Revision states (plain words of the trade). */
+export const REVISION_STATES = ['draft', 'submitted', 'approved', 'returned', 'superseded', 'withdrawn'] as const;
+export type RevisionState = (typeof REVISION_STATES)[number];
 
 export type RevisionCommand = 'edit' | 'submit' | 'review' | 'approve' | 'return' | 'withdraw';
 

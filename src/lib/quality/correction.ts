@@ -12,20 +12,19 @@ import type { Recipe } from '../blend/correction';
 import { mix } from '../blend/mix';
 import type { CorrectionRequest } from '../blend/schemas';
 import type { BlendComponents } from '../blend/types';
-import type { RevisionContent } from '../formulations/content';
+import { fractionsWithLeak, loadingOf, type RevisionContent } from '../recipe';
 
 /** Default share of the full correction applied in one trim (0.5–0.8 is usual on lines) [common practice]. */
 export const DEFAULT_STEP_FRACTION = 0.8;
 
 export function revisionRecipe(content: RevisionContent, components: BlendComponents): Recipe {
-  const wt = content.phosphors.map((p) => p.wtPct);
-  const loadingReady = content.loading !== null && wt.every((w) => w !== null && w > 0)
-    && components.phosphors.every((p) => p.absorptionPerWtPctMm !== undefined);
+  const wt = loadingOf(content);
+  const loadingReady = wt !== null && components.phosphors.every((p) => p.absorptionPerWtPctMm !== undefined);
   if (loadingReady && content.loading) {
     const { basis: _basis, ...loading } = content.loading;
-    return { kind: 'loading', concentrationsWtPct: wt as number[], loading };
+    return { kind: 'loading', concentrationsWtPct: wt, loading };
   }
-  return { kind: 'optical', fractions: [content.pumpLeakFraction, ...content.phosphors.map((p) => p.opticalFraction)] };
+  return { kind: 'optical', fractions: fractionsWithLeak(content) };
 }
 
 export function correctionRequest(

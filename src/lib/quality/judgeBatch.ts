@@ -4,7 +4,7 @@
  * the revision targets a bin; quality may instead choose a step ellipse for the batch.
  */
 import type { ResolvedTarget, Target, Tolerance } from '../aim/index';
-import type { RevisionContent } from '../formulations/content';
+import type { RevisionContent } from '../recipe';
 import { describeTolerance, judgePart } from './acceptance';
 import { summariseBatch, type BatchSummary } from './summarise';
 import { qualityTarget } from './target';

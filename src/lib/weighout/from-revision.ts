@@ -10,7 +10,7 @@
 import { Rat } from './rational';
 import type { WeighoutInput, ToleranceSpec } from './schema';
 import type { WeighoutIssue } from './compute';
-import type { RevisionContent } from '../formulations/content';
+import { loadingOf, phosphorLines, type RevisionContent } from '../recipe';
 import type { CreateBatchRequest } from '../schemas/batches';
 
 /** Common practice: ±0.5 % for phosphors, ±1 % for silicone parts and additives. */
@@ -22,18 +22,19 @@ export const DEFAULT_TOLERANCE: Record<'phosphor' | 'additive' | 'silicone', Tol
 
 /** The revision's per-phosphor loadings on the chosen basis, or null when the revision has none. */
 export function revisionLoadings(content: RevisionContent, basis: 'wtPctOfSlurry' | 'phr'): number[] | null {
-  const wt = content.phosphors.map((p) => p.wtPct);
-  if (wt.some((w) => w === null || w <= 0)) return null;
-  if (basis === 'wtPctOfSlurry') return wt as number[];
-  const sum = (wt as number[]).reduce((a, w) => a.add(Rat.fromNumber(w)), Rat.ZERO);
+  const wt = loadingOf(content);
+  if (wt === null) return null;
+  if (basis === 'wtPctOfSlurry') return wt;
+  const sum = wt.reduce((a, w) => a.add(Rat.fromNumber(w)), Rat.ZERO);
   if (sum.gte(Rat.HUNDRED)) return null;
-  return (wt as number[]).map((w) => Number(Rat.fromNumber(w).mul(Rat.HUNDRED).div(Rat.HUNDRED.sub(sum)).toFixed(4)));
+  return wt.map((w) => Number(Rat.fromNumber(w).mul(Rat.HUNDRED).div(Rat.HUNDRED.sub(sum)).toFixed(4)));
 }
 
 export type FromRevisionResult = { ok: true; input: WeighoutInput } | { ok: false; errors: WeighoutIssue[] };
 
 export function weighoutInputFromRevision(content: RevisionContent, req: Omit<CreateBatchRequest, 'revisionId'>): FromRevisionResult {
-  const n = content.phosphors.length;
+  const lines = phosphorLines(content);
+  const n = lines.length;
   const fromRevision = revisionLoadings(content, req.loading.basis);
   let pcts: number[];
   let totalPct: number | null = null;
@@ -54,7 +55,7 @@ export function weighoutInputFromRevision(content: RevisionContent, req: Omit<Cr
     input: {
       sizing: req.sizing,
       loading: { basis: req.loading.basis, totalPct },
-      phosphors: content.phosphors.map((p, i) => ({
+      phosphors: lines.map((p, i) => ({
         materialId: p.materialId, code: p.code, name: p.name, pct: pcts[i], tolerance: tolerances[i] ?? DEFAULT_TOLERANCE.phosphor
       })),
       additives: req.additives ?? [],

@@ -4,7 +4,7 @@
  */
 import { resolveTarget } from '../aim/index';
 import { findAnsiBin } from '../spectral/index';
-import type { RevisionContent } from '../formulations/content';
+import type { RevisionContent } from '../recipe';
 
 export interface BatchTarget {
   description: string;

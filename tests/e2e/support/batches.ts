@@ -1,7 +1,7 @@
 /** A completed demo batch with a synthetic measurement file, made through the API as a technician would. */
 import { expect, type APIRequestContext } from '@playwright/test';
 import { signedInContext, testDb, DEMO } from './accounts';
-import { revisionContentSchema } from '../../../src/lib/formulations/content';
+import { fractionsWithLeak, parseRecipe } from '../../../src/lib/recipe';
 import { loadRevisionComponents } from '../../../src/lib/server/formulations/components';
 import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';
 
@@ -31,9 +31,9 @@ export async function completedBatch(): Promise<{ id: number; batchNumber: strin
     expect((await json(tech, `/api/v1/batches/${id}/complete`, { version })).status()).toBe(200);
     await tech.dispose();
     // 12 synthetic parts of the revision (invented), red 3 % high with a little scatter.
-    const content = revisionContentSchema.parse(JSON.parse(rev.content_json));
+    const content = parseRecipe(rev.content_json);
     const { components } = await loadRevisionComponents(knex, content);
-    const fractions = [content.pumpLeakFraction, ...content.phosphors.map((p) => p.opticalFraction)];
+    const fractions = fractionsWithLeak(content);
     return { id, batchNumber, csv: syntheticPartsCsv(components, fractions, { parts: 12, prefix: `${batchNumber}-`, lastPhosphorScale: 1.03, scatter: 0.01 }) };
   } finally {
     await knex.destroy();

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { filingFormSchema, revisionContentFrom, type DesignedBlend } from '../../../src/lib/designer/filing';
-import { revisionContentSchema } from '../../../src/lib/formulations/content';
+import { revisionContentSchema } from '../../../src/lib/recipe';
 import { componentQuerySchema, componentQueryString } from '../../../src/lib/designer/component-query';
 
 const blend: DesignedBlend = {

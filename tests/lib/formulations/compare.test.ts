@@ -1,10 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { compareMetrics, compareRatios, compareSettings } from '../../../src/lib/formulations/compare';
-import type { RevisionContent } from '../../../src/lib/formulations/content';
+import type { RevisionContent } from '../../../src/lib/recipe';
 import type { RevisionPrediction } from '../../../src/lib/formulations/prediction';
 
 const ref = (materialId: number, code: string) => ({ materialId, code, name: `${code} test` });
 const base: RevisionContent = {
+  contentVersion: 1,
   pump: ref(1, 'B-450'),
   phosphors: [{ ...ref(2, 'GL-530'), opticalFraction: 0.3, wtPct: 9 }, { ...ref(3, 'RD-625'), opticalFraction: 0.6, wtPct: 8 }],
   pumpLeakFraction: 0.1,

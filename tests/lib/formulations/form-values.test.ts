@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { contentToFormValues, formValuesToRaw } from '../../../src/lib/formulations/form-values';
-import { revisionContentSchema, type RevisionContent } from '../../../src/lib/formulations/content';
+import { revisionContentSchema, type RevisionContent } from '../../../src/lib/recipe';
 
 const content: RevisionContent = {
+  contentVersion: 1,
   pump: { materialId: 11, code: 'B-450', name: 'B-450 royal blue chip' },
   phosphors: [
     { materialId: 12, code: 'GL-530', name: 'GL-530 garnet green', opticalFraction: 0.2667, wtPct: 9.32 },

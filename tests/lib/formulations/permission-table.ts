@@ -4,7 +4,7 @@
  * withdraw: the author before approval, quality to retire an approved revision; admins may act as
  * quality and withdraw). Shared by the rule test and the service test.
  */
-import type { RevisionState } from '../../../src/lib/formulations/content';
+import type { RevisionState } from '../../../src/lib/formulations/workflow-rules';
 import type { RevisionCommand } from '../../../src/lib/formulations/workflow-rules';
 
 export type Person = 'author (formulator)' | 'other formulator' | 'technician' | 'quality reviewer' | 'administrator';

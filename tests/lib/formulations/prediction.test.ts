@@ -1,10 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { predictRevision } from '../../../src/lib/formulations/prediction';
 import { BLUE_PUMP, demoPhosphor } from '../../../src/lib/blend/demo-components';
-import type { RevisionContent } from '../../../src/lib/formulations/content';
+import type { RevisionContent } from '../../../src/lib/recipe';
 
 const ref = (materialId: number, code: string) => ({ materialId, code, name: code });
 const content = (leak: number, fractions: number[], floors: RevisionContent['floors'] = {}): RevisionContent => ({
+  contentVersion: 1,
   pump: ref(1, 'B-450'),
   phosphors: [{ ...ref(2, 'GL-530'), opticalFraction: fractions[0], wtPct: null }, { ...ref(3, 'YL-568'), opticalFraction: fractions[1], wtPct: null }, { ...ref(4, 'RD-625'), opticalFraction: fractions[2], wtPct: null }],
   pumpLeakFraction: leak,

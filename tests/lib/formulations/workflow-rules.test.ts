@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { COMMAND_RULES, STATE_TRANSITIONS, allowedCommands, refusal, type RevisionCommand } from '../../../src/lib/formulations/workflow-rules';
-import { REVISION_STATES, type RevisionState } from '../../../src/lib/formulations/content';
+import { REVISION_STATES, type RevisionState } from '../../../src/lib/formulations/workflow-rules';
 import type { Role } from '../../../src/lib/access/roles';
 import { ALLOWED, type Person } from './permission-table';
 

@@ -9,7 +9,7 @@ import { resolveTarget } from '../../../src/lib/aim/index';
 import { xyOf } from '../../../src/lib/blend/superposition';
 import { BLUE_PUMP, demoPhosphor } from '../../../src/lib/blend/demo-components';
 import type { BlendComponents } from '../../../src/lib/blend/types';
-import type { RevisionContent } from '../../../src/lib/formulations/content';
+import type { RevisionContent } from '../../../src/lib/recipe';
 import { xyToUvPrime } from '../../../src/lib/spectral/colorimetry/chromaticity';
 import { metricsAt } from './support';
 
@@ -27,6 +27,7 @@ const wt = concentrationsForFractions(basis.loading!, w, loading).concentrations
 
 function content(withLoading: boolean): RevisionContent {
   return {
+    contentVersion: 1,
     pump: { materialId: 1, code: 'B-450', name: 'B-450 royal blue chip' },
     phosphors: components.phosphors.map((p, i) => ({ materialId: i + 2, code: p.name.split(' ')[0], name: p.name, opticalFraction: w[i + 1], wtPct: withLoading ? wt[i] : null })),
     pumpLeakFraction: w[0],

@@ -16,6 +16,7 @@ import { markMixed, recordLine } from '../../../src/lib/server/batches/weighing'
 import { createBatchSchema } from '../../../src/lib/schemas/batches';
 import { getRevision } from '../../../src/lib/server/formulations/read';
 import { loadBlendComponents } from '../../../src/lib/server/materials/components';
+import { fractionsWithLeak, materialIdsOf } from '../../../src/lib/recipe';
 import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';
 import { uploadMeasurements } from '../../../src/lib/server/quality/upload';
 import { userByEmail } from './fuzz-support';
@@ -137,8 +138,9 @@ export async function probeBatch(technician: User, revisionId: number, stage: Ba
 /** Uploads `parts` synthetic measured parts of the batch's revision, labelled `${prefix}-001`… */
 export async function probeUpload(signer: User, batchId: number, parts: number, prefix: string): Promise<number> {
   const rev = (await getRevision((await getBatch(batchId))!.batch.revisionId))!;
-  const components = await loadBlendComponents(rev.content.pump.materialId, rev.content.phosphors.map((p) => p.materialId));
-  const fractions = [rev.content.pumpLeakFraction, ...rev.content.phosphors.map((p) => p.opticalFraction)];
+  const ids = materialIdsOf(rev.content);
+  const components = await loadBlendComponents(ids.pump, ids.phosphors);
+  const fractions = fractionsWithLeak(rev.content);
   const csv = syntheticPartsCsv(components, fractions, { parts, prefix: `${prefix}-` });
   const file = { name: `${prefix}.csv`, contentType: 'text/csv', body: Buffer.from(csv, 'utf8') };
   return (await uploadMeasurements(signer, batchId, file)).uploadId;

@@ -6,7 +6,7 @@
 import { db } from '../../../src/lib/server/db/index';
 import * as users from '../../../src/lib/server/db/users';
 import type { User } from '../../../src/lib/server/db/users';
-import type { RevisionContent } from '../../../src/lib/formulations/content';
+import type { RevisionContent } from '../../../src/lib/recipe';
 
 export const DEMO_EMAILS = {
   technician: 'tomas.brand@kestrelhollow.example',
@@ -53,6 +53,7 @@ export async function makeFixture(opts: { withWtPct?: boolean } = {}): Promise<F
   const code = `KH-T${sfx}`;
   const [formulationId] = await k('formulations').insert({ code, name: `Test warm white ${sfx}`, created_by: admin.id });
   const content: RevisionContent = {
+    contentVersion: 1,
     pump: { materialId: greenId, code: 'B-450', name: 'blue pump' },
     phosphors: [
       { materialId: greenId, code: greenCode, name: 'test green garnet', opticalFraction: 0.4, wtPct: opts.withWtPct === false ? null : 7 },

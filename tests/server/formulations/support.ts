@@ -2,7 +2,7 @@
 import { db } from '../../../src/lib/server/db/index';
 import * as users from '../../../src/lib/server/db/users';
 import type { User } from '../../../src/lib/server/db/users';
-import type { RevisionContent } from '../../../src/lib/formulations/content';
+import type { RevisionContent } from '../../../src/lib/recipe';
 import { ensureDemoMaterials } from '../../support/demo-materials';
 import type { CaughtMail } from '../../support/mail';
 
@@ -34,6 +34,7 @@ export async function warmWhite(overrides: Partial<RevisionContent> = {}): Promi
   materialIds ??= await ensureDemoMaterials(db());
   const m = (code: string) => ({ materialId: materialIds!.get(code)!, code, name: code });
   return {
+    contentVersion: 1,
     pump: m('B-450'),
     phosphors: [
       { ...m('GL-530'), opticalFraction: 0.2667, wtPct: 9.32 },

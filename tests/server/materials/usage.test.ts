@@ -5,7 +5,7 @@ import { revisionsUsing } from '../../../src/lib/server/materials/usage';
 import { demoUser, phosphorFields, removeTestMaterials } from './support';
 import type { User } from '../../../src/lib/server/db/users';
 
-// Formulation revisions name materials as "materialId": <id> in content_json (src/lib/formulations/content.ts).
+// Formulation revisions name materials as "materialId": <id> in content_json (src/lib/recipe/schema.ts).
 // Before the formulations feature lands, this test creates minimal stand-in tables and drops them afterwards;
 // after it lands, it writes rows into the real tables through their contract columns.
 let created = false;

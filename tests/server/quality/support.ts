@@ -10,6 +10,7 @@ import { markMixed, recordLine } from '../../../src/lib/server/batches/weighing'
 import { completeBatch } from '../../../src/lib/server/batches/complete';
 import { createBatchSchema } from '../../../src/lib/schemas/batches';
 import { loadBlendComponents } from '../../../src/lib/server/materials/components';
+import { fractionsWithLeak, materialIdsOf } from '../../../src/lib/recipe';
 import { getRevision } from '../../../src/lib/server/formulations/read';
 import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';
 import { demoUser } from '../batches/support';
@@ -50,8 +51,9 @@ export async function completedBatch(code = 'KH-W30-90'): Promise<{ batchId: num
 /** CSV of `n` synthetic parts of the revision (see src/lib/quality/syntheticParts.ts), labelled `${prefix}-001`… */
 export async function partsCsv(revisionId: number, n: number, prefix: string, lastPhosphorScale = 1, scatter = 0.01): Promise<string> {
   const rev = (await getRevision(revisionId))!;
-  const components = await loadBlendComponents(rev.content.pump.materialId, rev.content.phosphors.map((p) => p.materialId));
-  const fractions = [rev.content.pumpLeakFraction, ...rev.content.phosphors.map((p) => p.opticalFraction)];
+  const ids = materialIdsOf(rev.content);
+  const components = await loadBlendComponents(ids.pump, ids.phosphors);
+  const fractions = fractionsWithLeak(rev.content);
   return syntheticPartsCsv(components, fractions, { parts: n, prefix: `${prefix}-`, lastPhosphorScale, scatter });
 }
 

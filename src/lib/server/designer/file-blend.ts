@@ -9,7 +9,7 @@ import { listSiliconeSystems } from '../formulations/silicone';
 import { createFormulationWithDraft, createRevision, ValidationError } from '../formulations/save';
 import type { Caller } from '../formulations/guard';
 import { revisionContentFrom, type FilingForm } from '../../designer/filing';
-import type { MaterialRef, SiliconeSpec } from '../../formulations/content';
+import type { MaterialRef, SiliconeSpec } from '../../recipe';
 
 export interface FiledBlend {
   formulationId: number;

@@ -5,7 +5,7 @@
  */
 import type { Knex } from 'knex';
 import type { BlendComponents, PhosphorSpec, Spd } from '../../blend/types';
-import type { RevisionContent } from '../../formulations/content';
+import type { RevisionContent } from '../../recipe';
 import { ValidationError } from './errors';
 
 interface MaterialRow {

@@ -1,7 +1,7 @@
 /** Applies the state machine's rules in the server layer: wrong state → 409, wrong person or role → 403. */
 import type { Role } from '../../access/roles';
 import { COMMAND_RULES, refusal, type RevisionCommand } from '../../formulations/workflow-rules';
-import type { RevisionState } from '../../formulations/content';
+import type { RevisionState } from '../../formulations/workflow-rules';
 import { ConflictError, PermissionError } from './errors';
 
 export interface Caller {

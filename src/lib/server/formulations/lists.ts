@@ -2,7 +2,7 @@
 import { z } from 'zod';
 import type { Knex } from 'knex';
 import { db } from '../db/index';
-import { REVISION_STATES, type RevisionState } from '../../formulations/content';
+import { REVISION_STATES, type RevisionState } from '../../formulations/workflow-rules';
 import type { RevisionRecord } from './records';
 
 const paging = {

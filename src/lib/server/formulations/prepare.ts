@@ -5,7 +5,7 @@
 import type { Knex } from 'knex';
 import { BlendInputError } from '../../blend/errors';
 import { SpectrumInputError } from '../../spectral/errors';
-import { revisionContentSchema, type RevisionContent } from '../../formulations/content';
+import { checkRecipe, fractionsWithLeak, type RevisionContent } from '../../recipe';
 import { PREDICTION_CORE_VERSION, predictRevision, type RevisionPrediction } from '../../formulations/prediction';
 import { loadRevisionComponents } from './components';
 import { ValidationError } from './errors';
@@ -22,13 +22,13 @@ export interface PreparedRevision {
 }
 
 export function parseContent(raw: unknown): RevisionContent {
-  const parsed = revisionContentSchema.safeParse(raw);
-  if (!parsed.success) {
-    const issues = parsed.error.issues.map((i) => ({ path: i.path.join('.') || '(content)', message: i.message }));
+  const parsed = checkRecipe(raw);
+  if (!parsed.ok) {
+    const issues = parsed.issues;
     throw new ValidationError(`Invalid revision content: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`, issues);
   }
-  const c = parsed.data;
-  const sum = c.pumpLeakFraction + c.phosphors.reduce((s, p) => s + p.opticalFraction, 0);
+  const c = parsed.content;
+  const sum = fractionsWithLeak(c).reduce((s, f) => s + f, 0);
   if (Math.abs(sum - 1) > FRACTION_SUM_TOLERANCE) {
     const message = `pump leak and phosphor optical fractions must add up to 1 (they add up to ${sum.toFixed(4)})`;
     throw new ValidationError(message, [{ path: 'phosphors', message }]);

@@ -5,6 +5,7 @@
 import type { Knex } from 'knex';
 import { db } from '../db/index';
 import { REVISION_COLUMNS, toRevisionRecord, type RevisionRecord, type RevisionRow } from './records';
+import { storedContentSha256 } from './hash';
 
 export type { RevisionRecord } from './records';
 
@@ -20,6 +21,12 @@ export async function getRevision(id: number, k?: Knex | Knex.Transaction): Prom
   if (!Number.isSafeInteger(id) || id <= 0) return null;
   const row: RevisionRow | undefined = await revisionQuery(k).where('r.id', id).first();
   return row ? toRevisionRecord(row) : null;
+}
+
+/** Whether the stored content still matches its recorded SHA-256 (checked over the stored text, as signed). */
+export async function storedContentVerified(id: number, k: Knex | Knex.Transaction = db()): Promise<boolean> {
+  const row: { content_json: string; content_sha256: string } | undefined = await k('formulation_revisions').where({ id }).first('content_json', 'content_sha256');
+  return row !== undefined && storedContentSha256(row.content_json) === row.content_sha256;
 }
 
 /** The approved revision the line builds from, or null when none is approved. */

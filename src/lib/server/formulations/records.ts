@@ -1,5 +1,6 @@
-/** Row → record mapping of formulation revisions (snake_case columns to camelCase, JSON parsed). */
-import type { RevisionContent, RevisionState } from '../../formulations/content';
+/** Row → record mapping of formulation revisions (snake_case columns to camelCase; content read through the recipe reader). */
+import { parseRecipe, type RevisionContent } from '../../recipe';
+import type { RevisionState } from '../../formulations/workflow-rules';
 import type { RevisionPrediction } from '../../formulations/prediction';
 
 export interface RevisionRecord {
@@ -77,7 +78,7 @@ export function toRevisionRecord(r: RevisionRow): RevisionRecord {
     formulationName: r.formulation_name,
     revisionNo: r.revision_no,
     state: r.state,
-    content: JSON.parse(r.content_json),
+    content: parseRecipe(r.content_json),
     predicted: JSON.parse(r.predicted_json),
     coreVersion: r.core_version,
     contentSha256: r.content_sha256,

@@ -7,7 +7,7 @@ import { z } from 'zod';
 import type { Knex } from 'knex';
 import { db } from '../db/index';
 import { record } from '../db/audit';
-import type { RevisionContent } from '../../formulations/content';
+import type { RevisionContent } from '../../recipe';
 import { ConflictError, NotFoundError, ValidationError } from './errors';
 import { checkVersion, enforce, requireRoles, type Caller } from './guard';
 import { prepareRevision, type PreparedRevision } from './prepare';
@@ -151,6 +151,7 @@ export async function updateDraft(caller: Caller, revisionId: number, version: n
     if (changed !== 1) throw new ConflictError('The draft changed while saving; nothing was saved. Reload and try again.');
     await record({
       actorId: caller.id, actorEmail: caller.email, entityType: 'formulation_revision', entityId: revisionId, action: 'update-draft',
+      // The audit keeps the stored document as it was (its own version), not what the recipe reader makes of it.
       before: { version: row.version, contentSha256: row.content_sha256, content: JSON.parse(row.content_json) },
       after: { version: version + 1, contentSha256: prepared.sha256, content: prepared.content }
     }, trx);

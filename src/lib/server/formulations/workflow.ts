@@ -10,7 +10,7 @@ import { record } from '../db/audit';
 import type { RevisionCommand } from '../../formulations/workflow-rules';
 import { ConflictError, NotFoundError } from './errors';
 import { checkVersion, enforce, type Caller } from './guard';
-import { contentSha256 } from './hash';
+import { storedContentSha256 } from './hash';
 import { getRevision } from './read';
 import { notifyApproved, notifyReturned, notifySubmitted, notifySuperseded } from './notify';
 import { verifySignaturePassword } from './signature';
@@ -56,7 +56,7 @@ async function precheck(command: RevisionCommand, caller: Caller, revisionId: nu
 
 /** The stored hash must still match the stored content before anyone submits or signs it. */
 function checkIntegrity(row: Locked): void {
-  if (contentSha256(JSON.parse(row.content_json)) !== row.content_sha256) {
+  if (storedContentSha256(row.content_json) !== row.content_sha256) {
     throw new ConflictError(`Revision ${row.revision_no}: its content no longer matches its recorded SHA-256; it cannot be submitted or signed. Tell an administrator.`);
   }
 }

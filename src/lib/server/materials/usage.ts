@@ -1,6 +1,6 @@
 /**
  * Where a material is used. Formulation revisions name their pump and phosphors as
- * `"materialId": <id>` inside content_json (src/lib/formulations/content.ts). The formulations
+ * `"materialId": <id>` inside content_json (src/lib/recipe/schema.ts). The formulations
  * tables may not exist yet in every installation, so each table is looked up first.
  */
 import type { Knex } from 'knex';

@@ -12,6 +12,7 @@ import { createCorrectionDraft } from '../formulations/save';
 import { correctionDraftMessage } from '../mail/templates/correction-draft';
 import { BlendInputError } from '../../blend/errors';
 import { correctFromBatch } from '../../quality/index';
+import { materialIdsOf } from '../../recipe';
 import { QualityError, conflict, notFound } from './errors';
 import { requireQuality, type Caller } from './caller';
 import { computeResults, loadContext } from './results';
@@ -33,7 +34,8 @@ export async function makeCorrectionDraft(caller: Caller, batchId: number, stepF
   const b = ctx.detail.batch;
   if (!mean) throw conflict(`Batch ${b.batchNumber} has no measured parts: a correction needs the measured mean.`);
   const content = ctx.revision.content;
-  const components = await loadBlendComponents(content.pump.materialId, content.phosphors.map((p) => p.materialId));
+  const ids = materialIdsOf(content);
+  const components = await loadBlendComponents(ids.pump, ids.phosphors);
   const offset = judged.summary.meanOffset!;
   const note = `Correction from batch ${b.batchNumber} (${judged.summary.parts} parts): measured mean x ${mean.x.toFixed(4)}, y ${mean.y.toFixed(4)}, ` +
     `${offset.steps.toFixed(1)} steps from target; ${Math.round(stepFraction * 100)} % of the correction applied.`;

@@ -11,7 +11,7 @@ import { createLiveEvaluator, type LiveEvaluator, type LiveFrame } from '$lib/de
 import { DEFAULT_AIM, resolveAim, type AimState } from '$lib/designer/aim';
 import { roundedShares, setShare, normaliseShares } from '$lib/designer/shares';
 import type { DesignedBlend } from '$lib/designer/filing';
-import type { RevisionContent } from '$lib/formulations/content';
+import { fractionsWithLeak, phosphorLines, type RevisionContent } from '$lib/recipe';
 import { lightSwatchHex } from '$lib/charts/display-colours';
 import type { Pair } from '$lib/spectral';
 import { untrack } from 'svelte';
@@ -71,11 +71,11 @@ export class DesignerSession {
     const known = (list: MaterialChoice[], ref: { materialId: number; code: string; name: string }) =>
       list.some((m) => m.id === ref.materialId) ? list : [...list, { id: ref.materialId, code: ref.code, name: `${ref.name} (archived)`, family: null, peakNm: null }];
     this.pumps = opened ? known(pumps, opened.pump) : pumps;
-    this.phosphorOptions = opened ? opened.phosphors.reduce(known, phosphors) : phosphors;
+    this.phosphorOptions = opened ? phosphorLines(opened).reduce(known, phosphors) : phosphors;
     if (opened) {
       this.pumpId = opened.pump.materialId;
-      this.phosphorIds = opened.phosphors.map((p) => p.materialId);
-      this.shares = normaliseShares([opened.pumpLeakFraction, ...opened.phosphors.map((p) => p.opticalFraction)]);
+      this.phosphorIds = phosphorLines(opened).map((p) => p.materialId);
+      this.shares = normaliseShares(fractionsWithLeak(opened));
       this.pathLengthMm = opened.loading?.pathLengthMm ?? this.pathLengthMm;
     } else {
       this.pumpId = (pumps.find((p) => (p.peakNm ?? 0) >= 430) ?? pumps[0])?.id ?? null;

@@ -3,8 +3,7 @@ import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
 import { db } from '$lib/server/db/index';
 import { eventsFor } from '$lib/server/audit/search';
-import { contentSha256 } from '$lib/server/formulations/hash';
-import { currentApprovedRevision, getRevision, listAttachments, listSignatures } from '$lib/server/formulations/read';
+import { currentApprovedRevision, getRevision, listAttachments, listSignatures, storedContentVerified } from '$lib/server/formulations/read';
 import { contentFromForm, editorOptions, formRefusal } from '$lib/server/formulations/page-support';
 import { createRevision, updateDraft, ValidationError } from '$lib/server/formulations/save';
 import { returnRevision, sign, submit, withdraw } from '$lib/server/formulations/workflow';
@@ -34,9 +33,10 @@ export const load: PageServerLoad = async ({ locals, params }) => {
   const user = requireUser(locals);
   const rev = await revisionOf(params);
   const commands = allowedCommands(user, rev);
-  const [signatures, attachments, history, current, silicone] = await Promise.all([
+  const [signatures, attachments, history, current, silicone, hashVerified] = await Promise.all([
     listSignatures(rev.id), listAttachments(rev.id), eventsFor('formulation_revision', rev.id), currentApprovedRevision(rev.formulationId),
-    rev.content.silicone.siliconeSystemId ? db()('silicone_systems').where({ id: rev.content.silicone.siliconeSystemId }).first('safety_note', 'degas_notes') : null
+    rev.content.silicone.siliconeSystemId ? db()('silicone_systems').where({ id: rev.content.silicone.siliconeSystemId }).first('safety_note', 'degas_notes') : null,
+    storedContentVerified(rev.id)
   ]);
   return {
     rev,
@@ -45,7 +45,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     attachments,
     history,
     currentId: current?.id ?? null,
-    hashVerified: contentSha256(rev.content) === rev.contentSha256,
+    hashVerified,
     canStartDraft: user.roles.some((r) => r === 'formulator' || r === 'admin'),
     editor: commands.includes('edit') ? { values: contentToFormValues(rev.content), options: await editorOptions() } : null,
     silicone: silicone ? { safetyNote: silicone.safety_note as string, degasNotes: silicone.degas_notes as string | null } : null

@@ -1,12 +1,15 @@
 /**
- * What a formulation revision holds (stored as JSON in formulation_revisions.content_json and hashed
- * for e-signatures). Shared by the designer (save), formulations (review, compare), batches (weigh-out)
- * and quality (targets, correction). Materials are referenced by id and copied by code/name so a
- * record stays readable after a material is renamed or archived.
+ * Version 1 of the content of a formulation revision, as stored in formulation_revisions.content_json
+ * and bound by its e-signatures (SHA-256 of the canonical JSON). Its own definitions: the blend API's
+ * request bodies may change without touching a signed record. Target, tolerance and floors are the
+ * aim's schemas. Materials are referenced by id and copied by code/name, so a record stays readable
+ * after a material is renamed or archived.
+ *
+ * Rows written before the content carried a version tag have no `contentVersion`; they are version 1
+ * (the default below fills it in on read, never in the stored text).
  */
 import { z } from 'zod';
 import { floorsSchema, targetSchema, toleranceSchema } from '../aim/schema';
-import { loadingParamsSchema } from '../blend/schemas';
 
 export const materialRefSchema = z.object({
   materialId: z.number().int().positive(),
@@ -14,6 +17,7 @@ export const materialRefSchema = z.object({
   name: z.string().min(1).max(200)
 });
 
+/** One phosphor line of a recipe. */
 export const revisionPhosphorSchema = materialRefSchema.extend({
   /** Radiant-power fraction of this phosphor in the output (optical superposition model). */
   opticalFraction: z.number().min(0).max(1),
@@ -32,13 +36,24 @@ export const siliconeSchema = z.object({
   densityGPerCm3: z.number().positive().max(5).nullable()
 });
 
-export const revisionContentSchema = z.object({
+/** The loading model the wt % came from (Beer–Lambert photon budget); the basis is wt % of total slurry. */
+export const recipeLoadingSchema = z.object({
+  basis: z.literal('wtPctOfSlurry'),
+  pathLengthMm: z.number().gt(0).max(100),
+  cascade: z.boolean().optional(),
+  cascadePathFactor: z.number().gt(0).max(10).optional(),
+  siliconeDensityGPerCm3: z.number().gt(0).max(5).optional(),
+  pumpIrradianceWPerMm2: z.number().gt(0).max(100).optional()
+});
+
+export const revisionContentV1Schema = z.object({
+  contentVersion: z.literal(1).default(1),
   pump: materialRefSchema,
   phosphors: z.array(revisionPhosphorSchema).min(1, 'at least one phosphor').max(5, 'at most 5 phosphors'),
   /** Radiant-power fraction of pump light that leaks through (optical model); pump + phosphors sum to 1. */
   pumpLeakFraction: z.number().min(0).max(1),
-  /** Loading-model basis; total phosphor loading is the sum of the phosphors' wt % (basis: wt % of total slurry). */
-  loading: loadingParamsSchema.extend({ basis: z.literal('wtPctOfSlurry') }).nullable(),
+  /** Total phosphor loading is the sum of the phosphors' wt % (basis: wt % of total slurry). */
+  loading: recipeLoadingSchema.nullable(),
   silicone: siliconeSchema,
   target: targetSchema,
   tolerance: toleranceSchema,
@@ -49,8 +64,5 @@ export const revisionContentSchema = z.object({
 export type MaterialRef = z.infer<typeof materialRefSchema>;
 export type RevisionPhosphor = z.infer<typeof revisionPhosphorSchema>;
 export type SiliconeSpec = z.infer<typeof siliconeSchema>;
-export type RevisionContent = z.infer<typeof revisionContentSchema>;
-
-/** Revision states (plain words of the trade). */
-export const REVISION_STATES = ['draft', 'submitted', 'approved', 'returned', 'superseded', 'withdrawn'] as const;
-export type RevisionState = (typeof REVISION_STATES)[number];
+export type RecipeLoading = z.infer<typeof recipeLoadingSchema>;
+export type RevisionContentV1 = z.output<typeof revisionContentV1Schema>;
