@@ -93,4 +93,16 @@ describe('POST /api/v1/correct', () => {
     for (const s of body.sensitivities) expect(Object.keys(s).sort()).toEqual(['dCct', 'dDuv', 'dx', 'dy', 'id', 'name']);
     expect(JSON.stringify(body.sensitivities).length).toBeLessThan(1000);
   });
+
+  it('answers 422 with the reason when the trim would need a phosphor at or below zero (gross offset)', async () => {
+    const [tx, ty] = cctDuvToXy(3000, 0);
+    const { status, body } = await call(correctPost, jsonEvent({
+      components,
+      recipe: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2] },
+      measured: { kind: 'xy', points: [{ x: tx + 0.1, y: ty - 0.1 }] },
+      target: { kind: 'cctDuv', cct: 3000, duv: 0 }
+    }));
+    expect(status).toBe(422);
+    expect(body.error).toMatch(/without taking YL-568 garnet yellow to zero or below/);
+  });
 });
