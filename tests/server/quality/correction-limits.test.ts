@@ -36,8 +36,9 @@ async function bluePartsCsv(revisionId: number, pumpScale: number, prefix: strin
 }
 
 describe('a gross offset that would run a phosphor to 0 wt % is refused', () => {
-  // Five times the designed pump leak: before this check the trim ran the yellow phosphor down to
-  // 0 wt % (to 4 decimals) and the draft was saved and mailed.
+  // Five times the designed pump leak: before this check the trim did not converge, ran the green and
+  // yellow phosphors down to 0 wt % (to 4 decimals) and the red to an absurd loading, and the draft
+  // was still saved and mailed.
   let b: { batchId: number; batchNumber: string; revisionId: number };
   beforeAll(async () => {
     b = await completedBatch();
