@@ -77,18 +77,22 @@ export function refusalOf(c: RefusalCheck): CorrectionRefusal | null {
   if (m[lowest] < RUNAWAY_MULTIPLIER) {
     return {
       reason: 'belowZero',
-      message: `the target cannot be reached without taking ${c.knobNames[lowest]} to zero or below: the trim runs it down to ` +
-        `${rundown(m[lowest])}${c.converged ? '' : ' and still does not land'}. The measured offset is beyond what these phosphors can trim. ${CHECK_BUILD}`
+      message: `the target cannot be reached without taking ${c.knobNames[lowest]} to zero or below: ` +
+        `the trim runs it down to ${rundown(m[lowest])}${c.converged ? '' : ' and still does not land'}. ` +
+        `The measured offset is beyond what these phosphors can trim. ${CHECK_BUILD}`
     };
   }
   if (!c.converged || m.some((v) => !Number.isFinite(v))) {
-    const left = Number.isFinite(c.closestSteps) ? `the model is still ${c.closestSteps.toFixed(1)} steps from target` : 'the model has not reached the target';
+    const left = Number.isFinite(c.closestSteps)
+      ? `the model is still ${c.closestSteps.toFixed(1)} steps from target`
+      : 'the model has not reached the target';
     return { reason: 'notConverged', message: `the trim does not converge: after ${c.iterations} iterations ${left}. ${CHECK_BUILD}` };
   }
   if (c.appliedTotalWtPct !== null && c.appliedTotalWtPct >= 100) {
     return {
       reason: 'overLoaded',
-      message: `the trim needs ${c.appliedTotalWtPct.toFixed(1)} wt % phosphor in total, which leaves no silicone; the target cannot be reached by trimming this recipe.`
+      message: `the trim needs ${c.appliedTotalWtPct.toFixed(1)} wt % phosphor in total, which leaves no silicone; ` +
+        'the target cannot be reached by trimming this recipe.'
     };
   }
   return null;

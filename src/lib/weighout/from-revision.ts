@@ -59,7 +59,8 @@ export function weighoutInputFromRevision(content: RevisionContent, req: Omit<Cr
   let totalPct: number | null = null;
   if (req.loading.mode === 'perPhosphor') {
     // A typed loading equal to the revision's printed one is the revision's: weigh its exact value.
-    const given = req.loading.pcts?.map((v, i) => (fromRevision && fromRevision[i] && printPct(fromRevision[i]) === v ? fromRevision[i] : v)) ?? fromRevision;
+    const exactOf = (v: number, i: number) => (fromRevision?.[i] && printPct(fromRevision[i]) === v ? fromRevision[i] : v);
+    const given = req.loading.pcts?.map(exactOf) ?? fromRevision;
     if (!given) return { ok: false, errors: [{ path: 'loading.pcts', message: 'the revision has no per-phosphor loading from the loading model: enter a loading for every phosphor' }] };
     if (given.length !== n) return { ok: false, errors: [{ path: 'loading.pcts', message: `give one loading per phosphor (${n})` }] };
     pcts = given;
