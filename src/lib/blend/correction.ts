@@ -10,9 +10,12 @@
  *   step     Δs = Jᵀ(JJᵀ + εI)⁻¹ r, r = target − (model(s) + b): the minimum-norm
  *            Gauss–Newton step (Penrose 1955 pseudo-inverse) for n ≥ 2 knobs, J by
  *            forward differences of +1 % (the sensitivities); damping 0.8 per iteration;
- *   result   s_final = stepFraction · s* (stepFraction 1 = full correction; 0.5–0.8 is
- *            the cautious first trim practised on lines [common practice]).
+ *   result   s_final = share · s*, share = stepFraction (1 = full correction; 0.5–0.8 is
+ *            the cautious first trim practised on lines [common practice]), lowered when a
+ *            component would change by more than the trim limit (correctionLimits.ts).
  * The predicted colour point includes the bias. Linear algebra: mathjs.
+ * A correction that does not converge, or needs a component at or below zero, is flagged with
+ * `refusal` (correctionLimits.ts); `correctBatch` turns that into a refusal for the caller.
  */
 import { BlendInputError } from './errors';
 import { lusolve } from 'mathjs';
@@ -21,6 +24,7 @@ import { xyToUv } from '../spectral/colorimetry/chromaticity';
 import type { Basis } from './basis';
 import { type ColourModel, RELATIVE_STEP, loadingColourModel, opticalColourModel } from './sensitivities';
 import { colourDistance, type ColourCentre, type ColourDistance } from '../aim/distance';
+import { type CorrectionRefusal, type TrimCap, refusalOf, trimCap } from './correctionLimits';
 import { normaliseRatios } from './superposition';
 import type { LoadingParams } from './types';
 
@@ -39,6 +43,10 @@ export interface CorrectionResult {
   errorAfter: ColourDistance;
   iterations: number;
   converged: boolean;
+  /** How much of the full correction is applied, and what capped it. */
+  cap: TrimCap;
+  /** Why this correction must not be handed over (not converged, below zero, over-loaded); null when it may. */
+  refusal: CorrectionRefusal | null;
 }
 
 const DAMPING = 0.8;
@@ -62,7 +70,7 @@ export function correctRecipe(
   recipe: Recipe,
   measuredPoints: { x: number; y: number }[],
   target: ColourCentre,
-  options: { stepFraction?: number; maxIterations?: number } = {}
+  options: { stepFraction?: number; maxIterations?: number; maxTrimFactor?: number } = {}
 ): CorrectionResult {
   if (measuredPoints.length === 0) throw new BlendInputError('correction needs at least one measured point');
   const mx = measuredPoints.reduce((s, p) => s + p.x, 0) / measuredPoints.length;
@@ -90,13 +98,23 @@ export function correctRecipe(
     const lam = (lusolve(a, r) as number[][]).map((row) => row[0]);
     for (let i = 0; i < n; i++) s[i] += DAMPING * (J[i][0] * lam[0] + J[i][1] * lam[1]);
   }
-  const fraction = Math.max(0, Math.min(1, options.stepFraction ?? 1));
-  const sFinal = s.map((v) => v * fraction);
+  const cap = trimCap(s, options.stepFraction ?? 1, options.maxTrimFactor);
+  const sFinal = s.map((v) => v * cap.appliedShare);
   const [fx, fy] = model(sFinal);
   const predicted = { x: fx + bias.dx, y: fy + bias.dy };
   const { cct, duv } = uvToCct(...xyToUv(predicted.x, predicted.y));
+  const recipeAfter = apply(sFinal);
+  const [cx, cy] = model(s);
+  const refusal = refusalOf({
+    converged,
+    iterations: it,
+    fullMultipliers: s.map(Math.exp),
+    knobNames: basis.components.slice(1).map((c) => c.name),
+    closestSteps: colourDistance(cx + bias.dx, cy + bias.dy, target).steps,
+    appliedTotalWtPct: recipeAfter.kind === 'loading' ? recipeAfter.concentrationsWtPct.reduce((a, c) => a + c, 0) : null
+  });
   return {
-    recipe: apply(sFinal),
+    recipe: recipeAfter,
     multipliers: sFinal.map(Math.exp),
     bias,
     measuredMean: { x: mx, y: my },
@@ -104,6 +122,8 @@ export function correctRecipe(
     errorBefore: colourDistance(mx, my, target),
     errorAfter: colourDistance(predicted.x, predicted.y, target),
     iterations: it,
-    converged
+    converged,
+    cap,
+    refusal
   };
 }

@@ -48,7 +48,8 @@ export function sensitivitiesOf(model: ColourModel, knobs: number[], labels: { i
     p[i] = k * (1 + RELATIVE_STEP);
     const [x, y] = model(p);
     const c = uvToCct(...xyToUv(x, y));
-    return { ...labels[i], dx: x - x0, dy: y - y0, dCct: c.cct - c0.cct, dDuv: c.duv - c0.duv };
+    // Only the label of the knob: a prepared component also carries its spectra, which an answer must not repeat.
+    return { id: labels[i].id, name: labels[i].name, dx: x - x0, dy: y - y0, dCct: c.cct - c0.cct, dDuv: c.duv - c0.duv };
   });
 }
 

@@ -6,6 +6,9 @@
  * Recipe: the loading model (wt % of slurry, Beer–Lambert) when the revision carries it and every
  * phosphor has an absorption coefficient; otherwise the optical fractions (pump leak first).
  * With the optical recipe the new wt % are unknown and left empty for the formulator.
+ * A correction that cannot be made (not converged, a component at or below zero) is refused by
+ * `correctBatch` (CorrectionRefusedError); a capped trim says so in the draft's note, with the
+ * colour point (x,y, CCT, Duv, steps from target) to expect.
  */
 import { correctBatch, type CorrectionResponse } from '../blend/correctBatch';
 import type { Recipe } from '../blend/correction';
@@ -62,6 +65,21 @@ export function correctedContent(content: RevisionContent, components: BlendComp
   };
 }
 
+const pct = (share: number) => `${Math.round(share * 100)} %`;
+const signed = (v: number, digits: number) => `${v < 0 ? '−' : '+'}${Math.abs(v).toFixed(digits)}`;
+
+/** The trim in words: how much of the full correction is applied, what capped it, and the colour to expect. */
+export function trimNote(res: CorrectionResponse): string {
+  const { cap, predicted: p } = res;
+  const expect = `expect x ${p.x.toFixed(4)}, y ${p.y.toFixed(4)} (${Math.round(p.cct)} K, Duv ${signed(p.duv, 4)}), ` +
+    `${res.errorAfter.steps.toFixed(1)} steps from target.`;
+  if (cap.limitedBy === 'none') return `Full correction applied; ${expect}`;
+  const why = cap.limitedBy === 'stepFraction'
+    ? `the step share asked for`
+    : `${pct(cap.requestedShare)} was asked for, and no phosphor may change by more than ×${cap.maxTrimFactor} in one trim`;
+  return `Trim capped at ${pct(cap.appliedShare)} of the full correction (by ${pct(1 - cap.appliedShare)}: ${why}); ${expect}`;
+}
+
 export function correctFromBatch(
   content: RevisionContent,
   components: BlendComponents,
@@ -70,5 +88,5 @@ export function correctFromBatch(
   stepFraction = DEFAULT_STEP_FRACTION
 ): BatchCorrection {
   const response = correctBatch(correctionRequest(content, components, measuredMean, stepFraction));
-  return { response, content: correctedContent(content, components, response, note) };
+  return { response, content: correctedContent(content, components, response, `${note} ${trimNote(response)}`) };
 }

@@ -16,7 +16,7 @@
  * phosphors and additives dispersed into it, part B last — the pot-life clock starts when B is mixed in.
  */
 import { largestRemainder } from './apportion';
-import { Rat } from './rational';
+import { ExactNumberError, Rat } from './rational';
 import { batchSteps } from './sizing';
 import type { LoadingBasis, ToleranceSpec, WeighoutInput } from './schema';
 
@@ -66,8 +66,22 @@ interface Draft { role: LineRole; materialId: number | null; code: string; name:
 const pctOf = (base: Rat, pct: Rat) => base.mul(pct).div(Rat.HUNDRED);
 const show = (r: Rat) => Number(r.toFixed(4));
 
+/** Half a unit in the 4th decimal: how far a printed loading may sit from its exact value. */
+const PRINT_HALF_UNIT = new Rat(1n, 20_000n);
+
+/** A phosphor's loading, exactly: its exact fraction when it carries one (checked against the print), else the typed decimal. */
+function phosphorPct(p: WeighoutInput['phosphors'][number]): Rat {
+  const printed = Rat.fromNumber(p.pct);
+  if (p.pctExact === undefined) return printed;
+  const exact = Rat.parseFraction(p.pctExact);
+  if (!exact || exact.sub(printed).gt(PRINT_HALF_UNIT) || printed.sub(exact).gt(PRINT_HALF_UNIT)) {
+    throw new ExactNumberError(`the exact loading of ${p.code} does not match its printed value ${p.pct}`);
+  }
+  return exact;
+}
+
 function effectivePhosphorPcts(input: WeighoutInput): Rat[] {
-  const given = input.phosphors.map((p) => Rat.fromNumber(p.pct));
+  const given = input.phosphors.map(phosphorPct);
   if (input.loading.totalPct === null) return given;
   const total = Rat.fromNumber(input.loading.totalPct);
   const sum = given.reduce((a, v) => a.add(v), Rat.ZERO);

@@ -6,6 +6,8 @@
  * The revision's per-phosphor loadings are wt % of total slurry (loading model). On the phr basis
  * they are converted keeping the phosphor : silicone ratio of the revision:
  * phrᵢ = wᵢ · 100 / (100 − Σw)  (phosphor mass per 100 g of silicone).
+ * The conversion stays exact (rationals): the phr printed to 4 decimals is for people; the
+ * weigh-out is computed from the exact fraction, so the lines weigh the revision's exact masses.
  */
 import { Rat } from './rational';
 import type { WeighoutInput, ToleranceSpec } from './schema';
@@ -20,14 +22,32 @@ export const DEFAULT_TOLERANCE: Record<'phosphor' | 'additive' | 'silicone', Tol
   silicone: { kind: 'pct', value: 1 }
 };
 
-/** The revision's per-phosphor loadings on the chosen basis, or null when the revision has none. */
-export function revisionLoadings(content: RevisionContent, basis: 'wtPctOfSlurry' | 'phr'): number[] | null {
+/**
+ * The revision's per-phosphor loadings on the chosen basis, exactly (rationals from the wt % as
+ * written), or null when the revision has none or they leave no silicone.
+ */
+export function revisionLoadingsExact(content: RevisionContent, basis: 'wtPctOfSlurry' | 'phr'): Rat[] | null {
   const wt = loadingOf(content);
   if (wt === null) return null;
-  if (basis === 'wtPctOfSlurry') return wt;
-  const sum = wt.reduce((a, w) => a.add(Rat.fromNumber(w)), Rat.ZERO);
+  const exact = wt.map((w) => Rat.fromNumber(w));
+  if (basis === 'wtPctOfSlurry') return exact;
+  const sum = exact.reduce((a, w) => a.add(w), Rat.ZERO);
   if (sum.gte(Rat.HUNDRED)) return null;
-  return wt.map((w) => Number(Rat.fromNumber(w).mul(Rat.HUNDRED).div(Rat.HUNDRED.sub(sum)).toFixed(4)));
+  return exact.map((w) => w.mul(Rat.HUNDRED).div(Rat.HUNDRED.sub(sum)));
+}
+
+/** The same loadings as printed (4 decimals): for display and for a person to copy, never to weigh from. */
+export function revisionLoadings(content: RevisionContent, basis: 'wtPctOfSlurry' | 'phr'): number[] | null {
+  return revisionLoadingsExact(content, basis)?.map(printPct) ?? null;
+}
+
+const printPct = (r: Rat) => Number(r.toFixed(4));
+
+/** A typed loading as is; an exact one as its print plus the fraction the masses are computed from. */
+function loadingFields(pct: number | Rat): { pct: number; pctExact?: string } {
+  if (typeof pct === 'number') return { pct };
+  const printed = printPct(pct);
+  return Rat.fromNumber(printed).eq(pct) ? { pct: printed } : { pct: printed, pctExact: pct.toFraction() };
 }
 
 export type FromRevisionResult = { ok: true; input: WeighoutInput } | { ok: false; errors: WeighoutIssue[] };
@@ -35,11 +55,13 @@ export type FromRevisionResult = { ok: true; input: WeighoutInput } | { ok: fals
 export function weighoutInputFromRevision(content: RevisionContent, req: Omit<CreateBatchRequest, 'revisionId'>): FromRevisionResult {
   const lines = phosphorLines(content);
   const n = lines.length;
-  const fromRevision = revisionLoadings(content, req.loading.basis);
-  let pcts: number[];
+  const fromRevision = revisionLoadingsExact(content, req.loading.basis);
+  let pcts: (number | Rat)[];
   let totalPct: number | null = null;
   if (req.loading.mode === 'perPhosphor') {
-    const given = req.loading.pcts ?? fromRevision;
+    // A typed loading equal to the revision's printed one is the revision's: weigh its exact value.
+    const exactOf = (v: number, i: number) => (fromRevision?.[i] && printPct(fromRevision[i]) === v ? fromRevision[i] : v);
+    const given = req.loading.pcts?.map(exactOf) ?? fromRevision;
     if (!given) return { ok: false, errors: [{ path: 'loading.pcts', message: 'the revision has no per-phosphor loading from the loading model: enter a loading for every phosphor' }] };
     if (given.length !== n) return { ok: false, errors: [{ path: 'loading.pcts', message: `give one loading per phosphor (${n})` }] };
     pcts = given;
@@ -56,7 +78,7 @@ export function weighoutInputFromRevision(content: RevisionContent, req: Omit<Cr
       sizing: req.sizing,
       loading: { basis: req.loading.basis, totalPct },
       phosphors: lines.map((p, i) => ({
-        materialId: p.materialId, code: p.code, name: p.name, pct: pcts[i], tolerance: tolerances[i] ?? DEFAULT_TOLERANCE.phosphor
+        materialId: p.materialId, code: p.code, name: p.name, ...loadingFields(pcts[i]), tolerance: tolerances[i] ?? DEFAULT_TOLERANCE.phosphor
       })),
       additives: req.additives ?? [],
       silicone: {

@@ -58,6 +58,17 @@ export class Rat {
     return new Rat(m[1] === '-' ? -n : n, d);
   }
 
+  /** Parses an exact fraction written by toFraction ("-7/3", "5"); null when it is not one. */
+  static parseFraction(text: string): Rat | null {
+    const m = /^\s*(-?\d{1,80})(?:\/(\d{1,80}))?\s*$/.exec(text);
+    if (!m) return null;
+    const d = BigInt(m[2] ?? '1');
+    return d === 0n ? null : new Rat(BigInt(m[1]), d);
+  }
+
+  /** Exact text "n/d" (or "n" for an integer) that parseFraction reads back unchanged. */
+  toFraction(): string { return this.d === 1n ? this.n.toString() : `${this.n}/${this.d}`; }
+
   add(o: Rat): Rat { return new Rat(this.n * o.d + o.n * this.d, this.d * o.d); }
   sub(o: Rat): Rat { return new Rat(this.n * o.d - o.n * this.d, this.d * o.d); }
   mul(o: Rat): Rat { return new Rat(this.n * o.n, this.d * o.d); }

@@ -36,6 +36,11 @@ export const weighoutPhosphorSchema = z.object({
   name: z.string().min(1).max(200),
   /** On the batch basis; with a total loading these are relative shares (the revision's split). */
   pct: pos('phosphor loading').max(1000),
+  /**
+   * The same loading as an exact fraction "n/d" when `pct` is only its rounded print (a revision's
+   * wt % converted to phr); the masses are computed from this, `pct` is shown.
+   */
+  pctExact: z.string().regex(/^\d{1,80}(\/\d{1,80})?$/, 'exact loading must be a fraction n/d').optional(),
   tolerance: toleranceSpecSchema
 });
 

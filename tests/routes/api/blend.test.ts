@@ -20,6 +20,27 @@ describe('POST /api/v1/mix', () => {
     expect(body.opticalFractions.reduce((a: number, b: number) => a + b, 0)).toBeCloseTo(1, 9);
   });
 
+  // An answer names each knob and its colour shifts only; the spectra were sent by the caller and are not echoed back.
+  const SENSITIVITY_KEYS = ['dCct', 'dDuv', 'dx', 'dy', 'id', 'name'];
+
+  it('gives sensitivities as { id, name, dx, dy, dCct, dDuv } only (optical fractions)', async () => {
+    const { status, body } = await call(mixPost, jsonEvent({ components, ratios: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2] } }));
+    expect(status).toBe(200);
+    expect(body.sensitivities).toHaveLength(4);
+    for (const s of body.sensitivities) expect(Object.keys(s).sort()).toEqual(SENSITIVITY_KEYS);
+    expect(body.sensitivities.map((s: { id: string }) => s.id)).toEqual([components.pump.id, ...components.phosphors.map((p) => p.id)]);
+    // Four labels and four numbers each: well under 1 kB (a single 471-point spectrum alone is several kB).
+    expect(JSON.stringify(body.sensitivities).length).toBeLessThan(1000);
+  });
+
+  it('gives sensitivities with the same keys on the loading model (wt %)', async () => {
+    const { status, body } = await call(mixPost, jsonEvent({ components, ratios: { kind: 'loading', concentrationsWtPct: [3, 6, 2], loading: { pathLengthMm: 0.3 } } }));
+    expect(status).toBe(200);
+    expect(body.sensitivities).toHaveLength(3);
+    for (const s of body.sensitivities) expect(Object.keys(s).sort()).toEqual(SENSITIVITY_KEYS);
+    expect(JSON.stringify(body.sensitivities).length).toBeLessThan(800);
+  });
+
   it('answers 422 when the fraction count does not match the components', async () => {
     const { status, body } = await call(mixPost, jsonEvent({ components, ratios: { kind: 'optical', fractions: [0.5, 0.5] } }));
     expect(status).toBe(422);
@@ -69,5 +90,19 @@ describe('POST /api/v1/correct', () => {
     expect(status).toBe(200);
     expect(body.multipliers).toHaveLength(3);
     expect(body.measuredMean.x).toBeCloseTo(target.x + 0.01, 9);
+    for (const s of body.sensitivities) expect(Object.keys(s).sort()).toEqual(['dCct', 'dDuv', 'dx', 'dy', 'id', 'name']);
+    expect(JSON.stringify(body.sensitivities).length).toBeLessThan(1000);
+  });
+
+  it('answers 422 with the reason when the trim would need a phosphor at or below zero (gross offset)', async () => {
+    const [tx, ty] = cctDuvToXy(3000, 0);
+    const { status, body } = await call(correctPost, jsonEvent({
+      components,
+      recipe: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2] },
+      measured: { kind: 'xy', points: [{ x: tx + 0.1, y: ty - 0.1 }] },
+      target: { kind: 'cctDuv', cct: 3000, duv: 0 }
+    }));
+    expect(status).toBe(422);
+    expect(body.error).toMatch(/without taking YL-568 garnet yellow to zero or below/);
   });
 });

@@ -11,6 +11,7 @@ import { loadBlendComponents } from '../materials/components';
 import { createCorrectionDraft } from '../formulations/save';
 import { correctionDraftMessage } from '../mail/templates/correction-draft';
 import { BlendInputError } from '../../blend/errors';
+import { CorrectionRefusedError, type TrimCap } from '../../blend/correctionLimits';
 import { correctFromBatch } from '../../quality/index';
 import { materialIdsOf } from '../../recipe';
 import { QualityError, conflict, notFound } from './errors';
@@ -22,6 +23,10 @@ export interface CorrectionOutcome {
   revisionId: number;
   revisionNo: number;
   predicted: { x: number; y: number; cct: number; duv: number };
+  /** Steps (SDCM) from target of the predicted point. */
+  predictedSteps: number;
+  /** Share of the full correction applied and what capped it. */
+  cap: TrimCap;
   measuredMean: { x: number; y: number };
 }
 
@@ -38,11 +43,13 @@ export async function makeCorrectionDraft(caller: Caller, batchId: number, stepF
   const components = await loadBlendComponents(ids.pump, ids.phosphors);
   const offset = judged.summary.meanOffset!;
   const note = `Correction from batch ${b.batchNumber} (${judged.summary.parts} parts): measured mean x ${mean.x.toFixed(4)}, y ${mean.y.toFixed(4)}, ` +
-    `${offset.steps.toFixed(1)} steps from target; ${Math.round(stepFraction * 100)} % of the correction applied.`;
+    `${offset.steps.toFixed(1)} steps from target.`;
   let corrected;
   try {
     corrected = correctFromBatch(content, components, mean, note, stepFraction);
   } catch (err) {
+    // Refused or uncomputable: nothing is saved and nobody is mailed.
+    if (err instanceof CorrectionRefusedError) throw new QualityError(422, `No correction draft was made: ${err.message}`);
     if (err instanceof BlendInputError) throw new QualityError(422, `The correction cannot be computed: ${err.message}`);
     throw err;
   }
@@ -53,7 +60,7 @@ export async function makeCorrectionDraft(caller: Caller, batchId: number, stepF
       batch_id: batchId, revision_id: d.revisionId, step_fraction: stepFraction, measured_x: mean.x, measured_y: mean.y,
       parts_count: judged.summary.parts, predicted_x: r.predicted.x, predicted_y: r.predicted.y, predicted_cct_k: r.predicted.cct,
       predicted_duv: r.predicted.duv, created_by: caller.id,
-      detail_json: JSON.stringify({ recipeKind: r.recipe.kind, multipliers: r.multipliers, bias: r.bias, errorBefore: r.errorBefore, errorAfter: r.errorAfter, converged: r.converged })
+      detail_json: JSON.stringify({ recipeKind: r.recipe.kind, multipliers: r.multipliers, bias: r.bias, errorBefore: r.errorBefore, errorAfter: r.errorAfter, converged: r.converged, cap: r.cap })
     });
     await record({
       actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: 'correction-draft',
@@ -70,5 +77,5 @@ export async function makeCorrectionDraft(caller: Caller, batchId: number, stepF
       link: `${origin}/formulations/${ctx.revision.formulationId}/revisions/${draft.revisionId}`
     }));
   }
-  return { correctionId, revisionId: draft.revisionId, revisionNo: draft.revisionNo, predicted: r.predicted, measuredMean: { x: mean.x, y: mean.y } };
+  return { correctionId, revisionId: draft.revisionId, revisionNo: draft.revisionNo, predicted: r.predicted, predictedSteps: r.errorAfter.steps, cap: r.cap, measuredMean: { x: mean.x, y: mean.y } };
 }
