@@ -19,8 +19,12 @@
  * Power out: S(λ) = P(λ)T(λ) + Σᵢ n_i,out(λ)/λ, so the Stokes loss λ_pump/λ_em is applied
  * per wavelength. Scattering, extraction and package losses are not modelled; they are
  * absorbed into the calibrated α·L products (see calibration/calibrateAbsorption.ts).
+ * The output depends on c and L only through the optical depths τᵢ = αᵢ·gᵢ·L (gᵢ = cᵢ for a
+ * fixed slurry mass per package; see dispenseGeometry.ts for a cavity of fixed volume), so
+ * `photonBudgetForDepths` is the model proper and the same τ at any L gives the same light.
  */
 import { GRID_LENGTH, GRID_NM } from '../grid';
+import { type GeometrySpec, effectiveWtPct } from './dispenseGeometry';
 
 export interface LoadingBasis {
   /** Pump SPD, unit radiant power on the grid. */
@@ -31,6 +35,8 @@ export interface LoadingBasis {
   excitationAtPump1: (Float64Array | null)[];
   iqe: number[];
   absorptionPerWtPctMm: number[];
+  /** Phosphor densities (g/cm³), for a cavity filled to a fixed volume. */
+  densityGPerCm3?: (number | null)[];
 }
 
 export interface LoadingResult {
@@ -48,15 +54,37 @@ export interface LoadingResult {
 
 const SMALL_K = 1e-12;
 
+/** Optical depths τᵢ = αᵢ·gᵢ·L at the pump reference (Beer–Lambert exponent per phosphor). */
+export function opticalDepthsOf(
+  basis: LoadingBasis,
+  concentrationsWtPct: number[],
+  pathLengthMm: number,
+  geometry: GeometrySpec = {}
+): number[] {
+  const g = effectiveWtPct(concentrationsWtPct, { densityGPerCm3: basis.densityGPerCm3, ...geometry });
+  return basis.absorptionPerWtPctMm.map((a, i) => a * g[i] * pathLengthMm);
+}
+
 export function beerLambertPhotonBudget(
   basis: LoadingBasis,
   concentrationsWtPct: number[],
   pathLengthMm: number,
   cascade = false,
+  cascadePathFactor = 1,
+  geometry: GeometrySpec = {}
+): LoadingResult {
+  return photonBudgetForDepths(basis, opticalDepthsOf(basis, concentrationsWtPct, pathLengthMm, geometry), cascade, cascadePathFactor);
+}
+
+/** The photon budget for given optical depths τᵢ (≥ 0) at the pump reference. */
+export function photonBudgetForDepths(
+  basis: LoadingBasis,
+  opticalDepths: number[],
+  cascade = false,
   cascadePathFactor = 1
 ): LoadingResult {
   const n = basis.emission.length;
-  const aL = basis.absorptionPerWtPctMm.map((a, i) => a * Math.max(0, concentrationsWtPct[i]) * pathLengthMm);
+  const aL = opticalDepths.map((t) => Math.max(0, t));
   const absorbed = new Float64Array(n);
   const pumpOut = new Float64Array(GRID_LENGTH);
   let pumpPower = 0;
