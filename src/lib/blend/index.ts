@@ -18,7 +18,13 @@ export { correctBatch, type CorrectionResponse } from './correctBatch';
 export { opticalSensitivities, loadingSensitivities, type Sensitivity } from './sensitivities';
 export { prepareBasis, type Basis, type PreparedComponent } from './basis';
 export { beerLambertPhotonBudget, type LoadingResult } from './loading/beerLambertPhotonBudget';
-export { concentrationsForFractions, type ConcentrationSolution } from './loading/concentrationsForFractions';
+export {
+  concentrationsForFractions,
+  requireConcentrations,
+  LoadingRefusedError,
+  type ConcentrationSolution
+} from './loading/concentrationsForFractions';
+export { type DispenseGeometry, volumeFractions, slurryDensityGPerCm3 } from './loading/dispenseGeometry';
 export { calibrateAbsorption, type CalibrationReport, type CalibrationBuild } from './calibration/calibrateAbsorption';
 export { calibrateFromBuilds, type MeasuredBuild } from './calibration/calibrateFromBuilds';
 export { phosphorCostPer1000Lm, type CostBasis } from './solver/phosphorCost';

@@ -105,29 +105,20 @@ export function photonBudgetForDepths(
   const primary = Array.from({ length: n }, (_, i) => basis.iqe[i] * absorbed[i]);
   const secondary = new Float64Array(n);
   const esc = new Float64Array(GRID_LENGTH).fill(1);
-  const kc = new Float64Array(GRID_LENGTH);
-  if (cascade) {
-    for (let l = 0; l < GRID_LENGTH; l++) {
-      let k = 0;
-      for (let j = 0; j < n; j++) {
-        const ex = basis.excitationAtPump1[j];
-        if (ex) k += aL[j] * ex[l] * cascadePathFactor;
-      }
-      kc[l] = k;
-      esc[l] = Math.exp(-k);
-    }
-  }
   const photonShape = basis.emission.map(photonShapeOf);
   if (cascade) {
-    for (let i = 0; i < n; i++) {
-      for (let l = 0; l < GRID_LENGTH; l++) {
-        const k = kc[l];
-        if (k < SMALL_K) continue;
-        const lost = primary[i] * photonShape[i][l] * (1 - esc[l]);
-        for (let j = 0; j < n; j++) {
-          const ex = basis.excitationAtPump1[j];
-          if (ex) secondary[j] += (basis.iqe[j] * lost * aL[j] * ex[l] * cascadePathFactor) / k;
-        }
+    const ex = basis.excitationAtPump1;
+    for (let l = 0; l < GRID_LENGTH; l++) {
+      let k = 0;
+      for (let j = 0; j < n; j++) if (ex[j]) k += aL[j] * (ex[j] as Float64Array)[l] * cascadePathFactor;
+      const e = Math.exp(-k);
+      esc[l] = e;
+      if (k < SMALL_K) continue;
+      // Photons of every primary emitter lost at λ, shared among the absorbers ∝ αⱼ(λ)cⱼ.
+      let lost = 0;
+      for (let i = 0; i < n; i++) lost += primary[i] * photonShape[i][l] * (1 - e);
+      for (let j = 0; j < n; j++) {
+        if (ex[j]) secondary[j] += (basis.iqe[j] * lost * aL[j] * (ex[j] as Float64Array)[l] * cascadePathFactor) / k;
       }
     }
   }

@@ -60,13 +60,9 @@ export function concentrationsForFractions(
         ? 'The mix has no pump leak: it would need an infinitely thick phosphor layer.'
         : `The loading model cannot produce this mix ${where} (closest: off by ${depth.maxFractionError.toFixed(4)} in optical fraction).`;
   } else {
-    const conv = wtPctFromEffective(g, { geometry: opts.geometry, densityGPerCm3: basis.densityGPerCm3, siliconeDensityGPerCm3: opts.siliconeDensityGPerCm3 });
+    const conv = wtPctForDepths(basis, depth.opticalDepths, opts);
     if (conv.ok) c = conv.concentrationsWtPct;
-    else {
-      const gSum = g.reduce((a, b) => a + b, 0);
-      const longer = (opts.geometry ?? 'fixedMass') === 'fixedMass' ? ` A path of at least ${((L * gSum) / 100).toPrecision(3)} mm would bring it under 100 wt %.` : '';
-      refusal = `This mix cannot be made ${where}: ${conv.reason}, and a slurry must stay below 100 wt %.${longer}`;
-    }
+    else refusal = conv.reason;
   }
   return {
     concentrationsWtPct: c,
@@ -83,4 +79,19 @@ export function requireConcentrations(basis: LoadingBasis, wantedFractions: numb
   const sol = concentrationsForFractions(basis, wantedFractions, opts);
   if (sol.refusal) throw new LoadingRefusedError(sol.refusal);
   return sol;
+}
+
+/** wt % for optical depths τ at a path length (gᵢ = τᵢ/(αᵢ·L), then the geometry), or the plain reason they cannot be weighed. */
+export function wtPctForDepths(
+  basis: LoadingBasis,
+  opticalDepths: number[],
+  opts: Pick<LoadingOptions, 'pathLengthMm' | 'geometry' | 'siliconeDensityGPerCm3'>
+): { ok: true; concentrationsWtPct: number[] } | { ok: false; reason: string } {
+  const L = opts.pathLengthMm;
+  const g = opticalDepths.map((t, i) => (t > 0 ? t / (basis.absorptionPerWtPctMm[i] * L) : 0));
+  const conv = wtPctFromEffective(g, { geometry: opts.geometry, densityGPerCm3: basis.densityGPerCm3, siliconeDensityGPerCm3: opts.siliconeDensityGPerCm3 });
+  if (conv.ok) return conv;
+  const gSum = g.reduce((a, b) => a + b, 0);
+  const longer = (opts.geometry ?? 'fixedMass') === 'fixedMass' ? ` A path of at least ${((L * gSum) / 100).toPrecision(3)} mm would bring it under 100 wt %.` : '';
+  return { ok: false, reason: `This mix cannot be made at ${L} mm: ${conv.reason}, and a slurry must stay below 100 wt %.${longer}` };
 }
