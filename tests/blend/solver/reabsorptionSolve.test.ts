@@ -43,6 +43,18 @@ describe('solve with re-absorption hands over wt % that reproduce the proposal',
     }
   }
 
+  it('floors are met on the light of the wt % handed over (Ra ≥ 90, R9 ≥ 50, CIE 13.3)', () => {
+    const loading = { pathLengthMm: 0.3, cascade: true };
+    const res = solveBlend({ components: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 90, r9Min: 50 }, objective: 'maxLer', maxCandidates: 5, loading });
+    expect(res.status).toBe('ok');
+    const lb = prepareBasis(THREE).loading!;
+    for (const c of res.candidates) {
+      const fwd = evaluateGrid(beerLambertPhotonBudget(lb, c.concentrationsWtPct!, 0.3, true).spd);
+      expect(fwd.cri.ra).toBeGreaterThanOrEqual(90);
+      expect(fwd.cri.ri[8]).toBeGreaterThanOrEqual(50);
+    }
+  });
+
   it('the two-phosphor recipe scales as 1/L (same optical depths at every path)', () => {
     const wtAt = (L: number) =>
       solveBlend({ components: YELLOW_RED, target: { kind: 'ansiBin', nominalCct: 3000 }, objective: 'maxLer', loading: { pathLengthMm: L, cascade: true } })

@@ -44,6 +44,8 @@ export interface LoadingResult {
   spd: Float64Array;
   /** Radiant power of each component in the output (pump leak first). */
   componentPower: number[];
+  /** Output SPD of each component (pump leak first); Σ = spd. */
+  componentSpd: Float64Array[];
   /** Optical (radiant power) fractions, pump leak first; Σ = 1. */
   opticalFractions: number[];
   /** Power-weighted pump transmission. */
@@ -124,13 +126,17 @@ export function photonBudgetForDepths(
   }
   const spd = Float64Array.from(pumpOut);
   const componentPower = [pumpPower];
+  const componentSpd = [pumpOut];
   for (let i = 0; i < n; i++) {
     let power = 0;
     const shape = photonShape[i];
+    const own = new Float64Array(GRID_LENGTH);
+    componentSpd.push(own);
     for (let l = 0; l < GRID_LENGTH; l++) {
       const photons = primary[i] * shape[l] * esc[l] + secondary[i] * shape[l];
       const s = photons / GRID_NM[l];
       spd[l] += s;
+      own[l] = s;
       power += s;
     }
     componentPower.push(power);
@@ -141,6 +147,7 @@ export function photonBudgetForDepths(
   return {
     spd,
     componentPower,
+    componentSpd,
     opticalFractions: componentPower.map((p) => (total > 0 ? p / total : 0)),
     pumpTransmission: pumpIn > 0 ? pumpPower / pumpIn : 0,
     radiantEfficiency: pumpIn > 0 ? total / pumpIn : 0

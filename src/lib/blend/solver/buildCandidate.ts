@@ -68,6 +68,8 @@ export interface CandidateContext {
   loading?: LoadingParams;
   /** Colour point the mix is solved at (default: the target). */
   solvedAt?: [number, number];
+  /** The fractions are outputs of the loading model with re-absorption (not of the superposition). */
+  fractionsOnLoadingModel?: boolean;
 }
 
 export function buildCandidate(ctx: CandidateContext, fractions: number[]): SolveCandidate {
@@ -80,7 +82,7 @@ export function buildCandidate(ctx: CandidateContext, fractions: number[]): Solv
   let evaluation;
   let cost: number | null;
   if (model.kind === 'loadingWithReabsorption' && loading) {
-    const real = realiseOnLoadingModel(basis, loading, fractions, ctx.solvedAt ?? [target.x, target.y]);
+    const real = realiseOnLoadingModel(basis, loading, fractions, ctx.solvedAt ?? [target.x, target.y], ctx.fractionsOnLoadingModel);
     if (real.ok) {
       concentrations = real.concentrationsWtPct;
       shown = real.result.opticalFractions;

@@ -3,8 +3,9 @@
  * first-order re-absorption) sits on the wanted colour point, so the light that is scored
  * is the light of the wt % handed over.
  *
- * 1. Start: optical depths of the mix without re-absorption (exact inverse in τ,
- *    `opticalDepthsForFractions`).
+ * 1. Start: optical depths of the mix (exact inverse in τ, `opticalDepthsForFractions`), read
+ *    as superposition fractions (no re-absorption) or, from a search on the loading model
+ *    (`refineOnLoadingModel`), as its output fractions with re-absorption.
  * 2. Colour: re-absorption reshapes the escaping emission (Beer–Lambert on the way out), so
  *    the chromaticity moves. Gauss–Newton, minimum-norm steps (Δu = Jᵀ(JJᵀ)⁻¹Δxy; Björck,
  *    *Numerical Methods for Least Squares Problems*, SIAM 1996, §1.1.5 for the minimum-norm
@@ -32,13 +33,19 @@ const xyOf = (spd: Float64Array): [number, number] => {
   return [X / s, Y / s];
 };
 
-export function realiseOnLoadingModel(basis: Basis, loading: LoadingParams, fractions: number[], xy: [number, number]): Realisation {
+export function realiseOnLoadingModel(
+  basis: Basis,
+  loading: LoadingParams,
+  fractions: number[],
+  xy: [number, number],
+  fractionsOnLoadingModel = false
+): Realisation {
   const lb = basis.loading;
   if (!lb) return { ok: false, reason: 'A phosphor lacks an absorption coefficient.' };
   const L = loading.pathLengthMm;
   const cascade = loading.cascade ?? false;
   const kappa = loading.cascadePathFactor ?? 1;
-  const start = opticalDepthsForFractions(lb, fractions);
+  const start = opticalDepthsForFractions(lb, fractions, fractionsOnLoadingModel && cascade, kappa);
   if (!start.converged) return { ok: false, reason: `The loading model cannot produce this mix at ${L} mm.` };
   const idx = start.opticalDepths.flatMap((t, i) => (t > 0 ? [i] : []));
   const tauAt = (u: number[]) => {

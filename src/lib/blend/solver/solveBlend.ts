@@ -18,6 +18,7 @@
 import { BlendInputError } from '../errors';
 import { LoadingRefusedError } from '../loading/concentrationsForFractions';
 import { loopMetricsOf } from './loopMetrics';
+import { refineOnLoadingModel } from './refineOnLoadingModel';
 import { type SpectrumModel, spectrumModelOf } from './spectrumModel';
 import { uvToCct } from '../../spectral/cct/index';
 import { uvPrimeToXy, xyToUv, xyToUvPrime, xyzToUvPrime } from '../../spectral/colorimetry/chromaticity';
@@ -99,11 +100,23 @@ export function solveBlend(problem: SolveProblem): SolveResult {
     const why = candidates[0].violations.find((v) => v.startsWith(NO_RECIPE))?.slice(NO_RECIPE.length);
     throw new LoadingRefusedError(`No proposal can be weighed. ${why ?? 'The loading model cannot produce these mixes.'}`);
   }
+  let extraEvaluations = 0;
   if (realised) {
-    const weighable = candidates.filter((c) => c.concentrationsWtPct !== null);
     const candidateMerit = (c: SolveCandidate) =>
       meritOf({ fractions: c.opticalFractions, ...loopMetricsOf(c.evaluation, c.costPer1000Lm) }, floors, problem.objective);
-    candidates = weighable.sort((a, b) => candidateMerit(a) - candidateMerit(b)).slice(0, maxCandidates);
+    const byMerit = (list: SolveCandidate[]) => list.filter((c) => c.concentrationsWtPct !== null).sort((a, b) => candidateMerit(a) - candidateMerit(b));
+    let weighable = byMerit(candidates);
+    if (near.distance === 0) {
+      const refined = refineOnLoadingModel(ctx, weighable[0], wanted, maxCandidates + 2);
+      extraEvaluations = refined.evaluations;
+      weighable = byMerit([...weighable, ...refined.candidates]);
+    }
+    const kept: SolveCandidate[] = [];
+    for (const c of weighable) {
+      if (kept.length >= maxCandidates) break;
+      if (kept.every((k) => distance(k.opticalFractions, c.opticalFractions) >= CANDIDATE_SEPARATION)) kept.push(c);
+    }
+    candidates = kept;
   }
   candidates = candidates.map((c, i) => ({ ...c, rank: i + 1 }));
   const bestAchievable = bestValues(floors, [...search.samples, ...search.optima]);
@@ -112,7 +125,7 @@ export function solveBlend(problem: SolveProblem): SolveResult {
     target: { x: target.x, y: target.y, cct: target.cct, duv: target.duv, label: target.label },
     solvedAt: { x: sx, y: sy, cct: solvedCct.cct, duv: solvedCct.duv },
     bestAchievable,
-    evaluations: loop.count(),
+    evaluations: loop.count() + extraEvaluations,
     model
   };
   if (outOfGamut) {
