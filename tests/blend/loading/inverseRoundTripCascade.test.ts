@@ -22,7 +22,7 @@ describe('forward → inverse → forward with re-absorption', () => {
       }),
       { numRuns: 2_000, seed: 16 }
     );
-  }, 60_000);
+  }, 180_000);
 
   it('fixed cavity volume: reproduces 1,500 random mixes', () => {
     const geometry = { geometry: 'fixedVolume' as const, siliconeDensityGPerCm3: 1.1 };
@@ -38,5 +38,5 @@ describe('forward → inverse → forward with re-absorption', () => {
       }),
       { numRuns: 1_500, seed: 17 }
     );
-  }, 60_000);
+  }, 180_000);
 });
