@@ -107,7 +107,7 @@ export function solveBlend(problem: SolveProblem): SolveResult {
     const byMerit = (list: SolveCandidate[]) => list.filter((c) => c.concentrationsWtPct !== null).sort((a, b) => candidateMerit(a) - candidateMerit(b));
     let weighable = byMerit(candidates);
     if (near.distance === 0) {
-      const refined = refineOnLoadingModel(ctx, weighable[0], wanted, maxCandidates + 2);
+      const refined = refineOnLoadingModel(ctx, weighable[0], maxCandidates, 3);
       extraEvaluations = refined.evaluations;
       weighable = byMerit([...weighable, ...refined.candidates]);
     }
