@@ -15,6 +15,7 @@ import { evaluateGrid } from '../../../src/lib/spectral/evaluate';
 import { THREE, blue } from '../fixtures';
 
 const YELLOW_RED = blue('ph-yl568', 'ph-rd625');
+const AT_3000 = { kind: 'ansiBin', nominalCct: 3000 } as const;
 const sets = [
   { name: 'garnet yellow + nitride red', components: YELLOW_RED, floors: {} },
   { name: 'garnet green + yellow-green + nitride red', components: THREE, floors: { raMin: 80 } }
@@ -25,7 +26,8 @@ describe('solve with re-absorption hands over wt % that reproduce the proposal',
     for (const L of [0.15, 0.3, 0.6]) {
       it(`${set.name} at ${L} mm, 3000 K bin`, () => {
         const loading = { pathLengthMm: L, cascade: true };
-        const res = solveBlend({ components: set.components, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: set.floors, objective: 'maxLer', maxCandidates: 5, loading });
+        const problem = { components: set.components, target: AT_3000, floors: set.floors, objective: 'maxLer' as const, maxCandidates: 5 };
+        const res = solveBlend({ ...problem, loading });
         expect(res.model.kind).toBe('loadingWithReabsorption');
         expect(res.model.label).toBe(`loading model with re-absorption, ${L.toFixed(2)} mm`);
         expect(res.candidates.length).toBeGreaterThan(0);
@@ -45,7 +47,8 @@ describe('solve with re-absorption hands over wt % that reproduce the proposal',
 
   it('floors are met on the light of the wt % handed over (Ra ≥ 90, R9 ≥ 50, CIE 13.3)', () => {
     const loading = { pathLengthMm: 0.3, cascade: true };
-    const res = solveBlend({ components: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 90, r9Min: 50 }, objective: 'maxLer', maxCandidates: 5, loading });
+    const floors = { raMin: 90, r9Min: 50 };
+    const res = solveBlend({ components: THREE, target: AT_3000, floors, objective: 'maxLer', maxCandidates: 5, loading });
     expect(res.status).toBe('ok');
     const lb = prepareBasis(THREE).loading!;
     for (const c of res.candidates) {
@@ -57,7 +60,7 @@ describe('solve with re-absorption hands over wt % that reproduce the proposal',
 
   it('the two-phosphor recipe scales as 1/L (same optical depths at every path)', () => {
     const wtAt = (L: number) =>
-      solveBlend({ components: YELLOW_RED, target: { kind: 'ansiBin', nominalCct: 3000 }, objective: 'maxLer', loading: { pathLengthMm: L, cascade: true } })
+      solveBlend({ components: YELLOW_RED, target: AT_3000, objective: 'maxLer', loading: { pathLengthMm: L, cascade: true } })
         .candidates[0].concentrationsWtPct!;
     const a = wtAt(0.3);
     const b = wtAt(0.6);
@@ -65,14 +68,14 @@ describe('solve with re-absorption hands over wt % that reproduce the proposal',
   });
 
   it('without re-absorption the proposals say they are optical superpositions', () => {
-    const res = solveBlend({ components: YELLOW_RED, target: { kind: 'ansiBin', nominalCct: 3000 }, objective: 'maxLer', loading: { pathLengthMm: 0.3 } });
+    const res = solveBlend({ components: YELLOW_RED, target: AT_3000, objective: 'maxLer', loading: { pathLengthMm: 0.3 } });
     expect(res.model.label).toBe('optical superposition; wt % from the loading model at 0.30 mm');
     expect(res.candidates[0].concentrationsWtPct).not.toBeNull();
   });
 
   it('a path too short for any proposal to stay under 100 wt % is refused with the reason', () => {
     const run = (cascade: boolean) => () =>
-      solveBlend({ components: YELLOW_RED, target: { kind: 'ansiBin', nominalCct: 3000 }, objective: 'maxLer', loading: { pathLengthMm: 0.01, cascade } });
+      solveBlend({ components: YELLOW_RED, target: AT_3000, objective: 'maxLer', loading: { pathLengthMm: 0.01, cascade } });
     for (const cascade of [false, true]) {
       expect(run(cascade)).toThrow(LoadingRefusedError);
       expect(run(cascade)).toThrow(/No proposal can be weighed.*100 wt %/);

@@ -89,9 +89,11 @@ export function wtPctForDepths(
 ): { ok: true; concentrationsWtPct: number[] } | { ok: false; reason: string } {
   const L = opts.pathLengthMm;
   const g = opticalDepths.map((t, i) => (t > 0 ? t / (basis.absorptionPerWtPctMm[i] * L) : 0));
-  const conv = wtPctFromEffective(g, { geometry: opts.geometry, densityGPerCm3: basis.densityGPerCm3, siliconeDensityGPerCm3: opts.siliconeDensityGPerCm3 });
+  const spec = { geometry: opts.geometry, densityGPerCm3: basis.densityGPerCm3, siliconeDensityGPerCm3: opts.siliconeDensityGPerCm3 };
+  const conv = wtPctFromEffective(g, spec);
   if (conv.ok) return conv;
   const gSum = g.reduce((a, b) => a + b, 0);
-  const longer = (opts.geometry ?? 'fixedMass') === 'fixedMass' ? ` A path of at least ${((L * gSum) / 100).toPrecision(3)} mm would bring it under 100 wt %.` : '';
+  const shortest = ((L * gSum) / 100).toPrecision(3);
+  const longer = (opts.geometry ?? 'fixedMass') === 'fixedMass' ? ` A path of at least ${shortest} mm would bring it under 100 wt %.` : '';
   return { ok: false, reason: `This mix cannot be made at ${L} mm: ${conv.reason}, and a slurry must stay below 100 wt %.${longer}` };
 }

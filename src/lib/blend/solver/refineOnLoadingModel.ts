@@ -33,7 +33,8 @@ export function effectiveBasisAt(basis: Basis, result: LoadingResult): Basis {
 
 export function loadingResultOf(basis: Basis, loading: LoadingParams, concentrationsWtPct: number[]): LoadingResult {
   const geometry = { geometry: loading.geometry, siliconeDensityGPerCm3: loading.siliconeDensityGPerCm3 };
-  return beerLambertPhotonBudget(basis.loading!, concentrationsWtPct, loading.pathLengthMm, loading.cascade ?? false, loading.cascadePathFactor ?? 1, geometry);
+  const { pathLengthMm, cascade, cascadePathFactor } = loading;
+  return beerLambertPhotonBudget(basis.loading!, concentrationsWtPct, pathLengthMm, cascade ?? false, cascadePathFactor ?? 1, geometry);
 }
 
 export interface Refinement {

@@ -94,7 +94,9 @@ export function solveBlend(problem: SolveProblem): SolveResult {
     if (picked.every((q) => distance(q.fractions, p.fractions) >= CANDIDATE_SEPARATION)) picked.push(p);
   }
   picked.sort((a, b) => merit(a) - merit(b));
-  const ctx: CandidateContext = { basis, target, tolerance, floors, objective: problem.objective, loading: problem.loading, solvedAt: [sx, sy] };
+  const ctx: CandidateContext = {
+    basis, target, tolerance, floors, objective: problem.objective, loading: problem.loading, solvedAt: [sx, sy]
+  };
   let candidates = picked.map((p) => buildCandidate(ctx, p.fractions));
   if (problem.loading && basis.loading && candidates.length > 0 && candidates.every((c) => c.concentrationsWtPct === null)) {
     const why = candidates[0].violations.find((v) => v.startsWith(NO_RECIPE))?.slice(NO_RECIPE.length);
@@ -104,7 +106,8 @@ export function solveBlend(problem: SolveProblem): SolveResult {
   if (realised) {
     const candidateMerit = (c: SolveCandidate) =>
       meritOf({ fractions: c.opticalFractions, ...loopMetricsOf(c.evaluation, c.costPer1000Lm) }, floors, problem.objective);
-    const byMerit = (list: SolveCandidate[]) => list.filter((c) => c.concentrationsWtPct !== null).sort((a, b) => candidateMerit(a) - candidateMerit(b));
+    const byMerit = (list: SolveCandidate[]) =>
+      list.filter((c) => c.concentrationsWtPct !== null).sort((a, b) => candidateMerit(a) - candidateMerit(b));
     let weighable = byMerit(candidates);
     if (near.distance === 0) {
       const refined = refineOnLoadingModel(ctx, weighable[0], maxCandidates, 3);

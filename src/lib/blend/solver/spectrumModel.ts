@@ -15,10 +15,12 @@ export interface SpectrumModel {
 export function spectrumModelOf(basis: Basis, loading: LoadingParams | undefined): SpectrumModel {
   if (loading?.cascade && basis.loading) {
     const geometry = loading.geometry === 'fixedVolume' ? ', cavity of fixed volume' : '';
-    return { kind: 'loadingWithReabsorption', label: `loading model with re-absorption, ${loading.pathLengthMm.toFixed(2)} mm${geometry}` };
+    const label = `loading model with re-absorption, ${loading.pathLengthMm.toFixed(2)} mm${geometry}`;
+    return { kind: 'loadingWithReabsorption', label };
   }
   if (loading && basis.loading) {
-    return { kind: 'opticalSuperposition', label: `optical superposition; wt % from the loading model at ${loading.pathLengthMm.toFixed(2)} mm` };
+    const label = `optical superposition; wt % from the loading model at ${loading.pathLengthMm.toFixed(2)} mm`;
+    return { kind: 'opticalSuperposition', label };
   }
   return { kind: 'opticalSuperposition', label: 'optical superposition' };
 }
