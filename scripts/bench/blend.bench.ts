@@ -1,9 +1,14 @@
 /**
  * Blend solver benchmark (run: npx tsx scripts/bench/blend.bench.ts).
  * Prints one line per case with the median wall time, then one JSON line.
- * Budgets: solve pump + 3 phosphors (Ra ≥ 90, R9 ≥ 50, max LER) ≤ 50 ms; pump + 4 ≤ 150 ms.
+ * Budgets: solve pump + 3 phosphors (Ra ≥ 90, R9 ≥ 50, max LER) ≤ 50 ms; pump + 4 ≤ 150 ms;
+ * loading-model inverse for 5 phosphors ≤ 1 ms; solve with the loading model and re-absorption,
+ * 3 phosphors, 5 proposals ≤ 150 ms. Case keys as arguments run only those cases.
  */
 import { BLUE_PUMP, demoPhosphor } from '../../src/lib/blend/demo-components';
+import { prepareBasis } from '../../src/lib/blend/basis';
+import { beerLambertPhotonBudget } from '../../src/lib/blend/loading/beerLambertPhotonBudget';
+import { concentrationsForFractions } from '../../src/lib/blend/loading/concentrationsForFractions';
 import { mix } from '../../src/lib/blend/mix';
 import { solveBlend, type SolveProblem } from '../../src/lib/blend/solver/solveBlend';
 import type { BlendComponents } from '../../src/lib/blend/types';
@@ -19,6 +24,9 @@ const problem = (components: BlendComponents, nominalCct = 3000): SolveProblem =
   floors,
   objective: 'maxLer'
 });
+
+const FIVE_LOADING = prepareBasis(FIVE).loading!;
+const FIVE_FRACTIONS = beerLambertPhotonBudget(FIVE_LOADING, [2, 5, 8, 3, 10], 0.3).opticalFractions;
 
 function median(fn: () => void, runs: number, warmup = 3): number {
   for (let i = 0; i < warmup; i++) fn();
@@ -43,11 +51,26 @@ const cases: { key: string; label: string; fn: () => void; runs: number; budgetM
     label: 'mix loading+cascade',
     fn: () => mix(THREE, { kind: 'loading', concentrationsWtPct: [3, 6, 2], loading: { pathLengthMm: 0.3, cascade: true } }),
     runs: 51
+  },
+  {
+    key: 'inverse5',
+    label: 'inverse 5-phosphor',
+    fn: () => concentrationsForFractions(FIVE_LOADING, FIVE_FRACTIONS, { pathLengthMm: 0.5 }),
+    runs: 201,
+    budgetMs: 1
+  },
+  {
+    key: 'solve3Reabsorption',
+    label: 'solve 3 re-absorption',
+    fn: () => solveBlend({ ...problem(THREE), maxCandidates: 5, loading: { pathLengthMm: 0.3, cascade: true } }),
+    runs: 21,
+    budgetMs: 150
   }
 ];
 
 const out: Record<string, number> = {};
-for (const c of cases) {
+const only = process.argv.slice(2);
+for (const c of cases.filter((k) => only.length === 0 || only.includes(k.key))) {
   const ms = median(c.fn, c.runs);
   out[c.key] = Number(ms.toFixed(2));
   const budget = c.budgetMs ? `  (budget ${c.budgetMs} ms${ms <= c.budgetMs ? ', ok' : ', OVER'})` : '';

@@ -101,7 +101,8 @@ export function prepareBasis(input: BlendComponents): Basis {
           emission: phosphors.map((p) => p.spd),
           excitationAtPump1: excitation,
           iqe: input.phosphors.map((p) => p.iqe),
-          absorptionPerWtPctMm: alphaAtPump
+          absorptionPerWtPctMm: alphaAtPump,
+          densityGPerCm3: input.phosphors.map((p) => p.densityGPerCm3 ?? null)
         }
       : null,
     densityGPerCm3: input.phosphors.map((p) => p.densityGPerCm3 ?? null),

@@ -13,7 +13,13 @@ export { correctBatch, type CorrectionResponse } from './correctBatch';
 export { opticalSensitivities, loadingSensitivities, type Sensitivity } from './sensitivities';
 export { prepareBasis, type Basis, type PreparedComponent } from './basis';
 export { beerLambertPhotonBudget, type LoadingResult } from './loading/beerLambertPhotonBudget';
-export { concentrationsForFractions, type ConcentrationSolution } from './loading/concentrationsForFractions';
+export {
+  concentrationsForFractions,
+  requireConcentrations,
+  LoadingRefusedError,
+  type ConcentrationSolution
+} from './loading/concentrationsForFractions';
+export { type DispenseGeometry, volumeFractions, slurryDensityGPerCm3 } from './loading/dispenseGeometry';
 export { calibrateAbsorption, type CalibrationReport, type CalibrationBuild } from './calibration/calibrateAbsorption';
 export { calibrateFromBuilds, type MeasuredBuild } from './calibration/calibrateFromBuilds';
 export { fitPackageModel, type PackageModelFit, type PackageModelRef } from './calibration/fitPackageModel';

@@ -1,7 +1,8 @@
 /**
  * `mix`: the SPD and every core metric of a blend given either optical fractions
  * (superposition model, Ohno 2005) or phosphor concentrations + path length (Beer–Lambert
- * loading model, with optional first-order cascade). Backs `POST /api/v1/mix`.
+ * loading model, with optional first-order cascade and the dispense geometry). Backs
+ * `POST /api/v1/mix`; wt % adding up to 100 or more are refused (422).
  * Units: fractions dimensionless (normalised here), wt % of total slurry, mm.
  * The returned SPD is per unit radiant power of output (optical) or per unit pump power
  * (loading); only its shape matters to the metrics.
@@ -13,6 +14,7 @@ import { prepareBasis } from './basis';
 import type { Recipe } from './correction';
 import { gridToSpd } from './grid';
 import { beerLambertPhotonBudget } from './loading/beerLambertPhotonBudget';
+import { LoadingRefusedError } from './loading/concentrationsForFractions';
 import { type Sensitivity, loadingSensitivities, opticalSensitivities } from './sensitivities';
 import { normaliseRatios, superposeSpd } from './superposition';
 import type { BlendComponents, Spd } from './types';
@@ -50,8 +52,11 @@ export function mix(components: BlendComponents, ratios: MixRatios): MixResult {
   if (c.length !== components.phosphors.length) {
     throw new BlendInputError(`concentrationsWtPct: expected ${components.phosphors.length} values, got ${c.length}`);
   }
+  const total = c.reduce((a, b) => a + b, 0);
+  if (!(total < 100)) throw new LoadingRefusedError(`the phosphors add up to ${total.toFixed(1)} wt %; a slurry must stay below 100 wt %`);
   const p = ratios.loading;
-  const res = beerLambertPhotonBudget(basis.loading, c, p.pathLengthMm, p.cascade ?? false, p.cascadePathFactor ?? 1);
+  const geometry = { geometry: p.geometry, siliconeDensityGPerCm3: p.siliconeDensityGPerCm3 };
+  const res = beerLambertPhotonBudget(basis.loading, c, p.pathLengthMm, p.cascade ?? false, p.cascadePathFactor ?? 1, geometry);
   return {
     spd: gridToSpd(res.spd),
     evaluation: evaluateGrid(res.spd),

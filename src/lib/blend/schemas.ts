@@ -50,6 +50,7 @@ export const loadingParamsSchema = z.object({
   cascade: z.boolean().optional(),
   cascadePathFactor: z.number().gt(0).max(10).optional(),
   siliconeDensityGPerCm3: z.number().gt(0).max(5).optional(),
+  geometry: z.enum(['fixedMass', 'fixedVolume'], { message: 'dispense geometry must be fixedMass or fixedVolume' }).optional(),
   pumpIrradianceWPerMm2: z.number().gt(0).max(100).optional()
 });
 

@@ -73,6 +73,12 @@ export interface LoadingParams {
   /** Silicone density (g/cm³), default 1.1 [from memory]. */
   siliconeDensityGPerCm3?: number;
   /**
+   * Dispense geometry (see loading/dispenseGeometry.ts): 'fixedMass' (default; a fixed slurry
+   * mass per package, exponent linear in wt %) or 'fixedVolume' (a cavity filled to a fixed
+   * volume; volume fractions from the phosphor and silicone densities).
+   */
+  geometry?: 'fixedMass' | 'fixedVolume';
+  /**
    * Pump optical power per area of the layer (W/mm²), used only to turn wt % into
    * grams per lumen for the cost objective. Default 0.05 [invented order of magnitude
    * for a mid-power package].

@@ -19,8 +19,12 @@
  * Power out: S(λ) = P(λ)T(λ) + Σᵢ n_i,out(λ)/λ, so the Stokes loss λ_pump/λ_em is applied
  * per wavelength. Scattering, extraction and package losses are not modelled; they are
  * absorbed into the calibrated α·L products (see calibration/calibrateAbsorption.ts).
+ * The output depends on c and L only through the optical depths τᵢ = αᵢ·gᵢ·L (gᵢ = cᵢ for a
+ * fixed slurry mass per package; see dispenseGeometry.ts for a cavity of fixed volume), so
+ * `photonBudgetForDepths` is the model proper and the same τ at any L gives the same light.
  */
 import { GRID_LENGTH, GRID_NM } from '../grid';
+import { type GeometrySpec, effectiveWtPct } from './dispenseGeometry';
 
 export interface LoadingBasis {
   /** Pump SPD, unit radiant power on the grid. */
@@ -31,6 +35,8 @@ export interface LoadingBasis {
   excitationAtPump1: (Float64Array | null)[];
   iqe: number[];
   absorptionPerWtPctMm: number[];
+  /** Phosphor densities (g/cm³), for a cavity filled to a fixed volume. */
+  densityGPerCm3?: (number | null)[];
 }
 
 export interface LoadingResult {
@@ -38,6 +44,8 @@ export interface LoadingResult {
   spd: Float64Array;
   /** Radiant power of each component in the output (pump leak first). */
   componentPower: number[];
+  /** Output SPD of each component (pump leak first); Σ = spd. */
+  componentSpd: Float64Array[];
   /** Optical (radiant power) fractions, pump leak first; Σ = 1. */
   opticalFractions: number[];
   /** Power-weighted pump transmission. */
@@ -48,15 +56,37 @@ export interface LoadingResult {
 
 const SMALL_K = 1e-12;
 
+/** Optical depths τᵢ = αᵢ·gᵢ·L at the pump reference (Beer–Lambert exponent per phosphor). */
+export function opticalDepthsOf(
+  basis: LoadingBasis,
+  concentrationsWtPct: number[],
+  pathLengthMm: number,
+  geometry: GeometrySpec = {}
+): number[] {
+  const g = effectiveWtPct(concentrationsWtPct, { densityGPerCm3: basis.densityGPerCm3, ...geometry });
+  return basis.absorptionPerWtPctMm.map((a, i) => a * g[i] * pathLengthMm);
+}
+
 export function beerLambertPhotonBudget(
   basis: LoadingBasis,
   concentrationsWtPct: number[],
   pathLengthMm: number,
   cascade = false,
+  cascadePathFactor = 1,
+  geometry: GeometrySpec = {}
+): LoadingResult {
+  return photonBudgetForDepths(basis, opticalDepthsOf(basis, concentrationsWtPct, pathLengthMm, geometry), cascade, cascadePathFactor);
+}
+
+/** The photon budget for given optical depths τᵢ (≥ 0) at the pump reference. */
+export function photonBudgetForDepths(
+  basis: LoadingBasis,
+  opticalDepths: number[],
+  cascade = false,
   cascadePathFactor = 1
 ): LoadingResult {
   const n = basis.emission.length;
-  const aL = basis.absorptionPerWtPctMm.map((a, i) => a * Math.max(0, concentrationsWtPct[i]) * pathLengthMm);
+  const aL = opticalDepths.map((t) => Math.max(0, t));
   const absorbed = new Float64Array(n);
   const pumpOut = new Float64Array(GRID_LENGTH);
   let pumpPower = 0;
@@ -77,41 +107,36 @@ export function beerLambertPhotonBudget(
   const primary = Array.from({ length: n }, (_, i) => basis.iqe[i] * absorbed[i]);
   const secondary = new Float64Array(n);
   const esc = new Float64Array(GRID_LENGTH).fill(1);
-  const kc = new Float64Array(GRID_LENGTH);
-  if (cascade) {
-    for (let l = 0; l < GRID_LENGTH; l++) {
-      let k = 0;
-      for (let j = 0; j < n; j++) {
-        const ex = basis.excitationAtPump1[j];
-        if (ex) k += aL[j] * ex[l] * cascadePathFactor;
-      }
-      kc[l] = k;
-      esc[l] = Math.exp(-k);
-    }
-  }
   const photonShape = basis.emission.map(photonShapeOf);
   if (cascade) {
-    for (let i = 0; i < n; i++) {
-      for (let l = 0; l < GRID_LENGTH; l++) {
-        const k = kc[l];
-        if (k < SMALL_K) continue;
-        const lost = primary[i] * photonShape[i][l] * (1 - esc[l]);
-        for (let j = 0; j < n; j++) {
-          const ex = basis.excitationAtPump1[j];
-          if (ex) secondary[j] += (basis.iqe[j] * lost * aL[j] * ex[l] * cascadePathFactor) / k;
-        }
+    const ex = basis.excitationAtPump1;
+    for (let l = 0; l < GRID_LENGTH; l++) {
+      let k = 0;
+      for (let j = 0; j < n; j++) if (ex[j]) k += aL[j] * (ex[j] as Float64Array)[l] * cascadePathFactor;
+      const e = Math.exp(-k);
+      esc[l] = e;
+      if (k < SMALL_K) continue;
+      // Photons of every primary emitter lost at λ, shared among the absorbers ∝ αⱼ(λ)cⱼ.
+      let lost = 0;
+      for (let i = 0; i < n; i++) lost += primary[i] * photonShape[i][l] * (1 - e);
+      for (let j = 0; j < n; j++) {
+        if (ex[j]) secondary[j] += (basis.iqe[j] * lost * aL[j] * (ex[j] as Float64Array)[l] * cascadePathFactor) / k;
       }
     }
   }
   const spd = Float64Array.from(pumpOut);
   const componentPower = [pumpPower];
+  const componentSpd = [pumpOut];
   for (let i = 0; i < n; i++) {
     let power = 0;
     const shape = photonShape[i];
+    const own = new Float64Array(GRID_LENGTH);
+    componentSpd.push(own);
     for (let l = 0; l < GRID_LENGTH; l++) {
       const photons = primary[i] * shape[l] * esc[l] + secondary[i] * shape[l];
       const s = photons / GRID_NM[l];
       spd[l] += s;
+      own[l] = s;
       power += s;
     }
     componentPower.push(power);
@@ -122,6 +147,7 @@ export function beerLambertPhotonBudget(
   return {
     spd,
     componentPower,
+    componentSpd,
     opticalFractions: componentPower.map((p) => (total > 0 ? p / total : 0)),
     pumpTransmission: pumpIn > 0 ? pumpPower / pumpIn : 0,
     radiantEfficiency: pumpIn > 0 ? total / pumpIn : 0

@@ -1,37 +1,43 @@
 /**
- * Inverse of the loading model: phosphor concentrations (wt %) that give wanted optical
- * fractions, for a fixed effective path length L.
+ * Inverse of the loading model: phosphor concentrations (wt % of the slurry) that give wanted
+ * optical fractions (pump leak first) at an effective path length L.
  *
- * n phosphors → n unknowns cᵢ, n equations wᵢ(c) = wᵢ* (the pump leak w₀ = 1 − Σwᵢ
- * follows). Solved by Levenberg–Marquardt (Levenberg 1944; Marquardt 1963) in
- * uᵢ = ln cᵢ, which keeps cᵢ > 0. Start: the optically thin limit, where
- * wᵢ/w₀ ≈ αᵢcᵢL·IQEᵢ·(λ̄_pump/λ̄ᵢ) (Beer–Lambert expanded to first order).
- * Reports the residual so a caller sees when a wanted mix is not reachable (e.g. the
- * cascade caps a phosphor's share).
+ * Solved in optical depth (`opticalDepthsForFractions`: τᵢ from the pump leak, then the
+ * split), then gᵢ = τᵢ/(αᵢ·L) (Beer–Lambert: the exponent is αᵢ·gᵢ·L), then wt % from gᵢ by the
+ * dispense geometry (`dispenseGeometry.ts`). For a fixed slurry mass per package the wt %
+ * scale exactly as 1/L. A mix is refused, with the reason, when the model cannot produce it
+ * or when it needs 100 wt % of phosphor or more (or, in a fixed volume, the whole cavity).
  */
 import { BlendInputError } from '../errors';
-import { centroidNm } from '../grid';
-import { levenbergMarquardt } from '../calibration/levenbergMarquardt';
-import { beerLambertPhotonBudget, type LoadingBasis, type LoadingResult } from './beerLambertPhotonBudget';
-
-/** ln of the largest concentration tried (100 wt %). */
-const MAX_LN_C = Math.log(100);
+import type { LoadingBasis, LoadingResult } from './beerLambertPhotonBudget';
+import { type DispenseGeometry, wtPctFromEffective } from './dispenseGeometry';
+import { opticalDepthsForFractions } from './opticalDepthsForFractions';
 
 export interface LoadingOptions {
   pathLengthMm: number;
   cascade?: boolean;
   cascadePathFactor?: number;
-  /** Warm start (wt %), e.g. the solution for a nearby mix; default: thin-layer estimate. */
+  geometry?: DispenseGeometry;
+  siliconeDensityGPerCm3?: number;
+  /** Accepted for compatibility and ignored: the solve always starts from the pump leak. */
   initialWtPct?: number[];
 }
 
 export interface ConcentrationSolution {
   concentrationsWtPct: number[];
+  /** τᵢ at the pump reference. */
+  opticalDepths: number[];
   result: LoadingResult;
-  /** Max |wᵢ(c) − wᵢ*| over phosphors. */
+  /** Max |wᵢ(c) − wᵢ*| over the fractions. */
   maxFractionError: number;
+  /** The wt % reproduce the mix and can be weighed (Σ < 100 wt %). */
   converged: boolean;
+  /** Plain sentence why the mix cannot be made, or null. */
+  refusal: string | null;
 }
+
+/** A mix the loading model cannot turn into a recipe that can be weighed (API → 422). */
+export class LoadingRefusedError extends BlendInputError {}
 
 export function concentrationsForFractions(
   basis: LoadingBasis,
@@ -40,30 +46,54 @@ export function concentrationsForFractions(
 ): ConcentrationSolution {
   const n = basis.emission.length;
   if (wantedFractions.length !== n + 1) throw new BlendInputError('fractions: pump + one per phosphor expected');
-  const w0 = Math.max(wantedFractions[0], 1e-6);
-  const pumpCentroid = centroidNm(basis.pump);
-  const run = (c: number[]): LoadingResult =>
-    beerLambertPhotonBudget(basis, c, opts.pathLengthMm, opts.cascade ?? false, opts.cascadePathFactor ?? 1);
-  const thin = basis.emission.map((e, i) => {
-    const stokes = pumpCentroid / centroidNm(e);
-    const gain = basis.absorptionPerWtPctMm[i] * opts.pathLengthMm * basis.iqe[i] * stokes;
-    const c = wantedFractions[i + 1] / w0 / Math.max(gain, 1e-9);
-    return Math.log(Math.min(Math.max(c, 1e-4), 80));
-  });
-  const start = opts.initialWtPct ? opts.initialWtPct.map((c, i) => (c > 0 ? Math.log(c) : thin[i])) : thin;
-  const active = wantedFractions.slice(1).map((w) => w > 1e-9);
-  const toC = (u: number[]): number[] => u.map((v, i) => (active[i] ? Math.exp(Math.min(v, MAX_LN_C)) : 0));
-  const residualFor = (cascade: boolean) => (u: number[]): number[] => {
-    const f = beerLambertPhotonBudget(basis, toC(u), opts.pathLengthMm, cascade, opts.cascadePathFactor ?? 1);
-    return f.opticalFractions.slice(1).map((fi, i) => fi - wantedFractions[i + 1]);
-  };
-  // Without the cascade first (smooth, near the thin-layer start), then with it.
-  let lm = levenbergMarquardt(residualFor(false), start, { maxIterations: 60, tolerance: 1e-14, initialDamping: 0.1, maxStep: 1, residualTolerance: 1e-10 });
-  if (opts.cascade) {
-    lm = levenbergMarquardt(residualFor(true), lm.params, { maxIterations: 60, tolerance: 1e-14, initialDamping: 0.1, maxStep: 1, residualTolerance: 1e-10 });
+  const total = wantedFractions.reduce((a, b) => a + Math.max(0, b), 0);
+  const wanted = wantedFractions.map((w) => Math.max(0, w) / (total > 0 ? total : 1));
+  const L = opts.pathLengthMm;
+  const depth = opticalDepthsForFractions(basis, wanted, opts.cascade ?? false, opts.cascadePathFactor ?? 1);
+  const g = depth.opticalDepths.map((t, i) => (t > 0 ? t / (basis.absorptionPerWtPctMm[i] * L) : 0));
+  const where = `at ${L} mm`;
+  let refusal: string | null = null;
+  let c = g;
+  if (!depth.converged) {
+    refusal =
+      wanted[0] <= 0
+        ? 'The mix has no pump leak: it would need an infinitely thick phosphor layer.'
+        : `The loading model cannot produce this mix ${where} (closest: off by ${depth.maxFractionError.toFixed(4)} in optical fraction).`;
+  } else {
+    const conv = wtPctForDepths(basis, depth.opticalDepths, opts);
+    if (conv.ok) c = conv.concentrationsWtPct;
+    else refusal = conv.reason;
   }
-  const c = toC(lm.params);
-  const result = run(c);
-  const maxFractionError = Math.max(...result.opticalFractions.slice(1).map((f, i) => Math.abs(f - wantedFractions[i + 1])));
-  return { concentrationsWtPct: c, result, maxFractionError, converged: maxFractionError < 1e-6 };
+  return {
+    concentrationsWtPct: c,
+    opticalDepths: depth.opticalDepths,
+    result: depth.result,
+    maxFractionError: depth.maxFractionError,
+    converged: refusal === null,
+    refusal
+  };
+}
+
+/** As `concentrationsForFractions`, but throws `LoadingRefusedError` with the reason when refused. */
+export function requireConcentrations(basis: LoadingBasis, wantedFractions: number[], opts: LoadingOptions): ConcentrationSolution {
+  const sol = concentrationsForFractions(basis, wantedFractions, opts);
+  if (sol.refusal) throw new LoadingRefusedError(sol.refusal);
+  return sol;
+}
+
+/** wt % for optical depths τ at a path length (gᵢ = τᵢ/(αᵢ·L), then the geometry), or the plain reason they cannot be weighed. */
+export function wtPctForDepths(
+  basis: LoadingBasis,
+  opticalDepths: number[],
+  opts: Pick<LoadingOptions, 'pathLengthMm' | 'geometry' | 'siliconeDensityGPerCm3'>
+): { ok: true; concentrationsWtPct: number[] } | { ok: false; reason: string } {
+  const L = opts.pathLengthMm;
+  const g = opticalDepths.map((t, i) => (t > 0 ? t / (basis.absorptionPerWtPctMm[i] * L) : 0));
+  const spec = { geometry: opts.geometry, densityGPerCm3: basis.densityGPerCm3, siliconeDensityGPerCm3: opts.siliconeDensityGPerCm3 };
+  const conv = wtPctFromEffective(g, spec);
+  if (conv.ok) return conv;
+  const gSum = g.reduce((a, b) => a + b, 0);
+  const shortest = ((L * gSum) / 100).toPrecision(3);
+  const longer = (opts.geometry ?? 'fixedMass') === 'fixedMass' ? ` A path of at least ${shortest} mm would bring it under 100 wt %.` : '';
+  return { ok: false, reason: `This mix cannot be made at ${L} mm: ${conv.reason}, and a slurry must stay below 100 wt %.${longer}` };
 }

@@ -2,6 +2,10 @@
  * Turns a chosen mix into a reported candidate: full evaluation by the core (CRI and
  * TM-30), chromaticity error against the target, floors met/violated/binding, unused
  * components, cost, and wt % from the loading model when its parameters are given.
+ * With re-absorption on, the mix is realised on the loading model (`realiseOnLoadingModel`)
+ * and everything reported (colour, Ra, R9, TM-30, LER, cost, fractions) is computed from the
+ * loading-model spectrum of the wt % handed over. A mix that cannot be weighed carries no
+ * wt %, is not feasible, and says why.
  */
 import { isInQuadrangle } from '../../spectral/ansi/c78377';
 import { evaluateGrid } from '../../spectral/evaluate';
@@ -9,12 +13,17 @@ import type { SpectrumEvaluation } from '../../spectral/types';
 import type { Basis } from '../basis';
 import { concentrationsForFractions } from '../loading/concentrationsForFractions';
 import { superposeSpd } from '../superposition';
+import { spectrumModelOf, type SpectrumModel } from './spectrumModel';
+import { realiseOnLoadingModel } from './realiseOnLoadingModel';
 import type { LoadingParams } from '../types';
 import { type ColourDistance, type Tolerance, colourDistance, withinTolerance } from '../../aim/distance';
 import { type Floors, type Objective, bindingFloors, violatedFloors } from '../../aim/floors';
 import { loopMetricsOf } from './loopMetrics';
-import { type CostBasis, costBasisFor, phosphorCostPer1000Lm } from './phosphorCost';
+import { type CostBasis, costBasisFor, loadingCostPer1000Lm, phosphorCostPer1000Lm } from './phosphorCost';
 import type { ResolvedTarget } from '../../aim/target';
+
+/** Start of the violation that says why a mix has no recipe in wt %. */
+export const NO_RECIPE = 'no recipe in wt %: ';
 
 /** A component whose optical fraction is below this is reported as unused. */
 export const UNUSED_FRACTION = 1e-4;
@@ -46,6 +55,8 @@ export interface SolveCandidate {
   binding: string[];
   violations: string[];
   notes: string[];
+  /** Which model produced the spectrum and metrics shown. */
+  model: SpectrumModel;
 }
 
 export interface CandidateContext {
@@ -55,34 +66,57 @@ export interface CandidateContext {
   floors: Floors;
   objective: Objective;
   loading?: LoadingParams;
+  /** Colour point the mix is solved at (default: the target). */
+  solvedAt?: [number, number];
+  /** The fractions are outputs of the loading model with re-absorption (not of the superposition). */
+  fractionsOnLoadingModel?: boolean;
 }
 
 export function buildCandidate(ctx: CandidateContext, fractions: number[]): SolveCandidate {
   const { basis, target, loading } = ctx;
-  const evaluation = evaluateGrid(superposeSpd(basis, fractions));
-  const cost = phosphorCostPer1000Lm(basis, fractions, evaluation.ler, loading);
+  const model = spectrumModelOf(basis, loading);
+  const notes: string[] = [];
+  let refusal: string | null = null;
+  let concentrations: number[] | null = null;
+  let shown = fractions;
+  let evaluation;
+  let cost: number | null;
+  if (model.kind === 'loadingWithReabsorption' && loading) {
+    const real = realiseOnLoadingModel(basis, loading, fractions, ctx.solvedAt ?? [target.x, target.y], ctx.fractionsOnLoadingModel);
+    if (real.ok) {
+      concentrations = real.concentrationsWtPct;
+      shown = real.result.opticalFractions;
+      evaluation = evaluateGrid(real.result.spd);
+      cost = loadingCostPer1000Lm(basis, concentrations, real.result.radiantEfficiency, evaluation.ler, loading);
+    } else {
+      refusal = real.reason;
+      evaluation = evaluateGrid(superposeSpd(basis, fractions));
+      cost = null;
+    }
+  } else {
+    evaluation = evaluateGrid(superposeSpd(basis, fractions));
+    cost = phosphorCostPer1000Lm(basis, fractions, evaluation.ler, loading);
+    if (loading && basis.loading) {
+      const sol = concentrationsForFractions(basis.loading, fractions, loading);
+      if (sol.converged) concentrations = sol.concentrationsWtPct;
+      else refusal = sol.refusal;
+    }
+  }
   const { metrics, criValid } = loopMetricsOf(evaluation, cost);
   const error = colourDistance(evaluation.x, evaluation.y, target);
-  let concentrations: number[] | null = null;
-  const notes: string[] = [];
-  if (loading && basis.loading) {
-    const sol = concentrationsForFractions(basis.loading, fractions, loading);
-    concentrations = sol.concentrationsWtPct;
-    if (!sol.converged) notes.push(`loading model reproduces the mix only to ${sol.maxFractionError.toExponential(1)} in fraction`);
-    if (loading.cascade) notes.push('wt % include first-order re-absorption; the spectrum shown is the optical superposition');
-  }
   if (!criValid) notes.push('DC ≥ 5.4e-3: Ra is not meaningful at this colour point (CIE 13.3 §5.3)');
   const violations = violatedFloors(ctx.floors, metrics);
-  const unused = basis.components.filter((_, k) => fractions[k] < UNUSED_FRACTION).map((c) => `unused:${c.id}`);
+  if (refusal) violations.push(`${NO_RECIPE}${refusal}`);
+  const unused = basis.components.filter((_, k) => shown[k] < UNUSED_FRACTION).map((c) => `unused:${c.id}`);
   return {
     rank: 0,
     feasible: violations.length === 0,
-    opticalFractions: fractions,
+    opticalFractions: shown,
     components: basis.components.map((c, k) => ({
       id: c.id,
       name: c.name,
       role: c.role,
-      opticalFraction: fractions[k],
+      opticalFraction: shown[k],
       concentrationWtPct: concentrations && k > 0 ? concentrations[k - 1] : null
     })),
     concentrationsWtPct: concentrations,
@@ -94,6 +128,7 @@ export function buildCandidate(ctx: CandidateContext, fractions: number[]): Solv
     costBasis: costBasisFor(basis, loading),
     binding: [...bindingFloors(ctx.floors, metrics), ...unused],
     violations,
-    notes
+    notes,
+    model
   };
 }

@@ -20,14 +20,12 @@
  */
 import type { Basis } from '../basis';
 import { concentrationsForFractions } from '../loading/concentrationsForFractions';
+import { slurryDensityGPerCm3 } from '../loading/dispenseGeometry';
 import type { LoadingParams } from '../types';
 
 export const ABSORBED_W_PER_G = 10;
 export const DEFAULT_SILICONE_DENSITY = 1.1;
 export const DEFAULT_PUMP_IRRADIANCE_W_PER_MM2 = 0.05;
-
-/** Last inverse solution per basis: a warm start for the next, nearby mix in a search. */
-const lastSolution = new WeakMap<Basis, number[]>();
 
 export type CostBasis = 'loadingModel' | 'thinLayerProxy';
 
@@ -35,14 +33,7 @@ export function costBasisFor(basis: Basis, loading: LoadingParams | undefined): 
   return loading && basis.loading && basis.densityGPerCm3.every((d) => d !== null) ? 'loadingModel' : 'thinLayerProxy';
 }
 
-export function slurryDensity(concentrationsWtPct: number[], densities: number[], siliconeDensity: number): number {
-  const phosphorShare = concentrationsWtPct.reduce((a, b) => a + b, 0) / 100;
-  let inv = Math.max(0, 1 - phosphorShare) / siliconeDensity;
-  concentrationsWtPct.forEach((c, i) => (inv += c / 100 / densities[i]));
-  return 1 / inv;
-}
-
-/** Cost per 1,000 lm, or null when a price is missing. */
+/** Cost per 1,000 lm, or null when a price is missing or the mix cannot be weighed (never priced on unconverged wt %). */
 export function phosphorCostPer1000Lm(
   basis: Basis,
   fractions: number[],
@@ -52,15 +43,8 @@ export function phosphorCostPer1000Lm(
   if (basis.costPerKg.some((c) => c === null) || !(ler > 0)) return null;
   const price = basis.costPerKg as number[];
   if (costBasisFor(basis, loading) === 'loadingModel' && loading && basis.loading) {
-    const sol = concentrationsForFractions(basis.loading, fractions, { ...loading, initialWtPct: lastSolution.get(basis) });
-    lastSolution.set(basis, sol.concentrationsWtPct);
-    const c = sol.concentrationsWtPct;
-    const rho = slurryDensity(c, basis.densityGPerCm3 as number[], loading.siliconeDensityGPerCm3 ?? DEFAULT_SILICONE_DENSITY);
-    const slurryGPerPumpW =
-      (rho * 1e-3 * loading.pathLengthMm) / (loading.pumpIrradianceWPerMm2 ?? DEFAULT_PUMP_IRRADIANCE_W_PER_MM2);
-    const lmPerPumpW = sol.result.radiantEfficiency * ler;
-    const costPerPumpW = c.reduce((s, ci, i) => s + (ci / 100) * slurryGPerPumpW * (price[i] / 1000), 0);
-    return (1000 * costPerPumpW) / lmPerPumpW;
+    const sol = concentrationsForFractions(basis.loading, fractions, loading);
+    return sol.converged ? loadingCostPer1000Lm(basis, sol.concentrationsWtPct, sol.result.radiantEfficiency, ler, loading) : null;
   }
   const pumpCentroid = basis.components[0].centroidNm;
   let cost = 0;
@@ -70,4 +54,22 @@ export function phosphorCostPer1000Lm(
     cost += grams * (price[i - 1] / 1000);
   }
   return cost;
+}
+
+/** Cost per 1,000 lm of a recipe in wt % (loading model), or null when a price or density is missing. */
+export function loadingCostPer1000Lm(
+  basis: Basis,
+  concentrationsWtPct: number[],
+  radiantEfficiency: number,
+  ler: number,
+  loading: LoadingParams
+): number | null {
+  if (basis.costPerKg.some((c) => c === null) || basis.densityGPerCm3.some((d) => d === null) || !(ler > 0)) return null;
+  const price = basis.costPerKg as number[];
+  const c = concentrationsWtPct;
+  const rho = slurryDensityGPerCm3(c, basis.densityGPerCm3 as number[], loading.siliconeDensityGPerCm3 ?? DEFAULT_SILICONE_DENSITY);
+  const slurryGPerPumpW = (rho * 1e-3 * loading.pathLengthMm) / (loading.pumpIrradianceWPerMm2 ?? DEFAULT_PUMP_IRRADIANCE_W_PER_MM2);
+  const lmPerPumpW = radiantEfficiency * ler;
+  const costPerPumpW = c.reduce((s, ci, i) => s + (ci / 100) * slurryGPerPumpW * (price[i] / 1000), 0);
+  return (1000 * costPerPumpW) / lmPerPumpW;
 }

@@ -11,13 +11,20 @@
  * only when needed) inside the loop. (4) Finalists get the full core evaluation.
  * Every candidate sits on the target colour point (the process spread, not the recipe,
  * should consume the tolerance) unless the target is out of gamut.
+ * With re-absorption on (loading.cascade), finalists are realised on the loading model
+ * (`realiseOnLoadingModel`) and ranked again on the spectrum of the wt % they hand over; a
+ * solve none of whose finalists can be weighed is refused (`LoadingRefusedError`, 422).
  */
 import { BlendInputError } from '../errors';
+import { LoadingRefusedError } from '../loading/concentrationsForFractions';
+import { loopMetricsOf } from './loopMetrics';
+import { refineOnLoadingModel } from './refineOnLoadingModel';
+import { type SpectrumModel, spectrumModelOf } from './spectrumModel';
 import { uvToCct } from '../../spectral/cct/index';
 import { uvPrimeToXy, xyToUv, xyToUvPrime, xyzToUvPrime } from '../../spectral/colorimetry/chromaticity';
 import { prepareBasis } from '../basis';
 import type { BlendComponents, LoadingParams } from '../types';
-import { type CandidateContext, type SolveCandidate, buildCandidate } from './buildCandidate';
+import { type CandidateContext, NO_RECIPE, type SolveCandidate, buildCandidate } from './buildCandidate';
 import { type Tolerance, colourDistance, withinTolerance } from '../../aim/distance';
 import { colourPlane } from './colourPlane';
 import { type Point, convexHull, nearestInHull } from './convexHull';
@@ -47,6 +54,8 @@ export interface SolveResult {
   /** Colour point the candidates were solved at (the target, or the nearest reachable point). */
   solvedAt: { x: number; y: number; cct: number; duv: number };
   candidates: SolveCandidate[];
+  /** Which model produced the candidates' spectra and metrics. */
+  model: SpectrumModel;
   /** Best value of each floored metric over every evaluated mix (each taken alone). */
   bestAchievable: Partial<Record<keyof Floors, number>>;
   evaluations: number;
@@ -75,21 +84,52 @@ export function solveBlend(problem: SolveProblem): SolveResult {
     : searchPolytope(plane, loop.evaluate, { floors, objective: problem.objective, starts: maxCandidates + 2 });
   const merit = (p: LoopPoint) => meritOf(p, floors, problem.objective);
   const pool = [...search.optima.sort((a, b) => merit(a) - merit(b)), ...search.samples.sort((a, b) => merit(a) - merit(b))];
+  const model = spectrumModelOf(basis, problem.loading);
+  const realised = model.kind === 'loadingWithReabsorption';
+  // Realised finalists are ranked again on their own spectra, so a few spares are built.
+  const wanted = realised ? maxCandidates + 2 : maxCandidates;
   const picked: LoopPoint[] = [];
   for (const p of pool) {
-    if (picked.length >= maxCandidates) break;
+    if (picked.length >= wanted) break;
     if (picked.every((q) => distance(q.fractions, p.fractions) >= CANDIDATE_SEPARATION)) picked.push(p);
   }
   picked.sort((a, b) => merit(a) - merit(b));
-  const ctx: CandidateContext = { basis, target, tolerance, floors, objective: problem.objective, loading: problem.loading };
-  const candidates = picked.map((p, i) => ({ ...buildCandidate(ctx, p.fractions), rank: i + 1 }));
+  const ctx: CandidateContext = {
+    basis, target, tolerance, floors, objective: problem.objective, loading: problem.loading, solvedAt: [sx, sy]
+  };
+  let candidates = picked.map((p) => buildCandidate(ctx, p.fractions));
+  if (problem.loading && basis.loading && candidates.length > 0 && candidates.every((c) => c.concentrationsWtPct === null)) {
+    const why = candidates[0].violations.find((v) => v.startsWith(NO_RECIPE))?.slice(NO_RECIPE.length);
+    throw new LoadingRefusedError(`No proposal can be weighed. ${why ?? 'The loading model cannot produce these mixes.'}`);
+  }
+  let extraEvaluations = 0;
+  if (realised) {
+    const candidateMerit = (c: SolveCandidate) =>
+      meritOf({ fractions: c.opticalFractions, ...loopMetricsOf(c.evaluation, c.costPer1000Lm) }, floors, problem.objective);
+    const byMerit = (list: SolveCandidate[]) =>
+      list.filter((c) => c.concentrationsWtPct !== null).sort((a, b) => candidateMerit(a) - candidateMerit(b));
+    let weighable = byMerit(candidates);
+    if (near.distance === 0) {
+      const refined = refineOnLoadingModel(ctx, weighable[0], maxCandidates, 3);
+      extraEvaluations = refined.evaluations;
+      weighable = byMerit([...weighable, ...refined.candidates]);
+    }
+    const kept: SolveCandidate[] = [];
+    for (const c of weighable) {
+      if (kept.length >= maxCandidates) break;
+      if (kept.every((k) => distance(k.opticalFractions, c.opticalFractions) >= CANDIDATE_SEPARATION)) kept.push(c);
+    }
+    candidates = kept;
+  }
+  candidates = candidates.map((c, i) => ({ ...c, rank: i + 1 }));
   const bestAchievable = bestValues(floors, [...search.samples, ...search.optima]);
   const solvedCct = uvToCct(...xyToUv(sx, sy));
   const base = {
     target: { x: target.x, y: target.y, cct: target.cct, duv: target.duv, label: target.label },
     solvedAt: { x: sx, y: sy, cct: solvedCct.cct, duv: solvedCct.duv },
     bestAchievable,
-    evaluations: loop.count()
+    evaluations: loop.count() + extraEvaluations,
+    model
   };
   if (outOfGamut) {
     candidates.forEach((c) => (c.feasible = false));

@@ -196,11 +196,8 @@ export class DesignerSession {
     if (fractions.length < 2) return void (this.wtPct = { key, values: null, note: 'add a phosphor' });
     if (path === null || !(path > 0)) return void (this.wtPct = { key, values: null, note: 'no path length: wt % not estimated' });
     if (!loading) return void (this.wtPct = { key, values: null, note: 'a phosphor lacks an absorption coefficient in the library' });
-    const warm = this.wtPct?.values ?? undefined;
-    const sol = concentrationsForFractions(loading, fractions, { pathLengthMm: path, initialWtPct: warm && warm.length === fractions.length - 1 ? warm : undefined });
-    this.wtPct = sol.converged
-      ? { key, values: sol.concentrationsWtPct, note: null }
-      : { key, values: null, note: `the loading model cannot reach this mix at ${path} mm (off by ${sol.maxFractionError.toFixed(3)} in fraction)` };
+    const sol = concentrationsForFractions(loading, fractions, { pathLengthMm: path });
+    this.wtPct = sol.converged ? { key, values: sol.concentrationsWtPct, note: null } : { key, values: null, note: sol.refusal };
   }
 
   /** wt % for the current shares, computed now if the resting estimate is not there yet. */
