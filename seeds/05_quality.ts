@@ -40,6 +40,8 @@ export async function seed(knex: Knex): Promise<void> {
     console.log(`seed 05_quality: ${BATCH} measured (${measured.parts.length} parts), waiting for a decision.`);
   } catch (err) {
     const reason = (err as Error).message;
-    throw new Error(`seed 05_quality: the demo measurements could not be stored (is object storage up at S3_ENDPOINT?): ${reason}`);
+    throw new Error(`seed 05_quality: the demo measurements could not be stored (is object storage up at S3_ENDPOINT?): ${reason}`, {
+      cause: err
+    });
   }
 }
