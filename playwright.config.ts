@@ -1,4 +1,9 @@
 import { defineConfig } from '@playwright/test';
+import { externalDatabaseRefusal } from './scripts/guard-test-database.mjs';
+
+// The app under test writes to its database: never one the tests did not create (see the guard).
+const refusal = externalDatabaseRefusal(process.env);
+if (refusal) throw new Error(`playwright: ${refusal}`);
 
 // Ports and service settings come from scripts/profile.sh (PF_PROFILE=test), which `npm test` sources.
 const PORT = Number(process.env.PORT ?? 4173);

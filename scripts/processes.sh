@@ -6,10 +6,27 @@ pids=()
 # listing tokens. An array, not a function: `"${FAKES[@]}" &` makes $! the node process itself.
 FAKES=(node --openssl-legacy-provider --import tsx scripts/fakes.ts)
 
-fakes_up() { (exec 3<>"/dev/tcp/127.0.0.1/$PF_S3_PORT") 2>/dev/null; }
+port_open() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
+fakes_up() { port_open "$PF_S3_PORT" && port_open "$PF_SMTP_PORT"; }
+app_up() { curl -fsS "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1; }
 
-# Waits up to 10 s for the fakes' S3 port.
-wait_for_fakes() { for _ in $(seq 1 50); do fakes_up && return 0; sleep 0.2; done; return 1; }
+# wait_until <what> <seconds> <command...>: polls the command every 0.2 s; after the timeout it says
+# what did not come up and returns non-zero (callers stop there).
+wait_until() {
+  local what="$1" seconds="$2" i; shift 2
+  for ((i = 0; i < seconds * 5; i++)); do "$@" && return 0; sleep 0.2; done
+  echo "$what did not come up within $seconds s" >&2
+  return 1
+}
+wait_for_fakes() { wait_until "the fakes (S3 on 127.0.0.1:$PF_S3_PORT, SMTP on 127.0.0.1:$PF_SMTP_PORT)" 30 fakes_up; }
+wait_for_app() { wait_until "the app (http://127.0.0.1:$PORT/api/health)" 60 app_up; }
+
+# The build inputs: a build older than any of these is rebuilt (start.sh, load.sh; test.sh always builds).
+BUILD_INPUTS=(src static package.json package-lock.json svelte.config.js vite.config.ts tailwind.config.ts postcss.config.js
+  tsconfig.json scripts/build-solve-worker.mjs)
+build_is_stale() {
+  [ ! -f build/index.js ] || [ -n "$(find "${BUILD_INPUTS[@]}" -newer build/index.js -print -quit 2>/dev/null)" ]
+}
 
 # Starts the private server (unless PF_EXTERNAL_DB) and drops and re-creates $DB_NAME.
 fresh_database() {

@@ -5,8 +5,10 @@
 # Usage: bash scripts/sandbox.sh <name> [--fresh] <command...>
 #   e.g. bash scripts/sandbox.sh materials --fresh npx vitest run tests/materials
 #        bash scripts/sandbox.sh materials bash -c 'npm run build && npx playwright test tests/e2e/x.e2e.ts'
+# Refuses a database named from outside (DATABASE_URL) unless PF_TEST_DATABASE_URL repeats it.
 set -euo pipefail
 cd "$(dirname "$0")/.."
+node scripts/guard-test-database.mjs sandbox || exit 2
 name="${1:?usage: sandbox.sh <name> [--fresh] <command...>}"; shift
 fresh=0; if [ "${1:-}" = "--fresh" ]; then fresh=1; shift; fi
 [[ "$name" =~ ^[a-z0-9]+$ ]] || { echo "sandbox: name must be lowercase letters/digits" >&2; exit 2; }

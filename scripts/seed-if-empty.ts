@@ -1,4 +1,7 @@
-/** Seeds the demo data only into an empty database (no users yet); never touches existing data. */
+/**
+ * Seeds the demo data only into an empty database (no users yet); never touches existing data.
+ * A seed that fails stops the run (exit 1) with its reason: demo data is never skipped quietly.
+ */
 import knexFactory from 'knex';
 import config from '../knexfile';
 
@@ -11,6 +14,10 @@ try {
     const [files] = await knex.seed.run();
     console.log(`seed: demo data loaded (${files.length} seed files)`);
   }
+} catch (err) {
+  console.error(`seed: FAILED: ${(err as Error).message}`);
+  console.error('seed: the database may now hold part of the demo data; drop and re-create it before seeding again.');
+  process.exitCode = 1;
 } finally {
   await knex.destroy();
 }

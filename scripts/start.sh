@@ -11,14 +11,15 @@ trap 'echo; echo "stopping…"; stop_started' INT TERM EXIT
 
 [ -n "${PF_EXTERNAL_DB:-}" ] || bash scripts/db.sh start
 "${FAKES[@]}" & pids+=($!)
+wait_for_fakes
 npm run --silent db:migrate
 npm run --silent db:seed
-if [ ! -f build/index.js ] || [ -n "$(find src static package-lock.json svelte.config.js vite.config.ts tailwind.config.ts -newer build/index.js -print -quit)" ]; then
+if build_is_stale; then
   echo "build: vite build"
   npm run --silent build >.runtime/build.log 2>&1 || { tail -40 .runtime/build.log; exit 1; }
 fi
 node build & pids+=($!)
-for _ in $(seq 1 100); do curl -fsS "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break; sleep 0.2; done
+wait_for_app
 cat <<TXT
 
   Phosforge is running at  $ORIGIN

@@ -3,8 +3,10 @@
 # ports (so it can run while `npm start` is up), then svelte-check, Vitest (unit + integration
 # against the real MariaDB) and Playwright end-to-end tests in Debian's Chromium.
 # Stops everything it started, prints a summary, exits non-zero on any failure.
+# Refuses a database named from outside (DATABASE_URL) unless PF_TEST_DATABASE_URL repeats it.
 set -uo pipefail
 cd "$(dirname "$0")/.."
+node scripts/guard-test-database.mjs "npm test" || exit 2
 bash scripts/ensure-tools.sh --test || exit 1
 PF_PROFILE=test . scripts/profile.sh
 rm -rf "$PF_S3_DIR"
@@ -24,6 +26,7 @@ step() { # step <name> <command...>
 # A fresh test database for every run.
 fresh_database || exit 1
 "${FAKES[@]}" & pids+=($!)
+wait_for_fakes || exit 1
 step "migrate + seed" bash -c "npm run --silent db:migrate && npm run --silent db:seed"
 step "svelte-check" npm run --silent check
 step "vitest (unit + integration)" npx vitest run

@@ -3,7 +3,8 @@
  * BT-261201-001, as one multi-column sphere export. The parts are synthetic (the blend model of the
  * batch's revision with the red phosphor 4 % high and a ±2 % scatter, src/lib/quality/syntheticParts.ts),
  * so a few miss the 3-step ellipse; the batch is left waiting for quality's decision. The raw file
- * goes to object storage like an upload; without object storage the demo measurements are skipped.
+ * goes to object storage like an upload, so the fakes (or the real store) must be up: without them the
+ * seed fails with the reason rather than leave the demo without its measurements.
  * Idempotent: a batch that already has measurements is left alone.
  */
 import type { Knex } from 'knex';
@@ -19,10 +20,7 @@ export async function seed(knex: Knex): Promise<void> {
   const batch = await knex('batches as b').join('formulation_revisions as r', 'r.id', 'b.revision_id')
     .where({ 'b.batch_number': BATCH, 'b.state': 'complete' }).first('b.id', 'r.content_json');
   const quality = await knex('users').where({ email: 'ines.halloran@kestrelhollow.example' }).first('id');
-  if (!batch || !quality) {
-    console.log(`seed 05_quality: no completed ${BATCH} or no quality user; demo measurements skipped.`);
-    return;
-  }
+  if (!batch || !quality) throw new Error(`seed 05_quality: no completed ${BATCH} or no quality user; the earlier seeds did not load.`);
   if (await knex('measurement_uploads').where({ batch_id: batch.id }).first('id')) return;
   const content = parseRecipe(batch.content_json);
   const loaded = await loadRevisionComponents(knex, content);
@@ -41,6 +39,9 @@ export async function seed(knex: Knex): Promise<void> {
     });
     console.log(`seed 05_quality: ${BATCH} measured (${measured.parts.length} parts), waiting for a decision.`);
   } catch (err) {
-    console.log(`seed 05_quality: demo measurements skipped (${(err as Error).message}).`);
+    const reason = (err as Error).message;
+    throw new Error(`seed 05_quality: the demo measurements could not be stored (is object storage up at S3_ENDPOINT?): ${reason}`, {
+      cause: err
+    });
   }
 }

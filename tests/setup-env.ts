@@ -1,3 +1,9 @@
+import { externalDatabaseRefusal } from '../scripts/guard-test-database.mjs';
+
+// Never a database the tests did not create: DATABASE_URL only when PF_TEST_DATABASE_URL repeats it.
+const refusal = externalDatabaseRefusal(process.env);
+if (refusal) throw new Error(`vitest: ${refusal}`);
+
 // Test runs default to the test profile's database and services (scripts/profile.sh, PF_PROFILE=test),
 // so a stray `npx vitest` never touches the development database.
 const defaults: Record<string, string> = {
