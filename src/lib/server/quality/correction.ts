@@ -12,7 +12,8 @@ import { createCorrectionDraft } from '../formulations/save';
 import { correctionDraftMessage } from '../mail/templates/correction-draft';
 import { BlendInputError } from '../../blend/errors';
 import { correctFromBatch } from '../../quality/index';
-import { QualityError, conflict, notFound } from './errors';
+import { unprocessable } from '../../errors/domain-error';
+import { conflict, notFound } from './errors';
 import { requireQuality, type Caller } from './caller';
 import { computeResults, loadContext } from './results';
 
@@ -41,7 +42,7 @@ export async function makeCorrectionDraft(caller: Caller, batchId: number, stepF
   try {
     corrected = correctFromBatch(content, components, mean, note, stepFraction);
   } catch (err) {
-    if (err instanceof BlendInputError) throw new QualityError(422, `The correction cannot be computed: ${err.message}`);
+    if (err instanceof BlendInputError) throw unprocessable(`The correction cannot be computed: ${err.message}`);
     throw err;
   }
   const r = corrected.response;
