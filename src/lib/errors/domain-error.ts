@@ -6,7 +6,9 @@
  */
 import { STATUS_OF_KIND } from './http-status';
 
-export const ERROR_KINDS = ['invalid', 'forbidden', 'not_found', 'conflict', 'too_large', 'unsupported_type', 'unprocessable', 'unavailable'] as const;
+export const ERROR_KINDS = [
+  'invalid', 'forbidden', 'not_found', 'conflict', 'too_large', 'unsupported_type', 'unprocessable', 'unavailable'
+] as const;
 export type ErrorKind = (typeof ERROR_KINDS)[number];
 
 /** One problem with one field (`path`, by its label or dotted name) or one line of an uploaded file. */

@@ -39,7 +39,10 @@ export function withoutSecrets<T extends Data>(data: T): T {
 export function actionFailure<T extends Data>(status: number, data: T): ActionFailure<T>;
 export function actionFailure<T extends Data>(cause: unknown, shown: (refusal: Refusal) => T): ActionFailure<T>;
 export function actionFailure<T extends Data>(cause: unknown, data: T): ActionFailure<T & Refusal>;
-export function actionFailure<T extends Data>(cause: unknown, data: T | ((refusal: Refusal) => T)): ActionFailure<T> | ActionFailure<T & Refusal> {
+export function actionFailure<T extends Data>(
+  cause: unknown,
+  data: T | ((refusal: Refusal) => T)
+): ActionFailure<T> | ActionFailure<T & Refusal> {
   if (typeof cause === 'number' && typeof data !== 'function') return fail(cause, withoutSecrets(data));
   if (!(cause instanceof DomainError)) throw cause;
   const refusal: Refusal = { error: cause.publicMessage, issues: [...cause.issues], conflict: cause.kind === 'conflict' };
