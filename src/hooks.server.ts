@@ -6,6 +6,7 @@ import * as users from '$lib/server/db/users';
 import { userForToken } from '$lib/server/auth/tokens';
 import { closeDb, isDbUnavailable } from '$lib/server/db/index';
 import { securityHeaders } from '$lib/server/security-headers';
+import { errorBody } from '$lib/server/http/status';
 
 /** Who is asking: a bearer token on /api, else the Auth.js session. Inactive users count as signed out. */
 async function identify(event: Parameters<Handle>[0]['event']): Promise<Response | null> {
@@ -53,7 +54,7 @@ const guard: Handle = async ({ event, resolve }) => {
   const reason = decision === 'unlisted'
     ? 'This address is not open to any role.'
     : `Your roles (${user?.roles.join(', ') || 'none'}) do not include access to this page or action.`;
-  if (isApi) return json({ error: 'Forbidden', details: reason }, { status: 403 });
+  if (isApi) return json(errorBody(`Forbidden: ${reason}`), { status: 403 });
   if (event.request.method === 'GET' && !event.isDataRequest) {
     event.locals.denied = reason;
     return resolve(event);

@@ -12,3 +12,12 @@ export const ROLE_LABELS: Record<Role, string> = {
 export function isRole(value: string): value is Role {
   return (ROLES as readonly string[]).includes(value);
 }
+
+/** Role groups the policies (./policies.ts) and the route tables are built from. */
+export const ALL: readonly Role[] = ['formulator', 'technician', 'quality', 'admin'];
+export const ADMIN: readonly Role[] = ['admin'];
+export const FORMULATION_EDITORS: readonly Role[] = ['formulator', 'admin'];
+export const LINE: readonly Role[] = ['technician', 'admin'];
+export const QUALITY: readonly Role[] = ['quality', 'admin'];
+/** Who may act on a revision: authors (formulators; quality for correction drafts), quality and admins. */
+export const REVISION_ACTORS: readonly Role[] = ['formulator', 'quality', 'admin'];

@@ -1,4 +1,10 @@
-/** Typed input error of the blend model: the caller's components or ratios cannot be used (API → 422). */
-export class BlendInputError extends Error {
-  override readonly name = 'BlendInputError';
+/** Typed input error of the blend model: the caller's components or ratios cannot be used (kind `unprocessable`, API → 422). */
+import { DomainError } from '../errors/domain-error';
+
+export class BlendInputError extends DomainError {
+  override name = 'BlendInputError';
+
+  constructor(message: string) {
+    super('unprocessable', message, { title: 'Blend rejected' });
+  }
 }

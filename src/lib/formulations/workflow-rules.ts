@@ -4,7 +4,7 @@
  * show) and the tests. Practice (common practice): draft → in review → approved /
  * returned; an approval supersedes the previous approved revision; nobody signs off their own work.
  */
-import type { Role } from '../access/roles';
+import { QUALITY, REVISION_ACTORS, type Role } from '../access/roles';
 
 /** Revision states (plain words of the trade). */
 export const REVISION_STATES = ['draft', 'submitted', 'approved', 'returned', 'superseded', 'withdrawn'] as const;
@@ -22,12 +22,12 @@ interface CommandRule {
 }
 
 export const COMMAND_RULES: Record<RevisionCommand, CommandRule> = {
-  edit: { from: ['draft'], to: null, roles: ['formulator', 'quality', 'admin'], author: 'must', label: 'Edit draft' },
-  submit: { from: ['draft'], to: 'submitted', roles: ['formulator', 'quality', 'admin'], author: 'must', label: 'Submit for review' },
-  review: { from: ['submitted'], to: null, roles: ['quality', 'admin'], author: 'mustNot', label: 'Sign as reviewed' },
-  approve: { from: ['submitted'], to: 'approved', roles: ['quality', 'admin'], author: 'mustNot', label: 'Sign and approve' },
-  return: { from: ['submitted'], to: 'returned', roles: ['quality', 'admin'], author: 'mustNot', label: 'Sign and return' },
-  withdraw: { from: ['draft', 'submitted', 'approved'], to: 'withdrawn', roles: ['formulator', 'quality', 'admin'], author: 'any', label: 'Withdraw' }
+  edit: { from: ['draft'], to: null, roles: REVISION_ACTORS, author: 'must', label: 'Edit draft' },
+  submit: { from: ['draft'], to: 'submitted', roles: REVISION_ACTORS, author: 'must', label: 'Submit for review' },
+  review: { from: ['submitted'], to: null, roles: QUALITY, author: 'mustNot', label: 'Sign as reviewed' },
+  approve: { from: ['submitted'], to: 'approved', roles: QUALITY, author: 'mustNot', label: 'Sign and approve' },
+  return: { from: ['submitted'], to: 'returned', roles: QUALITY, author: 'mustNot', label: 'Sign and return' },
+  withdraw: { from: ['draft', 'submitted', 'approved'], to: 'withdrawn', roles: REVISION_ACTORS, author: 'any', label: 'Withdraw' }
 };
 
 /** The only state changes a revision can make (mirrored by the database trigger). */

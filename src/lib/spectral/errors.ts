@@ -1,12 +1,14 @@
 /**
  * Typed input error of the spectral core. Every validation failure of a caller-supplied
- * spectrum throws this class (never a plain Error or TypeError), so API handlers can map
- * it to HTTP 422 with the message as the detail.
+ * spectrum throws this class (never a plain Error or TypeError); it is a domain error of kind
+ * `unprocessable`, answered 422 with "Spectrum rejected: " before the message.
  */
-export class SpectrumInputError extends Error {
-  override readonly name = 'SpectrumInputError';
+import { DomainError } from '../errors/domain-error';
+
+export class SpectrumInputError extends DomainError {
+  override name = 'SpectrumInputError';
 
   constructor(message: string) {
-    super(message);
+    super('unprocessable', message, { title: 'Spectrum rejected' });
   }
 }

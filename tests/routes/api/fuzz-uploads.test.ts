@@ -90,7 +90,7 @@ function expectRefusal(u: Upload, a: Answer, bytes: Uint8Array, context: string)
   expect(typeof message, context).toBe('string');
   expect(message.length, context).toBeGreaterThan(0);
   if (u.envelope.kind === 'brokenMultipart') return; // the file the server read may differ from the one built
-  const issues: { line?: number | null }[] = a.body?.details ?? a.body?.issues ?? [];
+  const issues: { line?: number | null }[] = a.body?.issues ?? [];
   const named = issues.flatMap((i) => (typeof i.line === 'number' ? [i.line] : []));
   if (named.length) {
     expect(message, context).toContain(`Line ${named[0]}:`);

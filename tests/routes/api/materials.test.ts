@@ -97,7 +97,7 @@ describe('/api/v1/phosphors and /api/v1/pumps', () => {
     expect(saved.body.metrics.peakNm).toBeCloseTo(600, 1);
     const bad = await call(phosphorSpectrum.POST, event('formulator', { params: { id }, raw: 'wavelength,intensity\n400,1\n390,1\n', headers: { 'content-type': 'text/csv' } }));
     expect(bad.status).toBe(422);
-    expect(bad.body.details[0]).toEqual({ line: 3, message: 'Line 3: wavelength 390 nm is lower than 400 nm on line 2; wavelengths must increase.' });
+    expect(bad.body.issues[0]).toEqual({ path: 'line 3', line: 3, message: 'Line 3: wavelength 390 nm is lower than 400 nm on line 2; wavelengths must increase.' });
     const tech = await call(phosphorSpectrum.POST, event('technician', { params: { id }, raw: gaussianCsv(), headers: { 'content-type': 'text/csv' } }));
     expect(tech.status).toBe(403);
   });

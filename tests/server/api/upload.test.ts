@@ -1,21 +1,21 @@
 /**
  * The file of an upload request (src/lib/server/api/upload.ts): every way a request can fail to
- * deliver a file is an ApiError with its status, never an exception (which the routes would answer
+ * deliver a file is a DomainError with its status, never an exception (which the routes would answer
  * with a 500). Found by the upload fuzz: a multipart body without its boundary, cut short or not
  * form data at all made request.formData() throw a TypeError.
  */
 import { describe, expect, it } from 'vitest';
-import { ApiError } from '../../../src/lib/server/api/body';
+import { DomainError } from '../../../src/lib/errors/domain-error';
 import { readUploadedFile } from '../../../src/lib/server/api/upload';
 
 const KIND = { maxBytes: 2 * 1024 * 1024, what: 'spectrum', defaultName: 'spectrum.csv' };
 const post = (body: BodyInit, headers: Record<string, string> = {}) => new Request('http://local/upload', { method: 'POST', body, headers });
 
-async function refusal(request: Request): Promise<ApiError> {
+async function refusal(request: Request): Promise<DomainError> {
   try {
     await readUploadedFile(request, KIND);
   } catch (err) {
-    if (err instanceof ApiError) return err;
+    if (err instanceof DomainError) return err;
     throw err;
   }
   throw new Error('expected a refusal');

@@ -5,7 +5,7 @@ import { getBatch, listBatches, traceLot } from '../../../src/lib/server/batches
 import { acceptDeviation, markMixed, recordLine } from '../../../src/lib/server/batches/weighing';
 import { completeBatch } from '../../../src/lib/server/batches/complete';
 import { scaleBatch } from '../../../src/lib/server/batches/scale';
-import { BatchError } from '../../../src/lib/server/batches/errors';
+import { DomainError } from '../../../src/lib/errors/domain-error';
 import { createBatchSchema } from '../../../src/lib/schemas/batches';
 import { getFile } from '../../../src/lib/server/storage/objects';
 import { pdfToText } from '../pdf/pdf-text';
@@ -23,8 +23,8 @@ beforeAll(async () => {
 });
 afterAll(closeDb);
 
-async function refusal(p: Promise<unknown>): Promise<BatchError> {
-  try { await p; } catch (err) { if (err instanceof BatchError) return err; throw err; }
+async function refusal(p: Promise<unknown>): Promise<DomainError> {
+  try { await p; } catch (err) { if (err instanceof DomainError) return err; throw err; }
   throw new Error('expected a refusal');
 }
 

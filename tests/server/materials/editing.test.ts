@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, closeDb } from '../../../src/lib/server/db/index';
 import * as editing from '../../../src/lib/server/materials/editing';
 import * as records from '../../../src/lib/server/materials/records';
-import { MaterialError } from '../../../src/lib/server/materials/errors';
+import { DomainError } from '../../../src/lib/errors/domain-error';
 import { demoUser, phosphorFields, removeTestMaterials } from './support';
 import type { User } from '../../../src/lib/server/db/users';
 
@@ -34,7 +34,7 @@ describe('material edits: optimistic lock, kind rules, audit', () => {
     const v2 = await editing.update(rhea, id, 1, { costPerKg: 160 });
     expect(v2).toBe(2);
     const stale = editing.update(sam, id, 1, { costPerKg: 999, notes: 'overwrite attempt' });
-    await expect(stale).rejects.toBeInstanceOf(MaterialError);
+    await expect(stale).rejects.toBeInstanceOf(DomainError);
     await expect(editing.update(sam, id, 1, { costPerKg: 999 })).rejects.toMatchObject({ status: 409, message: expect.stringMatching(/changed by someone else.*version 1.*version 2/) });
     const row = await db()('materials').where({ id }).first();
     expect(Number(row.cost_per_kg)).toBe(160);

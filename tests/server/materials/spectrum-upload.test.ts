@@ -69,8 +69,8 @@ describe('spectrum upload: a valid file is stored, a bad file saves nothing', ()
     const attempt = uploadSpectrum(rhea, id, 'emission', file(text, 'bad.csv'), version);
     await expect(attempt).rejects.toMatchObject({ status: 422, message: expect.stringMatching(/bad\.csv was not saved/) });
     const err = await uploadSpectrum(rhea, id, 'emission', file(text, 'bad.csv'), version).catch((e) => e);
-    expect(err.details[0].line).toBe(line);
-    expect(err.details[0].message).toMatch(message);
+    expect(err.issues[0].line).toBe(line);
+    expect(err.issues[0].message).toMatch(message);
     expect(await counts(id)).toEqual(before);
   });
 

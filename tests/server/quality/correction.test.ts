@@ -4,7 +4,7 @@ import { uploadMeasurements } from '../../../src/lib/server/quality/upload';
 import { makeCorrectionDraft } from '../../../src/lib/server/quality/correction';
 import { setAcceptance } from '../../../src/lib/server/quality/acceptance';
 import { batchResults } from '../../../src/lib/server/quality/results';
-import { QualityError } from '../../../src/lib/server/quality/errors';
+import { DomainError } from '../../../src/lib/errors/domain-error';
 import { getRevision } from '../../../src/lib/server/formulations/read';
 import { xyToUvPrime } from '../../../src/lib/spectral/colorimetry/chromaticity';
 import type { User } from '../../../src/lib/server/db/users';
@@ -87,8 +87,8 @@ describe('acceptance chosen for the batch', () => {
       await setAcceptance(quality, b.batchId, { mode: 'revision', requireTargetBin: true, version: 0 });
       throw new Error('expected a refusal');
     } catch (err) {
-      expect(err).toBeInstanceOf(QualityError);
-      expect((err as QualityError).status).toBe(409);
+      expect(err).toBeInstanceOf(DomainError);
+      expect((err as DomainError).status).toBe(409);
     }
   });
 });

@@ -3,10 +3,9 @@ import { createHash } from 'node:crypto';
 import { closeDb, db } from '../../../src/lib/server/db/index';
 import { uploadMeasurements } from '../../../src/lib/server/quality/upload';
 import { disposeBatch } from '../../../src/lib/server/quality/disposition';
-import { QualityError } from '../../../src/lib/server/quality/errors';
+import { DomainError } from '../../../src/lib/errors/domain-error';
 import { getBatch } from '../../../src/lib/server/batches/read';
 import { getFile } from '../../../src/lib/server/storage/objects';
-import { BatchError } from '../../../src/lib/server/batches/errors';
 import type { User } from '../../../src/lib/server/db/users';
 import { pdfToText } from '../pdf/pdf-text';
 import { caughtMail, recipients } from '../formulations/support';
@@ -28,8 +27,8 @@ beforeAll(async () => {
 });
 afterAll(closeDb);
 
-async function refusal(p: Promise<unknown>): Promise<QualityError | BatchError> {
-  try { await p; } catch (err) { if (err instanceof QualityError || err instanceof BatchError) return err; throw err; }
+async function refusal(p: Promise<unknown>): Promise<DomainError> {
+  try { await p; } catch (err) { if (err instanceof DomainError) return err; throw err; }
   throw new Error('expected a refusal');
 }
 

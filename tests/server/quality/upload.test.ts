@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb, db } from '../../../src/lib/server/db/index';
 import { uploadMeasurements, withdrawUpload } from '../../../src/lib/server/quality/upload';
 import { batchResults } from '../../../src/lib/server/quality/results';
-import { QualityError } from '../../../src/lib/server/quality/errors';
+import { DomainError } from '../../../src/lib/errors/domain-error';
 import { getFile } from '../../../src/lib/server/storage/objects';
 import type { User } from '../../../src/lib/server/db/users';
 import { completedBatch, countRows, csvFile, demoUser, partsCsv } from './support';
@@ -19,8 +19,8 @@ beforeAll(async () => {
 });
 afterAll(closeDb);
 
-async function refusal(p: Promise<unknown>): Promise<QualityError> {
-  try { await p; } catch (err) { if (err instanceof QualityError) return err; throw err; }
+async function refusal(p: Promise<unknown>): Promise<DomainError> {
+  try { await p; } catch (err) { if (err instanceof DomainError) return err; throw err; }
   throw new Error('expected a refusal');
 }
 

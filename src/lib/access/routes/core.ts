@@ -1,5 +1,6 @@
 /** Shell, accounts, health and the computation API. */
-import { ADMIN, ALL, type RouteTable } from './shared';
+import { ALL, type RouteTable } from './shared';
+import { mayAdminister } from '../policies';
 
 export const CORE_ROUTES: RouteTable = {
   '/(app)': { sample: '/', methods: { GET: 'signedIn' } },
@@ -7,7 +8,7 @@ export const CORE_ROUTES: RouteTable = {
   '/signout': { sample: '/signout', methods: { POST: 'signedIn' } },
   '/invite/[token]': { sample: '/invite/nonexistent-token', methods: { GET: 'public', POST: 'public' } },
   '/(app)/profile': { sample: '/profile', methods: { GET: 'signedIn', POST: 'signedIn' }, nav: { label: 'Profile & tokens', order: 90 } },
-  '/(app)/admin/users': { sample: '/admin/users', methods: { GET: ADMIN, POST: ADMIN }, nav: { label: 'People', order: 80 } },
+  '/(app)/admin/users': { sample: '/admin/users', methods: { GET: mayAdminister.roles, POST: mayAdminister.roles }, nav: { label: 'People', order: 80 } },
   '/api/health': { sample: '/api/health', methods: { GET: 'public' } },
   '/api/v1/me': { sample: '/api/v1/me', methods: { GET: ALL } },
   '/api/v1/evaluate': { sample: '/api/v1/evaluate', methods: { POST: ALL } },

@@ -1,8 +1,9 @@
 /** Routes of the designer feature (owned by that feature; merged in ../route-table.ts). */
-import { ALL, FORMULATION_EDITORS, type RouteTable } from './shared';
+import { ALL, type RouteTable } from './shared';
+import { mayDesign } from '../policies';
 
 export const DESIGNER_ROUTES: RouteTable = {
-  '/(app)/designer': { sample: '/designer', methods: { GET: FORMULATION_EDITORS, POST: FORMULATION_EDITORS }, nav: { label: 'Designer', order: 20 } },
+  '/(app)/designer': { sample: '/designer', methods: { GET: mayDesign.roles, POST: mayDesign.roles }, nav: { label: 'Designer', order: 20 } },
   // Library spectra as blend components; any role may read the library.
   '/api/v1/blend-components': { sample: '/api/v1/blend-components', methods: { GET: ALL } }
 };

@@ -1,29 +1,29 @@
 /** Routes of the formulations feature (owned by that feature; merged in ../route-table.ts). */
-import { ALL, FORMULATION_EDITORS, QUALITY, type RouteTable } from './shared';
-import type { Role } from '../roles';
+import { ALL, type RouteTable } from './shared';
+import { mayActOnRevisions, mayApprove, mayAuthorFormulations, mayReadAudit, maySignRevisions } from '../policies';
 
-/** Who may act on a revision: authors (formulators; quality for correction drafts), quality and admins. */
-const REVISION_ACTORS: readonly Role[] = ['formulator', 'quality', 'admin'];
+const AUTHORS = mayAuthorFormulations.roles;
+const ACTORS = mayActOnRevisions.roles;
 const API_REV = '/api/v1/formulations/999999/revisions/999999';
 
 export const FORMULATIONS_ROUTES: RouteTable = {
   '/(app)/formulations': { sample: '/formulations', methods: { GET: ALL }, nav: { label: 'Formulations', order: 30 } },
-  '/(app)/formulations/new': { sample: '/formulations/new', methods: { GET: FORMULATION_EDITORS, POST: FORMULATION_EDITORS } },
+  '/(app)/formulations/new': { sample: '/formulations/new', methods: { GET: AUTHORS, POST: AUTHORS } },
   '/(app)/formulations/revisions': { sample: '/formulations/revisions', methods: { GET: ALL } },
   '/(app)/formulations/compare': { sample: '/formulations/compare', methods: { GET: ALL } },
   '/(app)/formulations/[id]': { sample: '/formulations/1', methods: { GET: ALL } },
-  '/(app)/formulations/[id]/revisions/[revisionId]': { sample: '/formulations/999999/revisions/999999', methods: { GET: ALL, POST: REVISION_ACTORS } },
+  '/(app)/formulations/[id]/revisions/[revisionId]': { sample: '/formulations/999999/revisions/999999', methods: { GET: ALL, POST: ACTORS } },
   '/(app)/formulations/[id]/revisions/[revisionId]/attachments/[attachmentId]': { sample: '/formulations/999999/revisions/999999/attachments/999999', methods: { GET: ALL } },
-  '/(app)/audit': { sample: '/audit', methods: { GET: QUALITY }, nav: { label: 'Audit trail', order: 75 } },
-  '/(app)/audit/export': { sample: '/audit/export', methods: { GET: QUALITY } },
-  '/api/v1/formulations': { sample: '/api/v1/formulations', methods: { GET: ALL, POST: FORMULATION_EDITORS } },
+  '/(app)/audit': { sample: '/audit', methods: { GET: mayReadAudit.roles }, nav: { label: 'Audit trail', order: 75 } },
+  '/(app)/audit/export': { sample: '/audit/export', methods: { GET: mayReadAudit.roles } },
+  '/api/v1/formulations': { sample: '/api/v1/formulations', methods: { GET: ALL, POST: AUTHORS } },
   '/api/v1/formulations/[id]': { sample: '/api/v1/formulations/1', methods: { GET: ALL } },
-  '/api/v1/formulations/[id]/revisions': { sample: '/api/v1/formulations/999999/revisions', methods: { GET: ALL, POST: FORMULATION_EDITORS } },
-  '/api/v1/formulations/[id]/revisions/[revisionId]': { sample: API_REV, methods: { GET: ALL, PUT: REVISION_ACTORS } },
-  '/api/v1/formulations/[id]/revisions/[revisionId]/submit': { sample: `${API_REV}/submit`, methods: { POST: REVISION_ACTORS } },
-  '/api/v1/formulations/[id]/revisions/[revisionId]/review': { sample: `${API_REV}/review`, methods: { POST: QUALITY } },
-  '/api/v1/formulations/[id]/revisions/[revisionId]/approve': { sample: `${API_REV}/approve`, methods: { POST: QUALITY } },
-  '/api/v1/formulations/[id]/revisions/[revisionId]/return': { sample: `${API_REV}/return`, methods: { POST: QUALITY } },
-  '/api/v1/formulations/[id]/revisions/[revisionId]/withdraw': { sample: `${API_REV}/withdraw`, methods: { POST: REVISION_ACTORS } },
+  '/api/v1/formulations/[id]/revisions': { sample: '/api/v1/formulations/999999/revisions', methods: { GET: ALL, POST: AUTHORS } },
+  '/api/v1/formulations/[id]/revisions/[revisionId]': { sample: API_REV, methods: { GET: ALL, PUT: ACTORS } },
+  '/api/v1/formulations/[id]/revisions/[revisionId]/submit': { sample: `${API_REV}/submit`, methods: { POST: ACTORS } },
+  '/api/v1/formulations/[id]/revisions/[revisionId]/review': { sample: `${API_REV}/review`, methods: { POST: maySignRevisions.roles } },
+  '/api/v1/formulations/[id]/revisions/[revisionId]/approve': { sample: `${API_REV}/approve`, methods: { POST: mayApprove.roles } },
+  '/api/v1/formulations/[id]/revisions/[revisionId]/return': { sample: `${API_REV}/return`, methods: { POST: maySignRevisions.roles } },
+  '/api/v1/formulations/[id]/revisions/[revisionId]/withdraw': { sample: `${API_REV}/withdraw`, methods: { POST: ACTORS } },
   '/api/v1/silicone-systems': { sample: '/api/v1/silicone-systems', methods: { GET: ALL } }
 };

@@ -15,8 +15,4 @@ export interface RouteRule {
 
 export type RouteTable = Record<string, RouteRule>;
 
-export const ALL: readonly Role[] = ['formulator', 'technician', 'quality', 'admin'];
-export const ADMIN: readonly Role[] = ['admin'];
-export const FORMULATION_EDITORS: readonly Role[] = ['formulator', 'admin'];
-export const LINE: readonly Role[] = ['technician', 'admin'];
-export const QUALITY: readonly Role[] = ['quality', 'admin'];
+export { ADMIN, ALL, FORMULATION_EDITORS, LINE, QUALITY, REVISION_ACTORS } from '../roles';

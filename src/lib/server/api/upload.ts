@@ -1,10 +1,10 @@
 /**
  * The file of an upload request: multipart field `file`, or the raw body (text/csv, text/plain,
  * text/tab-separated-values) named by the `x-file-name` header. Every way a request can fail to
- * deliver a file is an ApiError: declared size over the limit (413), a multipart body that cannot
+ * deliver a file is a domain error: declared size over the limit (413), a multipart body that cannot
  * be read — no boundary, truncated, garbage — or no file in the field (400), another type (415).
  */
-import { ApiError } from './body';
+import { invalid, tooLarge, unsupportedType } from '../../errors/domain-error';
 
 export interface UploadedFile {
   name: string;
@@ -28,10 +28,10 @@ async function formFile(request: Request, kind: UploadKind): Promise<UploadedFil
   try {
     form = await request.formData();
   } catch {
-    throw new ApiError(400, `The multipart body could not be read (no boundary, truncated or not form data). Send the ${kind.what} file in the multipart field "file". Nothing was saved.`);
+    throw invalid(`The multipart body could not be read (no boundary, truncated or not form data). Send the ${kind.what} file in the multipart field "file". Nothing was saved.`);
   }
   const file = form.get('file');
-  if (!(file instanceof File)) throw new ApiError(400, `Send the ${kind.what} file in the multipart field "file".`);
+  if (!(file instanceof File)) throw invalid(`Send the ${kind.what} file in the multipart field "file".`);
   return { name: file.name || kind.defaultName, contentType: file.type || 'text/plain', body: Buffer.from(await file.arrayBuffer()) };
 }
 
@@ -39,12 +39,12 @@ export async function readUploadedFile(request: Request, kind: UploadKind): Prom
   const declared = Number(request.headers.get('content-length') ?? '0');
   if (declared > kind.maxBytes + FRAMING_BYTES) {
     const mb = Number((kind.maxBytes / 1024 / 1024).toFixed(1));
-    throw new ApiError(413, `The upload is larger than the ${mb} MB limit for ${kind.what} files. Nothing was saved.`);
+    throw tooLarge(`The upload is larger than the ${mb} MB limit for ${kind.what} files. Nothing was saved.`);
   }
   const type = request.headers.get('content-type') ?? '';
   if (/^multipart\/form-data/i.test(type)) return formFile(request, kind);
   if (/^text\/(csv|plain|tab-separated-values)\b/i.test(type)) {
     return { name: request.headers.get('x-file-name')?.slice(0, 200) || kind.defaultName, contentType: type.split(';')[0], body: Buffer.from(await request.arrayBuffer()) };
   }
-  throw new ApiError(415, `Send the ${kind.what} file as multipart/form-data (field "file") or as a text/csv or text/plain body.`);
+  throw unsupportedType(`Send the ${kind.what} file as multipart/form-data (field "file") or as a text/csv or text/plain body.`);
 }

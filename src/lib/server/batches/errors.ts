@@ -1,13 +1,7 @@
-/** Typed refusals of the batch services; pages and endpoints turn them into 400/403/404/409/422 answers. */
-export class BatchError extends Error {
-  constructor(readonly status: number, message: string, readonly issues: { path: string; message: string }[] = []) {
-    super(message);
-  }
-}
+/** Refusals of the batch services: domain errors, answered by kind (400/403/404/409/422, see ../http/status.ts). */
+import { notFound as notFoundError, unprocessable, type Issue } from '../../errors/domain-error';
 
-export const notFound = (what: string) => new BatchError(404, `${what} was not found.`);
-export const conflict = (message: string) => new BatchError(409, message);
-export const invalid = (message: string, issues: { path: string; message: string }[] = []) => new BatchError(400, message, issues);
+export { conflict, invalid } from '../../errors/domain-error';
+export const notFound = (what: string) => notFoundError(`${what} was not found.`);
 /** Well-formed input that describes an impossible batch (weigh-out refusals). */
-export const impossible = (issues: { path: string; message: string }[]) =>
-  new BatchError(422, `The batch cannot be weighed out: ${issues.map((i) => i.message).join('; ')}`, issues);
+export const impossible = (issues: Issue[]) => unprocessable(`The batch cannot be weighed out: ${issues.map((i) => i.message).join('; ')}`, issues);

@@ -10,7 +10,9 @@ import { verifyPassword } from '../auth/passwords';
 import type { User } from '../db/users';
 import { checkActual, parseReadingG, type ActualCheck } from '../../weighout/actual';
 import { slurryExpiry } from '../../weighout/potlife';
-import { BatchError, conflict, invalid } from './errors';
+import { forbidden } from '../../errors/domain-error';
+import { mayAcceptDeviation } from '../../access/policies';
+import { conflict, invalid } from './errors';
 import { checkLot } from './lots';
 import { expectState, expectVersion, lockBatch, lockLine } from './lock';
 import { decimalText, placesOf } from './records';
@@ -49,10 +51,10 @@ export async function recordLine(user: User, batchId: number, seq: number, input
 export interface OverrideInput { reason: string; password: string; version: number }
 
 export async function acceptDeviation(user: User, batchId: number, seq: number, input: OverrideInput): Promise<void> {
-  if (!user.roles.includes('quality') && !user.roles.includes('admin')) throw new BatchError(403, 'Only quality can accept a reading outside its range.');
+  if (!mayAcceptDeviation(user)) throw forbidden('Only quality can accept a reading outside its range.');
   const withHash = await users.findWithHashByEmail(user.email);
   if (!withHash || !(await verifyPassword(input.password, withHash.passwordHash))) {
-    throw new BatchError(403, 'The password is not correct: the decision was not signed and nothing was saved.', [{ path: 'password', message: 'wrong password' }]);
+    throw forbidden('The password is not correct: the decision was not signed and nothing was saved.', [{ path: 'password', message: 'wrong password' }]);
   }
   await db().transaction(async (trx) => {
     const batch = await lockBatch(trx, batchId);
@@ -60,7 +62,7 @@ export async function acceptDeviation(user: User, batchId: number, seq: number, 
     const line = await lockLine(trx, batchId, seq);
     expectVersion(line, input.version, `Line ${seq} (${line.code})`);
     if (line.actual_status !== 'below' && line.actual_status !== 'above') throw conflict(`Line ${seq} (${line.code}) is not out of range: there is nothing to accept.`);
-    if (line.weighed_by === user.id) throw new BatchError(403, 'A deviation must be accepted by someone other than the person who weighed the line.');
+    if (line.weighed_by === user.id) throw forbidden('A deviation must be accepted by someone other than the person who weighed the line.');
     await trx('batch_lines').where({ id: line.id }).update({ override_by: user.id, override_at: new Date(), override_reason: input.reason, version: line.version + 1 });
     await record({
       actorId: user.id, actorEmail: user.email, entityType: 'batch_line', entityId: line.id, action: 'accept_deviation',

@@ -1,40 +1,36 @@
-/** Typed refusals of the formulation services; routes turn them into 409/400/404/403 answers. */
-export class FormulationError extends Error {
-  constructor(readonly status: number, message: string) {
-    super(message);
-  }
-}
+/** Refusals of the formulation services: domain errors of a fixed kind (see ../http/status.ts for their statuses). */
+import { DomainError, type Issue } from '../../errors/domain-error';
 
 /** Bad content or form input: nothing was saved. */
-export class ValidationError extends FormulationError {
-  constructor(message: string, readonly issues: { path: string; message: string }[] = []) {
-    super(400, message);
+export class ValidationError extends DomainError {
+  constructor(message: string, issues: Issue[] = []) {
+    super('invalid', message, { issues });
   }
 }
 
 /** The record moved on: a stale version, or content that is locked once submitted. */
-export class ConflictError extends FormulationError {
+export class ConflictError extends DomainError {
   constructor(message: string, readonly current?: { version: number; state: string }) {
-    super(409, message);
+    super('conflict', message);
   }
 }
 
-export class NotFoundError extends FormulationError {
+export class NotFoundError extends DomainError {
   constructor(message: string) {
-    super(404, message);
+    super('not_found', message);
   }
 }
 
 /** The caller's role or relation to the revision does not allow the command. */
-export class PermissionError extends FormulationError {
+export class PermissionError extends DomainError {
   constructor(message: string) {
-    super(403, message);
+    super('forbidden', message);
   }
 }
 
 /** The e-signature was refused (wrong password): nothing was signed. */
-export class SignatureError extends FormulationError {
+export class SignatureError extends DomainError {
   constructor(message: string) {
-    super(403, message);
+    super('forbidden', message);
   }
 }

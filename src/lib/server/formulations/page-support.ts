@@ -1,8 +1,7 @@
-/** Helpers of the formulation pages: editor choices, form → content, service refusals → form errors. */
-import { fail } from '@sveltejs/kit';
+/** Helpers of the formulation pages: editor choices, form → content. */
 import { listMaterialOptions } from '../materials/components';
 import { formValuesToRaw, type FormValues } from '../../formulations/form-values';
-import { FormulationError, ValidationError } from './errors';
+import { ValidationError } from './errors';
 import { listSiliconeSystems } from './silicone';
 
 export async function editorOptions() {
@@ -19,17 +18,4 @@ export function contentFromForm(values: FormValues): unknown {
   ].filter((m): m is string => Boolean(m));
   if (missing.length) throw new ValidationError(missing.join('; '), missing.map((m) => ({ path: m.split(':')[0], message: m })));
   return formValuesToRaw(values);
-}
-
-/** A refused save or command as a form failure that carries the person's input back to the page. */
-export function formRefusal(err: unknown, values: FormValues = {}, action = '') {
-  if (!(err instanceof FormulationError)) throw err;
-  const { password: _password, ...kept } = values;
-  return fail(err.status, {
-    action,
-    values: kept,
-    error: err.message,
-    issues: err instanceof ValidationError ? err.issues : [],
-    conflict: err.status === 409
-  });
 }

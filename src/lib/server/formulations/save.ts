@@ -11,6 +11,7 @@ import type { RevisionContent } from '../../recipe';
 import { ConflictError, NotFoundError, ValidationError } from './errors';
 import { checkVersion, enforce, requireRoles, type Caller } from './guard';
 import { prepareRevision, type PreparedRevision } from './prepare';
+import { mayAuthorFormulations, mayDraftCorrection } from '../../access/policies';
 
 export { ConflictError, ValidationError, NotFoundError, PermissionError } from './errors';
 
@@ -27,8 +28,8 @@ export interface NewFormulationInput {
   content: unknown;
 }
 
-const AUTHORS = ['formulator', 'admin'] as const;
-const CORRECTORS = ['formulator', 'quality', 'admin'] as const;
+const AUTHORS = mayAuthorFormulations.roles;
+const CORRECTORS = mayDraftCorrection.roles;
 
 /** A free code from the target, e.g. KH-W30-90 (3000 K, Ra floor 90), then -B, -C … */
 async function suggestCode(trx: Knex.Transaction, content: RevisionContent, cct: number): Promise<string> {

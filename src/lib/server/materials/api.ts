@@ -1,14 +1,16 @@
 /**
  * Handlers of /api/v1/phosphors and /api/v1/pumps (one set, parameterised by kind). Route files
- * only pick the handler. Errors are JSON { error, details? } with 400/404/409/413/415/422.
+ * only pick the handler. Errors are answered by apiHandler as JSON { error, issues? } with 400/404/409/413/415/422.
  */
-import { json, type RequestEvent } from '@sveltejs/kit';
+import type { RequestEvent } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '../auth/require';
-import { ApiError, finiteJson, handleApi, readJson, readQuery } from '../api/body';
+import { finiteJson, readJson, readQuery } from '../api/body';
+import { apiHandler } from '../http/api-handler';
+import { idParam } from '../http/id-param';
 import { materialFieldsSchema, materialUpdateApiSchema, spectrumKindSchema, versionSchema } from '../../schemas/materials';
-import { FORMULATION_EDITORS, ALL } from '../../access/routes/shared';
-import { MaterialError, notFound } from './errors';
+import { mayEditLibrary, mayRead } from '../../access/policies';
+import { notFound } from './errors';
 import * as records from './records';
 import * as editing from './editing';
 import * as detail from './detail';
@@ -19,18 +21,6 @@ import type { MaterialKind } from './records';
 
 type Event = Pick<RequestEvent, 'request' | 'locals' | 'url'> & { params: Record<string, string> };
 
-/** handleApi plus the library's own errors. */
-export function materialApi(run: () => Promise<Response>): Promise<Response> {
-  return handleApi(async () => {
-    try {
-      return await run();
-    } catch (err) {
-      if (err instanceof MaterialError) return json({ error: err.message, ...(err.details ? { details: err.details } : {}) }, { status: err.status });
-      throw err;
-    }
-  });
-}
-
 const listQuerySchema = z.object({
   q: z.string().max(100).optional(),
   sort: z.enum(records.SORT_KEYS).optional(),
@@ -38,11 +28,7 @@ const listQuerySchema = z.object({
   archived: z.enum(['0', '1', 'true', 'false']).optional()
 });
 
-function idOf(event: Event): number {
-  const id = Number(event.params.id);
-  if (!Number.isInteger(id) || id <= 0) throw new ApiError(404, `No material with id ${event.params.id}.`);
-  return id;
-}
+const idOf = (event: Event): number => idParam(event.params.id, `No material with id ${event.params.id}.`);
 
 async function materialOfKind(id: number, kind: MaterialKind) {
   const m = await records.get(id);
@@ -52,14 +38,14 @@ async function materialOfKind(id: number, kind: MaterialKind) {
 
 export function collection(kind: MaterialKind) {
   return {
-    GET: (event: Event) => materialApi(async () => {
-      requireUser(event.locals, ALL);
+    GET: (event: Event) => apiHandler(async () => {
+      requireUser(event.locals, mayRead);
       const { q, sort, dir, archived } = readQuery(event.url.searchParams, listQuerySchema);
       const list = await records.list({ kind, search: q, sort, dir, includeArchived: archived === '1' || archived === 'true' });
       return finiteJson({ items: list.map((m) => detail.toApi(m)) });
     }),
-    POST: (event: Event) => materialApi(async () => {
-      const user = requireUser(event.locals, FORMULATION_EDITORS);
+    POST: (event: Event) => apiHandler(async () => {
+      const user = requireUser(event.locals, mayEditLibrary);
       const body = await readJson(event, materialFieldsSchema);
       const id = await editing.create(user, kind, body);
       const created = await detail.load(id);
@@ -70,14 +56,14 @@ export function collection(kind: MaterialKind) {
 
 export function item(kind: MaterialKind) {
   return {
-    GET: (event: Event) => materialApi(async () => {
-      requireUser(event.locals, ALL);
+    GET: (event: Event) => apiHandler(async () => {
+      requireUser(event.locals, mayRead);
       const d = await detail.load(idOf(event));
       if (!d || d.material.kind !== kind) throw notFound(event.params.id);
       return finiteJson(detail.toApi(d.material, d));
     }),
-    PUT: (event: Event) => materialApi(async () => {
-      const user = requireUser(event.locals, FORMULATION_EDITORS);
+    PUT: (event: Event) => apiHandler(async () => {
+      const user = requireUser(event.locals, mayEditLibrary);
       const id = idOf(event);
       await materialOfKind(id, kind);
       const { version, ...fields } = await readJson(event, materialUpdateApiSchema);
@@ -85,8 +71,8 @@ export function item(kind: MaterialKind) {
       const d = await detail.load(id);
       return finiteJson(detail.toApi(d!.material, d!));
     }),
-    DELETE: (event: Event) => materialApi(async () => {
-      const user = requireUser(event.locals, FORMULATION_EDITORS);
+    DELETE: (event: Event) => apiHandler(async () => {
+      const user = requireUser(event.locals, mayEditLibrary);
       const id = idOf(event);
       await materialOfKind(id, kind);
       await editing.remove(user, id);
@@ -105,8 +91,8 @@ const uploadQuerySchema = z.object({
 
 export function spectrumUpload(kind: MaterialKind) {
   return {
-    POST: (event: Event) => materialApi(async () => {
-      const user = requireUser(event.locals, FORMULATION_EDITORS);
+    POST: (event: Event) => apiHandler(async () => {
+      const user = requireUser(event.locals, mayEditLibrary);
       const id = idOf(event);
       await materialOfKind(id, kind);
       const q = readQuery(event.url.searchParams, uploadQuerySchema);

@@ -3,7 +3,8 @@ import { db } from '../db/index';
 import * as audit from '../db/audit';
 import { deleteFile, listFilesFor, putFile, toStoredFile, type StoredFileRow } from '../storage/objects';
 import { ATTACHMENT_PURPOSES } from '../../schemas/materials';
-import { MaterialError, notFound } from './errors';
+import { notFound as notFoundError } from '../../errors/domain-error';
+import { notFound } from './errors';
 import { assertPdf } from './pdf-file';
 import * as records from './records';
 import type { User } from '../db/users';
@@ -25,7 +26,7 @@ export async function add(actor: User, materialId: number, purpose: (typeof ATTA
 export async function remove(actor: User, materialId: number, fileId: number): Promise<void> {
   await db().transaction(async (trx) => {
     const row = await trx('stored_files').where({ id: fileId, entity_type: 'material', entity_id: String(materialId) }).whereIn('purpose', ATTACHMENT_PURPOSES).forUpdate().first();
-    if (!row) throw new MaterialError(404, 'That document was not found on this material.');
+    if (!row) throw notFoundError('That document was not found on this material.');
     await deleteFile(fileId, trx);
     await audit.record({ actorId: actor.id, actorEmail: actor.email, entityType: 'material', entityId: materialId, action: 'attachment-remove', before: { fileId, purpose: row.purpose, name: row.original_name } }, trx);
   });

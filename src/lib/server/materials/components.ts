@@ -4,7 +4,7 @@
  * so approved formulations keep working after a material leaves the active library.
  */
 import { db } from '../db/index';
-import { MaterialError } from './errors';
+import { notFound as notFoundError, unprocessable } from '../../errors/domain-error';
 import * as records from './records';
 import * as spectra from './spectra';
 import type { PhosphorSpec, PumpSpec } from '../../blend/types';
@@ -37,10 +37,10 @@ export async function loadBlendComponents(pumpId: number, phosphorIds: number[])
   const spdOf = (id: number | null) => (id === null ? undefined : spds.get(id));
   const need = (id: number, kind: MaterialKind) => {
     const m = byId.get(id);
-    if (!m) throw new MaterialError(404, `Material ${id} was not found.`);
-    if (m.kind !== kind) throw new MaterialError(422, `${m.code} is a ${m.kind}, not a ${kind}.`);
+    if (!m) throw notFoundError(`Material ${id} was not found.`);
+    if (m.kind !== kind) throw unprocessable(`${m.code} is a ${m.kind}, not a ${kind}.`);
     const emission = spdOf(m.emissionSpectrumId);
-    if (!emission) throw new MaterialError(422, `${m.code} has no emission spectrum yet; upload one in the library first.`);
+    if (!emission) throw unprocessable(`${m.code} has no emission spectrum yet; upload one in the library first.`);
     return { m, emission: { wavelengths: emission.wavelengths, values: emission.values } };
   };
   const pump = need(pumpId, 'pump');
@@ -48,7 +48,7 @@ export async function loadBlendComponents(pumpId: number, phosphorIds: number[])
     pump: { id: String(pump.m.id), name: pump.m.name, spectrum: pump.emission },
     phosphors: phosphorIds.map((id) => {
       const { m, emission } = need(id, 'phosphor');
-      if (m.iqe === null) throw new MaterialError(422, `${m.code} has no IQE; enter it in the library first.`);
+      if (m.iqe === null) throw unprocessable(`${m.code} has no IQE; enter it in the library first.`);
       const excitation = spdOf(m.excitationSpectrumId);
       const spec: PhosphorSpec = { id: String(m.id), name: m.name, emission, iqe: m.iqe };
       if (m.family) spec.family = m.family;

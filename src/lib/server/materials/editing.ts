@@ -7,7 +7,8 @@ import { db } from '../db/index';
 import * as audit from '../db/audit';
 import { deleteStoredObject } from '../storage/objects';
 import { kindIssues, type MaterialFieldsInput } from '../../schemas/materials';
-import { MaterialError, notFound, staleVersion } from './errors';
+import { conflict, invalid } from '../../errors/domain-error';
+import { notFound, staleVersion } from './errors';
 import * as records from './records';
 import { deletionRefusal, revisionsUsing } from './usage';
 import type { User } from '../db/users';
@@ -21,7 +22,7 @@ function isDuplicate(err: unknown): boolean {
 
 function checkKind(kind: MaterialKind, fields: Partial<MaterialFieldsInput>) {
   const issues = kindIssues(kind, fields);
-  if (issues.length) throw new MaterialError(400, issues.map((i) => i.message).join(' '), issues.map((i) => ({ line: null, message: i.message })));
+  if (issues.length) throw invalid(issues.map((i) => i.message).join(' '), issues.map((i) => ({ ...i, line: null })));
 }
 
 export async function create(actor: User, kind: MaterialKind, fields: MaterialFieldsInput): Promise<number> {
@@ -33,7 +34,7 @@ export async function create(actor: User, kind: MaterialKind, fields: MaterialFi
       return id;
     });
   } catch (err) {
-    if (isDuplicate(err)) throw new MaterialError(409, `The code ${fields.code} is already used by another material.`);
+    if (isDuplicate(err)) throw conflict(`The code ${fields.code} is already used by another material.`);
     throw err;
   }
 }
@@ -43,7 +44,7 @@ export async function lockForEdit(trx: Knex.Transaction, id: number, version: nu
   const current = await records.get(id, trx);
   if (!current) throw notFound(id);
   if (version !== undefined && current.version !== version) throw staleVersion(current.version, version);
-  if (current.archivedAt) throw new MaterialError(409, `${current.code} is archived and cannot be ${what}; restore it first.`);
+  if (current.archivedAt) throw conflict(`${current.code} is archived and cannot be ${what}; restore it first.`);
   return current;
 }
 
@@ -68,7 +69,7 @@ export async function update(actor: User, id: number, version: number, fields: P
       return version + 1;
     });
   } catch (err) {
-    if (isDuplicate(err)) throw new MaterialError(409, `The code ${fields.code} is already used by another material.`);
+    if (isDuplicate(err)) throw conflict(`The code ${fields.code} is already used by another material.`);
     throw err;
   }
 }
@@ -93,7 +94,7 @@ export async function remove(actor: User, id: number): Promise<void> {
       const current = await records.get(id, trx);
       if (!current) throw notFound(id);
       const refusal = deletionRefusal(current.code, await revisionsUsing(id, trx));
-      if (refusal) throw new MaterialError(409, refusal);
+      if (refusal) throw conflict(refusal);
       const lotIds = (await trx('material_lots').where({ material_id: id }).select('id')).map((r) => String(r.id));
       const files = await trx('stored_files')
         .where((w) => w.where({ entity_type: 'material', entity_id: String(id) }).orWhere((o) => o.where('entity_type', 'material-lot').whereIn('entity_id', lotIds)))
@@ -108,7 +109,7 @@ export async function remove(actor: User, id: number): Promise<void> {
     });
   } catch (err) {
     if ((err as { code?: string })?.code === 'ER_ROW_IS_REFERENCED_2') {
-      throw new MaterialError(409, 'This material (or one of its lots) is still referenced by other records, such as batch lines. Archive it instead.');
+      throw conflict('This material (or one of its lots) is still referenced by other records, such as batch lines. Archive it instead.');
     }
     throw err;
   }

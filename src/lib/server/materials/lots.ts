@@ -2,7 +2,8 @@
 import { db } from '../db/index';
 import * as audit from '../db/audit';
 import { deleteFile, putFile } from '../storage/objects';
-import { MaterialError, notFound } from './errors';
+import { conflict, notFound as notFoundError } from '../../errors/domain-error';
+import { notFound } from './errors';
 import { assertPdf } from './pdf-file';
 import * as records from './records';
 import type { User } from '../db/users';
@@ -49,7 +50,7 @@ export async function list(materialId: number): Promise<Lot[]> {
 export async function add(actor: User, materialId: number, input: LotInput, certificate?: { name: string; body: Buffer }): Promise<number> {
   const material = await records.get(materialId);
   if (!material) throw notFound(materialId);
-  if (material.archivedAt) throw new MaterialError(409, `${material.code} is archived; restore it before adding lots.`);
+  if (material.archivedAt) throw conflict(`${material.code} is archived; restore it before adding lots.`);
   if (certificate) assertPdf(certificate.name, certificate.body);
   try {
     return await db().transaction(async (trx) => {
@@ -65,7 +66,7 @@ export async function add(actor: User, materialId: number, input: LotInput, cert
       return id;
     });
   } catch (err) {
-    if ((err as { code?: string })?.code === 'ER_DUP_ENTRY') throw new MaterialError(409, `Lot ${input.lotNumber} is already recorded for ${material.code}.`);
+    if ((err as { code?: string })?.code === 'ER_DUP_ENTRY') throw conflict(`Lot ${input.lotNumber} is already recorded for ${material.code}.`);
     throw err;
   }
 }
@@ -74,13 +75,13 @@ export async function remove(actor: User, materialId: number, lotId: number): Pr
   try {
     await db().transaction(async (trx) => {
       const lot = await trx('material_lots').where({ id: lotId, material_id: materialId }).forUpdate().first();
-      if (!lot) throw new MaterialError(404, `Lot ${lotId} of material ${materialId} was not found.`);
+      if (!lot) throw notFoundError(`Lot ${lotId} of material ${materialId} was not found.`);
       await trx('material_lots').where({ id: lotId }).delete();
       if (lot.certificate_file_id) await deleteFile(lot.certificate_file_id, trx);
       await audit.record({ actorId: actor.id, actorEmail: actor.email, entityType: 'material', entityId: materialId, action: 'lot-remove', before: { lotId, lotNumber: lot.lot_number } }, trx);
     });
   } catch (err) {
-    if ((err as { code?: string })?.code === 'ER_ROW_IS_REFERENCED_2') throw new MaterialError(409, 'This lot is referenced by batch records and cannot be removed.');
+    if ((err as { code?: string })?.code === 'ER_ROW_IS_REFERENCED_2') throw conflict('This lot is referenced by batch records and cannot be removed.');
     throw err;
   }
 }

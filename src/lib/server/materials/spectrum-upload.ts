@@ -11,7 +11,8 @@ import { DEFAULT_MAX_BYTES, formatBytes, parseSpectrumFile } from '../../spectru
 import { decodeText } from '../../spectrum-file/decode';
 import { summariseSpectrum, type SpectrumSummary } from '../../materials/spectrum-summary';
 import { SpectrumInputError } from '../../spectral/errors';
-import { MaterialError, notFound } from './errors';
+import { invalid, lineIssue, tooLarge, unprocessable } from '../../errors/domain-error';
+import { notFound } from './errors';
 import { lockForEdit } from './editing';
 import * as records from './records';
 import * as spectra from './spectra';
@@ -32,22 +33,22 @@ export interface SpectrumPreview {
   fileName: string;
 }
 
-/** Parses and checks a file; throws MaterialError (413/422) naming the lines. Saves nothing. */
+/** Parses and checks a file; throws a domain error (413/422) naming the lines. Saves nothing. */
 export function previewSpectrumFile(file: SpectrumFileInput): SpectrumPreview {
-  if (file.body.length === 0) throw new MaterialError(422, 'The file is empty.');
+  if (file.body.length === 0) throw unprocessable('The file is empty.');
   if (file.body.length > DEFAULT_MAX_BYTES) {
-    throw new MaterialError(413, `The file is ${formatBytes(file.body.length)}; the limit is ${formatBytes(DEFAULT_MAX_BYTES)}. Nothing was saved.`);
+    throw tooLarge(`The file is ${formatBytes(file.body.length)}; the limit is ${formatBytes(DEFAULT_MAX_BYTES)}. Nothing was saved.`);
   }
   const parsed = parseSpectrumFile(decodeText(file.body));
   if (!parsed.ok) {
     const n = parsed.errors.length;
-    throw new MaterialError(422, `${file.name} was not saved: ${n === 1 ? 'one problem' : `${n} problems`} in the file. ${parsed.errors[0].message}`, parsed.errors);
+    throw unprocessable(`${file.name} was not saved: ${n === 1 ? 'one problem' : `${n} problems`} in the file. ${parsed.errors[0].message}`, parsed.errors.map((e) => lineIssue(e.line, e.message)));
   }
   const spd = { wavelengths: parsed.wavelengths, values: parsed.columns[0].values };
   try {
     return { spd, summary: summariseSpectrum(spd), warnings: parsed.warnings, fileName: file.name };
   } catch (err) {
-    if (err instanceof SpectrumInputError) throw new MaterialError(422, `${file.name} was not saved: ${err.message}.`, [{ line: null, message: err.message }]);
+    if (err instanceof SpectrumInputError) throw unprocessable(`${file.name} was not saved: ${err.message}.`, [lineIssue(null, err.message)]);
     throw err;
   }
 }
@@ -56,7 +57,7 @@ export function previewSpectrumFile(file: SpectrumFileInput): SpectrumPreview {
 export async function uploadSpectrum(actor: User, materialId: number, kind: SpectrumKind, file: SpectrumFileInput, version?: number): Promise<{ spectrumId: number; version: number; preview: SpectrumPreview }> {
   const material = await records.get(materialId);
   if (!material) throw notFound(materialId);
-  if (kind === 'excitation' && material.kind === 'pump') throw new MaterialError(400, 'A pump has an emission spectrum only.');
+  if (kind === 'excitation' && material.kind === 'pump') throw invalid('A pump has an emission spectrum only.');
   const preview = previewSpectrumFile(file);
   return db().transaction(async (trx) => {
     const current = await lockForEdit(trx, materialId, version, 'given a new spectrum');

@@ -1,8 +1,11 @@
 /** Handlers of /api/v1/package-models (list, create by fit) and /api/v1/package-models/[id]. */
 import type { RequestEvent } from '@sveltejs/kit';
 import { requireUser } from '../auth/require';
-import { ApiError, finiteJson, handleApi, readJson } from '../api/body';
-import { ALL, FORMULATION_EDITORS } from '../../access/routes/shared';
+import { finiteJson, readJson } from '../api/body';
+import { apiHandler } from '../http/api-handler';
+import { idParam } from '../http/id-param';
+import { notFound } from '../../errors/domain-error';
+import { mayEditLibrary, mayRead } from '../../access/policies';
 import { packageFitSchema } from './schema';
 import { createByFit } from './fit';
 import * as records from './records';
@@ -10,15 +13,15 @@ import * as records from './records';
 type Event = Pick<RequestEvent, 'request' | 'locals'> & { params: Record<string, string> };
 
 export function listModels(event: Event): Promise<Response> {
-  return handleApi(async () => {
-    requireUser(event.locals, ALL);
+  return apiHandler(async () => {
+    requireUser(event.locals, mayRead);
     return finiteJson({ items: await records.list() });
   });
 }
 
 export function createModel(event: Event): Promise<Response> {
-  return handleApi(async () => {
-    const user = requireUser(event.locals, FORMULATION_EDITORS);
+  return apiHandler(async () => {
+    const user = requireUser(event.locals, mayEditLibrary);
     const body = await readJson(event, packageFitSchema);
     const id = await createByFit(user, body);
     return finiteJson(await records.get(id), { status: 201, headers: { location: `/api/v1/package-models/${id}` } });
@@ -26,11 +29,11 @@ export function createModel(event: Event): Promise<Response> {
 }
 
 export function getModel(event: Event): Promise<Response> {
-  return handleApi(async () => {
-    requireUser(event.locals, ALL);
-    const id = Number(event.params.id);
-    const model = Number.isInteger(id) && id > 0 ? await records.get(id) : null;
-    if (!model) throw new ApiError(404, `No package model with id ${event.params.id}.`);
+  return apiHandler(async () => {
+    requireUser(event.locals, mayRead);
+    const message = `No package model with id ${event.params.id}.`;
+    const model = await records.get(idParam(event.params.id, message));
+    if (!model) throw notFound(message);
     return finiteJson(model);
   });
 }

@@ -4,8 +4,7 @@
  * does not converge saves nothing and says why.
  */
 import { db } from '../db/index';
-import { ApiError } from '../api/body';
-import { MaterialError } from '../materials/errors';
+import { DomainError, conflict, unprocessable } from '../../errors/domain-error';
 import { loadBlendComponents } from '../materials/components';
 import { prepareBasis, tristimulus } from '../../blend/basis';
 import { toGrid } from '../../blend/grid';
@@ -38,15 +37,15 @@ async function components(input: PackageFitInput) {
   try {
     return await loadBlendComponents(input.pumpId, input.phosphorIds);
   } catch (err) {
-    if (err instanceof MaterialError) throw new ApiError(err.status === 404 ? 422 : err.status, err.message);
+    if (err instanceof DomainError && err.kind === 'not_found') throw unprocessable(err.message);
     throw err;
   }
 }
 
-/** The fit alone (no database write); throws ApiError 422 when it is refused or does not converge. */
+/** The fit alone (no database write); throws an unprocessable domain error (422) when it is refused or does not converge. */
 export async function runFit(input: PackageFitInput): Promise<PackageModelFit> {
   if (input.dispenseGeometry !== 'fixedMass') {
-    throw new ApiError(422, 'The fit supports the fixed-mass geometry (a set slurry mass per package) only; choose fixedMass.');
+    throw unprocessable('The fit supports the fixed-mass geometry (a set slurry mass per package) only; choose fixedMass.');
   }
   const spec = await components(input);
   const start = { ...spec, phosphors: spec.phosphors.map((p) => ({ ...p, absorptionPerWtPctMm: p.absorptionPerWtPctMm ?? DEFAULT_START_ALPHA })) };
@@ -59,7 +58,7 @@ export async function runFit(input: PackageFitInput): Promise<PackageModelFit> {
     fitIqeScale: input.fitIqeScale
   }, input.bootstrap.resamples > 0 ? input.bootstrap : false);
   if (!fit.converged) {
-    throw new ApiError(422, `The fit did not converge (${fit.reason} after ${fit.iterations} iterations). Nothing was saved: check the builds, or fit fewer parameters.`);
+    throw unprocessable(`The fit did not converge (${fit.reason} after ${fit.iterations} iterations). Nothing was saved: check the builds, or fit fewer parameters.`);
   }
   return fit;
 }
@@ -74,7 +73,7 @@ export async function createByFit(actor: User, input: PackageFitInput): Promise<
   } catch (err) {
     const code = (err as { code?: string })?.code;
     if (code === 'ER_DUP_ENTRY' || code === 'ER_LOCK_DEADLOCK') {
-      throw new ApiError(409, `Another fit of ${input.name} was saved at the same moment. Nothing was saved: run the fit again to save the next version.`);
+      throw conflict(`Another fit of ${input.name} was saved at the same moment. Nothing was saved: run the fit again to save the next version.`);
     }
     throw err;
   }

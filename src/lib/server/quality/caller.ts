@@ -1,6 +1,6 @@
 /** Who acts on a batch's measurements, and the role rule: quality (and admins) act, everyone reads. */
 import type { Role } from '../../access/roles';
-import { QUALITY } from '../../access/routes/shared';
+import { mayJudgeBatches } from '../../access/policies';
 import { forbidden } from './errors';
 
 export interface Caller {
@@ -10,10 +10,10 @@ export interface Caller {
   roles: readonly Role[];
 }
 
-export const QUALITY_ROLES = QUALITY;
+export const QUALITY_ROLES = mayJudgeBatches.roles;
 
 export function canActOnMeasurements(caller: Pick<Caller, 'roles'>): boolean {
-  return QUALITY_ROLES.some((r) => caller.roles.includes(r));
+  return mayJudgeBatches(caller);
 }
 
 export function requireQuality(caller: Caller, what: string): void {

@@ -14,7 +14,8 @@ import { BlendInputError } from '../../blend/errors';
 import { CorrectionRefusedError, type TrimCap } from '../../blend/correctionLimits';
 import { correctFromBatch } from '../../quality/index';
 import { materialIdsOf } from '../../recipe';
-import { QualityError, conflict, notFound } from './errors';
+import { unprocessable } from '../../errors/domain-error';
+import { conflict, notFound } from './errors';
 import { requireQuality, type Caller } from './caller';
 import { computeResults, loadContext } from './results';
 
@@ -49,8 +50,8 @@ export async function makeCorrectionDraft(caller: Caller, batchId: number, stepF
     corrected = correctFromBatch(content, components, mean, note, stepFraction);
   } catch (err) {
     // Refused or uncomputable: nothing is saved and nobody is mailed.
-    if (err instanceof CorrectionRefusedError) throw new QualityError(422, `No correction draft was made: ${err.message}`);
-    if (err instanceof BlendInputError) throw new QualityError(422, `The correction cannot be computed: ${err.message}`);
+    if (err instanceof CorrectionRefusedError) throw unprocessable(`No correction draft was made: ${err.message}`);
+    if (err instanceof BlendInputError) throw unprocessable(`The correction cannot be computed: ${err.message}`);
     throw err;
   }
   const r = corrected.response;

@@ -18,7 +18,7 @@ import { buildBatchRecord } from '../pdf/batch-record';
 import { expectState, expectVersion, lockBatch } from '../batches/lock';
 import { recordMeasurementSummary } from '../../quality/index';
 import type { DispositionInput } from '../../schemas/quality';
-import { QualityError, conflict, forbidden, notFound } from './errors';
+import { conflict, forbidden, notFound } from './errors';
 import { canActOnMeasurements, requireQuality, type Caller } from './caller';
 import { computeResults, loadContext, type BatchQualityContext } from './results';
 import { signedJsonAndHash } from './signed-content';
@@ -46,7 +46,7 @@ async function verifySigner(caller: Caller, batchId: number, decision: string, p
   const ok = await verifyPassword(password, account?.passwordHash || DUMMY_HASH);
   if (ok && account && account.id === caller.id && account.active) return;
   await record({ actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: 'e-signature-refused', after: { decision, reason: 'password did not match' } });
-  throw new QualityError(403, 'The password is not correct, so nothing was signed. Re-enter your own password to sign.', [{ line: null, message: 'password: not correct' }]);
+  throw forbidden('The password is not correct, so nothing was signed. Re-enter your own password to sign.', [{ path: 'password', message: 'password: not correct' }]);
 }
 
 export interface DispositionOutcome {

@@ -16,7 +16,8 @@ import { findAnsiBin } from '../../spectral/ansi/c78377';
 import { QUALITY_CORE_VERSION } from '../../quality/version';
 import { MAX_MEASUREMENT_FILE_BYTES } from '../../schemas/quality';
 import { lockBatch } from '../batches/lock';
-import { QualityError, conflict, notFound } from './errors';
+import { lineIssue, tooLarge, unprocessable, type DomainError } from '../../errors/domain-error';
+import { conflict, notFound } from './errors';
 import { requireQuality, type Caller } from './caller';
 import * as records from './records';
 
@@ -40,27 +41,27 @@ const OPEN_STATES = ['complete'];
 const CHUNK = 100;
 const pause = () => new Promise<void>((resolve) => setImmediate(resolve));
 
-function stateRefusal(batchNumber: string, state: string): QualityError {
+function stateRefusal(batchNumber: string, state: string): DomainError {
   if (state === 'released' || state === 'rejected') return conflict(`Batch ${batchNumber} is ${state}: its measurements are closed.`);
   return conflict(`Batch ${batchNumber} is ${state}: parts are measured once the weigh-out is complete.`);
 }
 
-/** Checks the file and measures its parts; saves nothing. Throws QualityError naming lines or parts. */
+/** Checks the file and measures its parts; saves nothing. Throws a domain error naming lines or parts. */
 export async function measureFile(file: MeasurementFile, onProgress?: (p: UploadProgress) => void): Promise<{ parts: MeasuredPart[]; wavelengths: number[]; values: number[][]; warnings: string[] }> {
-  if (file.body.length === 0) throw new QualityError(422, `${file.name || 'The file'} is empty. Nothing was saved.`);
+  if (file.body.length === 0) throw unprocessable(`${file.name || 'The file'} is empty. Nothing was saved.`);
   if (file.body.length > MAX_MEASUREMENT_FILE_BYTES) {
-    throw new QualityError(413, `The file is ${formatBytes(file.body.length)}; the limit is ${formatBytes(MAX_MEASUREMENT_FILE_BYTES)}. Nothing was saved.`);
+    throw tooLarge(`The file is ${formatBytes(file.body.length)}; the limit is ${formatBytes(MAX_MEASUREMENT_FILE_BYTES)}. Nothing was saved.`);
   }
   onProgress?.({ phase: 'parsing' });
   const parsed = parseSpectrumFile(decodeText(file.body), { multiColumn: true, maxBytes: MAX_MEASUREMENT_FILE_BYTES });
   if (!parsed.ok) {
     const n = parsed.errors.length;
-    throw new QualityError(422, `${file.name} was not saved: ${n === 1 ? 'one problem' : `${n} problems`} in the file. ${parsed.errors[0].message}`, parsed.errors);
+    throw unprocessable(`${file.name} was not saved: ${n === 1 ? 'one problem' : `${n} problems`} in the file. ${parsed.errors[0].message}`, parsed.errors.map((e) => lineIssue(e.line, e.message)));
   }
   const measured = await measurePartsPaced(parsed, pause, (done, total) => onProgress?.({ phase: 'measuring', done, total }));
   if (!measured.ok) {
-    const issues = measured.errors.map((e) => ({ line: null, message: `Part ${e.part} (column ${e.column}): ${e.message}` }));
-    throw new QualityError(422, `${file.name} was not saved: ${issues.length === 1 ? 'one part' : `${issues.length} parts`} cannot be measured. ${issues[0].message}`, issues);
+    const issues = measured.errors.map((e) => ({ path: `part ${e.part}`, line: null, message: `Part ${e.part} (column ${e.column}): ${e.message}` }));
+    throw unprocessable(`${file.name} was not saved: ${issues.length === 1 ? 'one part' : `${issues.length} parts`} cannot be measured. ${issues[0].message}`, issues);
   }
   return { parts: measured.parts, wavelengths: parsed.wavelengths, values: parsed.columns.map((c) => c.values), warnings: parsed.warnings };
 }
@@ -106,7 +107,7 @@ export async function uploadMeasurements(caller: Caller, batchId: number, file: 
     const repeated = m.parts.filter((p) => existing.has(p.label)).map((p) => p.label);
     if (repeated.length) {
       const list = repeated.slice(0, 10).join(', ') + (repeated.length > 10 ? ` and ${repeated.length - 10} more` : '');
-      throw new QualityError(409, `${file.name} was not saved: ${repeated.length === 1 ? 'part' : 'parts'} ${list} already measured for batch ${locked.batch_number}. Withdraw the earlier upload first to measure again.`);
+      throw conflict(`${file.name} was not saved: ${repeated.length === 1 ? 'part' : 'parts'} ${list} already measured for batch ${locked.batch_number}. Withdraw the earlier upload first to measure again.`);
     }
     const { uploadId, storedFileId } = await insertMeasurements(trx, batchId, file, m, caller.id);
     await record({

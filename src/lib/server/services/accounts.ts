@@ -9,8 +9,14 @@ import { send } from '../mail/index';
 import { inviteMessage } from '../mail/templates/invite';
 import type { Role } from '../../access/roles';
 import type { User } from '../db/users';
+import { DomainError } from '../../errors/domain-error';
 
-export class AccountError extends Error {}
+/** A refused account change (taken email, used invitation, removing one's own admin role): kind `conflict`. */
+export class AccountError extends DomainError {
+  constructor(message: string) {
+    super('conflict', message);
+  }
+}
 
 export async function invite(admin: User, email: string, roles: Role[], origin: string): Promise<{ link: string; mailed: boolean }> {
   const existing = await users.findWithHashByEmail(email);

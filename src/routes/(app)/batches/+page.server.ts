@@ -1,6 +1,6 @@
 import { redirect } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
-import { LINE } from '$lib/access/routes/shared';
+import { mayPlanBatch } from '$lib/access/policies';
 import { getBatchIdByNumber, listBatches } from '$lib/server/batches/read';
 import { listQuerySchema } from '$lib/schemas/batches';
 import type { PageServerLoad } from './$types';
@@ -16,5 +16,5 @@ export const load: PageServerLoad = async ({ locals, url }) => {
     if (id) redirect(303, `/batches/${id}`);
   }
   const { items, total } = await listBatches(filter);
-  return { items, total, filter: { state: filter.state ?? '', q: filter.q ?? '', offset: filter.offset, limit: filter.limit }, invalid: !parsed.success, canPlan: LINE.some((r) => user.roles.includes(r)) };
+  return { items, total, filter: { state: filter.state ?? '', q: filter.q ?? '', offset: filter.offset, limit: filter.limit }, invalid: !parsed.success, canPlan: mayPlanBatch(user) };
 };

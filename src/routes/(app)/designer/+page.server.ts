@@ -1,27 +1,28 @@
-import { fail } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { listMaterialOptions } from '$lib/server/materials/components';
 import { listSiliconeSystems } from '$lib/server/formulations/silicone';
 import { formulationListSchema, listFormulations } from '$lib/server/formulations/lists';
 import { getRevision } from '$lib/server/formulations/read';
-import { FormulationError, ValidationError } from '$lib/server/formulations/errors';
 import { fileBlend } from '$lib/server/designer/file-blend';
 import { filingFormSchema } from '$lib/designer/filing';
-import { FORMULATION_EDITORS } from '$lib/access/routes/shared';
+import { mayDesign } from '$lib/access/policies';
+import { DomainError } from '$lib/errors/domain-error';
+import { actionFailure } from '$lib/server/http/action-failure';
+import { parseId } from '$lib/server/http/id-param';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
 /** A revision opened in the designer (`?from=<revision id>`) to start the next revision from it. */
 async function openedRevision(param: string | null) {
-  const id = Number(param);
-  if (!param || !Number.isSafeInteger(id) || id <= 0) return null;
+  const id = parseId(param);
+  if (id === null) return null;
   const rev = await getRevision(id);
   if (!rev) return null;
   return { id: rev.id, formulationId: rev.formulationId, code: rev.formulationCode, name: rev.formulationName, revisionNo: rev.revisionNo, state: rev.state, content: rev.content };
 }
 
 export const load: PageServerLoad = async ({ locals, url }) => {
-  requireUser(locals, FORMULATION_EDITORS);
+  requireUser(locals, mayDesign);
   const [pumps, phosphors, silicones, formulations, opened] = await Promise.all([
     listMaterialOptions('pump'),
     listMaterialOptions('phosphor'),
@@ -40,18 +41,17 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 
 export const actions: Actions = {
   file: async ({ locals, request }) => {
-    const user = requireUser(locals, FORMULATION_EDITORS);
+    const user = requireUser(locals, mayDesign);
     const raw = Object.fromEntries(await readForm(request));
     const parsed = filingFormSchema.safeParse(raw);
     if (!parsed.success) {
-      return fail(400, { error: `Nothing was filed: ${parsed.error.issues.map((i) => i.message).join('; ')}.` });
+      return actionFailure(400, { error: `Nothing was filed: ${parsed.error.issues.map((i) => i.message).join('; ')}.` });
     }
     try {
       return { filed: await fileBlend(user, parsed.data) };
     } catch (err) {
-      if (err instanceof ValidationError) return fail(400, { error: `Nothing was filed: ${err.message}` });
-      if (err instanceof FormulationError) return fail(err.status, { error: err.message });
-      throw err;
+      const invalidInput = err instanceof DomainError && err.kind === 'invalid';
+      return actionFailure(err, (r) => ({ error: invalidInput ? `Nothing was filed: ${r.error}` : r.error }));
     }
   }
 };

@@ -1,4 +1,5 @@
 import { requireUser } from '$lib/server/auth/require';
+import { mayAuthorFormulations } from '$lib/access/policies';
 import { formulationListSchema, listFormulations, parseListQuery } from '$lib/server/formulations/lists';
 import type { PageServerLoad } from './$types';
 
@@ -9,6 +10,6 @@ export const load: PageServerLoad = async ({ locals, url }) => {
     query,
     queryError: error,
     list: await listFormulations(query),
-    canCreate: user.roles.some((r) => r === 'formulator' || r === 'admin')
+    canCreate: mayAuthorFormulations(user)
   };
 };

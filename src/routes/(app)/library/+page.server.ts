@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
 import * as records from '$lib/server/materials/records';
-import { ALL, FORMULATION_EDITORS } from '$lib/access/routes/shared';
+import { mayEditLibrary, mayRead } from '$lib/access/policies';
 import type { PageServerLoad } from './$types';
 
 const querySchema = z.object({
@@ -13,12 +13,12 @@ const querySchema = z.object({
 });
 
 export const load: PageServerLoad = async ({ locals, url }) => {
-  const user = requireUser(locals, ALL);
+  const user = requireUser(locals, mayRead);
   const query = querySchema.parse(Object.fromEntries(url.searchParams));
   const materials = await records.list({ kind: query.kind, search: query.q, sort: query.sort, dir: query.dir, includeArchived: query.archived === '1' });
   return {
     query,
-    canEdit: FORMULATION_EDITORS.some((r) => user.roles.includes(r)),
+    canEdit: mayEditLibrary(user),
     materials: materials.map((m) => ({
       id: m.id, kind: m.kind, code: m.code, name: m.name, family: m.family, supplier: m.supplier, peakNm: m.peakNm,
       fwhmNm: m.fwhmNm, iqe: m.iqe, costPerKg: m.costPerKg, updatedAt: m.updatedAt, archived: m.archivedAt !== null

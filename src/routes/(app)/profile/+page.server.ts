@@ -1,6 +1,7 @@
-import { fail } from '@sveltejs/kit';
+import { actionFailure } from '$lib/server/http/action-failure';
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
+import { parseId } from '$lib/server/http/id-param';
 import * as tokens from '$lib/server/auth/tokens';
 import * as audit from '$lib/server/db/audit';
 import type { Actions, PageServerLoad } from './$types';
@@ -21,15 +22,15 @@ export const actions: Actions = {
     const user = requireUser(locals);
     const form = Object.fromEntries(await readForm(request));
     const parsed = createSchema.safeParse(form);
-    if (!parsed.success) return fail(400, { values: { name: String(form.name ?? ''), days: String(form.days ?? '') }, errors: z.flattenError(parsed.error).fieldErrors });
+    if (!parsed.success) return actionFailure(400, { values: { name: String(form.name ?? ''), days: String(form.days ?? '') }, errors: z.flattenError(parsed.error).fieldErrors });
     const { id, token } = await tokens.create(user.id, parsed.data.name, parsed.data.days);
     await audit.record({ actorId: user.id, actorEmail: user.email, entityType: 'api_token', entityId: id, action: 'create', after: { name: parsed.data.name, days: parsed.data.days } });
     return { created: { name: parsed.data.name, token } };
   },
   revokeToken: async ({ locals, request }) => {
     const user = requireUser(locals);
-    const id = Number((await readForm(request)).get('id'));
-    if (!Number.isInteger(id) || !(await tokens.revoke(user.id, id))) return fail(404, { revokeError: 'No such active token.' });
+    const id = parseId(String((await readForm(request)).get('id') ?? ''));
+    if (id === null || !(await tokens.revoke(user.id, id))) return actionFailure(404, { revokeError: 'No such active token.' });
     await audit.record({ actorId: user.id, actorEmail: user.email, entityType: 'api_token', entityId: id, action: 'revoke' });
     return { revoked: id };
   }

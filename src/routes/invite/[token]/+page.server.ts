@@ -1,4 +1,5 @@
-import { fail, redirect } from '@sveltejs/kit';
+import { redirect } from '@sveltejs/kit';
+import { actionFailure } from '$lib/server/http/action-failure';
 import { z } from 'zod';
 import * as invites from '$lib/server/db/invites';
 import * as accounts from '$lib/server/services/accounts';
@@ -15,12 +16,11 @@ export const actions: Actions = {
   accept: async ({ params, request }) => {
     const form = Object.fromEntries(await readForm(request));
     const parsed = acceptSchema.safeParse(form);
-    if (!parsed.success) return fail(400, { name: String(form.name ?? ''), errors: z.flattenError(parsed.error).fieldErrors });
+    if (!parsed.success) return actionFailure(400, { name: String(form.name ?? ''), errors: z.flattenError(parsed.error).fieldErrors });
     try {
       await accounts.acceptInvite(params.token, parsed.data.name, parsed.data.password);
     } catch (err) {
-      if (err instanceof accounts.AccountError) return fail(409, { name: parsed.data.name, error: err.message });
-      throw err;
+      return actionFailure(err, { name: parsed.data.name });
     }
     redirect(303, '/signin?welcome=1');
   }

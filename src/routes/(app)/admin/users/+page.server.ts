@@ -1,6 +1,7 @@
-import { fail } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
+import { mayAdminister } from '$lib/access/policies';
+import { actionFailure } from '$lib/server/http/action-failure';
 import * as users from '$lib/server/db/users';
 import * as invites from '$lib/server/db/invites';
 import * as accounts from '$lib/server/services/accounts';
@@ -8,10 +9,8 @@ import { inviteSchema, rolesSchema, activeSchema } from '$lib/schemas/accounts';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
-const ADMIN = ['admin'] as const;
-
 export const load: PageServerLoad = async ({ locals }) => {
-  requireUser(locals, ADMIN);
+  requireUser(locals, mayAdminister);
   return { people: await users.list(), openInvites: await invites.listOpen() };
 };
 
@@ -19,34 +18,33 @@ async function guarded<T>(fn: () => Promise<T>) {
   try {
     return await fn();
   } catch (err) {
-    if (err instanceof accounts.AccountError) return fail(409, { error: err.message });
-    throw err;
+    return actionFailure(err, {});
   }
 }
 
 export const actions: Actions = {
   invite: async ({ locals, request, url }) => {
-    const admin = requireUser(locals, ADMIN);
+    const admin = requireUser(locals, mayAdminister);
     const fd = await readForm(request);
     const raw = { email: String(fd.get('email') ?? ''), roles: fd.getAll('roles').map(String) };
     const parsed = inviteSchema.safeParse(raw);
-    if (!parsed.success) return fail(400, { values: raw, errors: z.flattenError(parsed.error).fieldErrors });
+    if (!parsed.success) return actionFailure(400, { values: raw, errors: z.flattenError(parsed.error).fieldErrors });
     return guarded(async () => {
       const { link, mailed } = await accounts.invite(admin, parsed.data.email, parsed.data.roles, url.origin);
       return { invited: { email: parsed.data.email, link, mailed } };
     });
   },
   setRoles: async ({ locals, request }) => {
-    const admin = requireUser(locals, ADMIN);
+    const admin = requireUser(locals, mayAdminister);
     const fd = await readForm(request);
     const parsed = rolesSchema.safeParse({ userId: fd.get('userId'), roles: fd.getAll('roles').map(String) });
-    if (!parsed.success) return fail(400, { error: z.flattenError(parsed.error).fieldErrors.roles?.[0] ?? 'Invalid roles' });
+    if (!parsed.success) return actionFailure(400, { error: z.flattenError(parsed.error).fieldErrors.roles?.[0] ?? 'Invalid roles' });
     return guarded(async () => { await accounts.changeRoles(admin, parsed.data.userId, parsed.data.roles); return { saved: parsed.data.userId }; });
   },
   setActive: async ({ locals, request }) => {
-    const admin = requireUser(locals, ADMIN);
+    const admin = requireUser(locals, mayAdminister);
     const parsed = activeSchema.safeParse(Object.fromEntries(await readForm(request)));
-    if (!parsed.success) return fail(400, { error: 'Invalid request' });
+    if (!parsed.success) return actionFailure(400, { error: 'Invalid request' });
     return guarded(async () => { await accounts.setActive(admin, parsed.data.userId, parsed.data.active === 'true'); return { saved: parsed.data.userId }; });
   }
 };

@@ -1,12 +1,13 @@
-import { error, fail } from '@sveltejs/kit';
+import { error } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
-import { LINE, QUALITY } from '$lib/access/routes/shared';
+import { mayAcceptDeviation, mayWeigh } from '$lib/access/policies';
+import { actionFailure } from '$lib/server/http/action-failure';
+import { idParam } from '$lib/server/http/id-param';
 import { getBatch } from '$lib/server/batches/read';
 import { acceptDeviation, markMixed, recordLine } from '$lib/server/batches/weighing';
 import { completeBatch } from '$lib/server/batches/complete';
 import { scaleBatch } from '$lib/server/batches/scale';
-import { BatchError } from '$lib/server/batches/errors';
 import { loadingSummary, toleranceLabel } from '$lib/server/batches/documents';
 import { completeSchema, overrideLineSchema, recordLineSchema } from '$lib/schemas/batches';
 import { LOADING_BASIS_LABELS } from '$lib/weighout/schema';
@@ -16,7 +17,7 @@ import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
   const user = requireUser(locals);
-  const d = await getBatch(Number(params.id));
+  const d = await getBatch(idParam(params.id, 'Batch not found'));
   if (!d) error(404, 'Batch not found');
   const { input: _input, ...batch } = d.batch;
   return {
@@ -26,8 +27,8 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     loadingSummary: loadingSummary(d.batch),
     silicone: d.silicone,
     caution: { title: WEIGHOUT_CAUTION_TITLE, lines: WEIGHOUT_CAUTIONS },
-    canWeigh: LINE.some((r) => user.roles.includes(r)),
-    canAccept: QUALITY.some((r) => user.roles.includes(r)),
+    canWeigh: mayWeigh(user),
+    canAccept: mayAcceptDeviation(user),
     userId: user.id
   };
 };
@@ -39,8 +40,7 @@ async function run(action: string, values: Values, fn: () => Promise<unknown>) {
     await fn();
     return { action, seq: values.seq ?? null, done: true };
   } catch (err) {
-    if (err instanceof BatchError) return fail(err.status, { action, seq: values.seq ?? null, values, error: err.message });
-    throw err;
+    return actionFailure(err, { action, seq: values.seq ?? null, values });
   }
 }
 
@@ -49,44 +49,44 @@ async function formValues(request: Request): Promise<Values> {
 }
 
 const invalidForm = (action: string, values: Values, e: z.ZodError) =>
-  fail(400, { action, seq: values.seq ?? null, values: { ...values, password: '' }, error: e.issues.map((i) => i.message).join('; ') });
+  actionFailure(400, { action, seq: values.seq ?? null, values, error: e.issues.map((i) => i.message).join('; ') });
 
 export const actions: Actions = {
   record: async ({ locals, params, request }) => {
-    const user = requireUser(locals, LINE);
+    const user = requireUser(locals, mayWeigh);
     const v = await formValues(request);
     const parsed = recordLineSchema.safeParse({ actualG: v.actualG ?? '', lotNumber: v.lotNumber ?? '', version: Number(v.version) });
     if (!parsed.success) return invalidForm('record', v, parsed.error);
-    return run('record', v, () => recordLine(user, Number(params.id), Number(v.seq), parsed.data));
+    return run('record', v, () => recordLine(user, idParam(params.id, 'Batch not found'), Number(v.seq), parsed.data));
   },
   acceptDeviation: async ({ locals, params, request }) => {
-    const user = requireUser(locals, QUALITY);
+    const user = requireUser(locals, mayAcceptDeviation);
     const v = await formValues(request);
     const parsed = overrideLineSchema.safeParse({ reason: v.reason ?? '', password: v.password ?? '', version: Number(v.version) });
     if (!parsed.success) return invalidForm('acceptDeviation', v, parsed.error);
-    return run('acceptDeviation', { ...v, password: '' }, () => acceptDeviation(user, Number(params.id), Number(v.seq), parsed.data));
+    return run('acceptDeviation', v, () => acceptDeviation(user, idParam(params.id, 'Batch not found'), Number(v.seq), parsed.data));
   },
   mix: async ({ locals, params, request }) => {
-    const user = requireUser(locals, LINE);
+    const user = requireUser(locals, mayWeigh);
     const v = await formValues(request);
     const parsed = z.object({ version: z.coerce.number().int().positive(), minutesAgo: z.coerce.number().int().min(0, 'minutes ago must be ≥ 0').max(600).default(0) })
       .safeParse({ version: v.version, minutesAgo: v.minutesAgo || undefined });
     if (!parsed.success) return invalidForm('mix', v, parsed.error);
-    return run('mix', v, () => markMixed(user, Number(params.id), { version: parsed.data.version, mixedAt: new Date(Date.now() - parsed.data.minutesAgo * 60_000) }));
+    return run('mix', v, () => markMixed(user, idParam(params.id, 'Batch not found'), { version: parsed.data.version, mixedAt: new Date(Date.now() - parsed.data.minutesAgo * 60_000) }));
   },
   complete: async ({ locals, params, request }) => {
-    const user = requireUser(locals, LINE);
+    const user = requireUser(locals, mayWeigh);
     const v = await formValues(request);
     const parsed = completeSchema.safeParse({ version: Number(v.version) });
     if (!parsed.success) return invalidForm('complete', v, parsed.error);
-    return run('complete', v, () => completeBatch(user, Number(params.id), parsed.data.version));
+    return run('complete', v, () => completeBatch(user, idParam(params.id, 'Batch not found'), parsed.data.version));
   },
   scale: async ({ locals, params, request }) => {
-    const user = requireUser(locals, LINE);
+    const user = requireUser(locals, mayWeigh);
     const v = await formValues(request);
     const parsed = z.object({ version: z.coerce.number().int().positive(), batchMassG: z.coerce.number('enter the new batch size in g').finite().gt(0, 'the batch size must be > 0 g').max(100_000) })
       .safeParse({ version: v.version, batchMassG: (v.batchMassG ?? '').replace(',', '.') });
     if (!parsed.success) return invalidForm('scale', v, parsed.error);
-    return run('scale', v, () => scaleBatch(user, Number(params.id), parsed.data));
+    return run('scale', v, () => scaleBatch(user, idParam(params.id, 'Batch not found'), parsed.data));
   }
 };

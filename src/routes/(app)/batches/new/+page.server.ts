@@ -1,11 +1,12 @@
-import { fail, redirect } from '@sveltejs/kit';
+import { redirect } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
-import { LINE } from '$lib/access/routes/shared';
+import { mayPlanBatch } from '$lib/access/policies';
+import { actionFailure } from '$lib/server/http/action-failure';
+import { parseId } from '$lib/server/http/id-param';
 import { getRevision } from '$lib/server/formulations/read';
 import { listApprovedRevisions } from '$lib/server/batches/revisions';
 import { createBatch } from '$lib/server/batches/create';
-import { BatchError } from '$lib/server/batches/errors';
-import { describeIssues } from '$lib/server/api/body';
+import { describeIssues } from '$lib/server/http/issues';
 import { createBatchSchema } from '$lib/schemas/batches';
 import { defaultFields, fieldsToRequest } from '$lib/batches/plan-form';
 import { revisionLoadings } from '$lib/weighout/from-revision';
@@ -13,9 +14,10 @@ import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = async ({ locals, url }) => {
-  requireUser(locals, LINE);
+  requireUser(locals, mayPlanBatch);
   const revisions = await listApprovedRevisions();
-  const chosen = Number(url.searchParams.get('revision') ?? revisions[0]?.id ?? 0);
+  const asked = url.searchParams.get('revision');
+  const chosen = asked === null ? (revisions[0]?.id ?? null) : parseId(asked);
   const revision = chosen ? await getRevision(chosen) : null;
   const usable = revision && revision.state === 'approved' ? revision : null;
   return {
@@ -28,18 +30,18 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 
 export const actions: Actions = {
   plan: async ({ locals, request }) => {
-    const user = requireUser(locals, LINE);
+    const user = requireUser(locals, mayPlanBatch);
     const values = Object.fromEntries([...(await readForm(request))].map(([k, v]) => [k, String(v)]));
-    const revision = await getRevision(Number(values.revisionId));
-    if (!revision) return fail(404, { values, error: 'Choose an approved formulation revision.', issues: [] });
+    const revisionId = parseId(values.revisionId);
+    const revision = revisionId === null ? null : await getRevision(revisionId);
+    if (!revision) return actionFailure(404, { values, error: 'Choose an approved formulation revision.', issues: [] });
     const parsed = createBatchSchema.safeParse(fieldsToRequest(values, revision.content.phosphors.length));
-    if (!parsed.success) return fail(400, { values, error: 'Some fields need attention.', issues: describeIssues(parsed.error) });
+    if (!parsed.success) return actionFailure(400, { values, error: 'Some fields need attention.', issues: describeIssues(parsed.error) });
     let id: number;
     try {
       id = (await createBatch(user, parsed.data)).id;
     } catch (err) {
-      if (err instanceof BatchError) return fail(err.status, { values, error: err.message, issues: err.issues });
-      throw err;
+      return actionFailure(err, { values });
     }
     redirect(303, `/batches/${id}`);
   }

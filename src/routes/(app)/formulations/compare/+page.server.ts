@@ -1,15 +1,14 @@
 import { requireUser } from '$lib/server/auth/require';
+import { parseId } from '$lib/server/http/id-param';
 import { getRevision } from '$lib/server/formulations/read';
 import { listRevisions, revisionListSchema } from '$lib/server/formulations/lists';
 import { compareMetrics, compareRatios, compareSettings } from '$lib/formulations/compare';
 import type { PageServerLoad } from './$types';
 
-const idOf = (v: string | null) => (v && /^\d{1,9}$/.test(v) ? Number(v) : null);
-
 export const load: PageServerLoad = async ({ locals, url }) => {
   requireUser(locals);
-  const a = idOf(url.searchParams.get('a'));
-  let b = idOf(url.searchParams.get('b'));
+  const a = parseId(url.searchParams.get('a'));
+  let b = parseId(url.searchParams.get('b'));
   const revA = a ? await getRevision(a) : null;
   // With only A chosen, compare it with the revision it was started from (or the one before it).
   if (revA && !b) {

@@ -1,9 +1,10 @@
-import { error, fail } from '@sveltejs/kit';
+import { error } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
-import { QUALITY } from '$lib/access/routes/shared';
+import { mayJudgeBatches } from '$lib/access/policies';
+import { actionFailure } from '$lib/server/http/action-failure';
+import { idParam } from '$lib/server/http/id-param';
 import { acceptanceSchema, correctionSchema, dispositionSchema, withdrawUploadSchema } from '$lib/schemas/quality';
-import { refusalOf } from '$lib/server/quality/api';
 import { canActOnMeasurements } from '$lib/server/quality/caller';
 import { computeResults, loadContext } from '$lib/server/quality/results';
 import { dispositionRefusal, disposeBatch } from '$lib/server/quality/disposition';
@@ -13,11 +14,7 @@ import { makeCorrectionDraft } from '$lib/server/quality/correction';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
-function batchId(param: string): number {
-  const id = Number(param);
-  if (!Number.isSafeInteger(id) || id <= 0) error(404, `Batch ${param} was not found.`);
-  return id;
-}
+const batchId = (param: string): number => idParam(param, `Batch ${param} was not found.`);
 
 export const load: PageServerLoad = async ({ locals, params }) => {
   const user = requireUser(locals);
@@ -29,71 +26,61 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 
 export const actions: Actions = {
   upload: async ({ locals, params, request }) => {
-    const user = requireUser(locals, QUALITY);
+    const user = requireUser(locals, mayJudgeBatches);
     const file = (await readForm(request)).get('file');
-    if (!(file instanceof File) || file.size === 0) return fail(400, { uploadError: 'Choose a measurement file first.', uploadIssues: [] });
+    if (!(file instanceof File) || file.size === 0) return actionFailure(400, { uploadError: 'Choose a measurement file first.', uploadIssues: [] });
     try {
       const res = await uploadMeasurements(user, batchId(params.batchId), { name: file.name, contentType: file.type, body: Buffer.from(await file.arrayBuffer()) });
       return { uploaded: { parts: res.parts, warnings: res.warnings } };
     } catch (err) {
-      const r = refusalOf(err);
-      if (!r) throw err;
-      return fail(r.status, { uploadError: r.error, uploadIssues: (r.issues ?? []) as { line: number | null; message: string }[] });
+      return actionFailure(err, (r) => ({ uploadError: r.error, uploadIssues: r.issues.map((i) => ({ line: i.line ?? null, message: i.message })) }));
     }
   },
   setAcceptance: async ({ locals, params, request }) => {
-    const user = requireUser(locals, QUALITY);
+    const user = requireUser(locals, mayJudgeBatches);
     const fd = await readForm(request);
     const parsed = acceptanceSchema.safeParse({ mode: fd.get('mode'), steps: fd.get('steps') ?? undefined, requireTargetBin: fd.get('requireTargetBin') ?? 'false', version: fd.get('version') });
-    if (!parsed.success) return fail(400, { acceptanceErrors: z.flattenError(parsed.error).fieldErrors });
+    if (!parsed.success) return actionFailure(400, { acceptanceErrors: z.flattenError(parsed.error).fieldErrors });
     try {
       await setAcceptance(user, batchId(params.batchId), parsed.data);
       return { acceptanceSaved: true };
     } catch (err) {
-      const r = refusalOf(err);
-      if (!r) throw err;
-      return fail(r.status, { acceptanceErrors: { form: [r.error] } });
+      return actionFailure(err, (r) => ({ acceptanceErrors: { form: [r.error] } }));
     }
   },
   withdrawUpload: async ({ locals, params, request }) => {
-    const user = requireUser(locals, QUALITY);
+    const user = requireUser(locals, mayJudgeBatches);
     const parsed = withdrawUploadSchema.safeParse(Object.fromEntries(await readForm(request)));
-    if (!parsed.success) return fail(400, { withdrawError: z.flattenError(parsed.error).fieldErrors.reason?.[0] ?? 'Give a reason and the upload.' });
+    if (!parsed.success) return actionFailure(400, { withdrawError: z.flattenError(parsed.error).fieldErrors.reason?.[0] ?? 'Give a reason and the upload.' });
     try {
       await withdrawUpload(user, batchId(params.batchId), parsed.data.uploadId, parsed.data.reason);
       return { withdrawn: parsed.data.uploadId };
     } catch (err) {
-      const r = refusalOf(err);
-      if (!r) throw err;
-      return fail(r.status, { withdrawError: r.error });
+      return actionFailure(err, (r) => ({ withdrawError: r.error }));
     }
   },
   correct: async ({ locals, params, request, url }) => {
-    const user = requireUser(locals, QUALITY);
+    const user = requireUser(locals, mayJudgeBatches);
     const parsed = correctionSchema.safeParse(Object.fromEntries(await readForm(request)));
-    if (!parsed.success) return fail(400, { correctionError: parsed.error.issues[0].message });
+    if (!parsed.success) return actionFailure(400, { correctionError: parsed.error.issues[0].message });
     try {
       return { corrected: await makeCorrectionDraft(user, batchId(params.batchId), parsed.data.stepFraction, url.origin) };
     } catch (err) {
-      const r = refusalOf(err);
-      if (!r) throw err;
-      return fail(r.status, { correctionError: r.error });
+      return actionFailure(err, (r) => ({ correctionError: r.error }));
     }
   },
   dispose: async ({ locals, params, request, url }) => {
-    const user = requireUser(locals, QUALITY);
+    const user = requireUser(locals, mayJudgeBatches);
     const fd = await readForm(request);
     const raw = { decision: String(fd.get('decision') ?? ''), meaning: String(fd.get('meaning') ?? ''), comment: String(fd.get('comment') ?? ''), password: String(fd.get('password') ?? ''), version: fd.get('version') };
     const values = { decision: raw.decision, meaning: raw.meaning, comment: raw.comment };
     const parsed = dispositionSchema.safeParse(raw);
-    if (!parsed.success) return fail(400, { disposition: { values, errors: z.flattenError(parsed.error).fieldErrors } });
+    if (!parsed.success) return actionFailure(400, { disposition: { values, errors: z.flattenError(parsed.error).fieldErrors } });
     try {
       const out = await disposeBatch(user, batchId(params.batchId), parsed.data, url.origin);
       return { disposed: out.decision };
     } catch (err) {
-      const r = refusalOf(err);
-      if (!r) throw err;
-      return fail(r.status, { disposition: { values, errors: {}, error: r.error } });
+      return actionFailure(err, (r) => ({ disposition: { values, errors: {}, error: r.error } }));
     }
   }
 };

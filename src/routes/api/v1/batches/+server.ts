@@ -1,24 +1,24 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson, readQuery } from '$lib/server/api/body';
-import { batchApi } from '$lib/server/batches/api';
 import { createBatch } from '$lib/server/batches/create';
 import { listBatches } from '$lib/server/batches/read';
-import { LINE } from '$lib/access/routes/shared';
 import { createBatchSchema, listQuerySchema } from '$lib/schemas/batches';
+import { apiHandler } from '$lib/server/http/api-handler';
+import { mayPlanBatch } from '$lib/access/policies';
 import type { RequestHandler } from './$types';
 
 /** Batches, newest first: ?state=, ?q= (batch number or lot), ?lot= (exact lot), ?revisionId=, ?limit=, ?offset=. */
 export const GET: RequestHandler = (event) =>
-  batchApi(async () => {
+  apiHandler(async () => {
     requireUser(event.locals);
     return json(await listBatches(readQuery(event.url.searchParams, listQuerySchema)));
   });
 
 /** Plans a batch from an approved revision (technicians and admins). */
 export const POST: RequestHandler = (event) =>
-  batchApi(async () => {
-    const user = requireUser(event.locals, LINE);
+  apiHandler(async () => {
+    const user = requireUser(event.locals, mayPlanBatch);
     const body = await readJson(event, createBatchSchema);
     const created = await createBatch(user, body);
     return json(created, { status: 201, headers: { location: `/api/v1/batches/${created.id}` } });

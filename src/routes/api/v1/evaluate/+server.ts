@@ -1,12 +1,13 @@
 import { requireUser } from '$lib/server/auth/require';
-import { finiteJson, handleApi, readJson } from '$lib/server/api/body';
+import { finiteJson, readJson } from '$lib/server/api/body';
 import { evaluateRequestSchema } from '$lib/schemas/evaluate';
 import { evaluateSpectrum } from '$lib/spectral';
+import { apiHandler } from '$lib/server/http/api-handler';
 import type { RequestHandler } from './$types';
 
 /** Spectrum → colorimetry, CCT/Duv, CIE 13.3, TM-30, LER (the spectral core's evaluateSpectrum). */
 export const POST: RequestHandler = (event) =>
-  handleApi(async () => {
+  apiHandler(async () => {
     requireUser(event.locals);
     const body = await readJson(event, evaluateRequestSchema);
     return finiteJson(evaluateSpectrum(body.spd, body.options ?? {}));

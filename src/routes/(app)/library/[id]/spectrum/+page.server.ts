@@ -1,17 +1,18 @@
-import { error, fail, redirect } from '@sveltejs/kit';
+import { error, redirect } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
-import { FORMULATION_EDITORS } from '$lib/access/routes/shared';
+import { mayEditLibrary } from '$lib/access/policies';
 import * as detail from '$lib/server/materials/detail';
 import { formFile, readVersion } from '$lib/server/materials/form';
-import { formGuard, pageId } from '$lib/server/materials/page-errors';
+import { actionFailure, tryAction } from '$lib/server/http/action-failure';
+import { idParam } from '$lib/server/http/id-param';
 import { previewSpectrumFile, uploadSpectrum } from '$lib/server/materials/spectrum-upload';
 import { spectrumKindSchema } from '$lib/schemas/materials';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
-  requireUser(locals, FORMULATION_EDITORS);
-  const d = await detail.load(pageId(params.id));
+  requireUser(locals, mayEditLibrary);
+  const d = await detail.load(idParam(params.id, 'No such material.'));
   if (!d) error(404, 'No such material.');
   const m = d.material;
   const current = (s: typeof d.emission) => (s ? { wavelengths: s.wavelengths, values: s.values } : null);
@@ -30,22 +31,22 @@ async function readUpload(request: Request) {
 
 export const actions: Actions = {
   preview: async ({ locals, request }) => {
-    requireUser(locals, FORMULATION_EDITORS);
+    requireUser(locals, mayEditLibrary);
     const { kind, file } = await readUpload(request);
-    if (!kind) return fail(400, { error: 'Choose emission or excitation.' });
-    if (!file) return fail(400, { error: 'Choose a spectrum file (CSV or TXT) first.' });
-    const p = await formGuard({ kind }, async () => previewSpectrumFile(file));
+    if (!kind) return actionFailure(400, { error: 'Choose emission or excitation.' });
+    if (!file) return actionFailure(400, { error: 'Choose a spectrum file (CSV or TXT) first.' });
+    const p = await tryAction({ kind }, async () => previewSpectrumFile(file));
     if ('status' in p) return p;
     return { preview: { kind, fileName: p.fileName, spd: p.spd, summary: p.summary, warnings: p.warnings } };
   },
   save: async ({ locals, request, params }) => {
-    const user = requireUser(locals, FORMULATION_EDITORS);
+    const user = requireUser(locals, mayEditLibrary);
     const { fd, kind, file } = await readUpload(request);
-    if (!kind) return fail(400, { error: 'Choose emission or excitation.' });
-    if (!file) return fail(400, { error: 'Choose a spectrum file (CSV or TXT) first.' });
+    if (!kind) return actionFailure(400, { error: 'Choose emission or excitation.' });
+    if (!file) return actionFailure(400, { error: 'Choose a spectrum file (CSV or TXT) first.' });
     const version = readVersion(fd) ?? undefined;
-    const id = pageId(params.id);
-    const saved = await formGuard({ kind }, () => uploadSpectrum(user, id, kind, file, version));
+    const id = idParam(params.id, 'No such material.');
+    const saved = await tryAction({ kind }, () => uploadSpectrum(user, id, kind, file, version));
     if ('status' in saved) return saved;
     redirect(303, `/library/${id}?uploaded=${kind}`);
   }

@@ -1,18 +1,19 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
-import { ApiError } from '$lib/server/api/body';
-import { formulationsApi, idParam } from '$lib/server/formulations/api';
 import { currentApprovedRevision, getFormulation } from '$lib/server/formulations/read';
 import { listRevisions, revisionListSchema } from '$lib/server/formulations/lists';
+import { apiHandler } from '$lib/server/http/api-handler';
+import { idParam } from '$lib/server/http/id-param';
+import { notFound } from '$lib/errors/domain-error';
 import type { RequestHandler } from './$types';
 
 /** One formulation, its current approved revision and its latest revisions. */
 export const GET: RequestHandler = ({ locals, params }) =>
-  formulationsApi(async () => {
+  apiHandler(async () => {
     requireUser(locals);
-    const id = idParam(params.id, 'Formulation');
+    const id = idParam(params.id, `Formulation ${params.id} does not exist.`);
     const formulation = await getFormulation(id);
-    if (!formulation) throw new ApiError(404, `Formulation ${id} does not exist.`);
+    if (!formulation) throw notFound(`Formulation ${id} does not exist.`);
     const revisions = await listRevisions(revisionListSchema.parse({ formulationId: id, sort: 'revision', pageSize: 100 }));
     return json({ formulation, current: await currentApprovedRevision(id), revisions: revisions.rows });
   });

@@ -1,26 +1,29 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
-import { ApiError, finiteJson } from '$lib/server/api/body';
-import { QUALITY } from '$lib/access/routes/shared';
-import { batchIdParam, ndjsonStream, qualityApi, uploadedFile } from '$lib/server/quality/api';
+import { finiteJson } from '$lib/server/api/body';
+import { ndjsonStream, uploadedFile } from '$lib/server/quality/api';
 import { batchResults } from '$lib/server/quality/results';
 import { precheckUpload, uploadMeasurements } from '$lib/server/quality/upload';
+import { apiHandler } from '$lib/server/http/api-handler';
+import { idParam } from '$lib/server/http/id-param';
+import { notFound } from '$lib/errors/domain-error';
+import { mayJudgeBatches } from '$lib/access/policies';
 import type { RequestHandler } from './$types';
 
 /** Results of a batch: parts with metrics and verdicts, summary, prediction check, plot data, disposition. */
 export const GET: RequestHandler = (event) =>
-  qualityApi(async () => {
+  apiHandler(async () => {
     requireUser(event.locals);
-    const view = await batchResults(batchIdParam(event.params.batchId));
-    if (!view) throw new ApiError(404, `Batch ${event.params.batchId} was not found.`);
+    const view = await batchResults(idParam(event.params.batchId, `Batch ${event.params.batchId} was not found.`));
+    if (!view) throw notFound(`Batch ${event.params.batchId} was not found.`);
     return finiteJson(view);
   });
 
 /** Upload a measurement file (multipart `file`, or a text/csv body). `Accept: application/x-ndjson` streams progress. */
 export const POST: RequestHandler = (event) =>
-  qualityApi(async () => {
-    const user = requireUser(event.locals, QUALITY);
-    const batchId = batchIdParam(event.params.batchId);
+  apiHandler(async () => {
+    const user = requireUser(event.locals, mayJudgeBatches);
+    const batchId = idParam(event.params.batchId, `Batch ${event.params.batchId} was not found.`);
     await precheckUpload(user, batchId);
     const file = await uploadedFile(event.request);
     if (!(event.request.headers.get('accept') ?? '').includes('application/x-ndjson')) {

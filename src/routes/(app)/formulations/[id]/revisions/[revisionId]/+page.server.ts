@@ -1,19 +1,24 @@
-import { error, fail, redirect } from '@sveltejs/kit';
+import { error, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
 import { db } from '$lib/server/db/index';
 import { eventsFor } from '$lib/server/audit/search';
 import { currentApprovedRevision, getRevision, listAttachments, listSignatures, storedContentVerified } from '$lib/server/formulations/read';
-import { contentFromForm, editorOptions, formRefusal } from '$lib/server/formulations/page-support';
-import { createRevision, updateDraft, ValidationError } from '$lib/server/formulations/save';
+import { contentFromForm, editorOptions } from '$lib/server/formulations/page-support';
+import { mayActOnRevisions, mayAuthorFormulations, maySignRevisions } from '$lib/access/policies';
+import { invalid } from '$lib/errors/domain-error';
+import { actionFailure } from '$lib/server/http/action-failure';
+import { idParam } from '$lib/server/http/id-param';
+import { createRevision, updateDraft } from '$lib/server/formulations/save';
 import { returnRevision, sign, submit, withdraw } from '$lib/server/formulations/workflow';
 import { addAttachment, removeAttachment } from '$lib/server/formulations/attachments';
-import { contentToFormValues, formDataToValues } from '$lib/formulations/form-values';
+import { contentToFormValues, formDataToValues, type FormValues } from '$lib/formulations/form-values';
 import { allowedCommands } from '$lib/formulations/workflow-rules';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
-const ACTORS = ['formulator', 'quality', 'admin'] as const;
+/** Actions without form fields of their own keep no input on refusal. */
+const NO_VALUES: FormValues = {};
 const version = z.coerce.number().int().positive('version missing: reload the page');
 const signSchema = z.object({
   meaning: z.enum(['reviewed', 'approved', 'returned'], 'choose what your signature means'),
@@ -24,8 +29,8 @@ const signSchema = z.object({
 const withdrawSchema = z.object({ reason: z.string().trim().min(3, 'say why the revision is withdrawn').max(2000), version });
 
 async function revisionOf(params: { id: string; revisionId: string }) {
-  const rev = await getRevision(Number(params.revisionId));
-  if (!rev || rev.formulationId !== Number(params.id)) error(404, 'No such revision of this formulation.');
+  const rev = await getRevision(idParam(params.revisionId, 'No such revision of this formulation.'));
+  if (!rev || rev.formulationId !== idParam(params.id, 'No such revision of this formulation.')) error(404, 'No such revision of this formulation.');
   return rev;
 }
 
@@ -46,7 +51,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     history,
     currentId: current?.id ?? null,
     hashVerified,
-    canStartDraft: user.roles.some((r) => r === 'formulator' || r === 'admin'),
+    canStartDraft: mayAuthorFormulations(user),
     editor: commands.includes('edit') ? { values: contentToFormValues(rev.content), options: await editorOptions() } : null,
     silicone: silicone ? { safetyNote: silicone.safety_note as string, degasNotes: silicone.degas_notes as string | null } : null
   };
@@ -54,87 +59,87 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 
 export const actions: Actions = {
   save: async ({ locals, params, request }) => {
-    const user = requireUser(locals, ACTORS);
+    const user = requireUser(locals, mayActOnRevisions);
     const rev = await revisionOf(params);
     const values = formDataToValues(await readForm(request));
     try {
       const saved = await updateDraft(user, rev.id, Number(values.version), contentFromForm(values));
       return { action: 'save', saved: saved.version };
     } catch (err) {
-      return formRefusal(err, values, 'save');
+      return actionFailure(err, { action: 'save', values });
     }
   },
   submit: async ({ locals, params, request }) => {
-    const user = requireUser(locals, ACTORS);
+    const user = requireUser(locals, mayActOnRevisions);
     const rev = await revisionOf(params);
     const parsed = version.safeParse((await readForm(request)).get('version'));
-    if (!parsed.success) return fail(400, { action: 'submit', error: parsed.error.issues[0].message });
+    if (!parsed.success) return actionFailure(400, { action: 'submit', error: parsed.error.issues[0].message });
     try {
       await submit(user, rev.id, parsed.data);
       return { action: 'submit', done: 'Submitted for review; quality has been notified.' };
     } catch (err) {
-      return formRefusal(err, {}, 'submit');
+      return actionFailure(err, { action: 'submit', values: NO_VALUES });
     }
   },
   withdraw: async ({ locals, params, request }) => {
-    const user = requireUser(locals, ACTORS);
+    const user = requireUser(locals, mayActOnRevisions);
     const rev = await revisionOf(params);
     const values = formDataToValues(await readForm(request));
     const parsed = withdrawSchema.safeParse(values);
-    if (!parsed.success) return fail(400, { action: 'withdraw', values, error: parsed.error.issues[0].message });
+    if (!parsed.success) return actionFailure(400, { action: 'withdraw', values, error: parsed.error.issues[0].message });
     try {
       await withdraw(user, rev.id, parsed.data.reason, parsed.data.version);
       return { action: 'withdraw', done: 'Revision withdrawn.' };
     } catch (err) {
-      return formRefusal(err, values, 'withdraw');
+      return actionFailure(err, { action: 'withdraw', values });
     }
   },
   sign: async ({ locals, params, request }) => {
-    const user = requireUser(locals, ['quality', 'admin']);
+    const user = requireUser(locals, maySignRevisions);
     const rev = await revisionOf(params);
     const values = formDataToValues(await readForm(request));
     const parsed = signSchema.safeParse(values);
-    if (!parsed.success) return formRefusal(new ValidationError(parsed.error.issues.map((i) => i.message).join('; ')), values, 'sign');
+    if (!parsed.success) return actionFailure(invalid(parsed.error.issues.map((i) => i.message).join('; ')), { action: 'sign', values });
     const s = parsed.data;
     try {
       if (s.meaning === 'returned') await returnRevision(user, rev.id, { password: s.password, reason: s.comment }, s.version);
       else await sign(user, rev.id, s.meaning, { password: s.password, comment: s.comment }, s.version);
       return { action: 'sign', done: s.meaning === 'approved' ? 'Signed and approved: this is now the current revision.' : s.meaning === 'returned' ? 'Signed and returned to the author.' : 'Review signature recorded.' };
     } catch (err) {
-      return formRefusal(err, values, 'sign');
+      return actionFailure(err, { action: 'sign', values });
     }
   },
   attach: async ({ locals, params, request }) => {
-    const user = requireUser(locals, ACTORS);
+    const user = requireUser(locals, mayActOnRevisions);
     const rev = await revisionOf(params);
     const fd = await readForm(request);
     const file = fd.get('file');
-    if (!(file instanceof File) || file.size === 0) return fail(400, { action: 'attach', error: 'Choose a file to attach.' });
+    if (!(file instanceof File) || file.size === 0) return actionFailure(400, { action: 'attach', error: 'Choose a file to attach.' });
     try {
       await addAttachment(user, rev.id, { name: file.name, body: Buffer.from(await file.arrayBuffer()) }, String(fd.get('label') ?? ''));
       return { action: 'attach', done: `Attached ${file.name}.` };
     } catch (err) {
-      return formRefusal(err, {}, 'attach');
+      return actionFailure(err, { action: 'attach', values: NO_VALUES });
     }
   },
   detach: async ({ locals, params, request }) => {
-    const user = requireUser(locals, ACTORS);
+    const user = requireUser(locals, mayActOnRevisions);
     const rev = await revisionOf(params);
     try {
       await removeAttachment(user, rev.id, Number((await readForm(request)).get('attachmentId')));
       return { action: 'detach', done: 'Attachment removed.' };
     } catch (err) {
-      return formRefusal(err, {}, 'detach');
+      return actionFailure(err, { action: 'detach', values: NO_VALUES });
     }
   },
   newDraft: async ({ locals, params }) => {
-    const user = requireUser(locals, ['formulator', 'admin']);
+    const user = requireUser(locals, mayAuthorFormulations);
     const rev = await revisionOf(params);
     let created;
     try {
       created = await createRevision(user, rev.formulationId, rev.content, rev.id);
     } catch (err) {
-      return formRefusal(err, {}, 'newDraft');
+      return actionFailure(err, { action: 'newDraft', values: NO_VALUES });
     }
     redirect(303, `/formulations/${rev.formulationId}/revisions/${created.revisionId}`);
   }

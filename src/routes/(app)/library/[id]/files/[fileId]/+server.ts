@@ -1,15 +1,15 @@
 import { error } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
-import { ALL } from '$lib/access/routes/shared';
+import { mayRead } from '$lib/access/policies';
 import { fileOfMaterial } from '$lib/server/materials/attachments';
 import { getFile, safeFileName } from '$lib/server/storage/objects';
-import { pageId } from '$lib/server/materials/page-errors';
+import { idParam } from '$lib/server/http/id-param';
 import type { RequestHandler } from './$types';
 
 /** Download of a material's stored file (data sheet, certificate, original spectrum export). */
 export const GET: RequestHandler = async ({ locals, params }) => {
-  requireUser(locals, ALL);
-  const row = await fileOfMaterial(pageId(params.id), pageId(params.fileId));
+  requireUser(locals, mayRead);
+  const row = await fileOfMaterial(idParam(params.id, 'No such file on this material.'), idParam(params.fileId, 'No such file on this material.'));
   if (!row) error(404, 'No such file on this material.');
   const file = await getFile(row.id);
   if (!file) error(404, 'No such file.');

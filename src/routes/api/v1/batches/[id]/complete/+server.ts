@@ -1,18 +1,19 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
-import { batchApi, pathId } from '$lib/server/batches/api';
 import { completeBatch } from '$lib/server/batches/complete';
-import { LINE } from '$lib/access/routes/shared';
 import { completeSchema } from '$lib/schemas/batches';
+import { apiHandler } from '$lib/server/http/api-handler';
+import { idParam } from '$lib/server/http/id-param';
+import { mayWeigh } from '$lib/access/policies';
 import type { RequestHandler } from './$types';
 
 /** Completes the weigh-out ({ version }) and stores the batch record PDF. */
 export const POST: RequestHandler = (event) =>
-  batchApi(async () => {
-    const user = requireUser(event.locals, LINE);
+  apiHandler(async () => {
+    const user = requireUser(event.locals, mayWeigh);
     const body = await readJson(event, completeSchema);
-    const id = pathId(event.params.id, 'Batch');
+    const id = idParam(event.params.id, 'Batch was not found.');
     const done = await completeBatch(user, id, body.version);
     return json({ ...done, recordUrl: `/api/v1/batches/${id}/record` });
   });

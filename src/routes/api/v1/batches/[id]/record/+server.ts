@@ -1,9 +1,11 @@
 import { requireUser } from '$lib/server/auth/require';
-import { ApiError } from '$lib/server/api/body';
-import { batchApi, pathId, pdfResponse } from '$lib/server/batches/api';
+import { pdfResponse } from '$lib/server/batches/api';
 import { batchRecordPdf } from '$lib/server/batches/documents';
 import { getBatch } from '$lib/server/batches/read';
 import { getFile } from '$lib/server/storage/objects';
+import { apiHandler } from '$lib/server/http/api-handler';
+import { idParam } from '$lib/server/http/id-param';
+import { notFound } from '$lib/errors/domain-error';
 import type { RequestHandler } from './$types';
 
 /**
@@ -11,11 +13,11 @@ import type { RequestHandler } from './$types';
  * stored without a file) a copy generated now, which says the batch's current state.
  */
 export const GET: RequestHandler = (event) =>
-  batchApi(async () => {
+  apiHandler(async () => {
     requireUser(event.locals);
-    const id = pathId(event.params.id, 'Batch');
+    const id = idParam(event.params.id, 'Batch was not found.');
     const d = await getBatch(id);
-    if (!d) throw new ApiError(404, 'Batch was not found.');
+    if (!d) throw notFound('Batch was not found.');
     if (d.batch.recordFileId) {
       const file = await getFile(d.batch.recordFileId);
       if (file) return pdfResponse(file.body, file.row.originalName);

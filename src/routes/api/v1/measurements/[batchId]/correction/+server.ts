@@ -1,17 +1,18 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
-import { QUALITY } from '$lib/access/routes/shared';
 import { correctionSchema } from '$lib/schemas/quality';
-import { batchIdParam, qualityApi } from '$lib/server/quality/api';
 import { makeCorrectionDraft } from '$lib/server/quality/correction';
+import { apiHandler } from '$lib/server/http/api-handler';
+import { idParam } from '$lib/server/http/id-param';
+import { mayJudgeBatches } from '$lib/access/policies';
 import type { RequestHandler } from './$types';
 
 /** Corrected ratios from the measured mean → a new draft revision linked to the batch; { stepFraction? }. */
 export const POST: RequestHandler = (event) =>
-  qualityApi(async () => {
-    const user = requireUser(event.locals, QUALITY);
-    const batchId = batchIdParam(event.params.batchId);
+  apiHandler(async () => {
+    const user = requireUser(event.locals, mayJudgeBatches);
+    const batchId = idParam(event.params.batchId, `Batch ${event.params.batchId} was not found.`);
     const body = await readJson(event, correctionSchema);
     return json(await makeCorrectionDraft(user, batchId, body.stepFraction, event.url.origin), { status: 201 });
   });

@@ -1,18 +1,19 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
-import { batchApi, pathId } from '$lib/server/batches/api';
 import { recordLine } from '$lib/server/batches/weighing';
-import { LINE } from '$lib/access/routes/shared';
 import { recordLineSchema } from '$lib/schemas/batches';
+import { apiHandler } from '$lib/server/http/api-handler';
+import { idParam } from '$lib/server/http/id-param';
+import { mayWeigh } from '$lib/access/policies';
 import type { RequestHandler } from './$types';
 
 /** Records a line's balance reading and lot: { actualG, lotNumber, version } → the range check. */
 export const POST: RequestHandler = (event) =>
-  batchApi(async () => {
-    const user = requireUser(event.locals, LINE);
-    const id = pathId(event.params.id, 'Batch');
-    const seq = pathId(event.params.seq, 'Line');
+  apiHandler(async () => {
+    const user = requireUser(event.locals, mayWeigh);
+    const id = idParam(event.params.id, 'Batch was not found.');
+    const seq = idParam(event.params.seq, 'Line was not found.');
     const body = await readJson(event, recordLineSchema);
     return json(await recordLine(user, id, seq, body));
   });

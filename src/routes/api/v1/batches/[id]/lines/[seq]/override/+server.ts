@@ -1,17 +1,18 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
-import { batchApi, pathId } from '$lib/server/batches/api';
 import { acceptDeviation } from '$lib/server/batches/weighing';
-import { QUALITY } from '$lib/access/routes/shared';
 import { overrideLineSchema } from '$lib/schemas/batches';
+import { apiHandler } from '$lib/server/http/api-handler';
+import { idParam } from '$lib/server/http/id-param';
+import { mayAcceptDeviation } from '$lib/access/policies';
 import type { RequestHandler } from './$types';
 
 /** Quality accepts an out-of-range reading: { reason, password, version } (the password signs the decision). */
 export const POST: RequestHandler = (event) =>
-  batchApi(async () => {
-    const user = requireUser(event.locals, QUALITY);
+  apiHandler(async () => {
+    const user = requireUser(event.locals, mayAcceptDeviation);
     const body = await readJson(event, overrideLineSchema);
-    await acceptDeviation(user, pathId(event.params.id, 'Batch'), pathId(event.params.seq, 'Line'), body);
+    await acceptDeviation(user, idParam(event.params.id, 'Batch was not found.'), idParam(event.params.seq, 'Line was not found.'), body);
     return json({ accepted: true });
   });
