@@ -3,7 +3,7 @@
  * Variables are documented in README.md ("Configuration").
  */
 import { z } from 'zod';
-import { connectionFromEnv } from '../../../knexfile';
+import { connectionSettings } from './db/connection';
 
 const SOLVE_WORKERS_RULE = 'PF_SOLVE_WORKERS must be a whole number from 0 to 16';
 
@@ -40,7 +40,7 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env) {
     authSecret: env.AUTH_SECRET,
     origin: env.ORIGIN,
     production: env.NODE_ENV === 'production',
-    db: connectionFromEnv(source),
+    db: connectionSettings(source),
     dbPoolMax: env.DB_POOL_MAX,
     /** Solver worker threads per instance; null = one per core (at most 4). */
     solveWorkers: env.PF_SOLVE_WORKERS ?? null,

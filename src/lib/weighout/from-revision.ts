@@ -8,10 +8,9 @@
  * phrᵢ = wᵢ · 100 / (100 − Σw)  (phosphor mass per 100 g of silicone).
  */
 import { Rat } from './rational';
-import type { WeighoutInput, ToleranceSpec } from './schema';
+import type { LoadingBasis, Sizing, ToleranceSpec, WeighoutInput } from './schema';
 import type { WeighoutIssue } from './compute';
 import type { RevisionContent } from '../formulations/content';
-import type { CreateBatchRequest } from '../schemas/batches';
 
 /** Common practice: ±0.5 % for phosphors, ±1 % for silicone parts and additives. */
 export const DEFAULT_TOLERANCE: Record<'phosphor' | 'additive' | 'silicone', ToleranceSpec> = {
@@ -30,9 +29,19 @@ export function revisionLoadings(content: RevisionContent, basis: 'wtPctOfSlurry
   return (wt as number[]).map((w) => Number(Rat.fromNumber(w).mul(Rat.HUNDRED).div(Rat.HUNDRED.sub(sum)).toFixed(4)));
 }
 
+/** What a batch request sets on top of the revision (the batch schema's request satisfies it). */
+export interface WeighoutRequest {
+  sizing: Sizing;
+  loading: { mode: 'perPhosphor'; basis: LoadingBasis; pcts?: number[] } | { mode: 'total'; basis: LoadingBasis; totalPct: number };
+  phosphorTolerances?: ToleranceSpec[];
+  siliconeTolerances?: { a: ToleranceSpec; b: ToleranceSpec };
+  additives?: WeighoutInput['additives'];
+  balance: { resolutionG: number; minWeightG: number };
+}
+
 export type FromRevisionResult = { ok: true; input: WeighoutInput } | { ok: false; errors: WeighoutIssue[] };
 
-export function weighoutInputFromRevision(content: RevisionContent, req: Omit<CreateBatchRequest, 'revisionId'>): FromRevisionResult {
+export function weighoutInputFromRevision(content: RevisionContent, req: WeighoutRequest): FromRevisionResult {
   const n = content.phosphors.length;
   const fromRevision = revisionLoadings(content, req.loading.basis);
   let pcts: number[];

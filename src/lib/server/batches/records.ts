@@ -2,9 +2,10 @@
 import { Rat } from '../../weighout/rational';
 import type { BatchTarget } from '../../weighout/target';
 import type { WeighoutInput, LoadingBasis } from '../../weighout/schema';
-import type { PlannedLine } from '../../weighout/compute';
-import type { ActualStatus } from '../../weighout/actual';
 import type { BatchState } from '../../schemas/batches';
+import type { BatchLine } from '../../batches/types';
+
+export type { BatchLine } from '../../batches/types';
 
 export interface BatchSummary {
   id: number;
@@ -51,23 +52,6 @@ export interface Batch extends BatchSummary {
   version: number;
   createdBy: number;
   updatedAt: Date;
-}
-
-/** A stored line: the planned fields (as computed) plus the reading, lot, people and quality decision. */
-export interface BatchLine extends Pick<PlannedLine, 'seq' | 'role' | 'materialId' | 'code' | 'name' | 'basisPct' | 'idealG' | 'targetG' | 'lowG' | 'highG' | 'tolerance'> {
-  id: number;
-  actualG: string | null;
-  actualStatus: ActualStatus | null;
-  lotId: number | null;
-  lotNumber: string | null;
-  weighedBy: number | null;
-  weighedByName: string | null;
-  weighedAt: Date | null;
-  overrideBy: number | null;
-  overrideByName: string | null;
-  overrideAt: Date | null;
-  overrideReason: string | null;
-  version: number;
 }
 
 /** A DECIMAL read as a JS number (mysql2 decimalNumbers) back to its exact decimal text, to `places` or more. */

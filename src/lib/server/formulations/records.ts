@@ -1,35 +1,8 @@
 /** Row → record mapping of formulation revisions (snake_case columns to camelCase, JSON parsed). */
-import type { RevisionContent, RevisionState } from '../../formulations/content';
-import type { RevisionPrediction } from '../../formulations/prediction';
+import type { RevisionState } from '../../formulations/content';
+import type { RevisionRecord } from '../../formulations/types';
 
-export interface RevisionRecord {
-  id: number;
-  formulationId: number;
-  formulationCode: string;
-  formulationName: string;
-  revisionNo: number;
-  state: RevisionState;
-  content: RevisionContent;
-  predicted: RevisionPrediction;
-  coreVersion: string;
-  contentSha256: string;
-  version: number;
-  createdBy: number;
-  createdByName: string;
-  createdAt: Date;
-  updatedAt: Date;
-  submittedAt: Date | null;
-  submittedBy: number | null;
-  decidedAt: Date | null;
-  decidedBy: number | null;
-  decidedByName: string | null;
-  supersededAt: Date | null;
-  supersedesRevisionId: number | null;
-  basedOnRevisionId: number | null;
-  sourceBatchId: number | null;
-  returnReason: string | null;
-  withdrawReason: string | null;
-}
+export type { RevisionRecord } from '../../formulations/types';
 
 /** Columns selected for a revision record (joined with its formulation and people). */
 export const REVISION_COLUMNS = [

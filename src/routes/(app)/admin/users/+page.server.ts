@@ -1,8 +1,7 @@
 import { fail } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
-import * as users from '$lib/server/db/users';
-import * as invites from '$lib/server/db/invites';
+import { listOpenInvites, listPeople } from '$lib/server/accounts/directory';
 import * as accounts from '$lib/server/services/accounts';
 import { inviteSchema, rolesSchema, activeSchema } from '$lib/schemas/accounts';
 import type { Actions, PageServerLoad } from './$types';
@@ -12,7 +11,7 @@ const ADMIN = ['admin'] as const;
 
 export const load: PageServerLoad = async ({ locals }) => {
   requireUser(locals, ADMIN);
-  return { people: await users.list(), openInvites: await invites.listOpen() };
+  return { people: await listPeople(), openInvites: await listOpenInvites() };
 };
 
 async function guarded<T>(fn: () => Promise<T>) {

@@ -1,12 +1,12 @@
 import { error, fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
-import { db } from '$lib/server/db/index';
 import { eventsFor } from '$lib/server/audit/search';
 import { contentSha256 } from '$lib/server/formulations/hash';
 import { currentApprovedRevision, getRevision, listAttachments, listSignatures } from '$lib/server/formulations/read';
 import { contentFromForm, editorOptions, formRefusal } from '$lib/server/formulations/page-support';
 import { createRevision, updateDraft, ValidationError } from '$lib/server/formulations/save';
+import { siliconeHandling } from '$lib/server/formulations/silicone';
 import { returnRevision, sign, submit, withdraw } from '$lib/server/formulations/workflow';
 import { addAttachment, removeAttachment } from '$lib/server/formulations/attachments';
 import { contentToFormValues, formDataToValues } from '$lib/formulations/form-values';
@@ -36,7 +36,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
   const commands = allowedCommands(user, rev);
   const [signatures, attachments, history, current, silicone] = await Promise.all([
     listSignatures(rev.id), listAttachments(rev.id), eventsFor('formulation_revision', rev.id), currentApprovedRevision(rev.formulationId),
-    rev.content.silicone.siliconeSystemId ? db()('silicone_systems').where({ id: rev.content.silicone.siliconeSystemId }).first('safety_note', 'degas_notes') : null
+    rev.content.silicone.siliconeSystemId ? siliconeHandling(rev.content.silicone.siliconeSystemId) : null
   ]);
   return {
     rev,
@@ -48,7 +48,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     hashVerified: contentSha256(rev.content) === rev.contentSha256,
     canStartDraft: user.roles.some((r) => r === 'formulator' || r === 'admin'),
     editor: commands.includes('edit') ? { values: contentToFormValues(rev.content), options: await editorOptions() } : null,
-    silicone: silicone ? { safetyNote: silicone.safety_note as string, degasNotes: silicone.degas_notes as string | null } : null
+    silicone
   };
 };
 
