@@ -4,6 +4,7 @@ import type { BatchTarget } from '../../weighout/target';
 import type { WeighoutInput, LoadingBasis } from '../../weighout/schema';
 import type { BatchState } from '../../schemas/batches';
 import type { BatchLine } from '../../batches/types';
+import type { BatchLineRow, BatchRow } from '../db/tables';
 
 export type { BatchLine } from '../../batches/types';
 
@@ -62,8 +63,9 @@ export function decimalText(v: number | string, places: number): string {
 
 const num = (v: unknown): number | null => (v === null || v === undefined ? null : Number(v));
 
-/* eslint-disable @typescript-eslint/no-explicit-any -- rows come untyped from Knex */
-type Row = Record<string, any>;
+/** A batch row as read, with the names of its people when the query joins them. */
+type Row = BatchRow & { created_by_name?: string | null; mixed_by_name?: string | null; completed_by_name?: string | null };
+type LineRow = BatchLineRow & { weighed_by_name?: string | null; override_by_name?: string | null };
 
 export function placesOf(resolutionG: number | string): number {
   return (typeof resolutionG === 'string' ? Rat.parse(resolutionG)! : Rat.fromNumber(resolutionG)).decimalPlaces() ?? 6;
@@ -93,7 +95,7 @@ export function toBatch(r: Row): Batch {
   };
 }
 
-export function toLine(r: Row, places: number): BatchLine {
+export function toLine(r: LineRow, places: number): BatchLine {
   return {
     id: r.id, seq: r.seq, role: r.role, materialId: r.material_id, code: r.code, name: r.name, basisPct: num(r.basis_pct),
     idealG: decimalText(r.ideal_g, places), targetG: decimalText(r.target_g, places), lowG: decimalText(r.low_g, places), highG: decimalText(r.high_g, places),
