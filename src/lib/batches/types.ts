@@ -2,8 +2,10 @@
 import type { PlannedLine } from '../weighout/compute';
 import type { ActualStatus } from '../weighout/actual';
 
+type PlannedFields = 'seq' | 'role' | 'materialId' | 'code' | 'name' | 'basisPct' | 'idealG' | 'targetG' | 'lowG' | 'highG' | 'tolerance';
+
 /** A stored line: the planned fields (as computed) plus the reading, lot, people and quality decision. */
-export interface BatchLine extends Pick<PlannedLine, 'seq' | 'role' | 'materialId' | 'code' | 'name' | 'basisPct' | 'idealG' | 'targetG' | 'lowG' | 'highG' | 'tolerance'> {
+export interface BatchLine extends Pick<PlannedLine, PlannedFields> {
   id: number;
   actualG: string | null;
   actualStatus: ActualStatus | null;
