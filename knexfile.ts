@@ -4,30 +4,11 @@
  * scripts/profile.sh sets them for the private server that `npm start` / `npm test` run.
  */
 import type { Knex } from 'knex';
+import { connectionSettings } from './src/lib/server/db/connection';
 
+/** Connection settings from this process's environment (the Knex command line, scripts and tests). */
 export function connectionFromEnv(env: NodeJS.ProcessEnv = process.env): Knex.MySql2ConnectionConfig {
-  if (env.DATABASE_URL) {
-    const url = new URL(env.DATABASE_URL);
-    return {
-      host: url.hostname,
-      port: Number(url.port || 3306),
-      user: decodeURIComponent(url.username),
-      password: decodeURIComponent(url.password),
-      database: url.pathname.replace(/^\//, ''),
-      charset: 'utf8mb4',
-      timezone: 'Z',
-      dateStrings: false
-    };
-  }
-  return {
-    host: env.DB_HOST ?? '127.0.0.1',
-    port: Number(env.DB_PORT ?? 33306),
-    user: env.DB_USER ?? 'phosforge',
-    password: env.DB_PASSWORD ?? 'phosforge-local',
-    database: env.DB_NAME ?? 'phosforge',
-    charset: 'utf8mb4',
-    timezone: 'Z'
-  };
+  return connectionSettings(env);
 }
 
 const config: { [profile: string]: Knex.Config } = {

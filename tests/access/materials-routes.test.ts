@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { decide, navFor } from '../../src/lib/access/route-table';
-import { ROLES } from '../../src/lib/access/roles';
+import { ROLES } from '../../src/lib/roles';
 
 // Issue 5 role rules: formulators and admins edit the library; technicians and quality read it.
 describe('material library role rules', () => {

@@ -4,7 +4,7 @@
  * separation of duties — line, quality and formulation roles; nobody signs off their own work).
  */
 import { describe, expect, it } from 'vitest';
-import { ROLES, type Role } from '../../src/lib/access/roles';
+import { ROLES, type Role } from '../../src/lib/roles';
 import { decide, ROUTE_TABLE } from '../../src/lib/access/route-table';
 import * as policies from '../../src/lib/access/policies';
 import { COMMAND_RULES } from '../../src/lib/formulations/workflow-rules';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { decide, navFor, ROUTE_TABLE } from '../../src/lib/access/route-table';
-import { ROLES } from '../../src/lib/access/roles';
+import { ROLES } from '../../src/lib/roles';
 import { readdirSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 

@@ -75,8 +75,8 @@ test('a formulator builds a 3000 K blend, searches, puts a proposal on the desk 
 
   const knex = testDb();
   try {
-    const f = await knex('formulations').where({ code }).first('id');
-    const rev = await knex('formulation_revisions').where({ formulation_id: f.id }).first('state', 'content_json', 'predicted_json');
+    const f = (await knex('formulations').where({ code }).first('id'))!;
+    const rev = (await knex('formulation_revisions').where({ formulation_id: f.id }).first('state', 'content_json', 'predicted_json'))!;
     expect(rev.state).toBe('draft');
     const content = JSON.parse(rev.content_json);
     expect(content.pump.code).toBe('B-450');

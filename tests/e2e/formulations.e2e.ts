@@ -49,7 +49,7 @@ async function fillWarmWhite(page: Page) {
 async function revisionRow(id: number) {
   const knex = testDb();
   try {
-    return await knex('formulation_revisions').where({ id }).first();
+    return (await knex('formulation_revisions').where({ id }).first())!;
   } finally {
     await knex.destroy();
   }

@@ -48,7 +48,7 @@ test('markup and SQL typed into every text field are stored and shown literally'
     const addLot = await formulator.post(`/library/${materialId}?/addLot`, { headers: { Origin: BASE, 'x-sveltekit-action': 'true' }, form: { ...lot, receivedOn: '', expiresOn: '' } });
     expect(addLot.status()).toBe(200);
     expect(JSON.parse((await addLot.text())).type, await addLot.text()).toBe('success');
-    const lotRow = await knex('material_lots').where({ material_id: materialId }).first('lot_number', 'supplier', 'notes');
+    const lotRow = (await knex('material_lots').where({ material_id: materialId }).first('lot_number', 'supplier', 'notes'))!;
     expect([lotRow.lot_number, lotRow.supplier, lotRow.notes]).toEqual([lot.lotNumber, lot.supplier, lot.notes]);
 
     // Formulation and its first revision (content copied from an approved demo revision).
@@ -63,14 +63,14 @@ test('markup and SQL typed into every text field are stored and shown literally'
     expect(stored).toEqual({ name: meta.name, description: meta.description });
     const revBase = `/api/v1/formulations/${formulationId}/revisions/${revisionId}`;
     expect((await json(formulator, `${revBase}/submit`, { version: 1 })).status()).toBe(200);
-    const revVersion = async () => (await knex('formulation_revisions').where({ id: revisionId }).first('version')).version as number;
+    const revVersion = async () => (await knex('formulation_revisions').where({ id: revisionId }).first('version'))!.version as number;
     const reviewComment = hostile('review');
     const reviewed = await json(quality, `${revBase}/review`, { version: await revVersion(), password: DEMO_PASSWORD, comment: reviewComment });
     expect(reviewed.status(), await reviewed.text()).toBe(200);
     const reason = hostile('reason');
     const returned = await json(quality, `${revBase}/return`, { version: await revVersion(), password: DEMO_PASSWORD, reason });
     expect(returned.status(), await returned.text()).toBe(200);
-    const revRow = await knex('formulation_revisions').where({ id: revisionId }).first('content_json');
+    const revRow = (await knex('formulation_revisions').where({ id: revisionId }).first('content_json'))!;
     expect(JSON.parse(revRow.content_json).notes).toBe(content.notes);
     // The notice to the author carries the reason as typed in its text part and escaped in its HTML part.
     const [notice] = await waitForMail((m) => m.text.includes(reason), 1, 10_000);
@@ -86,14 +86,14 @@ test('markup and SQL typed into every text field are stored and shown literally'
     });
     expect(batch.status(), await batch.text()).toBe(201);
     const batchId = (await batch.json()).id as number;
-    expect((await knex('batches').where({ id: batchId }).first('notes')).notes).toBe(batchNotes);
+    expect((await knex('batches').where({ id: batchId }).first('notes'))!.notes).toBe(batchNotes);
 
     // Quality's signed release of a measured batch, with its comment.
     const measured = await completedBatch();
     const upload = await quality.post(`/api/v1/measurements/${measured.id}`, { data: measured.csv, headers: { 'content-type': 'text/csv', Origin: BASE } });
     expect(upload.status(), await upload.text()).toBe(201);
     const dispositionComment = hostile('dcomment');
-    const batchVersion = (await knex('batches').where({ id: measured.id }).first('version')).version;
+    const batchVersion = (await knex('batches').where({ id: measured.id }).first('version'))!.version;
     const released = await json(quality, `/api/v1/measurements/${measured.id}/disposition`, {
       decision: 'release', meaning: DISPOSITION_MEANINGS.release[0], comment: dispositionComment, password: DEMO_PASSWORD, version: batchVersion
     });

@@ -1,3 +1,4 @@
+import type { Knex } from 'knex';
 import { test, expect, type APIRequestContext } from '@playwright/test';
 import http from 'node:http';
 import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
@@ -66,12 +67,12 @@ function cutUpload(path: string, upload: { body: Buffer; type: string }, sendByt
 async function storedState() {
   const knex = testDb();
   try {
-    const count = async (q: ReturnType<typeof knex>) => Number(((await q.count({ n: '*' }).first()) as { n: number | string }).n);
+    const count = async <T extends {}>(q: Knex.QueryBuilder<T>) => Number(((await q.count({ n: '*' }).first()) as { n: number | string }).n);
     return {
       files: await count(knex('stored_files').where({ entity_type: 'material', entity_id: String(materialId) })),
       cutFiles: await count(knex('stored_files').where('original_name', 'like', `cut-${run}-%`)),
       spectra: await count(knex('material_spectra').where({ material_id: materialId })),
-      version: Number((await knex('materials').where({ id: materialId }).first('version')).version)
+      version: Number((await knex('materials').where({ id: materialId }).first('version'))!.version)
     };
   } finally {
     await knex.destroy();

@@ -43,7 +43,7 @@ test('a wrong password signs nothing and says so', async ({ page }) => {
   let id: number;
   try {
     // The demo batch BT-261201-001 is seeded with measurements and waits for a decision.
-    id = (await knex('batches').where({ batch_number: 'BT-261201-001' }).first('id')).id;
+    id = (await knex('batches').where({ batch_number: 'BT-261201-001' }).first('id'))!.id;
   } finally {
     await knex.destroy();
   }

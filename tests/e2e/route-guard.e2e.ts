@@ -1,6 +1,6 @@
 import { test, expect, request, type APIRequestContext } from '@playwright/test';
 import { ROUTE_TABLE, type Method, type Audience } from '../../src/lib/access/route-table';
-import { ROLES, type Role } from '../../src/lib/access/roles';
+import { ROLES, type Role } from '../../src/lib/roles';
 import { BASE, DEMO, makeUser, signedInContext, testDb } from './support/accounts';
 import { tokenFor } from './support/tokens';
 

@@ -76,8 +76,8 @@ test.describe('production mode', () => {
 
 test('form posts with a body that is not a readable form are refused with 400, not an error', async () => {
   const knex = testDb();
-  const batchId = (await knex('batches').where({ state: 'complete' }).first('id'))?.id ?? (await knex('batches').first('id')).id;
-  const materialId = (await knex('materials').first('id')).id;
+  const batchId = (await knex('batches').where({ state: 'complete' }).first('id'))?.id ?? (await knex('batches').first('id'))!.id;
+  const materialId = (await knex('materials').first('id'))!.id;
   await knex.destroy();
   // A multipart body cut off before its closing boundary, as a dropped connection leaves it.
   const cutOff = '--XYZ\r\nContent-Disposition: form-data; name="file"; filename="spd.csv"\r\nContent-Type: text/csv\r\n\r\n380,0.1\r\n381,0.2\r\n';

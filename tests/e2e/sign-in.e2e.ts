@@ -1,6 +1,6 @@
 import { test, expect, request } from '@playwright/test';
 import { DEMO, BASE, makeUser, postSignIn, signInThroughForm, signedInContext, testDb } from './support/accounts';
-import { ROLE_LABELS, type Role } from '../../src/lib/access/roles';
+import { ROLE_LABELS, type Role } from '../../src/lib/roles';
 import { tokenFor } from './support/tokens';
 
 test.describe('sign-in through the browser', () => {
@@ -99,7 +99,7 @@ test('the audit trail records the connection address of a sign-in, not a client-
   try {
     const rows = await knex('audit_events').where({ actor_email: email, action: 'sign-in' }).orderBy('id', 'desc').limit(2).pluck('ip');
     expect(rows).toEqual(['127.0.0.1', '127.0.0.1']);
-    const attempts = await knex('sign_in_attempts').where({ email, succeeded: true }).orderBy('id', 'desc').limit(2).pluck('ip');
+    const attempts = await knex('sign_in_attempts').where({ email, succeeded: 1 }).orderBy('id', 'desc').limit(2).pluck('ip');
     expect(attempts).toEqual(['127.0.0.1', '127.0.0.1']);
   } finally {
     await knex.destroy();

@@ -74,7 +74,7 @@ const unique = (prefix: string) => `${prefix}-${Date.now().toString(36).toUpperC
 async function validContent(): Promise<Record<string, unknown>> {
   const knex = testDb();
   try {
-    const row = await knex('formulation_revisions').where({ state: 'approved' }).orderBy('id').first('content_json');
+    const row = (await knex('formulation_revisions').where({ state: 'approved' }).orderBy('id').first('content_json'))!;
     expect(row?.content_json, 'the demo seed has an approved revision').toMatch(/^\{/);
     return JSON.parse(row.content_json);
   } finally {
@@ -122,7 +122,7 @@ test.describe('writes through both instances', () => {
       expect(why).toContain('you edited version 1, it is now at version 2');
       expect(why).toMatch(/Nothing was saved/);
       // The row still holds B's edit, and only one update reached the audit trail.
-      const row = await knex('materials').where({ id }).first('name', 'iqe', 'version');
+      const row = (await knex('materials').where({ id }).first('name', 'iqe', 'version'))!;
       expect({ ...row, iqe: Number(row.iqe) }).toEqual({ name: 'Renamed on instance B', iqe: 0.85, version: 2 });
       const updates = await knex('audit_events').where({ entity_type: 'material', entity_id: String(id), action: 'update' }).count<{ n: number }[]>('* as n');
       expect(Number(updates[0].n)).toBe(1);
@@ -163,7 +163,7 @@ test.describe('writes through both instances', () => {
 
     const knex = testDb();
     try {
-      const row = await knex('formulation_revisions').where({ id: draft.revisionId }).first('content_json', 'version', 'state');
+      const row = (await knex('formulation_revisions').where({ id: draft.revisionId }).first('content_json', 'version', 'state'))!;
       expect({ notes: JSON.parse(row.content_json).notes, version: row.version, state: row.state }).toEqual({ notes: 'saved on instance B', version: 2, state: 'draft' });
     } finally {
       await knex.destroy();

@@ -4,7 +4,7 @@
  * method, handlers assert the same policy (`requireUser(locals, mayPlanBatch)`), and pages ask it
  * which buttons to show. Revision commands read the state machine's table (COMMAND_RULES).
  */
-import { ADMIN, ALL, FORMULATION_EDITORS, LINE, QUALITY, REVISION_ACTORS, type Role } from './roles';
+import { ADMIN, ALL, FORMULATION_EDITORS, LINE, QUALITY, REVISION_ACTORS, type Role } from '../roles';
 import { COMMAND_RULES, refusal, type RevisionFacts } from '../formulations/workflow-rules';
 
 /** Anyone the policies judge: a signed-in user (or nobody). */

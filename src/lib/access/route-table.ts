@@ -4,7 +4,7 @@
  * `sample` is a concrete path for the route-by-role tests; `methods` lists the roles per HTTP
  * method ('public' = no sign-in, 'signedIn' = any active user). Page form actions are POSTs.
  */
-import type { Role } from './roles';
+import type { Role } from '../roles';
 import type { Method, RouteRule } from './routes/shared';
 import { CORE_ROUTES } from './routes/core';
 import { MATERIALS_ROUTES } from './routes/materials';

@@ -4,7 +4,7 @@
  * show) and the tests. Practice (common practice): draft → in review → approved /
  * returned; an approval supersedes the previous approved revision; nobody signs off their own work.
  */
-import { QUALITY, REVISION_ACTORS, type Role } from '../access/roles';
+import { QUALITY, REVISION_ACTORS, type Role } from '../roles';
 
 /** Revision states (plain words of the trade). */
 export const REVISION_STATES = ['draft', 'submitted', 'approved', 'returned', 'superseded', 'withdrawn'] as const;

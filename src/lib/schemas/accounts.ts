@@ -1,6 +1,6 @@
 /** Form and API schemas for accounts (shared by pages and endpoints). */
 import { z } from 'zod';
-import { ROLES } from '../access/roles';
+import { ROLES } from '../roles';
 
 export const rolesField = z.array(z.enum(ROLES, 'Unknown role')).min(1, 'Pick at least one role');
 

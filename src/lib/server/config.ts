@@ -3,7 +3,7 @@
  * Variables are documented in README.md ("Configuration").
  */
 import { z } from 'zod';
-import { connectionFromEnv } from '../../../knexfile';
+import { connectionSettings } from './db/connection';
 
 const SOLVE_WORKERS_RULE = 'PF_SOLVE_WORKERS must be a whole number from 0 to 16';
 
@@ -25,6 +25,7 @@ const envSchema = z.object({
   DB_POOL_MAX: z.coerce.number().int().min(2, 'DB_POOL_MAX must be at least 2').max(500, 'DB_POOL_MAX must be at most 500').default(20),
   PF_SOLVE_WORKERS: z.preprocess((v) => (v === '' ? undefined : v),
     z.coerce.number(SOLVE_WORKERS_RULE).int(SOLVE_WORKERS_RULE).min(0, SOLVE_WORKERS_RULE).max(16, SOLVE_WORKERS_RULE).optional()),
+  PF_SOLVE_WORKER: z.string().min(1).default('build/solve-worker.js'),
   NODE_ENV: z.string().default('development')
 });
 
@@ -40,10 +41,12 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env) {
     authSecret: env.AUTH_SECRET,
     origin: env.ORIGIN,
     production: env.NODE_ENV === 'production',
-    db: connectionFromEnv(source),
+    db: connectionSettings(source),
     dbPoolMax: env.DB_POOL_MAX,
     /** Solver worker threads per instance; null = one per core (at most 4). */
     solveWorkers: env.PF_SOLVE_WORKERS ?? null,
+    /** The bundled solver worker (built by `npm run build`). */
+    solveWorkerFile: env.PF_SOLVE_WORKER,
     mail: {
       host: env.SMTP_HOST,
       port: env.SMTP_PORT,

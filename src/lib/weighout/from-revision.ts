@@ -10,10 +10,9 @@
  * weigh-out is computed from the exact fraction, so the lines weigh the revision's exact masses.
  */
 import { Rat } from './rational';
-import type { WeighoutInput, ToleranceSpec } from './schema';
+import type { LoadingBasis, Sizing, ToleranceSpec, WeighoutInput } from './schema';
 import type { WeighoutIssue } from './compute';
 import { loadingOf, phosphorLines, type RevisionContent } from '../recipe';
-import type { CreateBatchRequest } from '../schemas/batches';
 
 /** Common practice: ±0.5 % for phosphors, ±1 % for silicone parts and additives. */
 export const DEFAULT_TOLERANCE: Record<'phosphor' | 'additive' | 'silicone', ToleranceSpec> = {
@@ -50,9 +49,19 @@ function loadingFields(pct: number | Rat): { pct: number; pctExact?: string } {
   return Rat.fromNumber(printed).eq(pct) ? { pct: printed } : { pct: printed, pctExact: pct.toFraction() };
 }
 
+/** What a batch request sets on top of the revision (the batch schema's request satisfies it). */
+export interface WeighoutRequest {
+  sizing: Sizing;
+  loading: { mode: 'perPhosphor'; basis: LoadingBasis; pcts?: number[] } | { mode: 'total'; basis: LoadingBasis; totalPct: number };
+  phosphorTolerances?: ToleranceSpec[];
+  siliconeTolerances?: { a: ToleranceSpec; b: ToleranceSpec };
+  additives?: WeighoutInput['additives'];
+  balance: { resolutionG: number; minWeightG: number };
+}
+
 export type FromRevisionResult = { ok: true; input: WeighoutInput } | { ok: false; errors: WeighoutIssue[] };
 
-export function weighoutInputFromRevision(content: RevisionContent, req: Omit<CreateBatchRequest, 'revisionId'>): FromRevisionResult {
+export function weighoutInputFromRevision(content: RevisionContent, req: WeighoutRequest): FromRevisionResult {
   const lines = phosphorLines(content);
   const n = lines.length;
   const fromRevision = revisionLoadingsExact(content, req.loading.basis);

@@ -3,7 +3,7 @@ import { request, type APIRequestContext, type Page, expect } from '@playwright/
 import knexFactory from 'knex';
 import bcrypt from 'bcryptjs';
 import config from '../../../knexfile';
-import type { Role } from '../../../src/lib/access/roles';
+import type { Role } from '../../../src/lib/roles';
 
 export const BASE = `http://127.0.0.1:${process.env.PORT ?? 4173}`;
 export const DEMO_PASSWORD = 'phosforge-demo';

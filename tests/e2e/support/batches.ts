@@ -22,7 +22,7 @@ export async function completedBatch(): Promise<{ id: number; batchNumber: strin
     const { id, batchNumber } = await created.json();
     const batch = await (await tech.get(`/api/v1/batches/${id}`)).json();
     for (const l of batch.lines) {
-      const lot = l.materialId ? (await knex('material_lots').where({ material_id: l.materialId }).orderBy('id', 'desc').first('lot_number')).lot_number : 'BKF-LX11-2611';
+      const lot = l.materialId ? (await knex('material_lots').where({ material_id: l.materialId }).orderBy('id', 'desc').first('lot_number'))!.lot_number : 'BKF-LX11-2611';
       expect((await json(tech, `/api/v1/batches/${id}/lines/${l.seq}`, { actualG: l.targetG, lotNumber: lot, version: l.version })).status()).toBe(200);
     }
     let version = (await (await tech.get(`/api/v1/batches/${id}`)).json()).version;

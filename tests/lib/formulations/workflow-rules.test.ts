@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { COMMAND_RULES, STATE_TRANSITIONS, allowedCommands, refusal, type RevisionCommand } from '../../../src/lib/formulations/workflow-rules';
 import { REVISION_STATES, type RevisionState } from '../../../src/lib/formulations/workflow-rules';
-import type { Role } from '../../../src/lib/access/roles';
+import type { Role } from '../../../src/lib/roles';
 import { ALLOWED, type Person } from './permission-table';
 
 // Revision control as practised for batch records (common practice): draft → in review →

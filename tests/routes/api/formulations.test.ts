@@ -28,7 +28,7 @@ async function created(user: User) {
 }
 
 const path = (f: { formulationId: number; revisionId: number }) => ({ id: String(f.formulationId), revisionId: String(f.revisionId) });
-const rowOf = (id: number) => db()('formulation_revisions').where({ id }).first();
+const rowOf = async (id: number) => (await db()('formulation_revisions').where({ id }).first())!;
 
 describe('/api/v1/formulations', () => {
   beforeAll(async () => {

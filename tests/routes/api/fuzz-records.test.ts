@@ -22,7 +22,7 @@ let lastMaterialBefore = 0;
 beforeAll(async () => {
   formulator = await userByEmail('rhea.okafor@kestrelhollow.example');
   technician = await userByEmail('tomas.brand@kestrelhollow.example');
-  const rev = await db()('formulation_revisions').where({ state: 'approved' }).orderBy('id').first('id', 'content_json');
+  const rev = (await db()('formulation_revisions').where({ state: 'approved' }).orderBy('id').first('id', 'content_json'))!;
   approvedRevisionId = rev.id;
   approvedContent = JSON.parse(rev.content_json);
   run = Date.now() % 1e6;
@@ -73,7 +73,7 @@ describe('hostile text is stored literally', () => {
     const name = `<script>alert('x')</script>'; DROP TABLE materials; -- ${run}`;
     const res = await phosphorPost(apiEvent(formulator, { code: `FZ-LIT-${run}`, name, iqe: 0.9, notes: '" OR 1=1 -- \\ %_' }) as never);
     expect(res.status).toBe(201);
-    const row = await db()('materials').where({ code: `FZ-LIT-${run}` }).first('name', 'notes');
+    const row = (await db()('materials').where({ code: `FZ-LIT-${run}` }).first('name', 'notes'))!;
     expect(row.name).toBe(name);
     expect(row.notes).toBe('" OR 1=1 -- \\ %_');
   });

@@ -6,7 +6,7 @@ import * as phosphorSpectrum from '../../../src/routes/api/v1/phosphors/[id]/spe
 import * as pump from '../../../src/routes/api/v1/pumps/[id]/+server';
 import { call } from './support';
 import { demoUser, gaussianCsv, phosphorFields, removeTestMaterials } from '../../server/materials/support';
-import type { Role } from '../../../src/lib/access/roles';
+import type { Role } from '../../../src/lib/roles';
 import type { User } from '../../../src/lib/server/db/users';
 
 const people = new Map<Role, User>();
@@ -75,7 +75,7 @@ describe('/api/v1/phosphors and /api/v1/pumps', () => {
   });
 
   it('does not serve a pump under /phosphors (404)', async () => {
-    const b450 = await db()('materials').where({ code: 'B-450' }).first('id');
+    const b450 = (await db()('materials').where({ code: 'B-450' }).first('id'))!;
     expect((await call(phosphor.GET, event('formulator', { params: { id: String(b450.id) } }))).status).toBe(404);
     const r = await call(pump.GET, event('technician', { params: { id: String(b450.id) } }));
     expect(r.status).toBe(200);

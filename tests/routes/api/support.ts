@@ -1,5 +1,5 @@
 /** Calls a SvelteKit endpoint handler directly with a signed-in user (no HTTP server needed). */
-import type { Role } from '../../../src/lib/access/roles';
+import type { Role } from '../../../src/lib/roles';
 
 export function fakeUser(roles: Role[] = ['formulator']) {
   return { id: 1, email: 'test@kestrelhollow.example', name: 'Test', active: true, roles, createdAt: new Date() };

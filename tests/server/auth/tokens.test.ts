@@ -18,7 +18,7 @@ describe('personal API tokens', () => {
 
   it('stores only a hash and resolves the token to its user with that user\'s roles', async () => {
     const { id, token } = await tokens.create(userId, 'probe', 30);
-    const row = await db()('api_tokens').where({ id }).first();
+    const row = (await db()('api_tokens').where({ id }).first())!;
     expect(row.token_hash).toBe(tokens.sha256Hex(token));
     expect(JSON.stringify(row)).not.toContain(token);
     const user = await tokens.userForToken(token);

@@ -67,7 +67,7 @@ export async function makeFixture(opts: { withWtPct?: boolean } = {}): Promise<F
     floors: { raMin: 90 },
     notes: ''
   };
-  const rev = (revision_no: number, state: string) => ({
+  const rev = (revision_no: number, state: 'approved' | 'draft') => ({
     formulation_id: formulationId, revision_no, state, content_json: JSON.stringify(content), predicted_json: '{}',
     core_version: 'test', content_sha256: '0'.repeat(64), created_by: admin.id
   });

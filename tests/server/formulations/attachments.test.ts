@@ -36,7 +36,7 @@ describe('revision attachments', () => {
     await expect(addAttachment(c.rhea, d.revisionId, report, 'late')).rejects.toBeInstanceOf(ConflictError);
     await expect(removeAttachment(c.rhea, d.revisionId, id)).rejects.toBeInstanceOf(ConflictError);
     await expect(db()('revision_attachments').where({ id }).delete()).rejects.toThrow(/locked/);
-    const fileId = (await db()('revision_attachments').where({ id }).first()).stored_file_id;
+    const fileId = (await db()('revision_attachments').where({ id }).first())!.stored_file_id;
     await expect(db()('revision_attachments').insert({ revision_id: d.revisionId, stored_file_id: fileId, label: 'sneaked in' })).rejects.toThrow(/locked/);
     expect((await listAttachments(d.revisionId)).map((a) => a.id)).toEqual([id]);
   });

@@ -54,7 +54,7 @@ describe('forbidden transitions through the services, per person and state', () 
   afterAll(closeDb);
 
   it('has one revision in every state', async () => {
-    for (const state of REVISION_STATES) expect((await db()('formulation_revisions').where({ id: ids[state] }).first()).state).toBe(state);
+    for (const state of REVISION_STATES) expect((await db()('formulation_revisions').where({ id: ids[state] }).first())!.state).toBe(state);
   });
 
   const people: Person[] = ['author (formulator)', 'other formulator', 'technician', 'quality reviewer', 'administrator'];
@@ -65,7 +65,7 @@ describe('forbidden transitions through the services, per person and state', () 
       let refused = 0;
       for (const state of REVISION_STATES) {
         for (const command of commands.filter((x) => !(ALLOWED[person][state] ?? []).includes(x))) {
-          const before = await db()('formulation_revisions').where({ id: ids[state] }).first();
+          const before = (await db()('formulation_revisions').where({ id: ids[state] }).first())!;
           const attempt = run(command, user, ids[state], before.version);
           await expect(attempt, `${command} on ${state}`).rejects.toSatisfy((e) => e instanceof PermissionError || e instanceof ConflictError);
           expect(await db()('formulation_revisions').where({ id: ids[state] }).first(), `${command} on ${state}`).toEqual(before);

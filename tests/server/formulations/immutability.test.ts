@@ -29,7 +29,7 @@ describe('immutability of submitted and approved revisions', () => {
 
   it('the service refuses to edit a submitted or approved revision (409) and the row is unchanged', async () => {
     for (const id of [submittedId, approvedId]) {
-      const before = await db()('formulation_revisions').where({ id }).first();
+      const before = (await db()('formulation_revisions').where({ id }).first())!;
       await expect(updateDraft(c.rhea, id, before.version, await warmWhite({ notes: 'sneaky change' }))).rejects.toBeInstanceOf(ConflictError);
       expect(await db()('formulation_revisions').where({ id }).first()).toEqual(before);
     }

@@ -21,7 +21,7 @@ async function submitted(author: Cast['rhea']) {
 }
 
 async function rowOf(id: number) {
-  return db()('formulation_revisions').where({ id }).first();
+  return (await db()('formulation_revisions').where({ id }).first())!;
 }
 
 describe('formulation revisions: life cycle through the services', () => {

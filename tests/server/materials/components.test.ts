@@ -3,7 +3,7 @@ import { db, closeDb } from '../../../src/lib/server/db/index';
 import { listMaterialOptions, loadBlendComponents } from '../../../src/lib/server/materials/components';
 import { mix, DEMO_PHOSPHORS } from '../../../src/lib/blend';
 
-const idOf = async (code: string) => Number((await db()('materials').where({ code }).first('id')).id);
+const idOf = async (code: string) => Number((await db()('materials').where({ code }).first('id'))!.id);
 
 describe('library materials as blend components (seeded demo library)', () => {
   afterAll(closeDb);

@@ -36,7 +36,7 @@ describe('material edits: optimistic lock, kind rules, audit', () => {
     const stale = editing.update(sam, id, 1, { costPerKg: 999, notes: 'overwrite attempt' });
     await expect(stale).rejects.toBeInstanceOf(DomainError);
     await expect(editing.update(sam, id, 1, { costPerKg: 999 })).rejects.toMatchObject({ status: 409, message: expect.stringMatching(/changed by someone else.*version 1.*version 2/) });
-    const row = await db()('materials').where({ id }).first();
+    const row = (await db()('materials').where({ id }).first())!;
     expect(Number(row.cost_per_kg)).toBe(160);
     expect(row.notes).toBeNull();
     expect(row.version).toBe(2);
@@ -46,9 +46,9 @@ describe('material edits: optimistic lock, kind rules, audit', () => {
   it('records only the changed fields in the audit trail', async () => {
     const id = await editing.create(rhea, 'phosphor', phosphorFields('TST-E3'));
     await editing.update(rhea, id, 1, { iqe: 0.88, name: 'TST-E3 test garnet' });
-    const ev = await db()('audit_events').where({ entity_type: 'material', entity_id: String(id), action: 'update' }).first();
-    expect(JSON.parse(ev.before_json)).toEqual({ iqe: 0.9 });
-    expect(JSON.parse(ev.after_json)).toEqual({ iqe: 0.88 });
+    const ev = (await db()('audit_events').where({ entity_type: 'material', entity_id: String(id), action: 'update' }).first())!;
+    expect(JSON.parse(ev.before_json!)).toEqual({ iqe: 0.9 });
+    expect(JSON.parse(ev.after_json!)).toEqual({ iqe: 0.88 });
   });
 
   it('requires an IQE for a phosphor but not for a pump', async () => {

@@ -56,6 +56,6 @@ describe('lots and documents of a material', () => {
     const [lot] = await lots.list(id);
     await lots.remove(rhea, id, lot.id);
     expect(await lots.list(id)).toEqual([]);
-    expect(await db()('stored_files').where({ id: lot.certificateFileId }).first()).toBeUndefined();
+    expect(await db()('stored_files').where({ id: lot.certificateFileId! }).first()).toBeUndefined();
   });
 });

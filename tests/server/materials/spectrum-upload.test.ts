@@ -33,13 +33,13 @@ describe('spectrum upload: a valid file is stored, a bad file saves nothing', ()
     expect(m?.fwhmNm).toBeGreaterThan(66.3);
     expect(m?.fwhmNm).toBeLessThan(66.9);
     expect(m?.emissionSpectrumId).toBe(r.spectrumId);
-    const spectrum = await db()('material_spectra').where({ id: r.spectrumId }).first();
+    const spectrum = (await db()('material_spectra').where({ id: r.spectrumId }).first())!;
     expect(spectrum).toMatchObject({ kind: 'emission', points: 81, origin: 'upload' });
-    const stored = await getFile(spectrum.source_file_id);
+    const stored = await getFile(spectrum.source_file_id!);
     expect(stored?.body.toString('utf8')).toBe(text);
     expect(stored?.row).toMatchObject({ purpose: 'spectrum-source', entityType: 'material', entityId: String(id) });
-    const ev = await db()('audit_events').where({ entity_type: 'material', entity_id: String(id), action: 'emission-spectrum-upload' }).first();
-    expect(JSON.parse(ev.after_json)).toMatchObject({ file: 'band.csv', points: 81 });
+    const ev = (await db()('audit_events').where({ entity_type: 'material', entity_id: String(id), action: 'emission-spectrum-upload' }).first())!;
+    expect(JSON.parse(ev.after_json!)).toMatchObject({ file: 'band.csv', points: 81 });
   });
 
   it('accepts an excitation spectrum without touching peak and FWHM', async () => {

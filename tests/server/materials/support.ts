@@ -1,7 +1,8 @@
 /** Helpers for the material-library integration tests (real MariaDB and the local S3 fake). */
+import type { Knex } from 'knex';
 import { db } from '../../../src/lib/server/db/index';
 import * as users from '../../../src/lib/server/db/users';
-import type { Role } from '../../../src/lib/access/roles';
+import type { Role } from '../../../src/lib/roles';
 import type { User } from '../../../src/lib/server/db/users';
 
 export const DEMO_EMAIL: Record<Role, string> = {
@@ -39,11 +40,11 @@ export async function removeTestMaterials(): Promise<void> {
 }
 
 export async function counts(materialId: number) {
-  const one = async (q: ReturnType<ReturnType<typeof db>>) => Number(((await q.count({ n: '*' }).first()) as { n: number }).n);
+  const one = async <T extends {}>(q: Knex.QueryBuilder<T>) => Number(((await q.count({ n: '*' }).first()) as { n: number }).n);
   return {
     spectra: await one(db()('material_spectra').where({ material_id: materialId })),
     files: await one(db()('stored_files').where({ entity_type: 'material', entity_id: String(materialId) })),
-    version: Number((await db()('materials').where({ id: materialId }).first('version')).version),
+    version: Number((await db()('materials').where({ id: materialId }).first('version'))!.version),
     audit: await one(db()('audit_events').where({ entity_type: 'material', entity_id: String(materialId) }))
   };
 }

@@ -12,7 +12,7 @@ let created = false;
 let rhea: User;
 const formulationIds: number[] = [];
 
-async function addRevision(state: string, contentJson: string): Promise<void> {
+async function addRevision(state: 'draft' | 'submitted' | 'approved' | 'returned' | 'superseded' | 'withdrawn', contentJson: string): Promise<void> {
   const [fid] = await db()('formulations').insert({ code: `TST-F${Date.now() % 1e7}${formulationIds.length}`, name: 'usage probe', description: '', created_by: rhea.id });
   formulationIds.push(fid);
   await db()('formulation_revisions').insert({

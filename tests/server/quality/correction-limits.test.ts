@@ -90,7 +90,7 @@ describe('a capped trim records the cap and the colour point to expect', () => {
     expect(draft.content.notes).toContain(`expect x ${p.x.toFixed(4)}, y ${p.y.toFixed(4)} (${Math.round(p.cct)} K, Duv `);
     expect(draft.content.notes).toContain(`${out.predictedSteps.toFixed(1)} steps from target.`);
     const row = await db()('batch_corrections').where({ batch_id: b.batchId }).first();
-    expect(JSON.parse(row.detail_json).cap).toEqual(out.cap);
+    expect(JSON.parse(row!.detail_json).cap).toEqual(out.cap);
 
     // The colour to expect is the model of the recipe handed over plus the bias measured on this batch
     // (the correction's own definition), checked here from the draft's wt % as saved.

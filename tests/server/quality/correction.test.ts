@@ -51,7 +51,7 @@ describe('correction draft from a biased batch', () => {
     expect(draft.content.notes).toContain(`Correction from batch ${b.batchNumber}`);
     const target = view.target;
     expect(duvp(out.predicted, target)).toBeLessThan(0.1 * duvp(out.measuredMean, target));
-    const row = await db()('batch_corrections').where({ batch_id: b.batchId }).first();
+    const row = (await db()('batch_corrections').where({ batch_id: b.batchId }).first())!;
     expect(row.revision_id).toBe(out.revisionId);
     expect((await batchResults(b.batchId))!.corrections[0].revisionNo).toBe(draft.revisionNo);
     expect((await batchResults(b.batchId))!.plot.markers.map((m) => m.kind)).toContain('corrected');

@@ -72,7 +72,7 @@ describe('releasing a batch with an e-signature', () => {
     expect(d.batch.state).toBe('released');
     expect(d.batch.version).toBe(v + 1);
     expect(d.batch.recordFileId).toBe(out.recordFileId);
-    const row = await db()('batch_dispositions').where({ batch_id: b.batchId }).first();
+    const row = (await db()('batch_dispositions').where({ batch_id: b.batchId }).first())!;
     expect(row.signer_name).toBe(quality.name);
     expect(row.meaning).toBe('Release approval: the batch meets its revision');
     // The stored hash is the SHA-256 of the stored canonical JSON (recomputed here with node:crypto).

@@ -32,7 +32,7 @@ describe('uploading the measured spectra of a batch', () => {
     expect(phases[0]).toBe('parsing');
     expect(phases).toContain('m12');
     expect(phases.at(-1)).toBe('saving');
-    const up = await db()('measurement_uploads').where({ id: res.uploadId }).first();
+    const up = (await db()('measurement_uploads').where({ id: res.uploadId }).first())!;
     const stored = (await getFile(up.stored_file_id))!;
     expect(stored.body.toString('utf8')).toBe(csv);
     expect(stored.row.purpose).toBe('measurement');
@@ -79,7 +79,7 @@ describe('uploading the measured spectra of a batch', () => {
   });
 
   it('a withdrawn upload leaves the results but stays on record; then the parts can be measured again', async () => {
-    const up = await db()('measurement_uploads').where({ batch_id: batch.batchId }).first('id');
+    const up = (await db()('measurement_uploads').where({ batch_id: batch.batchId }).first('id'))!;
     await withdrawUpload(quality, batch.batchId, up.id, 'Sphere not warmed up');
     const view = (await batchResults(batch.batchId))!;
     expect(view.parts).toHaveLength(0);

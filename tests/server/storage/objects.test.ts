@@ -21,7 +21,7 @@ describe('object storage (S3 API, local fake)', () => {
     let key = '';
     await expect(db().transaction(async (trx) => {
       const id = await putFile({ body: Buffer.from('x'), originalName: 'x.txt', contentType: 'text/plain', purpose: 'attachment' }, trx);
-      key = (await trx('stored_files').where({ id }).first()).storage_key;
+      key = (await trx('stored_files').where({ id }).first())!.storage_key;
       throw new Error('later step failed');
     })).rejects.toThrow('later step failed');
     expect(await db()('stored_files').where({ storage_key: key }).first()).toBeUndefined();

@@ -25,7 +25,7 @@ beforeAll(async () => {
   // An upload whose process died after the put, before its row: an object with no row.
   await s3().send(new PutObjectCommand({ Bucket: bucket(), Key: orphanKey, Body: '380,0.1\n' }));
   keptId = await putFile({ body: Buffer.from('380,0.2\n'), originalName: 'kept.csv', contentType: 'text/csv', purpose: 'measurement' });
-  keptKey = (await db()('stored_files').where({ id: keptId }).first('storage_key')).storage_key;
+  keptKey = (await db()('stored_files').where({ id: keptId }).first('storage_key'))!.storage_key;
   // A row whose object is gone (a lost file).
   [missingId] = await db()('stored_files').insert({ storage_key: missingKey, original_name: 'lost.csv', content_type: 'text/csv', bytes: 9, sha256: '0'.repeat(64), purpose: 'measurement' });
 });

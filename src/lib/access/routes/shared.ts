@@ -1,5 +1,5 @@
 /** Types and role groups shared by the per-feature route tables. */
-import type { Role } from '../roles';
+import type { Role } from '../../roles';
 
 export type Audience = 'public' | 'signedIn' | readonly Role[];
 export type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -15,4 +15,4 @@ export interface RouteRule {
 
 export type RouteTable = Record<string, RouteRule>;
 
-export { ADMIN, ALL, FORMULATION_EDITORS, LINE, QUALITY, REVISION_ACTORS } from '../roles';
+export { ADMIN, ALL, FORMULATION_EDITORS, LINE, QUALITY, REVISION_ACTORS } from '../../roles';

@@ -6,6 +6,9 @@ import Papa from 'papaparse';
 import { z } from 'zod';
 import type { Knex } from 'knex';
 import { db } from '../db/index';
+import type { AuditRow } from '../../audit/types';
+
+export type { AuditRow } from '../../audit/types';
 
 const day = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'dates as YYYY-MM-DD');
 
@@ -21,20 +24,6 @@ export const auditQuerySchema = z.object({
 }).refine((q) => !q.from || !q.to || q.from <= q.to, 'the "from" date must not be after the "to" date');
 
 export type AuditQuery = z.infer<typeof auditQuerySchema>;
-
-export interface AuditRow {
-  id: number;
-  at: Date;
-  actorId: number | null;
-  actorEmail: string | null;
-  actorName: string | null;
-  entityType: string;
-  entityId: string | null;
-  action: string;
-  before: string | null;
-  after: string | null;
-  ip: string | null;
-}
 
 /** CSV rows above this are refused: narrow the filter instead. */
 export const MAX_EXPORT_ROWS = 50_000;

@@ -10,9 +10,10 @@ export const WINDOW_MINUTES = 15;
 
 export async function isThrottled(email: string): Promise<boolean> {
   const key = email.toLowerCase();
-  const lastSuccess = await db()('sign_in_attempts').where({ email: key, succeeded: true }).max('created_at as at').first();
+  const lastSuccess = await db()('sign_in_attempts').where({ email: key, succeeded: 1 })
+    .max<{ at: Date | null }[]>('created_at as at').first();
   const q = db()('sign_in_attempts')
-    .where({ email: key, succeeded: false })
+    .where({ email: key, succeeded: 0 })
     .andWhere('created_at', '>', db().raw(`NOW(3) - INTERVAL ${WINDOW_MINUTES} MINUTE`));
   if (lastSuccess?.at) q.andWhere('created_at', '>', lastSuccess.at);
   const row = await q.count<{ n: number }[]>('id as n').first();

@@ -1,7 +1,8 @@
 /** Personal API tokens: random, shown once, stored as a SHA-256 hash, revocable, expiring. */
 import { createHash, randomBytes } from 'node:crypto';
+import type { Knex } from 'knex';
 import { db } from '../db/index';
-import { isRole } from '../../access/roles';
+import { isRole } from '../../roles';
 import type { User } from '../db/users';
 
 export const TOKEN_PREFIX = 'pfk_';
@@ -16,9 +17,9 @@ export function newSecret(): string {
 
 export interface TokenInfo { id: number; name: string; prefix: string; expiresAt: Date; revokedAt: Date | null; lastUsedAt: Date | null; createdAt: Date }
 
-export async function create(userId: number, name: string, days: number): Promise<{ id: number; token: string }> {
+export async function create(userId: number, name: string, days: number, k: Knex | Knex.Transaction = db()): Promise<{ id: number; token: string }> {
   const token = newSecret();
-  const [id] = await db()('api_tokens').insert({
+  const [id] = await k('api_tokens').insert({
     user_id: userId, name, token_hash: sha256Hex(token), prefix: token.slice(0, 10),
     expires_at: new Date(Date.now() + days * 86_400_000)
   });
@@ -30,8 +31,8 @@ export async function listFor(userId: number): Promise<TokenInfo[]> {
   return rows.map((r) => ({ id: r.id, name: r.name, prefix: r.prefix, expiresAt: r.expires_at, revokedAt: r.revoked_at, lastUsedAt: r.last_used_at, createdAt: r.created_at }));
 }
 
-export async function revoke(userId: number, id: number): Promise<boolean> {
-  const n = await db()('api_tokens').where({ id, user_id: userId }).whereNull('revoked_at').update({ revoked_at: db().fn.now() });
+export async function revoke(userId: number, id: number, k: Knex | Knex.Transaction = db()): Promise<boolean> {
+  const n = await k('api_tokens').where({ id, user_id: userId }).whereNull('revoked_at').update({ revoked_at: k.fn.now() });
   return n > 0;
 }
 

@@ -2,10 +2,10 @@
 import type { Knex } from 'knex';
 import { conflict, notFound } from './errors';
 import type { BatchState } from '../../schemas/batches';
+import type { BatchLineRow, BatchRow } from '../db/tables';
 
-/* eslint-disable @typescript-eslint/no-explicit-any -- Knex rows */
-export interface LockedBatch { [column: string]: any; id: number; batch_number: string; state: BatchState; version: number }
-export interface LockedLine { [column: string]: any; id: number; seq: number; code: string; material_id: number | null; version: number }
+export type LockedBatch = BatchRow;
+export type LockedLine = BatchLineRow;
 
 export async function lockBatch(trx: Knex.Transaction, id: number): Promise<LockedBatch> {
   const row = Number.isSafeInteger(id) && id > 0 ? await trx('batches').where({ id }).forUpdate().first() : undefined;

@@ -7,6 +7,7 @@ import { db } from '../db/index';
 import { getRevision, type RevisionRecord } from '../formulations/read';
 import { toBatch, toLine, toSummary, type Batch, type BatchLine, type BatchSummary } from './records';
 import type { BatchState } from '../../schemas/batches';
+import type { BatchLineRow } from '../db/tables';
 
 export type { Batch, BatchLine, BatchSummary } from './records';
 
@@ -29,7 +30,13 @@ export function batchQuery(k: Q = db()): Knex.QueryBuilder {
     .select('b.*', 'cu.name as created_by_name', 'mu.name as mixed_by_name', 'du.name as completed_by_name');
 }
 
-export async function lineRows(batchId: number, k: Q = db()): Promise<Record<string, unknown>[]> {
+/** A batch line as read with its people and its lot (joined). */
+export type LineReadRow = BatchLineRow & {
+  weighed_by_name: string | null; override_by_name: string | null; lot_supplier: string | null; lot_expires_on: Date | null;
+  lot_material_code: string | null; lot_material_id: number | null;
+};
+
+export async function lineRows(batchId: number, k: Q = db()): Promise<LineReadRow[]> {
   return k('batch_lines as l')
     .leftJoin('users as wu', 'wu.id', 'l.weighed_by')
     .leftJoin('users as ou', 'ou.id', 'l.override_by')

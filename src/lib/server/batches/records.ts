@@ -2,9 +2,11 @@
 import { Rat } from '../../weighout/rational';
 import type { BatchTarget } from '../../weighout/target';
 import type { WeighoutInput, LoadingBasis } from '../../weighout/schema';
-import type { PlannedLine } from '../../weighout/compute';
-import type { ActualStatus } from '../../weighout/actual';
 import type { BatchState } from '../../schemas/batches';
+import type { BatchLine } from '../../batches/types';
+import type { BatchLineRow, BatchRow } from '../db/tables';
+
+export type { BatchLine } from '../../batches/types';
 
 export interface BatchSummary {
   id: number;
@@ -53,23 +55,6 @@ export interface Batch extends BatchSummary {
   updatedAt: Date;
 }
 
-/** A stored line: the planned fields (as computed) plus the reading, lot, people and quality decision. */
-export interface BatchLine extends Pick<PlannedLine, 'seq' | 'role' | 'materialId' | 'code' | 'name' | 'basisPct' | 'idealG' | 'targetG' | 'lowG' | 'highG' | 'tolerance'> {
-  id: number;
-  actualG: string | null;
-  actualStatus: ActualStatus | null;
-  lotId: number | null;
-  lotNumber: string | null;
-  weighedBy: number | null;
-  weighedByName: string | null;
-  weighedAt: Date | null;
-  overrideBy: number | null;
-  overrideByName: string | null;
-  overrideAt: Date | null;
-  overrideReason: string | null;
-  version: number;
-}
-
 /** A DECIMAL read as a JS number (mysql2 decimalNumbers) back to its exact decimal text, to `places` or more. */
 export function decimalText(v: number | string, places: number): string {
   const r = typeof v === 'string' ? Rat.parse(v)! : Rat.fromNumber(v);
@@ -78,8 +63,9 @@ export function decimalText(v: number | string, places: number): string {
 
 const num = (v: unknown): number | null => (v === null || v === undefined ? null : Number(v));
 
-/* eslint-disable @typescript-eslint/no-explicit-any -- rows come untyped from Knex */
-type Row = Record<string, any>;
+/** A batch row as read, with the names of its people when the query joins them. */
+type Row = BatchRow & { created_by_name?: string | null; mixed_by_name?: string | null; completed_by_name?: string | null };
+type LineRow = BatchLineRow & { weighed_by_name?: string | null; override_by_name?: string | null };
 
 export function placesOf(resolutionG: number | string): number {
   return (typeof resolutionG === 'string' ? Rat.parse(resolutionG)! : Rat.fromNumber(resolutionG)).decimalPlaces() ?? 6;
@@ -109,7 +95,7 @@ export function toBatch(r: Row): Batch {
   };
 }
 
-export function toLine(r: Row, places: number): BatchLine {
+export function toLine(r: LineRow, places: number): BatchLine {
   return {
     id: r.id, seq: r.seq, role: r.role, materialId: r.material_id, code: r.code, name: r.name, basisPct: num(r.basis_pct),
     idealG: decimalText(r.ideal_g, places), targetG: decimalText(r.target_g, places), lowG: decimalText(r.low_g, places), highG: decimalText(r.high_g, places),

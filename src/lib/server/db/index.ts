@@ -1,6 +1,7 @@
 /** The one Knex instance of the app (created on first use). */
 import knexFactory, { type Knex } from 'knex';
 import { config } from '../config';
+import type {} from './tables';
 
 let instance: Knex | undefined;
 

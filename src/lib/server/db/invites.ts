@@ -2,7 +2,7 @@
 import { randomBytes } from 'node:crypto';
 import { db } from './index';
 import { sha256Hex } from '../auth/tokens';
-import { isRole, type Role } from '../../access/roles';
+import { isRole, type Role } from '../../roles';
 
 export const INVITE_HOURS = 72;
 

@@ -1,6 +1,6 @@
 /** Users and their roles. */
 import { db } from './index';
-import { isRole, type Role } from '../../access/roles';
+import { isRole, type Role } from '../../roles';
 
 export interface User {
   id: number;

@@ -1,5 +1,5 @@
 /** Applies the state machine's rules in the server layer: wrong state → 409, wrong person or role → 403. */
-import type { Role } from '../../access/roles';
+import type { Role } from '../../roles';
 import { COMMAND_RULES, refusal, type RevisionCommand } from '../../formulations/workflow-rules';
 import type { RevisionState } from '../../formulations/workflow-rules';
 import { ConflictError, PermissionError } from './errors';

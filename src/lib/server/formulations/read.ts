@@ -6,8 +6,10 @@ import type { Knex } from 'knex';
 import { db } from '../db/index';
 import { REVISION_COLUMNS, toRevisionRecord, type RevisionRecord, type RevisionRow } from './records';
 import { storedContentSha256 } from './hash';
+import type { AttachmentRecord, FormulationRecord, SignatureRecord } from '../../formulations/types';
 
 export type { RevisionRecord } from './records';
+export type { AttachmentRecord, FormulationRecord, SignatureRecord } from '../../formulations/types';
 
 export function revisionQuery(k: Knex | Knex.Transaction = db()): Knex.QueryBuilder {
   return k('formulation_revisions as r')
@@ -35,35 +37,11 @@ export async function currentApprovedRevision(formulationId: number, k?: Knex | 
   return row ? toRevisionRecord(row) : null;
 }
 
-export interface FormulationRecord {
-  id: number;
-  code: string;
-  name: string;
-  description: string | null;
-  version: number;
-  createdBy: number | null;
-  createdByName: string | null;
-  createdAt: Date;
-  updatedAt: Date;
-}
-
 export async function getFormulation(id: number): Promise<FormulationRecord | null> {
   if (!Number.isSafeInteger(id) || id <= 0) return null;
   const r = await db()('formulations as f').leftJoin('users as u', 'u.id', 'f.created_by').where('f.id', id).first('f.*', 'u.name as created_by_name');
   if (!r) return null;
   return { id: r.id, code: r.code, name: r.name, description: r.description, version: r.version, createdBy: r.created_by, createdByName: r.created_by_name, createdAt: r.created_at, updatedAt: r.updated_at };
-}
-
-export interface SignatureRecord {
-  id: number;
-  revisionId: number;
-  signerId: number;
-  signerName: string;
-  signerEmail: string;
-  meaning: string;
-  comment: string | null;
-  signedAt: Date;
-  contentSha256: string;
 }
 
 export async function listSignatures(revisionId: number): Promise<SignatureRecord[]> {
@@ -72,16 +50,6 @@ export async function listSignatures(revisionId: number): Promise<SignatureRecor
     id: s.id, revisionId: s.revision_id, signerId: s.signer_id, signerName: s.signer_name, signerEmail: s.signer_email,
     meaning: s.meaning, comment: s.comment, signedAt: s.signed_at, contentSha256: s.content_sha256
   }));
-}
-
-export interface AttachmentRecord {
-  id: number;
-  storedFileId: number;
-  label: string;
-  originalName: string;
-  contentType: string;
-  bytes: number;
-  createdAt: Date;
 }
 
 export async function listAttachments(revisionId: number): Promise<AttachmentRecord[]> {

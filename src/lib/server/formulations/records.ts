@@ -1,36 +1,9 @@
 /** Row → record mapping of formulation revisions (snake_case columns to camelCase; content read through the recipe reader). */
-import { parseRecipe, type RevisionContent } from '../../recipe';
+import { parseRecipe } from '../../recipe';
+import type { RevisionRecord } from '../../formulations/types';
 import type { RevisionState } from '../../formulations/workflow-rules';
-import type { RevisionPrediction } from '../../formulations/prediction';
 
-export interface RevisionRecord {
-  id: number;
-  formulationId: number;
-  formulationCode: string;
-  formulationName: string;
-  revisionNo: number;
-  state: RevisionState;
-  content: RevisionContent;
-  predicted: RevisionPrediction;
-  coreVersion: string;
-  contentSha256: string;
-  version: number;
-  createdBy: number;
-  createdByName: string;
-  createdAt: Date;
-  updatedAt: Date;
-  submittedAt: Date | null;
-  submittedBy: number | null;
-  decidedAt: Date | null;
-  decidedBy: number | null;
-  decidedByName: string | null;
-  supersededAt: Date | null;
-  supersedesRevisionId: number | null;
-  basedOnRevisionId: number | null;
-  sourceBatchId: number | null;
-  returnReason: string | null;
-  withdrawReason: string | null;
-}
+export type { RevisionRecord } from '../../formulations/types';
 
 /** Columns selected for a revision record (joined with its formulation and people). */
 export const REVISION_COLUMNS = [

@@ -139,6 +139,7 @@ export async function updateDraft(caller: Caller, revisionId: number, version: n
   const prepared = await prepareRevision(db(), content);
   return db().transaction(async (trx) => {
     const row = await trx('formulation_revisions').where({ id: revisionId }).forUpdate().first();
+    if (!row) throw new NotFoundError(`Revision ${revisionId} does not exist.`);
     enforce('edit', caller, { state: row.state, createdBy: row.created_by, version: row.version });
     checkVersion(version, row.version, row.state);
     const changed = await trx('formulation_revisions').where({ id: revisionId, version, state: 'draft' }).update({

@@ -23,3 +23,9 @@ export async function listSiliconeSystems(): Promise<SiliconeSystem[]> {
     refractiveIndex: r.refractive_index === null ? null : Number(r.refractive_index), safetyNote: r.safety_note
   }));
 }
+
+/** The handling notes of a silicone system shown beside a revision, or null when it is not on file. */
+export async function siliconeHandling(id: number): Promise<{ safetyNote: string; degasNotes: string | null } | null> {
+  const row = await db()('silicone_systems').where({ id }).first('safety_note', 'degas_notes');
+  return row ? { safetyNote: row.safety_note as string, degasNotes: row.degas_notes as string | null } : null;
+}

@@ -45,7 +45,9 @@ async function lockRevision(trx: Knex.Transaction, revisionId: number): Promise<
   if (!head) throw new NotFoundError(`Revision ${revisionId} does not exist.`);
   // Lock the formulation first so approvals of one formulation run one at a time.
   await trx('formulations').where({ id: head.formulation_id }).forUpdate().first('id');
-  return trx('formulation_revisions').where({ id: revisionId }).forUpdate().first();
+  const row = await trx('formulation_revisions').where({ id: revisionId }).forUpdate().first();
+  if (!row) throw new NotFoundError(`Revision ${revisionId} does not exist.`);
+  return row;
 }
 
 async function precheck(command: RevisionCommand, caller: Caller, revisionId: number): Promise<void> {

@@ -1,14 +1,8 @@
 /** Edit history of a material, read from the append-only audit trail. */
 import { db } from '../db/index';
+import type { HistoryEntry } from '../../materials/types';
 
-export interface HistoryEntry {
-  id: number;
-  at: Date;
-  actor: string;
-  action: string;
-  /** "field: old → new" lines, or a short description of the event. */
-  changes: string[];
-}
+export type { HistoryEntry } from '../../materials/types';
 
 const ACTION_LABELS: Record<string, string> = {
   create: 'Created', update: 'Edited', archive: 'Archived', restore: 'Restored', delete: 'Deleted',

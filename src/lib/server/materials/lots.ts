@@ -7,20 +7,9 @@ import { notFound } from './errors';
 import { assertPdf } from './pdf-file';
 import * as records from './records';
 import type { User } from '../db/users';
+import type { Lot } from '../../materials/types';
 
-export interface Lot {
-  id: number;
-  materialId: number;
-  lotNumber: string;
-  supplier: string | null;
-  receivedOn: string | null;
-  expiresOn: string | null;
-  certificateFileId: number | null;
-  certificateName: string | null;
-  notes: string | null;
-  createdByName: string | null;
-  createdAt: Date;
-}
+export type { Lot } from '../../materials/types';
 
 export interface LotInput {
   lotNumber: string;

@@ -1,6 +1,7 @@
 /** Rows of `materials` ↔ camelCase records; list and get queries. */
 import type { Knex } from 'knex';
 import { db } from '../db/index';
+import type { MaterialRow } from '../db/tables';
 
 export const MATERIAL_KINDS = ['pump', 'phosphor'] as const;
 export type MaterialKind = (typeof MATERIAL_KINDS)[number];
@@ -46,7 +47,7 @@ export type MaterialFields = { [K in EditableField]: Material[K] };
 type Row = Record<string, unknown>;
 const num = (v: unknown): number | null => (v === null || v === undefined ? null : Number(v));
 
-export function toMaterial(r: Row): Material {
+export function toMaterial(r: Row | MaterialRow): Material {
   return {
     id: Number(r.id), kind: r.kind as MaterialKind, code: String(r.code), name: String(r.name),
     family: (r.family as string) ?? null, supplier: (r.supplier as string) ?? null,
@@ -56,7 +57,7 @@ export function toMaterial(r: Row): Material {
     safetyNote: (r.safety_note as string) ?? null, emissionSpectrumId: num(r.emission_spectrum_id),
     excitationSpectrumId: num(r.excitation_spectrum_id), archivedAt: (r.archived_at as Date) ?? null,
     version: Number(r.version), createdBy: num(r.created_by), updatedBy: num(r.updated_by),
-    createdByName: (r.created_by_name as string) ?? null, updatedByName: (r.updated_by_name as string) ?? null,
+    createdByName: ((r as Row).created_by_name as string) ?? null, updatedByName: ((r as Row).updated_by_name as string) ?? null,
     createdAt: r.created_at as Date, updatedAt: r.updated_at as Date
   };
 }

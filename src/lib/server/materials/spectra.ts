@@ -2,24 +2,10 @@
 import type { Knex } from 'knex';
 import { db } from '../db/index';
 import type { Spd } from '../../spectral/types';
+import type { SpectrumKind, StoredSpectrum } from '../../materials/types';
 
-export const SPECTRUM_KINDS = ['emission', 'excitation'] as const;
-export type SpectrumKind = (typeof SPECTRUM_KINDS)[number];
+export { SPECTRUM_KINDS, type SpectrumKind, type StoredSpectrum } from '../../materials/types';
 
-export interface StoredSpectrum extends Spd {
-  id: number;
-  materialId: number;
-  kind: SpectrumKind;
-  points: number;
-  minNm: number;
-  maxNm: number;
-  sourceFileId: number | null;
-  sourceFileName: string | null;
-  origin: string;
-  createdBy: number | null;
-  createdByName: string | null;
-  createdAt: Date;
-}
 
 type Row = Record<string, unknown>;
 

@@ -1,5 +1,5 @@
 /** Who acts on a batch's measurements, and the role rule: quality (and admins) act, everyone reads. */
-import type { Role } from '../../access/roles';
+import type { Role } from '../../roles';
 import { mayJudgeBatches } from '../../access/policies';
 import { forbidden } from './errors';
 

@@ -7,7 +7,7 @@ import { hashPassword } from '../auth/passwords';
 import { sha256Hex } from '../auth/tokens';
 import { send } from '../mail/index';
 import { inviteMessage } from '../mail/templates/invite';
-import type { Role } from '../../access/roles';
+import type { Role } from '../../roles';
 import type { User } from '../db/users';
 import { DomainError } from '../../errors/domain-error';
 

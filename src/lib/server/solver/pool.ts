@@ -14,7 +14,7 @@ import { BlendInputError } from '../../blend/errors';
 import { solveBlend, type SolveProblem, type SolveResult } from '../../blend/index';
 import { SpectrumInputError } from '../../spectral/errors';
 
-const WORKER_FILE = resolve(process.env.PF_SOLVE_WORKER ?? 'build/solve-worker.js');
+const workerFile = (): string => resolve(config().solveWorkerFile);
 
 interface Slot { worker: Worker; busy: Set<number> }
 type Pending = { resolve: (r: SolveResult) => void; reject: (e: Error) => void };
@@ -30,7 +30,7 @@ function revive(error: { name: string; message: string }): Error {
 }
 
 function startSlot(): Slot {
-  const worker = new Worker(WORKER_FILE);
+  const worker = new Worker(workerFile());
   worker.unref();
   const slot: Slot = { worker, busy: new Set<number>() };
   worker.on('message', (m: { id: number; result?: SolveResult; error?: { name: string; message: string } }) => {
@@ -62,7 +62,7 @@ export function workerCount(setting: number | null = config().solveWorkers): num
 /** Workers only when this module runs from the built app (build/server/…); dev server and tests solve in-thread. */
 export function usesWorkers(): boolean {
   const built = import.meta.url.includes('/build/server/');
-  return built && workerCount() > 0 && existsSync(WORKER_FILE);
+  return built && workerCount() > 0 && existsSync(workerFile());
 }
 
 /** Solves in a worker thread when the bundled worker exists, else in this thread. */

@@ -9,6 +9,9 @@ import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand } from '@aws-sd
 import type { Knex } from 'knex';
 import { db } from '../db/index';
 import { bucket, ensureBucket, s3 } from './client';
+import type { StoredFileRow } from '../../storage/types';
+
+export type { StoredFileRow } from '../../storage/types';
 
 export const FILE_PURPOSES = ['spectrum-source', 'safety-data-sheet', 'certificate', 'ticket', 'batch-record', 'measurement', 'attachment'] as const;
 export type FilePurpose = (typeof FILE_PURPOSES)[number];
@@ -21,20 +24,6 @@ export interface PutFileInput {
   entityType?: string | null;
   entityId?: string | number | null;
   uploadedBy?: number | null;
-}
-
-export interface StoredFileRow {
-  id: number;
-  storageKey: string;
-  originalName: string;
-  contentType: string;
-  bytes: number;
-  sha256: string;
-  purpose: string;
-  entityType: string | null;
-  entityId: string | null;
-  uploadedBy: number | null;
-  createdAt: Date;
 }
 
 interface DbRow {

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
 import { parseId } from '$lib/server/http/id-param';
 import * as tokens from '$lib/server/auth/tokens';
-import * as audit from '$lib/server/db/audit';
+import { issueToken, revokeToken } from '$lib/server/auth/token-commands';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
@@ -23,15 +23,13 @@ export const actions: Actions = {
     const form = Object.fromEntries(await readForm(request));
     const parsed = createSchema.safeParse(form);
     if (!parsed.success) return actionFailure(400, { values: { name: String(form.name ?? ''), days: String(form.days ?? '') }, errors: z.flattenError(parsed.error).fieldErrors });
-    const { id, token } = await tokens.create(user.id, parsed.data.name, parsed.data.days);
-    await audit.record({ actorId: user.id, actorEmail: user.email, entityType: 'api_token', entityId: id, action: 'create', after: { name: parsed.data.name, days: parsed.data.days } });
+    const { token } = await issueToken(user, parsed.data.name, parsed.data.days);
     return { created: { name: parsed.data.name, token } };
   },
   revokeToken: async ({ locals, request }) => {
     const user = requireUser(locals);
     const id = parseId(String((await readForm(request)).get('id') ?? ''));
-    if (id === null || !(await tokens.revoke(user.id, id))) return actionFailure(404, { revokeError: 'No such active token.' });
-    await audit.record({ actorId: user.id, actorEmail: user.email, entityType: 'api_token', entityId: id, action: 'revoke' });
+    if (id === null || !(await revokeToken(user, id))) return actionFailure(404, { revokeError: 'No such active token.' });
     return { revoked: id };
   }
 };

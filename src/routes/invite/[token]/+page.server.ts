@@ -1,14 +1,14 @@
 import { redirect } from '@sveltejs/kit';
 import { actionFailure } from '$lib/server/http/action-failure';
 import { z } from 'zod';
-import * as invites from '$lib/server/db/invites';
+import { findOpenInvite } from '$lib/server/accounts/directory';
 import * as accounts from '$lib/server/services/accounts';
 import { acceptSchema } from '$lib/schemas/accounts';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = async ({ params }) => {
-  const open = await invites.findOpen(params.token);
+  const open = await findOpenInvite(params.token);
   return { invite: open ? { email: open.email, roles: open.roles } : null };
 };
 

@@ -2,8 +2,7 @@ import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
 import { mayAdminister } from '$lib/access/policies';
 import { actionFailure } from '$lib/server/http/action-failure';
-import * as users from '$lib/server/db/users';
-import * as invites from '$lib/server/db/invites';
+import { listOpenInvites, listPeople } from '$lib/server/accounts/directory';
 import * as accounts from '$lib/server/services/accounts';
 import { inviteSchema, rolesSchema, activeSchema } from '$lib/schemas/accounts';
 import type { Actions, PageServerLoad } from './$types';
@@ -11,7 +10,7 @@ import { readForm } from '$lib/server/forms/read-form';
 
 export const load: PageServerLoad = async ({ locals }) => {
   requireUser(locals, mayAdminister);
-  return { people: await users.list(), openInvites: await invites.listOpen() };
+  return { people: await listPeople(), openInvites: await listOpenInvites() };
 };
 
 async function guarded<T>(fn: () => Promise<T>) {

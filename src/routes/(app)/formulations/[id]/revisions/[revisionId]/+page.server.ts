@@ -1,7 +1,6 @@
 import { error, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
-import { db } from '$lib/server/db/index';
 import { eventsFor } from '$lib/server/audit/search';
 import { currentApprovedRevision, getRevision, listAttachments, listSignatures, storedContentVerified } from '$lib/server/formulations/read';
 import { contentFromForm, editorOptions } from '$lib/server/formulations/page-support';
@@ -10,6 +9,7 @@ import { invalid } from '$lib/errors/domain-error';
 import { actionFailure } from '$lib/server/http/action-failure';
 import { idParam } from '$lib/server/http/id-param';
 import { createRevision, updateDraft } from '$lib/server/formulations/save';
+import { siliconeHandling } from '$lib/server/formulations/silicone';
 import { returnRevision, sign, submit, withdraw } from '$lib/server/formulations/workflow';
 import { addAttachment, removeAttachment } from '$lib/server/formulations/attachments';
 import { contentToFormValues, formDataToValues, type FormValues } from '$lib/formulations/form-values';
@@ -40,7 +40,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
   const commands = allowedCommands(user, rev);
   const [signatures, attachments, history, current, silicone, hashVerified] = await Promise.all([
     listSignatures(rev.id), listAttachments(rev.id), eventsFor('formulation_revision', rev.id), currentApprovedRevision(rev.formulationId),
-    rev.content.silicone.siliconeSystemId ? db()('silicone_systems').where({ id: rev.content.silicone.siliconeSystemId }).first('safety_note', 'degas_notes') : null,
+    rev.content.silicone.siliconeSystemId ? siliconeHandling(rev.content.silicone.siliconeSystemId) : null,
     storedContentVerified(rev.id)
   ]);
   return {
@@ -53,7 +53,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     hashVerified,
     canStartDraft: mayAuthorFormulations(user),
     editor: commands.includes('edit') ? { values: contentToFormValues(rev.content), options: await editorOptions() } : null,
-    silicone: silicone ? { safetyNote: silicone.safety_note as string, degasNotes: silicone.degas_notes as string | null } : null
+    silicone
   };
 };
 
