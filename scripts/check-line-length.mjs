@@ -17,7 +17,16 @@ const GENERATED = ['src/lib/spectral/data/'];
  * @param {string} path
  */
 export function isChecked(path) {
-  return CODE.test(path) && !GENERATED.some((dir) => path.startsWith(dir));
+  return CODE.test(path) && !GENERATED.some((dir) => path.startsWith(dir)) && !landedBeforeRule(path);
+}
+
+/** Migrations that landed before this rule are never edited (not even re-wrapped), so they are exempt. */
+const RULE_SINCE = '20261204000000';
+
+/** @param {string} path */
+function landedBeforeRule(path) {
+  const m = /^migrations\/(\d{14})_/.exec(path);
+  return m !== null && m[1] < RULE_SINCE;
 }
 
 /**

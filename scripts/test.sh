@@ -29,6 +29,7 @@ fresh_database || exit 1
 wait_for_fakes || exit 1
 step "migrate + seed" bash -c "npm run --silent db:migrate && npm run --silent db:seed"
 step "svelte-check" npm run --silent check
+step "lint (ESLint, Prettier, line length)" npm run --silent lint
 step "vitest (unit + integration)" npx vitest run
 step "build" bash -c "npm run --silent build > .runtime/build-test.log 2>&1 || { tail -40 .runtime/build-test.log; exit 1; }"
 step "playwright (e2e, Chromium)" npx playwright test
