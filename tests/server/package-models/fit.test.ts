@@ -106,7 +106,9 @@ describe('package models: create by fit through the API, versions, refusals that
   }
 
   it('a technician may not fit (403)', async () => {
-    await expect(post(body(), tomas)).rejects.toMatchObject({ status: 403 });
+    const res = await post(body(), tomas);
+    expect(res.status).toBe(403);
+    expect(await res.json()).toMatchObject({ error: expect.stringMatching(/^Forbidden/) });
   });
 });
 
