@@ -12,7 +12,7 @@ import { codeOnly, importsOf, repoRoot, sourceFiles, within, type ImportRef } fr
 const lib = (...names: string[]) => names.map((n) => `src/lib/${n}`);
 
 /** The pure modules: computation, schemas and the types pages share with the server. */
-const PURE = lib('spectral', 'blend', 'aim', 'recipe', 'weighout', 'quality', 'charts', 'formulations', 'materials', 'designer',
+const PURE = lib('spectral', 'blend', 'aim', 'recipe', 'weighout', 'quality', 'charts', 'formulations', 'library', 'designer',
   'spectrum-file', 'access', 'schemas', 'batches', 'audit', 'storage', 'errors', 'roles');
 const SERVER = lib('server');
 const DATABASE = lib('server/db');

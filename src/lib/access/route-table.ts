@@ -7,7 +7,7 @@
 import type { Role } from '../roles';
 import type { Method, RouteRule } from './routes/shared';
 import { CORE_ROUTES } from './routes/core';
-import { MATERIALS_ROUTES } from './routes/materials';
+import { LIBRARY_ROUTES } from './routes/library';
 import { DESIGNER_ROUTES } from './routes/designer';
 import { FORMULATIONS_ROUTES } from './routes/formulations';
 import { BATCHES_ROUTES } from './routes/batches';
@@ -18,7 +18,7 @@ export type { Audience, Method, RouteRule } from './routes/shared';
 
 export const ROUTE_TABLE: Record<string, RouteRule> = {
   ...CORE_ROUTES,
-  ...MATERIALS_ROUTES,
+  ...LIBRARY_ROUTES,
   ...DESIGNER_ROUTES,
   ...FORMULATIONS_ROUTES,
   ...BATCHES_ROUTES,

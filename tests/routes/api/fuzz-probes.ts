@@ -15,7 +15,7 @@ import { getBatch } from '../../../src/lib/server/batches/read';
 import { markMixed, recordLine } from '../../../src/lib/server/batches/weighing';
 import { createBatchSchema } from '../../../src/lib/schemas/batches';
 import { getRevision } from '../../../src/lib/server/formulations/read';
-import { loadBlendComponents } from '../../../src/lib/server/materials/components';
+import { loadBlendComponents } from '../../../src/lib/server/library/components';
 import { fractionsWithLeak, materialIdsOf } from '../../../src/lib/recipe';
 import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';
 import { uploadMeasurements } from '../../../src/lib/server/quality/upload';

@@ -4,7 +4,7 @@ import { uploadMeasurements } from '../../../src/lib/server/quality/upload';
 import { makeCorrectionDraft } from '../../../src/lib/server/quality/correction';
 import { DomainError } from '../../../src/lib/errors/domain-error';
 import { getRevision } from '../../../src/lib/server/formulations/read';
-import { loadBlendComponents } from '../../../src/lib/server/materials/components';
+import { loadBlendComponents } from '../../../src/lib/server/library/components';
 import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';
 import { mix } from '../../../src/lib/blend/mix';
 import { colourDistance } from '../../../src/lib/aim';

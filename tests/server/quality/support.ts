@@ -9,7 +9,7 @@ import { getBatch } from '../../../src/lib/server/batches/read';
 import { markMixed, recordLine } from '../../../src/lib/server/batches/weighing';
 import { completeBatch } from '../../../src/lib/server/batches/complete';
 import { createBatchSchema } from '../../../src/lib/schemas/batches';
-import { loadBlendComponents } from '../../../src/lib/server/materials/components';
+import { loadBlendComponents } from '../../../src/lib/server/library/components';
 import { fractionsWithLeak, materialIdsOf } from '../../../src/lib/recipe';
 import { getRevision } from '../../../src/lib/server/formulations/read';
 import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';

@@ -5,7 +5,7 @@
  */
 import { db } from '../db/index';
 import { DomainError, conflict, unprocessable } from '../../errors/domain-error';
-import { loadBlendComponents } from '../materials/components';
+import { loadBlendComponents } from '../library/components';
 import { prepareBasis, tristimulus } from '../../blend/basis';
 import { toGrid } from '../../blend/grid';
 import { xyzToXy } from '../../spectral/colorimetry/chromaticity';

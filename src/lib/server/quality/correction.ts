@@ -7,7 +7,7 @@
 import { record } from '../db/audit';
 import { send } from '../mail/index';
 import * as users from '../db/users';
-import { loadBlendComponents } from '../materials/components';
+import { loadBlendComponents } from '../library/components';
 import { createCorrectionDraft } from '../formulations/save';
 import { correctionDraftMessage } from '../mail/templates/correction-draft';
 import { BlendInputError } from '../../blend/errors';

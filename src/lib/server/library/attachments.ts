@@ -2,7 +2,7 @@
 import { db } from '../db/index';
 import * as audit from '../db/audit';
 import { deleteFile, listFilesFor, putFile, toStoredFile, type StoredFileRow } from '../storage/objects';
-import { ATTACHMENT_PURPOSES } from '../../schemas/materials';
+import { ATTACHMENT_PURPOSES } from '../../library/schema';
 import { notFound as notFoundError } from '../../errors/domain-error';
 import { notFound } from './errors';
 import { assertPdf } from './pdf-file';

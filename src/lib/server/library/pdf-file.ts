@@ -1,5 +1,5 @@
 /** Checks that an uploaded document is a PDF within the size limit (by its bytes, not only its name). */
-import { MAX_ATTACHMENT_BYTES } from '../../schemas/materials';
+import { MAX_ATTACHMENT_BYTES } from '../../library/schema';
 import { formatBytes } from '../../spectrum-file/parse';
 import { tooLarge, unprocessable, unsupportedType } from '../../errors/domain-error';
 

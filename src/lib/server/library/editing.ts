@@ -6,7 +6,7 @@ import type { Knex } from 'knex';
 import { db } from '../db/index';
 import * as audit from '../db/audit';
 import { deleteStoredObject } from '../storage/objects';
-import { kindIssues, type MaterialFieldsInput } from '../../schemas/materials';
+import { kindIssues, type MaterialFieldsInput } from '../../library/schema';
 import { conflict, invalid } from '../../errors/domain-error';
 import { notFound, staleVersion } from './errors';
 import * as records from './records';

@@ -7,8 +7,8 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { PutObjectCommand } from '@aws-sdk/client-s3';
 import { db, closeDb } from '../../../src/lib/server/db/index';
-import * as editing from '../../../src/lib/server/materials/editing';
-import { uploadSpectrum } from '../../../src/lib/server/materials/spectrum-upload';
+import * as editing from '../../../src/lib/server/library/editing';
+import { uploadSpectrum } from '../../../src/lib/server/library/spectrum-upload';
 import { s3 } from '../../../src/lib/server/storage/client';
 import { demoUser, gaussianCsv, phosphorFields, removeTestMaterials } from './support';
 import { INJECTED, dropLeftoverFaults, expectObjectsGone, failureWithPuts, keysContaining, snapshot, withFailingWrite, type Fault } from '../../support/faults';

@@ -8,7 +8,7 @@ import { requireUser } from '../auth/require';
 import { finiteJson, readJson, readQuery } from '../api/body';
 import { apiHandler } from '../http/api-handler';
 import { idParam } from '../http/id-param';
-import { materialFieldsSchema, materialUpdateApiSchema, spectrumKindSchema, versionSchema } from '../../schemas/materials';
+import { materialFieldsSchema, materialUpdateApiSchema, spectrumKindSchema, versionSchema } from '../../library/schema';
 import { mayEditLibrary, mayRead } from '../../access/policies';
 import { notFound } from './errors';
 import * as records from './records';

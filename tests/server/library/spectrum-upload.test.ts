@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, closeDb } from '../../../src/lib/server/db/index';
-import * as editing from '../../../src/lib/server/materials/editing';
-import * as records from '../../../src/lib/server/materials/records';
-import { uploadSpectrum } from '../../../src/lib/server/materials/spectrum-upload';
+import * as editing from '../../../src/lib/server/library/editing';
+import * as records from '../../../src/lib/server/library/records';
+import { uploadSpectrum } from '../../../src/lib/server/library/spectrum-upload';
 import { getFile } from '../../../src/lib/server/storage/objects';
 import { counts, demoUser, gaussianCsv, phosphorFields, removeTestMaterials } from './support';
 import type { User } from '../../../src/lib/server/db/users';

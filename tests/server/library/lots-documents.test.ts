@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, closeDb } from '../../../src/lib/server/db/index';
-import * as editing from '../../../src/lib/server/materials/editing';
-import * as lots from '../../../src/lib/server/materials/lots';
-import * as attachments from '../../../src/lib/server/materials/attachments';
-import * as history from '../../../src/lib/server/materials/history';
+import * as editing from '../../../src/lib/server/library/editing';
+import * as lots from '../../../src/lib/server/library/lots';
+import * as attachments from '../../../src/lib/server/library/attachments';
+import * as history from '../../../src/lib/server/library/history';
 import { getFile } from '../../../src/lib/server/storage/objects';
 import { demoUser, phosphorFields, removeTestMaterials } from './support';
 import type { User } from '../../../src/lib/server/db/users';

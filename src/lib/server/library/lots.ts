@@ -7,9 +7,9 @@ import { notFound } from './errors';
 import { assertPdf } from './pdf-file';
 import * as records from './records';
 import type { User } from '../db/users';
-import type { Lot } from '../../materials/types';
+import type { Lot } from '../../library/types';
 
-export type { Lot } from '../../materials/types';
+export type { Lot } from '../../library/types';
 
 export interface LotInput {
   lotNumber: string;

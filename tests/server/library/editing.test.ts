@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, closeDb } from '../../../src/lib/server/db/index';
-import * as editing from '../../../src/lib/server/materials/editing';
-import * as records from '../../../src/lib/server/materials/records';
+import * as editing from '../../../src/lib/server/library/editing';
+import * as records from '../../../src/lib/server/library/records';
 import { DomainError } from '../../../src/lib/errors/domain-error';
 import { demoUser, phosphorFields, removeTestMaterials } from './support';
 import type { User } from '../../../src/lib/server/db/users';

@@ -2,9 +2,9 @@
 import type { Knex } from 'knex';
 import { db } from '../db/index';
 import type { Spd } from '../../spectral/types';
-import type { SpectrumKind, StoredSpectrum } from '../../materials/types';
+import type { SpectrumKind, StoredSpectrum } from '../../library/types';
 
-export { SPECTRUM_KINDS, type SpectrumKind, type StoredSpectrum } from '../../materials/types';
+export { SPECTRUM_KINDS, type SpectrumKind, type StoredSpectrum } from '../../library/types';
 
 
 type Row = Record<string, unknown>;

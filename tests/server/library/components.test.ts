@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { db, closeDb } from '../../../src/lib/server/db/index';
-import { listMaterialOptions, loadBlendComponents } from '../../../src/lib/server/materials/components';
+import { listMaterialOptions, loadBlendComponents } from '../../../src/lib/server/library/components';
 import { mix, DEMO_PHOSPHORS } from '../../../src/lib/blend';
 
 const idOf = async (code: string) => Number((await db()('materials').where({ code }).first('id'))!.id);

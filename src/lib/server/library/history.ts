@@ -1,8 +1,8 @@
 /** Edit history of a material, read from the append-only audit trail. */
 import { db } from '../db/index';
-import type { HistoryEntry } from '../../materials/types';
+import type { HistoryEntry } from '../../library/types';
 
-export type { HistoryEntry } from '../../materials/types';
+export type { HistoryEntry } from '../../library/types';
 
 const ACTION_LABELS: Record<string, string> = {
   create: 'Created', update: 'Edited', archive: 'Archived', restore: 'Restored', delete: 'Deleted',

@@ -9,7 +9,7 @@ import * as audit from '../db/audit';
 import { putFile } from '../storage/objects';
 import { DEFAULT_MAX_BYTES, formatBytes, parseSpectrumFile } from '../../spectrum-file/parse';
 import { decodeText } from '../../spectrum-file/decode';
-import { summariseSpectrum, type SpectrumSummary } from '../../materials/spectrum-summary';
+import { summariseSpectrum, type SpectrumSummary } from '../../library/spectrum-summary';
 import { SpectrumInputError } from '../../spectral/errors';
 import { invalid, lineIssue, tooLarge, unprocessable } from '../../errors/domain-error';
 import { notFound } from './errors';

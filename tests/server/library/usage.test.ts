@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, closeDb } from '../../../src/lib/server/db/index';
-import * as editing from '../../../src/lib/server/materials/editing';
-import { revisionsUsing } from '../../../src/lib/server/materials/usage';
+import * as editing from '../../../src/lib/server/library/editing';
+import { revisionsUsing } from '../../../src/lib/server/library/usage';
 import { demoUser, phosphorFields, removeTestMaterials } from './support';
 import type { User } from '../../../src/lib/server/db/users';
 

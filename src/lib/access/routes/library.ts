@@ -2,7 +2,7 @@
 import { ALL, type RouteTable } from './shared';
 import { mayEditLibrary } from '../policies';
 
-export const MATERIALS_ROUTES: RouteTable = {
+export const LIBRARY_ROUTES: RouteTable = {
   '/(app)/library': { sample: '/library', methods: { GET: ALL }, nav: { label: 'Library', order: 10 } },
   '/(app)/library/new': { sample: '/library/new?kind=phosphor', methods: { GET: mayEditLibrary.roles, POST: mayEditLibrary.roles } },
   '/(app)/library/[id]': { sample: '/library/1', methods: { GET: ALL, POST: mayEditLibrary.roles } },

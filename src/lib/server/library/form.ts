@@ -1,6 +1,6 @@
 /** Reading the library's HTML forms: zod on the server, values echoed back on failure (nothing lost). */
 import { z } from 'zod';
-import { materialFieldsSchema, versionSchema, type MaterialFieldsInput } from '../../schemas/materials';
+import { materialFieldsSchema, versionSchema, type MaterialFieldsInput } from '../../library/schema';
 import { EDITABLE_COLUMNS } from './records';
 
 export type FormValues = Record<string, string>;

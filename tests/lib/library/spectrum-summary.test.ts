@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { summariseSpectrum } from '../../../src/lib/materials/spectrum-summary';
+import { summariseSpectrum } from '../../../src/lib/library/spectrum-summary';
 
 const grid = (f: (nm: number) => number, from = 360, to = 830, step = 1) => {
   const wavelengths: number[] = [];

@@ -5,7 +5,7 @@ import * as lots from './lots';
 import * as attachments from './attachments';
 import * as history from './history';
 import { revisionsUsing, describeUse } from './usage';
-import { summariseSpectrum, type SpectrumSummary } from '../../materials/spectrum-summary';
+import { summariseSpectrum, type SpectrumSummary } from '../../library/spectrum-summary';
 import { SpectrumInputError } from '../../spectral/errors';
 import type { Material } from './records';
 import type { StoredSpectrum } from './spectra';
