@@ -17,8 +17,8 @@ import { createBatchSchema } from '../../../src/lib/schemas/batches';
 import { getRevision } from '../../../src/lib/server/formulations/read';
 import { loadBlendComponents } from '../../../src/lib/server/library/components';
 import { fractionsWithLeak, materialIdsOf } from '../../../src/lib/recipe';
-import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';
-import { uploadMeasurements } from '../../../src/lib/server/quality/upload';
+import { syntheticPartsCsv } from '../../../src/lib/measurements/syntheticParts';
+import { uploadMeasurements } from '../../../src/lib/server/measurements/upload';
 import { userByEmail } from './fuzz-support';
 
 const AUTHOR_EMAIL = 'rhea.okafor@kestrelhollow.example';

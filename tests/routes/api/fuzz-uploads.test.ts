@@ -19,7 +19,7 @@ import * as editing from '../../../src/lib/server/library/editing';
 import { decodeText } from '../../../src/lib/spectrum-file/decode';
 import { lineCount } from '../../lib/spectrum-file/arbitraries';
 import { demoUser, phosphorFields } from '../../server/library/support';
-import { completedBatch } from '../../server/quality/support';
+import { completedBatch } from '../../server/measurements/support';
 import { expectObjectsGone, objectExists, watchPuts } from '../../support/faults';
 import { checksums, fileBytes, markedObjects, removeMeasurements, send, storageMonth, uploadArb, uploadRequest, type Answer, type Upload } from './upload-requests';
 import type { User } from '../../../src/lib/server/db/users';

@@ -5,7 +5,7 @@ import { POST as DISPOSE } from '../../../src/routes/api/v1/measurements/[batchI
 import { PUT as ACCEPT } from '../../../src/routes/api/v1/measurements/[batchId]/acceptance/+server';
 import type { User } from '../../../src/lib/server/db/users';
 import { call } from './support';
-import { completedBatch, demoUser, DEMO_PASSWORD, partsCsv } from '../../server/quality/support';
+import { completedBatch, demoUser, DEMO_PASSWORD, partsCsv } from '../../server/measurements/support';
 
 let quality: User;
 let tech: User;

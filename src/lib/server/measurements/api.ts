@@ -1,7 +1,7 @@
 /** Shared plumbing of /api/v1/measurements: the uploaded file and the streamed (NDJSON) answer. */
 import { readUploadedFile } from '../api/upload';
 import { errorAnswer } from '../http/api-handler';
-import { MAX_MEASUREMENT_FILE_BYTES } from '../../schemas/quality';
+import { MAX_MEASUREMENT_FILE_BYTES } from '../../measurements/schema';
 import type { MeasurementFile } from './upload';
 
 /** The file of a measurement upload (see readUploadedFile: multipart `file`, or a text/csv body named by `x-file-name`). */

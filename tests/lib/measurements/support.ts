@@ -1,5 +1,5 @@
 /** Shared builders of the quality tests (part metrics from a colour point; no metric code involved). */
-import type { PartMetrics } from '../../../src/lib/quality/index';
+import type { PartMetrics } from '../../../src/lib/measurements/index';
 import { xyToUvPrime } from '../../../src/lib/spectral/colorimetry/chromaticity';
 
 /** Metrics of a part at (x, y) with good colour rendering unless overridden. */

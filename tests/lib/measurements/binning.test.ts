@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { judgePart, qualityTarget, type Acceptance } from '../../../src/lib/quality/index';
+import { judgePart, qualityTarget, type Acceptance } from '../../../src/lib/measurements/index';
 import { cctDuvToXy } from '../../../src/lib/spectral/index';
 import { metricsAt } from './support';
 

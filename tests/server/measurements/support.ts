@@ -12,7 +12,7 @@ import { createBatchSchema } from '../../../src/lib/schemas/batches';
 import { loadBlendComponents } from '../../../src/lib/server/library/components';
 import { fractionsWithLeak, materialIdsOf } from '../../../src/lib/recipe';
 import { getRevision } from '../../../src/lib/server/formulations/read';
-import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';
+import { syntheticPartsCsv } from '../../../src/lib/measurements/syntheticParts';
 import { demoUser } from '../batches/support';
 
 export { DEMO_PASSWORD, demoUser } from '../batches/support';
@@ -48,7 +48,7 @@ export async function completedBatch(code = 'KH-W30-90'): Promise<{ batchId: num
   return { batchId: id, batchNumber, revisionId };
 }
 
-/** CSV of `n` synthetic parts of the revision (see src/lib/quality/syntheticParts.ts), labelled `${prefix}-001`… */
+/** CSV of `n` synthetic parts of the revision (see src/lib/measurements/syntheticParts.ts), labelled `${prefix}-001`… */
 export async function partsCsv(revisionId: number, n: number, prefix: string, lastPhosphorScale = 1, scatter = 0.01): Promise<string> {
   const rev = (await getRevision(revisionId))!;
   const ids = materialIdsOf(rev.content);

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb, db } from '../../../src/lib/server/db/index';
-import { uploadMeasurements, withdrawUpload } from '../../../src/lib/server/quality/upload';
-import { batchResults } from '../../../src/lib/server/quality/results';
+import { uploadMeasurements, withdrawUpload } from '../../../src/lib/server/measurements/upload';
+import { batchResults } from '../../../src/lib/server/measurements/results';
 import { DomainError } from '../../../src/lib/errors/domain-error';
 import { getFile } from '../../../src/lib/server/storage/objects';
 import type { User } from '../../../src/lib/server/db/users';

@@ -1,7 +1,7 @@
 /** Quality's colour acceptance for a batch (optimistic lock on `version`; 0 = none saved yet). */
 import { db } from '../db/index';
 import { record } from '../db/audit';
-import type { AcceptanceInput } from '../../schemas/quality';
+import type { AcceptanceInput } from '../../measurements/schema';
 import { lockBatch } from '../batches/lock';
 import { conflict } from './errors';
 import { requireQuality, type Caller } from './caller';

@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createHash } from 'node:crypto';
 import { closeDb, db } from '../../../src/lib/server/db/index';
-import { uploadMeasurements } from '../../../src/lib/server/quality/upload';
-import { disposeBatch } from '../../../src/lib/server/quality/disposition';
+import { uploadMeasurements } from '../../../src/lib/server/measurements/upload';
+import { disposeBatch } from '../../../src/lib/server/measurements/disposition';
 import { DomainError } from '../../../src/lib/errors/domain-error';
 import { getBatch } from '../../../src/lib/server/batches/read';
 import { getFile } from '../../../src/lib/server/storage/objects';

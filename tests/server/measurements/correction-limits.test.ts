@@ -1,14 +1,14 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb, db } from '../../../src/lib/server/db/index';
-import { uploadMeasurements } from '../../../src/lib/server/quality/upload';
-import { makeCorrectionDraft } from '../../../src/lib/server/quality/correction';
+import { uploadMeasurements } from '../../../src/lib/server/measurements/upload';
+import { makeCorrectionDraft } from '../../../src/lib/server/measurements/correction';
 import { DomainError } from '../../../src/lib/errors/domain-error';
 import { getRevision } from '../../../src/lib/server/formulations/read';
 import { loadBlendComponents } from '../../../src/lib/server/library/components';
-import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';
+import { syntheticPartsCsv } from '../../../src/lib/measurements/syntheticParts';
 import { mix } from '../../../src/lib/blend/mix';
 import { colourDistance } from '../../../src/lib/aim';
-import { batchResults } from '../../../src/lib/server/quality/results';
+import { batchResults } from '../../../src/lib/server/measurements/results';
 import { POST as correctionPost } from '../../../src/routes/api/v1/measurements/[batchId]/correction/+server';
 import type { User } from '../../../src/lib/server/db/users';
 import { caughtMail } from '../formulations/support';

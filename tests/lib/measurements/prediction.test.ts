@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { colourDistance, stepEllipseAt } from '../../../src/lib/aim/index';
-import { ellipseOutline, planckianOutline, predictedVsMeasured, qualityTarget, quadrangleOutline, toleranceOutline } from '../../../src/lib/quality/index';
+import { ellipseOutline, planckianOutline, predictedVsMeasured, qualityTarget, quadrangleOutline, toleranceOutline } from '../../../src/lib/measurements/index';
 
 describe('predicted vs measured (worked by hand)', () => {
   // Predicted (0.4339, 0.4033) = ANSI 3000 K centre (C78.377-2015); measured mean (0.4370, 0.4010).

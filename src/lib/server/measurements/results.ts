@@ -8,8 +8,8 @@ import type { RevisionRecord } from '../formulations/read';
 import {
   batchAcceptance, chromaticityPlotModel, describeAcceptance, describeTolerance, judgeBatch, predictedVsMeasured,
   type JudgedBatch, type PlotMarker, type PredictionCheck
-} from '../../quality/index';
-import type { BatchResultsView } from '../../quality/view';
+} from '../../measurements/index';
+import type { BatchResultsView } from '../../measurements/view';
 import { conflict } from './errors';
 import * as records from './records';
 

@@ -4,8 +4,8 @@
  */
 import type { Knex } from 'knex';
 import { db } from '../db/index';
-import type { MeasuredPart, PartMetrics } from '../../quality/types';
-import type { CorrectionView, DispositionView, UploadView } from '../../quality/view';
+import type { MeasuredPart, PartMetrics } from '../../measurements/types';
+import type { CorrectionView, DispositionView, UploadView } from '../../measurements/view';
 
 type Q = Knex | Knex.Transaction;
 const iso = (d: Date | string | null): string | null => (d === null ? null : new Date(d).toISOString());

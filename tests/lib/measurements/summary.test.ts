@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { judgeBatch, type MeasuredPart } from '../../../src/lib/quality/index';
+import { judgeBatch, type MeasuredPart } from '../../../src/lib/measurements/index';
 import { metricsAt } from './support';
 
 // A fixed file of five measured parts (per-part values as a spectrometer export lists them; invented

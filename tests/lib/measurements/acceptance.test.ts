@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { stepEllipseAt } from '../../../src/lib/aim/index';
-import { batchAcceptance, describeAcceptance, describeTolerance, judgePart, qualityTarget, type Acceptance } from '../../../src/lib/quality/index';
+import { batchAcceptance, describeAcceptance, describeTolerance, judgePart, qualityTarget, type Acceptance } from '../../../src/lib/measurements/index';
 import { metricsAt } from './support';
 
 // Floors as formulators set them: "90 CRI" = Ra ≥ 90 and R9 ≥ 50 [common practice];

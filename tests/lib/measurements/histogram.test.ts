@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { histogram, niceStep } from '../../../src/lib/quality/index';
+import { histogram, niceStep } from '../../../src/lib/measurements/index';
 
 // Equal-width bins on 1-2-2.5-5 × 10ᵏ boundaries (the usual axis-tick rule) [common practice]; worked by hand.
 describe('histogram', () => {

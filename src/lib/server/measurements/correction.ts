@@ -1,6 +1,6 @@
 /**
  * Correction from a measured batch: the measured mean and the revision go to the blend solver's
- * correction method (src/lib/quality/correction.ts → correctBatch); the corrected ratios become a
+ * correction method (src/lib/measurements/correction.ts → correctBatch); the corrected ratios become a
  * new draft revision linked to the batch (formulations' createCorrectionDraft), for the formulator
  * to review. The correction (mean used, step share, predicted new point) is kept with the batch.
  */
@@ -12,7 +12,7 @@ import { createCorrectionDraft } from '../formulations/save';
 import { correctionDraftMessage } from '../mail/templates/correction-draft';
 import { BlendInputError } from '../../blend/errors';
 import { CorrectionRefusedError, type TrimCap } from '../../blend/correctionLimits';
-import { correctFromBatch } from '../../quality/index';
+import { correctFromBatch } from '../../measurements/index';
 import { materialIdsOf } from '../../recipe';
 import { unprocessable } from '../../errors/domain-error';
 import { conflict, notFound } from './errors';

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb, db } from '../../../src/lib/server/db/index';
-import { uploadMeasurements } from '../../../src/lib/server/quality/upload';
-import { makeCorrectionDraft } from '../../../src/lib/server/quality/correction';
-import { setAcceptance } from '../../../src/lib/server/quality/acceptance';
-import { batchResults } from '../../../src/lib/server/quality/results';
+import { uploadMeasurements } from '../../../src/lib/server/measurements/upload';
+import { makeCorrectionDraft } from '../../../src/lib/server/measurements/correction';
+import { setAcceptance } from '../../../src/lib/server/measurements/acceptance';
+import { batchResults } from '../../../src/lib/server/measurements/results';
 import { DomainError } from '../../../src/lib/errors/domain-error';
 import { getRevision } from '../../../src/lib/server/formulations/read';
 import { xyToUvPrime } from '../../../src/lib/spectral/colorimetry/chromaticity';

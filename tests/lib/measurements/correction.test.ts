@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { correctFromBatch, judgeBatch, partMetrics, revisionRecipe } from '../../../src/lib/quality/index';
+import { correctFromBatch, judgeBatch, partMetrics, revisionRecipe } from '../../../src/lib/measurements/index';
 import { mix } from '../../../src/lib/blend/mix';
 import { prepareBasis, tristimulus } from '../../../src/lib/blend/basis';
 import { beerLambertPhotonBudget } from '../../../src/lib/blend/loading/beerLambertPhotonBudget';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { judgeBatch, measureParts, measurePartsPaced } from '../../../src/lib/quality/index';
+import { judgeBatch, measureParts, measurePartsPaced } from '../../../src/lib/measurements/index';
 import { CIE_ILLUMINANT_A } from '../../../src/lib/spectral/data/cie-illuminants';
 import { CIE_D65 } from '../../../src/lib/spectral/data/cie-d65';
 

@@ -11,9 +11,9 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseSpectrumFile } from '../../../src/lib/spectrum-file/parse';
 import { decodeText } from '../../../src/lib/spectrum-file/decode';
-import { measureParts } from '../../../src/lib/quality/measureParts';
+import { measureParts } from '../../../src/lib/measurements/measureParts';
 import { findAnsiBin } from '../../../src/lib/spectral/ansi/c78377';
-import { MAX_MEASUREMENT_FILE_BYTES } from '../../../src/lib/schemas/quality';
+import { MAX_MEASUREMENT_FILE_BYTES } from '../../../src/lib/measurements/schema';
 import { fileText, renderSpectrum, spectrumModel } from '../spectrum-file/arbitraries';
 import { malformedFile } from '../spectrum-file/corruptions';
 

@@ -5,7 +5,7 @@ import { mayJudgeBatches } from '../policies';
 // Samples with an id point at a batch that does not exist: allowed callers get 404/400, nothing demo-seeded changes.
 const B = '999999';
 
-export const QUALITY_ROUTES: RouteTable = {
+export const MEASUREMENTS_ROUTES: RouteTable = {
   '/(app)/measurements': { sample: '/measurements', methods: { GET: mayJudgeBatches.roles }, nav: { label: 'Measurements', order: 60 } },
   '/(app)/measurements/[batchId]': { sample: `/measurements/${B}`, methods: { GET: ALL, POST: mayJudgeBatches.roles } },
   '/(app)/measurements/[batchId]/files/[fileId]': { sample: `/measurements/${B}/files/${B}`, methods: { GET: ALL } },

@@ -6,8 +6,8 @@
  */
 import { createHash } from 'node:crypto';
 import { canonicalJson } from '../../formulations/canonical-json';
-import type { JudgedBatch } from '../../quality/index';
-import { QUALITY_CORE_VERSION } from '../../quality/version';
+import type { JudgedBatch } from '../../measurements/index';
+import { QUALITY_CORE_VERSION } from '../../measurements/version';
 
 export interface DispositionFacts {
   batch: { id: number; batchNumber: string; revisionId: number; formulationCode: string; revisionNo: number };
