@@ -13,7 +13,7 @@ import { sign, submit } from '../../../src/lib/server/formulations/workflow';
 import { createBatch } from '../../../src/lib/server/batches/create';
 import { getBatch } from '../../../src/lib/server/batches/read';
 import { markMixed, recordLine } from '../../../src/lib/server/batches/weighing';
-import { createBatchSchema } from '../../../src/lib/schemas/batches';
+import { createBatchSchema } from '../../../src/lib/batches/schema';
 import { getRevision } from '../../../src/lib/server/formulations/read';
 import { loadBlendComponents } from '../../../src/lib/server/library/components';
 import { fractionsWithLeak, materialIdsOf } from '../../../src/lib/recipe';

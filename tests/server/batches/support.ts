@@ -80,7 +80,7 @@ export async function makeFixture(opts: { withWtPct?: boolean } = {}): Promise<F
   };
 }
 
-/** The create request of the hand-worked 10:1 example (tests/lib/weighout/compute.test.ts): 10.000 g, 7 + 2.5 wt %. */
+/** The create request of the hand-worked 10:1 example (tests/lib/batches/weighout/compute.test.ts): 10.000 g, 7 + 2.5 wt %. */
 export function request(revisionId: number) {
   return {
     revisionId,

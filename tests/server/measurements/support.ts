@@ -8,7 +8,7 @@ import { createBatch } from '../../../src/lib/server/batches/create';
 import { getBatch } from '../../../src/lib/server/batches/read';
 import { markMixed, recordLine } from '../../../src/lib/server/batches/weighing';
 import { completeBatch } from '../../../src/lib/server/batches/complete';
-import { createBatchSchema } from '../../../src/lib/schemas/batches';
+import { createBatchSchema } from '../../../src/lib/batches/schema';
 import { loadBlendComponents } from '../../../src/lib/server/library/components';
 import { fractionsWithLeak, materialIdsOf } from '../../../src/lib/recipe';
 import { getRevision } from '../../../src/lib/server/formulations/read';

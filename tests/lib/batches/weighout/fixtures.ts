@@ -1,5 +1,5 @@
 /** Small builders for weigh-out inputs used by the tests (values invented, ranges common practice). */
-import type { ToleranceSpec, WeighoutInput } from '../../../src/lib/weighout';
+import type { ToleranceSpec, WeighoutInput } from '../../../../src/lib/batches/weighout';
 
 export const pct = (value: number): ToleranceSpec => ({ kind: 'pct', value });
 export const grams = (value: number): ToleranceSpec => ({ kind: 'g', value });

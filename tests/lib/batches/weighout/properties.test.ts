@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { computeWeighout, Rat, type ToleranceSpec, type WeighoutInput } from '../../../src/lib/weighout';
+import { computeWeighout, Rat, type ToleranceSpec, type WeighoutInput } from '../../../../src/lib/batches/weighout';
 
 // Properties of the rounding rule (largest remainder, ranges rounded inward) for valid inputs:
 // the printed lines add up to the batch exactly, each target lies within one balance step of its

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { computeWeighout, type WeighoutPlan } from '../../../src/lib/weighout';
+import { computeWeighout, type WeighoutPlan } from '../../../../src/lib/batches/weighout';
 import { grams, input, pct, phosphor } from './fixtures';
 
 function plan(i: Parameters<typeof computeWeighout>[0]): WeighoutPlan {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkActual, largestRemainder, parseReadingG, Rat, scaleByFactor, slurryAge, slurryExpiry } from '../../../src/lib/weighout';
+import { checkActual, largestRemainder, parseReadingG, Rat, scaleByFactor, slurryAge, slurryExpiry } from '../../../../src/lib/batches/weighout';
 import { input } from './fixtures';
 
 describe('exact decimals', () => {

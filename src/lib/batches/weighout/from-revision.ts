@@ -12,7 +12,7 @@
 import { Rat } from './rational';
 import type { LoadingBasis, Sizing, ToleranceSpec, WeighoutInput } from './schema';
 import type { WeighoutIssue } from './compute';
-import { loadingOf, phosphorLines, type RevisionContent } from '../recipe';
+import { loadingOf, phosphorLines, type RevisionContent } from '../../recipe';
 
 /** Common practice: ±0.5 % for phosphors, ±1 % for silicone parts and additives. */
 export const DEFAULT_TOLERANCE: Record<'phosphor' | 'additive' | 'silicone', ToleranceSpec> = {

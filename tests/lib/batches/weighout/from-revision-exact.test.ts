@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { computeWeighout, revisionLoadings, weighoutInputFromRevision, type WeighoutPlan } from '../../../src/lib/weighout';
-import type { RevisionContent } from '../../../src/lib/recipe';
-import type { CreateBatchRequest } from '../../../src/lib/schemas/batches';
+import { computeWeighout, revisionLoadings, weighoutInputFromRevision, type WeighoutPlan } from '../../../../src/lib/batches/weighout';
+import type { RevisionContent } from '../../../../src/lib/recipe';
+import type { CreateBatchRequest } from '../../../../src/lib/batches/schema';
 
 // A batch planned from a revision weighs the revision's exact masses. The exact masses are worked
 // out here on their own, with plain BigInt fractions (not the product's arithmetic): the revision's

@@ -2,9 +2,9 @@
  * The target colour point as printed on batch papers: CCT/Duv, CIE 1931 x,y and the ANSI
  * C78.377 bin it falls in (the core's resolveTarget and findAnsiBin), plus the colour tolerance.
  */
-import { resolveTarget } from '../aim/index';
-import { findAnsiBin } from '../spectral/index';
-import type { RevisionContent } from '../recipe';
+import { resolveTarget } from '../../aim/index';
+import { findAnsiBin } from '../../spectral/index';
+import type { RevisionContent } from '../../recipe';
 
 export interface BatchTarget {
   description: string;

@@ -4,8 +4,8 @@
  * system, the request supplies size, loading, tolerances, additives and the balance.
  */
 import { z } from 'zod';
-import { additiveSchema, LOADING_BASES, sizingSchema, toleranceSpecSchema } from '../weighout/schema';
-import { PAPER_SIZES } from '../weighout/paper';
+import { additiveSchema, LOADING_BASES, sizingSchema, toleranceSpecSchema } from './weighout/schema';
+import { PAPER_SIZES } from './weighout/paper';
 
 export const BATCH_STATES = ['planned', 'weighing', 'complete', 'released', 'rejected'] as const;
 export type BatchState = (typeof BATCH_STATES)[number];
