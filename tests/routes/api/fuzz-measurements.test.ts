@@ -11,7 +11,7 @@ import { POST as correctionPost } from '../../../src/routes/api/v1/measurements/
 import { POST as dispositionPost } from '../../../src/routes/api/v1/measurements/[batchId]/disposition/+server';
 import { POST as withdrawPost } from '../../../src/routes/api/v1/measurements/[batchId]/uploads/[uploadId]/withdraw/+server';
 import { closeDb } from '../../../src/lib/server/db/index';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { fuzzRoute, refreshEvery, type FuzzCase } from './fuzz-support';
 import { SIGNER_PASSWORD, author, probeApprovedRevision, probeBatch, probeSigner, probeUpload, retireSigner, technician, versionReader } from './fuzz-probes';
 

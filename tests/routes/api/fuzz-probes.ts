@@ -6,8 +6,8 @@
  */
 import bcrypt from 'bcryptjs';
 import { db } from '../../../src/lib/server/db/index';
-import * as users from '../../../src/lib/server/db/users';
-import type { User } from '../../../src/lib/server/db/users';
+import * as users from '../../../src/lib/server/accounts/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { createFormulationWithDraft, createRevision } from '../../../src/lib/server/formulations/save';
 import { sign, submit } from '../../../src/lib/server/formulations/workflow';
 import { createBatch } from '../../../src/lib/server/batches/create';

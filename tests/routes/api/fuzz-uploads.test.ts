@@ -22,7 +22,7 @@ import { demoUser, phosphorFields } from '../../server/library/support';
 import { completedBatch } from '../../server/measurements/support';
 import { expectObjectsGone, objectExists, watchPuts } from '../../support/faults';
 import { checksums, fileBytes, markedObjects, removeMeasurements, send, storageMonth, uploadArb, uploadRequest, type Answer, type Upload } from './upload-requests';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 const RUNS = 1000;
 const run = Date.now().toString(36);

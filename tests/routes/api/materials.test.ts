@@ -7,7 +7,7 @@ import * as pump from '../../../src/routes/api/v1/pumps/[id]/+server';
 import { call } from './support';
 import { demoUser, gaussianCsv, phosphorFields, removeTestMaterials } from '../../server/library/support';
 import type { Role } from '../../../src/lib/roles';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 const people = new Map<Role, User>();
 

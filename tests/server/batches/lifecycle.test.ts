@@ -10,7 +10,7 @@ import { createBatchSchema } from '../../../src/lib/batches/schema';
 import { getFile } from '../../../src/lib/server/storage/objects';
 import { pdfToText } from '../pdf/pdf-text';
 import { DEMO_PASSWORD, demoUser, makeFixture, request, type Fixture } from './support';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 let fx: Fixture;
 let tech: User;

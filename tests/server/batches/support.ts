@@ -4,8 +4,8 @@
  * Codes carry a random suffix so test runs never collide. Values invented.
  */
 import { db } from '../../../src/lib/server/db/index';
-import * as users from '../../../src/lib/server/db/users';
-import type { User } from '../../../src/lib/server/db/users';
+import * as users from '../../../src/lib/server/accounts/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import type { RevisionContent } from '../../../src/lib/recipe';
 
 export const DEMO_EMAILS = {

@@ -4,7 +4,7 @@ import * as editing from '../../../src/lib/server/library/editing';
 import * as records from '../../../src/lib/server/library/records';
 import { DomainError } from '../../../src/lib/errors/domain-error';
 import { demoUser, phosphorFields, removeTestMaterials } from './support';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 let rhea: User;
 let sam: User;

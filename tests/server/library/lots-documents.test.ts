@@ -6,7 +6,7 @@ import * as attachments from '../../../src/lib/server/library/attachments';
 import * as history from '../../../src/lib/server/library/history';
 import { getFile } from '../../../src/lib/server/storage/objects';
 import { demoUser, phosphorFields, removeTestMaterials } from './support';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 // Smallest PDF header; the library checks the %PDF- signature (ISO 32000-1 §7.5.2), not the file name.
 const pdf = Buffer.from('%PDF-1.4\n%test certificate\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n', 'latin1');

@@ -12,7 +12,7 @@ import { uploadSpectrum } from '../../../src/lib/server/library/spectrum-upload'
 import { s3 } from '../../../src/lib/server/storage/client';
 import { demoUser, gaussianCsv, phosphorFields, removeTestMaterials } from './support';
 import { INJECTED, dropLeftoverFaults, expectObjectsGone, failureWithPuts, keysContaining, snapshot, withFailingWrite, type Fault } from '../../support/faults';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 const TABLES = ['materials', 'material_spectra', 'stored_files', 'audit_events'] as const;
 const FAULTS: Fault[] = [

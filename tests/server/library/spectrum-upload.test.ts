@@ -5,7 +5,7 @@ import * as records from '../../../src/lib/server/library/records';
 import { uploadSpectrum } from '../../../src/lib/server/library/spectrum-upload';
 import { getFile } from '../../../src/lib/server/storage/objects';
 import { counts, demoUser, gaussianCsv, phosphorFields, removeTestMaterials } from './support';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 let rhea: User;
 let id = 0;

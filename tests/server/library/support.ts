@@ -1,9 +1,9 @@
 /** Helpers for the material-library integration tests (real MariaDB and the local S3 fake). */
 import type { Knex } from 'knex';
 import { db } from '../../../src/lib/server/db/index';
-import * as users from '../../../src/lib/server/db/users';
+import * as users from '../../../src/lib/server/accounts/users';
 import type { Role } from '../../../src/lib/roles';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 export const DEMO_EMAIL: Record<Role, string> = {
   formulator: 'rhea.okafor@kestrelhollow.example',

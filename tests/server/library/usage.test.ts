@@ -3,7 +3,7 @@ import { db, closeDb } from '../../../src/lib/server/db/index';
 import * as editing from '../../../src/lib/server/library/editing';
 import { revisionsUsing } from '../../../src/lib/server/library/usage';
 import { demoUser, phosphorFields, removeTestMaterials } from './support';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 // Formulation revisions name materials as "materialId": <id> in content_json (src/lib/recipe/schema.ts).
 // Before the formulations feature lands, this test creates minimal stand-in tables and drops them afterwards;

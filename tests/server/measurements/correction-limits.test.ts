@@ -10,7 +10,7 @@ import { mix } from '../../../src/lib/blend/mix';
 import { colourDistance } from '../../../src/lib/aim';
 import { batchResults } from '../../../src/lib/server/measurements/results';
 import { POST as correctionPost } from '../../../src/routes/api/v1/measurements/[batchId]/correction/+server';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { caughtMail } from '../formulations/support';
 import { call, jsonEvent } from '../../routes/api/support';
 import { snapshot } from '../../support/faults';

@@ -7,7 +7,7 @@ import { batchResults } from '../../../src/lib/server/measurements/results';
 import { DomainError } from '../../../src/lib/errors/domain-error';
 import { getRevision } from '../../../src/lib/server/formulations/read';
 import { xyToUvPrime } from '../../../src/lib/spectral/colorimetry/chromaticity';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { caughtMail } from '../formulations/support';
 import { completedBatch, csvFile, demoUser, partsCsv } from './support';
 import { INJECTED, dropLeftoverFaults, failureOf, snapshot, withFailingWrite, type Fault } from '../../support/faults';

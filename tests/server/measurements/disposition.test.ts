@@ -6,7 +6,7 @@ import { disposeBatch } from '../../../src/lib/server/measurements/disposition';
 import { DomainError } from '../../../src/lib/errors/domain-error';
 import { getBatch } from '../../../src/lib/server/batches/read';
 import { getFile } from '../../../src/lib/server/storage/objects';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { pdfToText } from '../pdf/pdf-text';
 import { caughtMail, recipients } from '../formulations/support';
 import { completedBatch, csvFile, demoUser, DEMO_PASSWORD, partsCsv } from './support';

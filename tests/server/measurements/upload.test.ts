@@ -4,7 +4,7 @@ import { uploadMeasurements, withdrawUpload } from '../../../src/lib/server/meas
 import { batchResults } from '../../../src/lib/server/measurements/results';
 import { DomainError } from '../../../src/lib/errors/domain-error';
 import { getFile } from '../../../src/lib/server/storage/objects';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { completedBatch, countRows, csvFile, demoUser, partsCsv } from './support';
 
 let quality: User;

@@ -2,7 +2,7 @@
 import { db } from '../db/index';
 import { record } from '../db/audit';
 import { getRevision } from '../formulations/read';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 import { computeWeighout, type WeighoutPlan } from '../../batches/weighout/compute';
 import { ExactNumberError } from '../../batches/weighout/rational';
 import { weighoutInputFromRevision } from '../../batches/weighout/from-revision';

@@ -1,7 +1,7 @@
 /** Scaling a planned batch up or down: the stored weigh-out input at a new size, recomputed exactly. */
 import { db } from '../db/index';
 import { record } from '../db/audit';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 import { computeWeighout } from '../../batches/weighout/compute';
 import { scaleByFactor, scaleToMass } from '../../batches/weighout/scale';
 import type { WeighoutInput } from '../../batches/weighout/schema';

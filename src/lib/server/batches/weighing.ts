@@ -5,9 +5,9 @@
  */
 import { db } from '../db/index';
 import { record } from '../db/audit';
-import * as users from '../db/users';
+import * as users from '../accounts/users';
 import { verifyPassword } from '../auth/passwords';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 import { checkActual, parseReadingG, type ActualCheck } from '../../batches/weighout/actual';
 import { slurryExpiry } from '../../batches/weighout/potlife';
 import { forbidden } from '../../errors/domain-error';

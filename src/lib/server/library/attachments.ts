@@ -7,7 +7,7 @@ import { notFound as notFoundError } from '../../errors/domain-error';
 import { notFound } from './errors';
 import { assertPdf } from './pdf-file';
 import * as records from './records';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 
 export function list(materialId: number): Promise<StoredFileRow[]> {
   return listFilesFor('material', materialId, ATTACHMENT_PURPOSES);

@@ -11,7 +11,7 @@ import { conflict, invalid } from '../../errors/domain-error';
 import { notFound, staleVersion } from './errors';
 import * as records from './records';
 import { deletionRefusal, revisionsUsing } from './usage';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 import type { MaterialKind, MaterialFields } from './records';
 
 const actorOf = (u: User) => ({ actorId: u.id, actorEmail: u.email });

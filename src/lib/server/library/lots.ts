@@ -6,7 +6,7 @@ import { conflict, notFound as notFoundError } from '../../errors/domain-error';
 import { notFound } from './errors';
 import { assertPdf } from './pdf-file';
 import * as records from './records';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 import type { Lot } from '../../library/types';
 
 export type { Lot } from '../../library/types';

@@ -17,7 +17,7 @@ import { lockForEdit } from './editing';
 import * as records from './records';
 import * as spectra from './spectra';
 import type { Spd } from '../../spectral/types';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 import type { SpectrumKind } from './spectra';
 
 export interface SpectrumFileInput {

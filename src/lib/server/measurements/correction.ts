@@ -6,7 +6,7 @@
  */
 import { record } from '../db/audit';
 import { send } from '../mail/index';
-import * as users from '../db/users';
+import * as users from '../accounts/users';
 import { loadBlendComponents } from '../library/components';
 import { createCorrectionDraft } from '../formulations/save';
 import { correctionDraftMessage } from '../mail/templates/correction-draft';

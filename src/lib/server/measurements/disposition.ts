@@ -9,7 +9,7 @@
  */
 import { db } from '../db/index';
 import { record } from '../db/audit';
-import * as users from '../db/users';
+import * as users from '../accounts/users';
 import { verifyPassword, DUMMY_HASH } from '../auth/passwords';
 import { putFile } from '../storage/objects';
 import { getBatch } from '../batches/read';

@@ -1,6 +1,6 @@
 /** E-mail after a disposition: the revision's formulator and the technicians who made the batch. */
 import { db } from '../db/index';
-import * as users from '../db/users';
+import * as users from '../accounts/users';
 import { send } from '../mail/index';
 import { batchDispositionMessage } from '../mail/templates/batch-disposition';
 import type { Caller } from './caller';

@@ -11,7 +11,7 @@ import { toGrid } from '../../blend/grid';
 import { xyzToXy } from '../../spectral/colorimetry/chromaticity';
 import { fitPackageModel, type PackageModelFit } from '../../blend/calibration/fitPackageModel';
 import type { PackageBuild } from '../../blend/calibration/packageBuilds';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 import { storeModel } from './store';
 import type { BuildInput, PackageFitInput } from './schema';
 

@@ -1,6 +1,6 @@
 /** One-time invitation links (token stored as a hash). */
 import { randomBytes } from 'node:crypto';
-import { db } from './index';
+import { db } from '../db/index';
 import { sha256Hex } from '../auth/tokens';
 import { isRole, type Role } from '../../roles';
 

@@ -1,14 +1,14 @@
 /** Account administration: invitations, acceptance, roles, deactivation — each audited. */
 import { db } from '../db/index';
-import * as users from '../db/users';
-import * as invites from '../db/invites';
+import * as users from './users';
+import * as invites from './invites';
 import * as audit from '../db/audit';
 import { hashPassword } from '../auth/passwords';
 import { sha256Hex } from '../auth/tokens';
 import { send } from '../mail/index';
 import { inviteMessage } from '../mail/templates/invite';
 import type { Role } from '../../roles';
-import type { User } from '../db/users';
+import type { User } from './users';
 import { DomainError } from '../../errors/domain-error';
 
 /** A refused account change (taken email, used invitation, removing one's own admin role): kind `conflict`. */

@@ -1,5 +1,5 @@
 /** Users and their roles. */
-import { db } from './index';
+import { db } from '../db/index';
 import { isRole, type Role } from '../../roles';
 
 export interface User {
