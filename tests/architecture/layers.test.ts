@@ -13,7 +13,7 @@ const lib = (...names: string[]) => names.map((n) => `src/lib/${n}`);
 
 /** The pure modules: computation, schemas and the types pages share with the server. */
 const PURE = lib('spectral', 'blend', 'aim', 'recipe', 'measurements', 'charts', 'formulations', 'library', 'designer',
-  'spectrum-file', 'access', 'schemas', 'accounts', 'batches', 'audit', 'storage', 'errors', 'roles');
+  'spectrum-file', 'access', 'accounts', 'batches', 'audit', 'storage', 'errors', 'roles');
 const SERVER = lib('server');
 const DATABASE = lib('server/db');
 

@@ -1,6 +1,6 @@
 /** Body of `POST /api/v1/evaluate`: a spectrum and which metric families to compute. */
 import { z } from 'zod';
-import { spdSchema } from '../blend/schemas';
+import { spdSchema } from './schemas';
 
 export const evaluateRequestSchema = z.object({
   spd: spdSchema,
