@@ -5,13 +5,13 @@
  * The batch record PDF of the completed batch is generated on download (no object is stored here).
  */
 import type { Knex } from 'knex';
-import { computeWeighout, type WeighoutPlan } from '../src/lib/weighout/compute';
-import { weighoutInputFromRevision } from '../src/lib/weighout/from-revision';
-import { describeTarget } from '../src/lib/weighout/target';
-import { checkActual } from '../src/lib/weighout/actual';
-import { Rat } from '../src/lib/weighout/rational';
+import { computeWeighout, type WeighoutPlan } from '../src/lib/batches/weighout/compute';
+import { weighoutInputFromRevision } from '../src/lib/batches/weighout/from-revision';
+import { describeTarget } from '../src/lib/batches/weighout/target';
+import { checkActual } from '../src/lib/batches/weighout/actual';
+import { Rat } from '../src/lib/batches/weighout/rational';
 import { parseRecipe } from '../src/lib/recipe';
-import type { CreateBatchRequest } from '../src/lib/schemas/batches';
+import type { CreateBatchRequest } from '../src/lib/batches/schema';
 
 const email = (handle: string) => `${handle}@kestrelhollow.example`;
 

@@ -1,7 +1,7 @@
 /**
  * Demo measurements of Kestrel Hollow Lighting (invented): 24 parts of the completed demo batch
  * BT-261201-001, as one multi-column sphere export. The parts are synthetic (the blend model of the
- * batch's revision with the red phosphor 4 % high and a ±2 % scatter, src/lib/quality/syntheticParts.ts),
+ * batch's revision with the red phosphor 4 % high and a ±2 % scatter, src/lib/measurements/syntheticParts.ts),
  * so a few miss the 3-step ellipse; the batch is left waiting for quality's decision. The raw file
  * goes to object storage like an upload, so the fakes (or the real store) must be up: without them the
  * seed fails with the reason rather than leave the demo without its measurements.
@@ -10,8 +10,8 @@
 import type { Knex } from 'knex';
 import { fractionsWithLeak, parseRecipe } from '../src/lib/recipe';
 import { loadRevisionComponents } from '../src/lib/server/formulations/components';
-import { syntheticPartsCsv } from '../src/lib/quality/syntheticParts';
-import { insertMeasurements, measureFile } from '../src/lib/server/quality/upload';
+import { syntheticPartsCsv } from '../src/lib/measurements/syntheticParts';
+import { insertMeasurements, measureFile } from '../src/lib/server/measurements/upload';
 
 const BATCH = 'BT-261201-001';
 

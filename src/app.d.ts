@@ -1,4 +1,4 @@
-import type { User } from '$lib/server/db/users';
+import type { User } from '$lib/server/accounts/users';
 
 declare global {
   namespace App {

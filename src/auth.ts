@@ -7,7 +7,7 @@ import { SvelteKitAuth, CredentialsSignin } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
 import { getRequestEvent } from '$app/server';
 import { z } from 'zod';
-import * as users from '$lib/server/db/users';
+import * as users from '$lib/server/accounts/users';
 import * as audit from '$lib/server/db/audit';
 import { verifyPassword, DUMMY_HASH } from '$lib/server/auth/passwords';
 import { isThrottled, recordAttempt } from '$lib/server/auth/throttle';

@@ -2,7 +2,7 @@ import { sequence } from '@sveltejs/kit/hooks';
 import { error, json, redirect, type Handle, type HandleServerError, type ServerInit } from '@sveltejs/kit';
 import { handle as authHandle } from './auth';
 import { decide } from '$lib/access/route-table';
-import * as users from '$lib/server/db/users';
+import * as users from '$lib/server/accounts/users';
 import { userForToken } from '$lib/server/auth/tokens';
 import { closeDb, isDbUnavailable } from '$lib/server/db/index';
 import { securityHeaders } from '$lib/server/security-headers';

@@ -4,15 +4,15 @@
  * way an upload is: parse (the shared spectrum-file parser) → every metric per part (CIE 15,
  * Ohno 2014, CIE 13.3, CIE 224/TM-30, LER) → ANSI bin, steps, pass/fail → batch summary,
  * histograms and plot model. Budget: 500 parts ≤ 2000 ms on the 2-core development machine.
- * Parts are synthetic (src/lib/quality/syntheticParts.ts): the demo blend solved for the 3000 K bin,
+ * Parts are synthetic (src/lib/measurements/syntheticParts.ts): the demo blend solved for the 3000 K bin,
  * red 2 % high, ±3 % scatter per phosphor (invented).
  */
 import { BLUE_PUMP, demoPhosphor } from '../../src/lib/blend/demo-components';
 import { solveBlend } from '../../src/lib/blend/solver/solveBlend';
 import { parseSpectrumFile } from '../../src/lib/spectrum-file/parse';
-import { chromaticityPlotModel, defaultAcceptance, judgeBatch, measureParts } from '../../src/lib/quality/index';
-import { syntheticPartsCsv } from '../../src/lib/quality/syntheticParts';
-import { MAX_MEASUREMENT_FILE_BYTES } from '../../src/lib/schemas/quality';
+import { chromaticityPlotModel, defaultAcceptance, judgeBatch, measureParts } from '../../src/lib/measurements/index';
+import { syntheticPartsCsv } from '../../src/lib/measurements/syntheticParts';
+import { MAX_MEASUREMENT_FILE_BYTES } from '../../src/lib/measurements/schema';
 
 const PARTS = 500;
 const RUNS = 5;

@@ -2,7 +2,7 @@ import { test, expect, type Page } from '@playwright/test';
 import { BASE, DEMO, DEMO_PASSWORD, signInThroughForm, signedInContext, testDb } from './support/accounts';
 import { completedBatch, json } from './support/batches';
 import { waitForMail } from '../support/mail';
-import { DISPOSITION_MEANINGS } from '../../src/lib/schemas/quality';
+import { DISPOSITION_MEANINGS } from '../../src/lib/measurements/schema';
 
 // Text that looks like markup or SQL, typed into every free-text field a person fills in (material,
 // lot, formulation, revision, review comment, return reason, batch, release comment): the API gives it back exactly as typed, every

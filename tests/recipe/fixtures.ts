@@ -1,7 +1,7 @@
 /**
  * Stored revision content as the product has written it (values invented): a row from before the
  * version tag (no `contentVersion`) and a version 1 row. The weigh-out numbers are hand-worked in
- * tests/lib/weighout/compute.test.ts (1:1 silicone, 20.000 g at 12 + 3 wt % of slurry).
+ * tests/lib/batches/weighout/compute.test.ts (1:1 silicone, 20.000 g at 12 + 3 wt % of slurry).
  */
 const legacyContent = {
   pump: { materialId: 1, code: 'B-450', name: 'B-450 royal blue chip' },

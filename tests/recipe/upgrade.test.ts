@@ -5,8 +5,8 @@ import {
   revisionContentV1Schema, type ContentVersion, type RevisionContentV1
 } from '../../src/lib/recipe';
 import { compareRatios, compareSettings } from '../../src/lib/formulations/compare';
-import { weighoutInputFromRevision } from '../../src/lib/weighout/from-revision';
-import { computeWeighout } from '../../src/lib/weighout/compute';
+import { weighoutInputFromRevision } from '../../src/lib/batches/weighout/from-revision';
+import { computeWeighout } from '../../src/lib/batches/weighout/compute';
 import { LEGACY_ROW, V1_ROW } from './fixtures';
 
 // A version 2 that exists only in this test: it adds the package model the recipe was designed for.
@@ -83,7 +83,7 @@ describe('after a (test-only) version 2 adds a field', () => {
 
   it('weighs the upgraded legacy row: 20.000 g at 12 + 3 wt % of slurry on a 1:1 silicone', () => {
     // YL 20 × 12 % = 2.400 g; RD 20 × 3 % = 0.600 g; silicone 20 − 3 = 17.000 g → A = B = 8.500 g
-    // (worked by hand, as in tests/lib/weighout/compute.test.ts).
+    // (worked by hand, as in tests/lib/batches/weighout/compute.test.ts).
     const built = weighoutInputFromRevision(legacy, weighRequest);
     if (!built.ok) throw new Error(built.errors.map((e) => e.message).join('; '));
     const result = computeWeighout(built.input);

@@ -7,22 +7,22 @@
 import type { Role } from '../roles';
 import type { Method, RouteRule } from './routes/shared';
 import { CORE_ROUTES } from './routes/core';
-import { MATERIALS_ROUTES } from './routes/materials';
+import { LIBRARY_ROUTES } from './routes/library';
 import { DESIGNER_ROUTES } from './routes/designer';
 import { FORMULATIONS_ROUTES } from './routes/formulations';
 import { BATCHES_ROUTES } from './routes/batches';
-import { QUALITY_ROUTES } from './routes/quality';
+import { MEASUREMENTS_ROUTES } from './routes/measurements';
 import { PACKAGE_MODELS_ROUTES } from './routes/package-models';
 
 export type { Audience, Method, RouteRule } from './routes/shared';
 
 export const ROUTE_TABLE: Record<string, RouteRule> = {
   ...CORE_ROUTES,
-  ...MATERIALS_ROUTES,
+  ...LIBRARY_ROUTES,
   ...DESIGNER_ROUTES,
   ...FORMULATIONS_ROUTES,
   ...BATCHES_ROUTES,
-  ...QUALITY_ROUTES,
+  ...MEASUREMENTS_ROUTES,
   ...PACKAGE_MODELS_ROUTES
 };
 

@@ -2,8 +2,8 @@
  * The "plan a batch" form as flat string fields (what a browser posts) ↔ the create request.
  * Pure, so the page computes the same preview in the browser as the server does on submit.
  */
-import type { CreateBatchRequest } from '../schemas/batches';
-import type { ToleranceSpec } from '../weighout/schema';
+import type { CreateBatchRequest } from './schema';
+import type { ToleranceSpec } from './weighout/schema';
 
 export const MAX_ADDITIVES = 2;
 

@@ -1,5 +1,5 @@
 /** Badge colours of the batch states (Tailwind theme classes), shared by the list and the batch page. */
-import type { BatchState } from '../schemas/batches';
+import type { BatchState } from './schema';
 
 export const BATCH_STATE_CLASS: Record<BatchState, string> = {
   planned: 'bg-ink-100 text-ink-800',

@@ -1,6 +1,6 @@
 /** A batch line as pages show it (read on the server from batch_lines). */
-import type { PlannedLine } from '../weighout/compute';
-import type { ActualStatus } from '../weighout/actual';
+import type { PlannedLine } from './weighout/compute';
+import type { ActualStatus } from './weighout/actual';
 
 type PlannedFields = 'seq' | 'role' | 'materialId' | 'code' | 'name' | 'basisPct' | 'idealG' | 'targetG' | 'lowG' | 'highG' | 'tolerance';
 

@@ -3,7 +3,7 @@ import { expect, type APIRequestContext } from '@playwright/test';
 import { signedInContext, testDb, DEMO } from './accounts';
 import { fractionsWithLeak, parseRecipe } from '../../../src/lib/recipe';
 import { loadRevisionComponents } from '../../../src/lib/server/formulations/components';
-import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';
+import { syntheticPartsCsv } from '../../../src/lib/measurements/syntheticParts';
 
 export const json = (ctx: APIRequestContext, url: string, data: object) => ctx.post(url, { data, headers: { 'content-type': 'application/json' } });
 

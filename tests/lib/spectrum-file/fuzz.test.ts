@@ -12,7 +12,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_MAX_POINTS, DEFAULT_MIN_POINTS, parseSpectrumFile, type ParseOptions, type SpectrumFileResult } from '../../../src/lib/spectrum-file/parse';
 import { decodeText } from '../../../src/lib/spectrum-file/decode';
-import { MAX_MEASUREMENT_FILE_BYTES } from '../../../src/lib/schemas/quality';
+import { MAX_MEASUREMENT_FILE_BYTES } from '../../../src/lib/measurements/schema';
 import { fileText, lineCount, renderSpectrum, spectrumModel } from './arbitraries';
 import { badLines, malformedFile } from './corruptions';
 

@@ -9,7 +9,7 @@ import { GET as ticket } from '../../../src/routes/api/v1/batches/[id]/ticket/+s
 import { POST as complete } from '../../../src/routes/api/v1/batches/[id]/complete/+server';
 import { call } from './support';
 import { DEMO_PASSWORD, demoUser, makeFixture, request, type Fixture } from '../../server/batches/support';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { pdfToText } from '../../server/pdf/pdf-text';
 
 let fx: Fixture;

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb, db } from '../../../src/lib/server/db/index';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import * as collection from '../../../src/routes/api/v1/formulations/+server';
 import * as one from '../../../src/routes/api/v1/formulations/[id]/+server';
 import * as revisions from '../../../src/routes/api/v1/formulations/[id]/revisions/+server';

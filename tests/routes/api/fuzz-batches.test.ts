@@ -13,7 +13,7 @@ import { POST as mixPost } from '../../../src/routes/api/v1/batches/[id]/mix/+se
 import { POST as completePost } from '../../../src/routes/api/v1/batches/[id]/complete/+server';
 import { closeDb } from '../../../src/lib/server/db/index';
 import { getBatch } from '../../../src/lib/server/batches/read';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { fuzzRoute, refreshEvery, type FuzzCase } from './fuzz-support';
 import { SIGNER_PASSWORD, type BatchStage, lineReading, probeApprovedRevision, probeBatch, probeSigner, retireSigner, technician, author, versionReader } from './fuzz-probes';
 

@@ -13,7 +13,7 @@ import { POST as approvePost } from '../../../src/routes/api/v1/formulations/[id
 import { POST as returnPost } from '../../../src/routes/api/v1/formulations/[id]/revisions/[revisionId]/return/+server';
 import { POST as withdrawPost } from '../../../src/routes/api/v1/formulations/[id]/revisions/[revisionId]/withdraw/+server';
 import { closeDb } from '../../../src/lib/server/db/index';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { fuzzRoute, refreshEvery, type FuzzCase } from './fuzz-support';
 import { SIGNER_PASSWORD, author, probeDraft, probeFormulation, probeSigner, probeSubmitted, retireSigner, versionReader, type ProbeFormulation } from './fuzz-probes';
 

@@ -8,8 +8,8 @@ import { PUT as phosphorPut } from '../../../src/routes/api/v1/phosphors/[id]/+s
 import { POST as pumpPost } from '../../../src/routes/api/v1/pumps/+server';
 import { PUT as pumpPut } from '../../../src/routes/api/v1/pumps/[id]/+server';
 import { closeDb } from '../../../src/lib/server/db/index';
-import * as editing from '../../../src/lib/server/materials/editing';
-import type { User } from '../../../src/lib/server/db/users';
+import * as editing from '../../../src/lib/server/library/editing';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { fuzzRoute, lastMaterialId, removeProbeMaterials, type FuzzCase } from './fuzz-support';
 import { author, versionReader } from './fuzz-probes';
 

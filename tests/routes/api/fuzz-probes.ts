@@ -6,19 +6,19 @@
  */
 import bcrypt from 'bcryptjs';
 import { db } from '../../../src/lib/server/db/index';
-import * as users from '../../../src/lib/server/db/users';
-import type { User } from '../../../src/lib/server/db/users';
+import * as users from '../../../src/lib/server/accounts/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { createFormulationWithDraft, createRevision } from '../../../src/lib/server/formulations/save';
 import { sign, submit } from '../../../src/lib/server/formulations/workflow';
 import { createBatch } from '../../../src/lib/server/batches/create';
 import { getBatch } from '../../../src/lib/server/batches/read';
 import { markMixed, recordLine } from '../../../src/lib/server/batches/weighing';
-import { createBatchSchema } from '../../../src/lib/schemas/batches';
+import { createBatchSchema } from '../../../src/lib/batches/schema';
 import { getRevision } from '../../../src/lib/server/formulations/read';
-import { loadBlendComponents } from '../../../src/lib/server/materials/components';
+import { loadBlendComponents } from '../../../src/lib/server/library/components';
 import { fractionsWithLeak, materialIdsOf } from '../../../src/lib/recipe';
-import { syntheticPartsCsv } from '../../../src/lib/quality/syntheticParts';
-import { uploadMeasurements } from '../../../src/lib/server/quality/upload';
+import { syntheticPartsCsv } from '../../../src/lib/measurements/syntheticParts';
+import { uploadMeasurements } from '../../../src/lib/server/measurements/upload';
 import { userByEmail } from './fuzz-support';
 
 const AUTHOR_EMAIL = 'rhea.okafor@kestrelhollow.example';

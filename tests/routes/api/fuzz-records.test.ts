@@ -9,7 +9,7 @@ import { POST as phosphorPost } from '../../../src/routes/api/v1/phosphors/+serv
 import { POST as formulationPost } from '../../../src/routes/api/v1/formulations/+server';
 import { POST as batchPost } from '../../../src/routes/api/v1/batches/+server';
 import { db, closeDb } from '../../../src/lib/server/db/index';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { apiEvent, fuzzRoute, lastMaterialId, removeProbeMaterials, userByEmail, type FuzzCase } from './fuzz-support';
 
 let formulator: User;

@@ -6,8 +6,8 @@
 import fc from 'fast-check';
 import { expect } from 'vitest';
 import { db } from '../../../src/lib/server/db/index';
-import * as users from '../../../src/lib/server/db/users';
-import type { User } from '../../../src/lib/server/db/users';
+import * as users from '../../../src/lib/server/accounts/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 export const FUZZ_RUNS = 1000;
 export const FUZZ_SEED = 20261202;

@@ -15,14 +15,14 @@ import { POST as phosphorUpload } from '../../../src/routes/api/v1/phosphors/[id
 import { POST as pumpUpload } from '../../../src/routes/api/v1/pumps/[id]/spectrum/+server';
 import { POST as measurementUpload } from '../../../src/routes/api/v1/measurements/[batchId]/+server';
 import { closeDb } from '../../../src/lib/server/db/index';
-import * as editing from '../../../src/lib/server/materials/editing';
+import * as editing from '../../../src/lib/server/library/editing';
 import { decodeText } from '../../../src/lib/spectrum-file/decode';
 import { lineCount } from '../../lib/spectrum-file/arbitraries';
-import { demoUser, phosphorFields } from '../../server/materials/support';
-import { completedBatch } from '../../server/quality/support';
+import { demoUser, phosphorFields } from '../../server/library/support';
+import { completedBatch } from '../../server/measurements/support';
 import { expectObjectsGone, objectExists, watchPuts } from '../../support/faults';
 import { checksums, fileBytes, markedObjects, removeMeasurements, send, storageMonth, uploadArb, uploadRequest, type Answer, type Upload } from './upload-requests';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 const RUNS = 1000;
 const run = Date.now().toString(36);

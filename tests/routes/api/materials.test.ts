@@ -5,9 +5,9 @@ import * as phosphor from '../../../src/routes/api/v1/phosphors/[id]/+server';
 import * as phosphorSpectrum from '../../../src/routes/api/v1/phosphors/[id]/spectrum/+server';
 import * as pump from '../../../src/routes/api/v1/pumps/[id]/+server';
 import { call } from './support';
-import { demoUser, gaussianCsv, phosphorFields, removeTestMaterials } from '../../server/materials/support';
+import { demoUser, gaussianCsv, phosphorFields, removeTestMaterials } from '../../server/library/support';
 import type { Role } from '../../../src/lib/roles';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 const people = new Map<Role, User>();
 

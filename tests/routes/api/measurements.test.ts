@@ -3,9 +3,9 @@ import { closeDb } from '../../../src/lib/server/db/index';
 import { GET, POST } from '../../../src/routes/api/v1/measurements/[batchId]/+server';
 import { POST as DISPOSE } from '../../../src/routes/api/v1/measurements/[batchId]/disposition/+server';
 import { PUT as ACCEPT } from '../../../src/routes/api/v1/measurements/[batchId]/acceptance/+server';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { call } from './support';
-import { completedBatch, demoUser, DEMO_PASSWORD, partsCsv } from '../../server/quality/support';
+import { completedBatch, demoUser, DEMO_PASSWORD, partsCsv } from '../../server/measurements/support';
 
 let quality: User;
 let tech: User;

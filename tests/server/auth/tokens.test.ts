@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, closeDb } from '../../../src/lib/server/db/index';
 import * as tokens from '../../../src/lib/server/auth/tokens';
-import * as users from '../../../src/lib/server/db/users';
+import * as users from '../../../src/lib/server/accounts/users';
 
 let userId = 0;
 const email = 'token.probe@kestrelhollow.example';

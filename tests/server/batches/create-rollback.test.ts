@@ -7,10 +7,10 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { closeDb, db } from '../../../src/lib/server/db/index';
 import { createBatch } from '../../../src/lib/server/batches/create';
 import * as lines from '../../../src/lib/server/batches/lines';
-import { createBatchSchema } from '../../../src/lib/schemas/batches';
+import { createBatchSchema } from '../../../src/lib/batches/schema';
 import { demoUser, makeFixture, request, type Fixture } from './support';
 import { INJECTED, dropLeftoverFaults, failureOf, snapshot, withFailingWrite, type Fault } from '../../support/faults';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 const TABLES = ['batches', 'batch_lines', 'audit_events'] as const;
 const FAULTS: Fault[] = [

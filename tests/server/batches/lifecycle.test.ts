@@ -6,11 +6,11 @@ import { acceptDeviation, markMixed, recordLine } from '../../../src/lib/server/
 import { completeBatch } from '../../../src/lib/server/batches/complete';
 import { scaleBatch } from '../../../src/lib/server/batches/scale';
 import { DomainError } from '../../../src/lib/errors/domain-error';
-import { createBatchSchema } from '../../../src/lib/schemas/batches';
+import { createBatchSchema } from '../../../src/lib/batches/schema';
 import { getFile } from '../../../src/lib/server/storage/objects';
 import { pdfToText } from '../pdf/pdf-text';
 import { DEMO_PASSWORD, demoUser, makeFixture, request, type Fixture } from './support';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 let fx: Fixture;
 let tech: User;
@@ -37,7 +37,7 @@ describe('planning a batch', () => {
     const d = (await getBatch(id))!;
     expect(d.batch.state).toBe('planned');
     expect(d.batch.formulationCode).toBe(fx.formulationCode);
-    // 10.000 g: A 8.227, green 0.700, red 0.250, B 0.823 (worked in tests/lib/weighout/compute.test.ts).
+    // 10.000 g: A 8.227, green 0.700, red 0.250, B 0.823 (worked in tests/lib/batches/weighout/compute.test.ts).
     expect(d.lines.map((l) => [l.code, l.targetG, l.lowG, l.highG])).toEqual([
       ['PART A', '8.227', '8.145', '8.309'], [fx.green.code, '0.700', '0.697', '0.703'], [fx.red.code, '0.250', '0.249', '0.251'], ['PART B', '0.823', '0.815', '0.830']
     ]);

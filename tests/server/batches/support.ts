@@ -4,8 +4,8 @@
  * Codes carry a random suffix so test runs never collide. Values invented.
  */
 import { db } from '../../../src/lib/server/db/index';
-import * as users from '../../../src/lib/server/db/users';
-import type { User } from '../../../src/lib/server/db/users';
+import * as users from '../../../src/lib/server/accounts/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import type { RevisionContent } from '../../../src/lib/recipe';
 
 export const DEMO_EMAILS = {
@@ -80,7 +80,7 @@ export async function makeFixture(opts: { withWtPct?: boolean } = {}): Promise<F
   };
 }
 
-/** The create request of the hand-worked 10:1 example (tests/lib/weighout/compute.test.ts): 10.000 g, 7 + 2.5 wt %. */
+/** The create request of the hand-worked 10:1 example (tests/lib/batches/weighout/compute.test.ts): 10.000 g, 7 + 2.5 wt %. */
 export function request(revisionId: number) {
   return {
     revisionId,

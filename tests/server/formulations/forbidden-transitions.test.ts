@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb, db } from '../../../src/lib/server/db/index';
-import type { User } from '../../../src/lib/server/db/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import { createFormulationWithDraft, createRevision, updateDraft } from '../../../src/lib/server/formulations/save';
 import { returnRevision, sign, submit, withdraw } from '../../../src/lib/server/formulations/workflow';
 import { ConflictError, PermissionError } from '../../../src/lib/server/formulations/errors';

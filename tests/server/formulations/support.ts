@@ -1,7 +1,7 @@
 /** Shared set-up of the formulation tests: demo people, demo materials, a valid content, the mail catcher. */
 import { db } from '../../../src/lib/server/db/index';
-import * as users from '../../../src/lib/server/db/users';
-import type { User } from '../../../src/lib/server/db/users';
+import * as users from '../../../src/lib/server/accounts/users';
+import type { User } from '../../../src/lib/server/accounts/users';
 import type { RevisionContent } from '../../../src/lib/recipe';
 import { ensureDemoMaterials } from '../../support/demo-materials';
 import type { CaughtMail } from '../../support/mail';

@@ -10,7 +10,7 @@ import { conflict, invalid, notFound } from '../../../src/lib/errors/domain-erro
 import { SpectrumInputError } from '../../../src/lib/spectral/errors';
 import { BlendInputError } from '../../../src/lib/blend/errors';
 import { ConflictError, PermissionError } from '../../../src/lib/server/formulations/errors';
-import { AccountError } from '../../../src/lib/server/services/accounts';
+import { AccountError } from '../../../src/lib/server/accounts/service';
 import { apiHandler, DB_UNAVAILABLE, UNEXPECTED } from '../../../src/lib/server/http/api-handler';
 
 async function answer(thrown: unknown) {

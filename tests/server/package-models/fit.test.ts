@@ -5,8 +5,8 @@ import { parseBuildsCsv } from '../../../src/lib/server/package-models/builds-cs
 import { prepareBasis } from '../../../src/lib/blend/basis';
 import { BLUE_PUMP, demoPhosphor } from '../../../src/lib/blend/demo-components';
 import { packageObservables, packageSpd } from '../../../src/lib/blend/calibration/packageLoadingModel';
-import { demoUser } from '../materials/support';
-import type { User } from '../../../src/lib/server/db/users';
+import { demoUser } from '../library/support';
+import type { User } from '../../../src/lib/server/accounts/users';
 
 // Fit a package model through the API handlers against the real database, from builds made with the
 // forward model at a known truth (α ×1.1, escape 1.3, IQE ×0.92 — the issue's case), and check that

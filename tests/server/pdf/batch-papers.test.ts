@@ -30,7 +30,7 @@ describe('weigh-out ticket PDF', () => {
     expect(flat).toContain('wt % of total slurry'); // the loading basis is always stated
     expect(flat).toContain('10.000 g');
     for (const h of ['Supplier lot', 'Target g', 'Allowed range g', 'Actual g', 'Initials', 'Time']) expect(flat).toContain(h);
-    // Each line's row: target, then its range (values from the fixture, worked in tests/lib/weighout/compute.test.ts).
+    // Each line's row: target, then its range (values from the fixture, worked in tests/lib/batches/weighout/compute.test.ts).
     const rows = text.split('\n');
     for (const [code, target, range] of [['PART A', '8.227', '8.145 – 8.309'], ['GL-530', '0.700', '0.697 – 0.703'], ['RD-625', '0.250', '0.249 – 0.251'], ['PART B', '0.823', '0.815 – 0.830']]) {
       const row = rows.find((r) => r.includes(code) && r.includes(target));

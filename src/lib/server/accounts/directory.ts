@@ -1,10 +1,10 @@
 /** Reading people and open invitations for the account pages. */
-import * as users from '../db/users';
-import * as invites from '../db/invites';
+import * as users from './users';
+import * as invites from './invites';
 import { mayActOnRevisions } from '../../access/policies';
 
-export type { User } from '../db/users';
-export type { Invite } from '../db/invites';
+export type { User } from './users';
+export type { Invite } from './invites';
 
 export const listPeople = (): Promise<users.User[]> => users.list();
 export const listOpenInvites = (): Promise<invites.Invite[]> => invites.listOpen();

@@ -5,7 +5,7 @@
  */
 import { error } from '@sveltejs/kit';
 import type { RolePolicy } from '../../access/policies';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 
 export function requireUser(locals: App.Locals, allowed?: Pick<RolePolicy, 'roles'>): User {
   const user = locals.user;

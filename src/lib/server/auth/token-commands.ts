@@ -2,7 +2,7 @@
 import { db } from '../db/index';
 import { record } from '../db/audit';
 import * as tokens from './tokens';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 
 export async function issueToken(user: User, name: string, days: number): Promise<{ id: number; token: string }> {
   return db().transaction(async (trx) => {

@@ -3,7 +3,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import type { Knex } from 'knex';
 import { db } from '../db/index';
 import { isRole } from '../../roles';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 
 export const TOKEN_PREFIX = 'pfk_';
 

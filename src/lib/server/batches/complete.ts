@@ -7,7 +7,7 @@
 import { db } from '../db/index';
 import { record } from '../db/audit';
 import { putFile } from '../storage/objects';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 import { buildBatchRecord } from '../pdf/batch-record';
 import { conflict } from './errors';
 import { expectState, expectVersion, lockBatch } from './lock';

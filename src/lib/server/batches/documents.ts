@@ -5,8 +5,8 @@
 import { buildBatchTicket } from '../pdf/batch-ticket';
 import { buildBatchRecord } from '../pdf/batch-record';
 import type { BatchDoc, MeasurementSummary } from '../pdf/batch-doc';
-import type { PaperSize } from '../../weighout/paper';
-import { LOADING_BASIS_LABELS, type ToleranceSpec } from '../../weighout/schema';
+import type { PaperSize } from '../../batches/weighout/paper';
+import { LOADING_BASIS_LABELS, type ToleranceSpec } from '../../batches/weighout/schema';
 import { getBatch, type BatchDetail } from './read';
 import { notFound } from './errors';
 

@@ -1,5 +1,5 @@
 /** Planned lines → batch_lines rows. */
-import type { PlannedLine } from '../../weighout/compute';
+import type { PlannedLine } from '../../batches/weighout/compute';
 
 export function lineRowsFor(batchId: number, lines: PlannedLine[]) {
   return lines.map((l) => ({

@@ -1,7 +1,7 @@
 /** Row locks and version checks shared by the batch commands. */
 import type { Knex } from 'knex';
 import { conflict, notFound } from './errors';
-import type { BatchState } from '../../schemas/batches';
+import type { BatchState } from '../../batches/schema';
 import type { BatchLineRow, BatchRow } from '../db/tables';
 
 export type LockedBatch = BatchRow;

@@ -6,7 +6,7 @@ import type { Knex } from 'knex';
 import { db } from '../db/index';
 import { getRevision, type RevisionRecord } from '../formulations/read';
 import { toBatch, toLine, toSummary, type Batch, type BatchLine, type BatchSummary } from './records';
-import type { BatchState } from '../../schemas/batches';
+import type { BatchState } from '../../batches/schema';
 import type { BatchLineRow } from '../db/tables';
 
 export type { Batch, BatchLine, BatchSummary } from './records';

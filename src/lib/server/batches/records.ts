@@ -1,8 +1,8 @@
 /** Row → record mapping of batches and batch lines (snake_case columns to camelCase, decimals as exact strings). */
-import { Rat } from '../../weighout/rational';
-import type { BatchTarget } from '../../weighout/target';
-import type { WeighoutInput, LoadingBasis } from '../../weighout/schema';
-import type { BatchState } from '../../schemas/batches';
+import { Rat } from '../../batches/weighout/rational';
+import type { BatchTarget } from '../../batches/weighout/target';
+import type { WeighoutInput, LoadingBasis } from '../../batches/weighout/schema';
+import type { BatchState } from '../../batches/schema';
 import type { BatchLine } from '../../batches/types';
 import type { BatchLineRow, BatchRow } from '../db/tables';
 

@@ -1,12 +1,12 @@
 /** Scaling a planned batch up or down: the stored weigh-out input at a new size, recomputed exactly. */
 import { db } from '../db/index';
 import { record } from '../db/audit';
-import type { User } from '../db/users';
-import { computeWeighout } from '../../weighout/compute';
-import { scaleByFactor, scaleToMass } from '../../weighout/scale';
-import type { WeighoutInput } from '../../weighout/schema';
+import type { User } from '../accounts/users';
+import { computeWeighout } from '../../batches/weighout/compute';
+import { scaleByFactor, scaleToMass } from '../../batches/weighout/scale';
+import type { WeighoutInput } from '../../batches/weighout/schema';
 import { impossible, invalid } from './errors';
-import { ExactNumberError } from '../../weighout/rational';
+import { ExactNumberError } from '../../batches/weighout/rational';
 import { expectState, expectVersion, lockBatch } from './lock';
 import { lineRowsFor, planColumns } from './lines';
 import { decimalText, placesOf } from './records';

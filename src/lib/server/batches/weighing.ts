@@ -5,11 +5,11 @@
  */
 import { db } from '../db/index';
 import { record } from '../db/audit';
-import * as users from '../db/users';
+import * as users from '../accounts/users';
 import { verifyPassword } from '../auth/passwords';
-import type { User } from '../db/users';
-import { checkActual, parseReadingG, type ActualCheck } from '../../weighout/actual';
-import { slurryExpiry } from '../../weighout/potlife';
+import type { User } from '../accounts/users';
+import { checkActual, parseReadingG, type ActualCheck } from '../../batches/weighout/actual';
+import { slurryExpiry } from '../../batches/weighout/potlife';
 import { forbidden } from '../../errors/domain-error';
 import { mayAcceptDeviation } from '../../access/policies';
 import { conflict, invalid } from './errors';

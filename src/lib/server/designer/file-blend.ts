@@ -4,7 +4,7 @@
  * the browser; the formulations services validate the content, predict, save in one transaction
  * and write the audit trail.
  */
-import * as materials from '../materials/records';
+import * as materials from '../library/records';
 import { listSiliconeSystems } from '../formulations/silicone';
 import { createFormulationWithDraft, createRevision, ValidationError } from '../formulations/save';
 import type { Caller } from '../formulations/guard';

@@ -5,7 +5,7 @@
  */
 import { config } from '../config';
 import { send } from '../mail/index';
-import * as users from '../db/users';
+import * as users from '../accounts/users';
 import { revisionSubmittedMessage } from '../mail/templates/revision-submitted';
 import { revisionApprovedMessage } from '../mail/templates/revision-approved';
 import { revisionReturnedMessage } from '../mail/templates/revision-returned';

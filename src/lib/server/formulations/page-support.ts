@@ -1,5 +1,5 @@
 /** Helpers of the formulation pages: editor choices, form → content. */
-import { listMaterialOptions } from '../materials/components';
+import { listMaterialOptions } from '../library/components';
 import { formValuesToRaw, type FormValues } from '../../formulations/form-values';
 import { ValidationError } from './errors';
 import { listSiliconeSystems } from './silicone';

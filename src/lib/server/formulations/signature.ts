@@ -4,7 +4,7 @@
  */
 import { verifyPassword, DUMMY_HASH } from '../auth/passwords';
 import { record } from '../db/audit';
-import * as users from '../db/users';
+import * as users from '../accounts/users';
 import { SignatureError } from './errors';
 import type { Caller } from './guard';
 

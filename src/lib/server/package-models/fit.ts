@@ -5,13 +5,13 @@
  */
 import { db } from '../db/index';
 import { DomainError, conflict, unprocessable } from '../../errors/domain-error';
-import { loadBlendComponents } from '../materials/components';
+import { loadBlendComponents } from '../library/components';
 import { prepareBasis, tristimulus } from '../../blend/basis';
 import { toGrid } from '../../blend/grid';
 import { xyzToXy } from '../../spectral/colorimetry/chromaticity';
 import { fitPackageModel, type PackageModelFit } from '../../blend/calibration/fitPackageModel';
 import type { PackageBuild } from '../../blend/calibration/packageBuilds';
-import type { User } from '../db/users';
+import type { User } from '../accounts/users';
 import { storeModel } from './store';
 import type { BuildInput, PackageFitInput } from './schema';
 

@@ -2,9 +2,9 @@
 import PDFDocument from 'pdfkit';
 import { registerPlex } from './fonts';
 
-import type { PaperSize } from '../../weighout/paper';
+import type { PaperSize } from '../../batches/weighout/paper';
 
-export type { PaperSize } from '../../weighout/paper';
+export type { PaperSize } from '../../batches/weighout/paper';
 
 export function newDocument(size: PaperSize, info: { title: string; subject: string; author: string }): PDFKit.PDFDocument {
   const doc = new PDFDocument({

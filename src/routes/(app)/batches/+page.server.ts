@@ -2,7 +2,7 @@ import { redirect } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { mayPlanBatch } from '$lib/access/policies';
 import { getBatchIdByNumber, listBatches } from '$lib/server/batches/read';
-import { listQuerySchema } from '$lib/schemas/batches';
+import { listQuerySchema } from '$lib/batches/schema';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ locals, url }) => {

@@ -1,5 +1,5 @@
 import { requireUser } from '$lib/server/auth/require';
-import { listMaterialOptions } from '$lib/server/materials/components';
+import { listMaterialOptions } from '$lib/server/library/components';
 import { listSiliconeSystems } from '$lib/server/formulations/silicone';
 import { formulationListSchema, listFormulations } from '$lib/server/formulations/lists';
 import { getRevision } from '$lib/server/formulations/read';

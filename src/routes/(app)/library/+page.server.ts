@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
-import * as records from '$lib/server/materials/records';
+import * as records from '$lib/server/library/records';
 import { mayEditLibrary, mayRead } from '$lib/access/policies';
 import type { PageServerLoad } from './$types';
 

@@ -1,6 +1,6 @@
 import { requireUser } from '$lib/server/auth/require';
 import { mayJudgeBatches } from '$lib/access/policies';
-import { measurementQueue } from '$lib/server/quality/queue';
+import { measurementQueue } from '$lib/server/measurements/queue';
 import type { PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ locals }) => {

@@ -2,8 +2,8 @@ import { redirect } from '@sveltejs/kit';
 import { actionFailure } from '$lib/server/http/action-failure';
 import { z } from 'zod';
 import { findOpenInvite } from '$lib/server/accounts/directory';
-import * as accounts from '$lib/server/services/accounts';
-import { acceptSchema } from '$lib/schemas/accounts';
+import * as accounts from '$lib/server/accounts/service';
+import { acceptSchema } from '$lib/accounts/schema';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 

@@ -3,8 +3,8 @@ import { requireUser } from '$lib/server/auth/require';
 import { mayAdminister } from '$lib/access/policies';
 import { actionFailure } from '$lib/server/http/action-failure';
 import { listOpenInvites, listPeople } from '$lib/server/accounts/directory';
-import * as accounts from '$lib/server/services/accounts';
-import { inviteSchema, rolesSchema, activeSchema } from '$lib/schemas/accounts';
+import * as accounts from '$lib/server/accounts/service';
+import { inviteSchema, rolesSchema, activeSchema } from '$lib/accounts/schema';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 

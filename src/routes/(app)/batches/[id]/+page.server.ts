@@ -9,8 +9,8 @@ import { acceptDeviation, markMixed, recordLine } from '$lib/server/batches/weig
 import { completeBatch } from '$lib/server/batches/complete';
 import { scaleBatch } from '$lib/server/batches/scale';
 import { loadingSummary, toleranceLabel } from '$lib/server/batches/documents';
-import { completeSchema, overrideLineSchema, recordLineSchema } from '$lib/schemas/batches';
-import { LOADING_BASIS_LABELS } from '$lib/weighout/schema';
+import { completeSchema, overrideLineSchema, recordLineSchema } from '$lib/batches/schema';
+import { LOADING_BASIS_LABELS } from '$lib/batches/weighout/schema';
 import { WEIGHOUT_CAUTIONS, WEIGHOUT_CAUTION_TITLE } from '$lib/server/pdf/cautions';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';

@@ -7,9 +7,9 @@ import { getRevision } from '$lib/server/formulations/read';
 import { listApprovedRevisions } from '$lib/server/batches/revisions';
 import { createBatch } from '$lib/server/batches/create';
 import { describeIssues } from '$lib/server/http/issues';
-import { createBatchSchema } from '$lib/schemas/batches';
+import { createBatchSchema } from '$lib/batches/schema';
 import { defaultFields, fieldsToRequest } from '$lib/batches/plan-form';
-import { revisionLoadings } from '$lib/weighout/from-revision';
+import { revisionLoadings } from '$lib/batches/weighout/from-revision';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 

@@ -1,8 +1,8 @@
 import { redirect } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { mayEditLibrary } from '$lib/access/policies';
-import * as editing from '$lib/server/materials/editing';
-import { readMaterialForm } from '$lib/server/materials/form';
+import * as editing from '$lib/server/library/editing';
+import { readMaterialForm } from '$lib/server/library/form';
 import { actionFailure, tryAction } from '$lib/server/http/action-failure';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';

@@ -2,7 +2,7 @@ import { redirect } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { mayEditLibrary, mayRead } from '$lib/access/policies';
 import { actionFailure } from '$lib/server/http/action-failure';
-import { listMaterialOptions } from '$lib/server/materials/components';
+import { listMaterialOptions } from '$lib/server/library/components';
 import * as records from '$lib/server/package-models/records';
 import { createByFit } from '$lib/server/package-models/fit';
 import { readFitForm } from '$lib/server/package-models/form';

@@ -3,7 +3,7 @@ import { requireUser } from '$lib/server/auth/require';
 import { readJson, readQuery } from '$lib/server/api/body';
 import { createBatch } from '$lib/server/batches/create';
 import { listBatches } from '$lib/server/batches/read';
-import { createBatchSchema, listQuerySchema } from '$lib/schemas/batches';
+import { createBatchSchema, listQuerySchema } from '$lib/batches/schema';
 import { apiHandler } from '$lib/server/http/api-handler';
 import { mayPlanBatch } from '$lib/access/policies';
 import type { RequestHandler } from './$types';

@@ -1,7 +1,7 @@
 import { requireUser } from '$lib/server/auth/require';
 import { finiteJson, readQuery } from '$lib/server/api/body';
 import { apiHandler } from '$lib/server/http/api-handler';
-import { loadBlendComponents } from '$lib/server/materials/components';
+import { loadBlendComponents } from '$lib/server/library/components';
 import { componentQuerySchema } from '$lib/designer/component-query';
 import type { RequestHandler } from './$types';
 

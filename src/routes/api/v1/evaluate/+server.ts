@@ -1,6 +1,6 @@
 import { requireUser } from '$lib/server/auth/require';
 import { finiteJson, readJson } from '$lib/server/api/body';
-import { evaluateRequestSchema } from '$lib/schemas/evaluate';
+import { evaluateRequestSchema } from '$lib/blend/evaluate-schema';
 import { evaluateSpectrum } from '$lib/spectral';
 import { apiHandler } from '$lib/server/http/api-handler';
 import type { RequestHandler } from './$types';

@@ -1,4 +1,4 @@
-import { collection } from '$lib/server/materials/api';
+import { collection } from '$lib/server/library/api';
 import type { RequestHandler } from './$types';
 
 /** List (pumps of the library; ?q= search, ?sort=, ?dir=, ?archived=1) and create one. */

@@ -1,9 +1,9 @@
 import { error, redirect } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { mayEditLibrary } from '$lib/access/policies';
-import * as editing from '$lib/server/materials/editing';
-import * as records from '$lib/server/materials/records';
-import { readMaterialForm, readVersion, valuesOf } from '$lib/server/materials/form';
+import * as editing from '$lib/server/library/editing';
+import * as records from '$lib/server/library/records';
+import { readMaterialForm, readVersion, valuesOf } from '$lib/server/library/form';
 import { actionFailure, tryAction } from '$lib/server/http/action-failure';
 import { idParam } from '$lib/server/http/id-param';
 import type { Actions, PageServerLoad } from './$types';

@@ -1,12 +1,12 @@
 import { error, redirect } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { mayEditLibrary } from '$lib/access/policies';
-import * as detail from '$lib/server/materials/detail';
-import { formFile, readVersion } from '$lib/server/materials/form';
+import * as detail from '$lib/server/library/detail';
+import { formFile, readVersion } from '$lib/server/library/form';
 import { actionFailure, tryAction } from '$lib/server/http/action-failure';
 import { idParam } from '$lib/server/http/id-param';
-import { previewSpectrumFile, uploadSpectrum } from '$lib/server/materials/spectrum-upload';
-import { spectrumKindSchema } from '$lib/schemas/materials';
+import { previewSpectrumFile, uploadSpectrum } from '$lib/server/library/spectrum-upload';
+import { spectrumKindSchema } from '$lib/library/schema';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 

@@ -2,7 +2,7 @@ import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
 import { prepareBatch } from '$lib/server/batches/create';
-import { createBatchSchema } from '$lib/schemas/batches';
+import { createBatchSchema } from '$lib/batches/schema';
 import { apiHandler } from '$lib/server/http/api-handler';
 import type { RequestHandler } from './$types';
 

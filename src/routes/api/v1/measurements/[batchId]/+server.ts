@@ -1,9 +1,9 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { finiteJson } from '$lib/server/api/body';
-import { ndjsonStream, uploadedFile } from '$lib/server/quality/api';
-import { batchResults } from '$lib/server/quality/results';
-import { precheckUpload, uploadMeasurements } from '$lib/server/quality/upload';
+import { ndjsonStream, uploadedFile } from '$lib/server/measurements/api';
+import { batchResults } from '$lib/server/measurements/results';
+import { precheckUpload, uploadMeasurements } from '$lib/server/measurements/upload';
 import { apiHandler } from '$lib/server/http/api-handler';
 import { idParam } from '$lib/server/http/id-param';
 import { notFound } from '$lib/errors/domain-error';

@@ -1,4 +1,4 @@
-import { item } from '$lib/server/materials/api';
+import { item } from '$lib/server/library/api';
 import type { RequestHandler } from './$types';
 
 /** One phosphor: read (with spectra and metrics), edit (body names the version read; stale → 409), delete (refused while used). */

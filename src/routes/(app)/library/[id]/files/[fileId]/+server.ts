@@ -1,7 +1,7 @@
 import { error } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { mayRead } from '$lib/access/policies';
-import { fileOfMaterial } from '$lib/server/materials/attachments';
+import { fileOfMaterial } from '$lib/server/library/attachments';
 import { getFile, safeFileName } from '$lib/server/storage/objects';
 import { idParam } from '$lib/server/http/id-param';
 import type { RequestHandler } from './$types';

@@ -1,7 +1,7 @@
 import { error } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { idParam } from '$lib/server/http/id-param';
-import { batchFile } from '$lib/server/quality/files';
+import { batchFile } from '$lib/server/measurements/files';
 import type { RequestHandler } from './$types';
 
 /** A stored file of the batch: a raw measurement export or a batch record PDF. */

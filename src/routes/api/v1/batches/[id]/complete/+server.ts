@@ -2,7 +2,7 @@ import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
 import { completeBatch } from '$lib/server/batches/complete';
-import { completeSchema } from '$lib/schemas/batches';
+import { completeSchema } from '$lib/batches/schema';
 import { apiHandler } from '$lib/server/http/api-handler';
 import { idParam } from '$lib/server/http/id-param';
 import { mayWeigh } from '$lib/access/policies';

@@ -2,7 +2,7 @@ import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
 import { markMixed } from '$lib/server/batches/weighing';
-import { mixSchema } from '$lib/schemas/batches';
+import { mixSchema } from '$lib/batches/schema';
 import { apiHandler } from '$lib/server/http/api-handler';
 import { idParam } from '$lib/server/http/id-param';
 import { mayWeigh } from '$lib/access/policies';

@@ -1,7 +1,7 @@
 import { requireUser } from '$lib/server/auth/require';
 import { pdfResponse } from '$lib/server/batches/api';
 import { batchTicketPdf } from '$lib/server/batches/documents';
-import { paperSchema } from '$lib/schemas/batches';
+import { paperSchema } from '$lib/batches/schema';
 import { apiHandler } from '$lib/server/http/api-handler';
 import { idParam } from '$lib/server/http/id-param';
 import { invalid } from '$lib/errors/domain-error';

@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
-import { acceptanceSchema } from '$lib/schemas/quality';
-import { setAcceptance } from '$lib/server/quality/acceptance';
+import { acceptanceSchema } from '$lib/measurements/schema';
+import { setAcceptance } from '$lib/server/measurements/acceptance';
 import { apiHandler } from '$lib/server/http/api-handler';
 import { idParam } from '$lib/server/http/id-param';
 import { mayJudgeBatches } from '$lib/access/policies';

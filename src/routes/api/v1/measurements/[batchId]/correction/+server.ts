@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
-import { correctionSchema } from '$lib/schemas/quality';
-import { makeCorrectionDraft } from '$lib/server/quality/correction';
+import { correctionSchema } from '$lib/measurements/schema';
+import { makeCorrectionDraft } from '$lib/server/measurements/correction';
 import { apiHandler } from '$lib/server/http/api-handler';
 import { idParam } from '$lib/server/http/id-param';
 import { mayJudgeBatches } from '$lib/access/policies';

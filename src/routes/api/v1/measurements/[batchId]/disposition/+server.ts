@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
-import { dispositionSchema } from '$lib/schemas/quality';
-import { disposeBatch } from '$lib/server/quality/disposition';
+import { dispositionSchema } from '$lib/measurements/schema';
+import { disposeBatch } from '$lib/server/measurements/disposition';
 import { apiHandler } from '$lib/server/http/api-handler';
 import { idParam } from '$lib/server/http/id-param';
 import { mayJudgeBatches } from '$lib/access/policies';

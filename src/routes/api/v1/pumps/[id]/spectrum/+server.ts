@@ -1,4 +1,4 @@
-import { spectrumUpload } from '$lib/server/materials/api';
+import { spectrumUpload } from '$lib/server/library/api';
 import type { RequestHandler } from './$types';
 
 /** Upload a spectrum file for a pump (?kind=emission|excitation, ?version=, ?dryRun=1 checks without saving). */

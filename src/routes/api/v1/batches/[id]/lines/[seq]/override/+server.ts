@@ -2,7 +2,7 @@ import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
 import { acceptDeviation } from '$lib/server/batches/weighing';
-import { overrideLineSchema } from '$lib/schemas/batches';
+import { overrideLineSchema } from '$lib/batches/schema';
 import { apiHandler } from '$lib/server/http/api-handler';
 import { idParam } from '$lib/server/http/id-param';
 import { mayAcceptDeviation } from '$lib/access/policies';

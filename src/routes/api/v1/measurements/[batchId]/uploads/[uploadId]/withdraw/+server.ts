@@ -1,8 +1,8 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { readJson } from '$lib/server/api/body';
-import { withdrawUploadSchema } from '$lib/schemas/quality';
-import { withdrawUpload } from '$lib/server/quality/upload';
+import { withdrawUploadSchema } from '$lib/measurements/schema';
+import { withdrawUpload } from '$lib/server/measurements/upload';
 import { apiHandler } from '$lib/server/http/api-handler';
 import { idParam } from '$lib/server/http/id-param';
 import { mayJudgeBatches } from '$lib/access/policies';

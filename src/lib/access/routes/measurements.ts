@@ -1,0 +1,17 @@
+/** Routes of the quality feature (owned by that feature; merged in ../route-table.ts). */
+import { ALL, type RouteTable } from './shared';
+import { mayJudgeBatches } from '../policies';
+
+// Samples with an id point at a batch that does not exist: allowed callers get 404/400, nothing demo-seeded changes.
+const B = '999999';
+
+export const MEASUREMENTS_ROUTES: RouteTable = {
+  '/(app)/measurements': { sample: '/measurements', methods: { GET: mayJudgeBatches.roles }, nav: { label: 'Measurements', order: 60 } },
+  '/(app)/measurements/[batchId]': { sample: `/measurements/${B}`, methods: { GET: ALL, POST: mayJudgeBatches.roles } },
+  '/(app)/measurements/[batchId]/files/[fileId]': { sample: `/measurements/${B}/files/${B}`, methods: { GET: ALL } },
+  '/api/v1/measurements/[batchId]': { sample: `/api/v1/measurements/${B}`, methods: { GET: ALL, POST: mayJudgeBatches.roles } },
+  '/api/v1/measurements/[batchId]/acceptance': { sample: `/api/v1/measurements/${B}/acceptance`, methods: { PUT: mayJudgeBatches.roles } },
+  '/api/v1/measurements/[batchId]/correction': { sample: `/api/v1/measurements/${B}/correction`, methods: { POST: mayJudgeBatches.roles } },
+  '/api/v1/measurements/[batchId]/disposition': { sample: `/api/v1/measurements/${B}/disposition`, methods: { POST: mayJudgeBatches.roles } },
+  '/api/v1/measurements/[batchId]/uploads/[uploadId]/withdraw': { sample: `/api/v1/measurements/${B}/uploads/${B}/withdraw`, methods: { POST: mayJudgeBatches.roles } }
+};

@@ -1,0 +1,82 @@
+/**
+ * Correction from a measured batch: the measured mean and the revision go to the blend solver's
+ * correction method (src/lib/measurements/correction.ts → correctBatch); the corrected ratios become a
+ * new draft revision linked to the batch (formulations' createCorrectionDraft), for the formulator
+ * to review. The correction (mean used, step share, predicted new point) is kept with the batch.
+ */
+import { record } from '../db/audit';
+import { send } from '../mail/index';
+import * as users from '../accounts/users';
+import { loadBlendComponents } from '../library/components';
+import { createCorrectionDraft } from '../formulations/save';
+import { correctionDraftMessage } from '../mail/templates/correction-draft';
+import { BlendInputError } from '../../blend/errors';
+import { CorrectionRefusedError, type TrimCap } from '../../blend/correctionLimits';
+import { correctFromBatch } from '../../measurements/index';
+import { materialIdsOf } from '../../recipe';
+import { unprocessable } from '../../errors/domain-error';
+import { conflict, notFound } from './errors';
+import { requireQuality, type Caller } from './caller';
+import { computeResults, loadContext } from './results';
+
+export interface CorrectionOutcome {
+  correctionId: number;
+  revisionId: number;
+  revisionNo: number;
+  predicted: { x: number; y: number; cct: number; duv: number };
+  /** Steps (SDCM) from target of the predicted point. */
+  predictedSteps: number;
+  /** Share of the full correction applied and what capped it. */
+  cap: TrimCap;
+  measuredMean: { x: number; y: number };
+}
+
+export async function makeCorrectionDraft(caller: Caller, batchId: number, stepFraction: number, origin: string): Promise<CorrectionOutcome> {
+  requireQuality(caller, 'A correction draft');
+  const ctx = await loadContext(batchId);
+  if (!ctx) throw notFound(`Batch ${batchId}`);
+  const { judged } = await computeResults(ctx);
+  const mean = judged.summary.meanPoint;
+  const b = ctx.detail.batch;
+  if (!mean) throw conflict(`Batch ${b.batchNumber} has no measured parts: a correction needs the measured mean.`);
+  const content = ctx.revision.content;
+  const ids = materialIdsOf(content);
+  const components = await loadBlendComponents(ids.pump, ids.phosphors);
+  const offset = judged.summary.meanOffset!;
+  const note = `Correction from batch ${b.batchNumber} (${judged.summary.parts} parts): measured mean x ${mean.x.toFixed(4)}, y ${mean.y.toFixed(4)}, ` +
+    `${offset.steps.toFixed(1)} steps from target.`;
+  let corrected;
+  try {
+    corrected = correctFromBatch(content, components, mean, note, stepFraction);
+  } catch (err) {
+    // Refused or uncomputable: nothing is saved and nobody is mailed.
+    if (err instanceof CorrectionRefusedError) throw unprocessable(`No correction draft was made: ${err.message}`);
+    if (err instanceof BlendInputError) throw unprocessable(`The correction cannot be computed: ${err.message}`);
+    throw err;
+  }
+  const r = corrected.response;
+  // The draft, the batch's correction record and its audit event are written together or not at all.
+  const draft = await createCorrectionDraft(caller, ctx.revision.id, corrected.content, batchId, async (trx, d) => {
+    const [id] = await trx('batch_corrections').insert({
+      batch_id: batchId, revision_id: d.revisionId, step_fraction: stepFraction, measured_x: mean.x, measured_y: mean.y,
+      parts_count: judged.summary.parts, predicted_x: r.predicted.x, predicted_y: r.predicted.y, predicted_cct_k: r.predicted.cct,
+      predicted_duv: r.predicted.duv, created_by: caller.id,
+      detail_json: JSON.stringify({ recipeKind: r.recipe.kind, multipliers: r.multipliers, bias: r.bias, errorBefore: r.errorBefore, errorAfter: r.errorAfter, converged: r.converged, cap: r.cap })
+    });
+    await record({
+      actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: 'correction-draft',
+      after: { correctionId: id, revisionId: d.revisionId, revisionNo: d.revisionNo, stepFraction, measuredMean: mean, predicted: r.predicted }
+    }, trx);
+    return id as number;
+  });
+  const correctionId = draft.alongside;
+  const author = await users.get(ctx.revision.createdBy);
+  if (author?.active) {
+    await send(correctionDraftMessage({
+      to: [author.email], batchNumber: b.batchNumber, formulation: `${b.formulationCode} ${b.formulationName}`, draftRevisionNo: draft.revisionNo,
+      requestedBy: caller.name, offsetText: `${offset.steps.toFixed(1)} steps (Δx ${offset.dx.toFixed(4)}, Δy ${offset.dy.toFixed(4)})`,
+      link: `${origin}/formulations/${ctx.revision.formulationId}/revisions/${draft.revisionId}`
+    }));
+  }
+  return { correctionId, revisionId: draft.revisionId, revisionNo: draft.revisionNo, predicted: r.predicted, predictedSteps: r.errorAfter.steps, cap: r.cap, measuredMean: { x: mean.x, y: mean.y } };
+}

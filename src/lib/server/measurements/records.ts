@@ -1,0 +1,83 @@
+/**
+ * Rows of the quality tables (measurement uploads, measured parts, acceptance, corrections,
+ * dispositions) mapped to the view records the page and API show. Snake_case → camelCase.
+ */
+import type { Knex } from 'knex';
+import { db } from '../db/index';
+import type { MeasuredPart, PartMetrics } from '../../measurements/types';
+import type { CorrectionView, DispositionView, UploadView } from '../../measurements/view';
+
+type Q = Knex | Knex.Transaction;
+const iso = (d: Date | string | null): string | null => (d === null ? null : new Date(d).toISOString());
+
+export async function listUploads(batchId: number, k: Q = db()): Promise<UploadView[]> {
+  const rows = await k('measurement_uploads as m')
+    .leftJoin('users as u', 'u.id', 'm.uploaded_by')
+    .leftJoin('users as w', 'w.id', 'm.withdrawn_by')
+    .where('m.batch_id', batchId)
+    .orderBy('m.id')
+    .select('m.*', 'u.name as uploaded_by_name', 'w.name as withdrawn_by_name');
+  return rows.map((r) => ({
+    id: r.id, originalName: r.original_name, partsCount: r.parts_count, storedFileId: r.stored_file_id,
+    uploadedByName: r.uploaded_by_name ?? '—', createdAt: iso(r.created_at)!, withdrawnAt: iso(r.withdrawn_at),
+    withdrawnByName: r.withdrawn_by_name ?? null, withdrawReason: r.withdraw_reason ?? null
+  }));
+}
+
+export interface StoredPart extends MeasuredPart {
+  id: number;
+  uploadId: number;
+}
+
+/** Parts of the batch's uploads that are not withdrawn, in upload and column order. */
+export async function activeParts(batchId: number, k: Q = db()): Promise<StoredPart[]> {
+  const rows = await k('part_measurements as p')
+    .join('measurement_uploads as m', 'm.id', 'p.upload_id')
+    .where('p.batch_id', batchId)
+    .whereNull('m.withdrawn_at')
+    .orderBy('p.upload_id').orderBy('p.column_no')
+    .select('p.id', 'p.upload_id', 'p.part_label', 'p.metrics_json');
+  return rows.map((r) => ({ id: r.id, uploadId: r.upload_id, label: r.part_label, metrics: JSON.parse(r.metrics_json) as PartMetrics }));
+}
+
+export async function activeLabels(batchId: number, k: Q = db()): Promise<Set<string>> {
+  const rows: { part_label: string }[] = await k('part_measurements as p')
+    .join('measurement_uploads as m', 'm.id', 'p.upload_id')
+    .where('p.batch_id', batchId).whereNull('m.withdrawn_at').select('p.part_label');
+  return new Set(rows.map((r) => r.part_label));
+}
+
+export interface AcceptanceRow {
+  mode: 'revision' | 'steps';
+  steps: number | null;
+  requireTargetBin: boolean;
+  version: number;
+}
+
+export async function getAcceptance(batchId: number, k: Q = db()): Promise<AcceptanceRow | null> {
+  const r = await k('batch_acceptance').where({ batch_id: batchId }).first();
+  return r ? { mode: r.mode, steps: r.steps === null ? null : Number(r.steps), requireTargetBin: Boolean(r.require_target_bin), version: r.version } : null;
+}
+
+export async function listCorrections(batchId: number, k: Q = db()): Promise<CorrectionView[]> {
+  const rows = await k('batch_corrections as c')
+    .leftJoin('formulation_revisions as r', 'r.id', 'c.revision_id')
+    .leftJoin('users as u', 'u.id', 'c.created_by')
+    .where('c.batch_id', batchId).orderBy('c.id')
+    .select('c.*', 'r.revision_no', 'r.state as revision_state', 'u.name as created_by_name');
+  return rows.map((r) => ({
+    id: r.id, revisionId: r.revision_id, revisionNo: r.revision_no, revisionState: r.revision_state ?? null,
+    stepFraction: Number(r.step_fraction), measuredMean: { x: r.measured_x, y: r.measured_y },
+    predicted: { x: r.predicted_x, y: r.predicted_y, cct: r.predicted_cct_k, duv: r.predicted_duv },
+    createdByName: r.created_by_name ?? '—', createdAt: iso(r.created_at)!
+  }));
+}
+
+export async function getDisposition(batchId: number, k: Q = db()): Promise<DispositionView | null> {
+  const r = await k('batch_dispositions').where({ batch_id: batchId }).first();
+  if (!r) return null;
+  return {
+    decision: r.decision, signerName: r.signer_name, signerEmail: r.signer_email, meaning: r.meaning, comment: r.comment,
+    signedAt: iso(r.signed_at)!, contentSha256: r.content_sha256, recordFileId: r.record_file_id ?? null
+  };
+}

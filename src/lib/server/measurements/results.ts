@@ -1,0 +1,81 @@
+/**
+ * Everything the measurements page and API show for a batch: the batch and its revision, the
+ * acceptance in force, uploads, every active part judged, the summary, predicted vs measured,
+ * the plot model, correction drafts and the disposition. Computed on read from stored metrics.
+ */
+import { getBatch, type BatchDetail } from '../batches/read';
+import type { RevisionRecord } from '../formulations/read';
+import {
+  batchAcceptance, chromaticityPlotModel, describeAcceptance, describeTolerance, judgeBatch, predictedVsMeasured,
+  type JudgedBatch, type PlotMarker, type PredictionCheck
+} from '../../measurements/index';
+import type { BatchResultsView } from '../../measurements/view';
+import { conflict } from './errors';
+import * as records from './records';
+
+export interface BatchQualityContext {
+  detail: BatchDetail;
+  revision: RevisionRecord;
+}
+
+export async function loadContext(batchId: number): Promise<BatchQualityContext | null> {
+  const detail = await getBatch(batchId);
+  if (!detail) return null;
+  if (!detail.revision) throw conflict(`Batch ${detail.batch.batchNumber} has no readable formulation revision.`);
+  return { detail, revision: detail.revision };
+}
+
+/** The revision's predicted colour point, when the stored prediction has one. */
+export function predictedPoint(rev: RevisionRecord): { x: number; y: number } | null {
+  const p = rev.predicted as { x?: unknown; y?: unknown } | null;
+  return p && typeof p.x === 'number' && typeof p.y === 'number' ? { x: p.x, y: p.y } : null;
+}
+
+export interface ComputedResults {
+  view: BatchResultsView;
+  judged: JudgedBatch;
+}
+
+export async function computeResults(ctx: BatchQualityContext): Promise<ComputedResults> {
+  const { detail, revision } = ctx;
+  const b = detail.batch;
+  const [choice, parts, uploads, corrections, disposition] = await Promise.all([
+    records.getAcceptance(b.id), records.activeParts(b.id), records.listUploads(b.id), records.listCorrections(b.id), records.getDisposition(b.id)
+  ]);
+  const acceptance = batchAcceptance(revision.content, choice);
+  const judged = judgeBatch(parts, revision.content.target, acceptance);
+  const mean = judged.summary.meanPoint;
+  const predicted = predictedPoint(revision);
+  const prediction: PredictionCheck | null = mean && predicted ? predictedVsMeasured(predicted, mean) : null;
+  const markers: PlotMarker[] = [];
+  if (mean) markers.push({ kind: 'mean', label: 'Measured mean', x: mean.x, y: mean.y });
+  if (predicted) markers.push({ kind: 'predicted', label: `Predicted (revision ${revision.revisionNo})`, x: predicted.x, y: predicted.y });
+  const last = corrections.at(-1);
+  if (last) markers.push({ kind: 'corrected', label: `Predicted after correction (revision ${last.revisionNo})`, x: last.predicted.x, y: last.predicted.y });
+  const t = judged.target;
+  const view: BatchResultsView = {
+    batch: {
+      id: b.id, batchNumber: b.batchNumber, state: b.state, version: b.version, revisionId: revision.id, formulationId: revision.formulationId,
+      formulationCode: b.formulationCode, formulationName: b.formulationName, revisionNo: b.revisionNo
+    },
+    target: { label: t.label, x: t.x, y: t.y, cct: t.cct, duv: t.duv, ansiBin: t.ansiBin?.nominalCct ?? null },
+    floors: revision.content.floors,
+    acceptance: {
+      mode: choice?.mode ?? 'revision', steps: choice?.steps ?? null, requireTargetBin: acceptance.requireTargetBin,
+      label: describeAcceptance(acceptance), revisionTolerance: describeTolerance(revision.content.tolerance), version: choice?.version ?? 0
+    },
+    uploads,
+    parts: judged.parts.map((p, i) => ({ id: parts[i].id, uploadId: parts[i].uploadId, label: p.label, metrics: p.metrics, verdict: p.verdict })),
+    summary: judged.summary,
+    prediction,
+    plot: chromaticityPlotModel(judged, markers),
+    corrections,
+    disposition
+  };
+  return { view, judged };
+}
+
+export async function batchResults(batchId: number): Promise<BatchResultsView | null> {
+  const ctx = await loadContext(batchId);
+  return ctx ? (await computeResults(ctx)).view : null;
+}

@@ -1,0 +1,93 @@
+import { describe, expect, it } from 'vitest';
+import { stepEllipseAt } from '../../../src/lib/aim/index';
+import { batchAcceptance, describeAcceptance, describeTolerance, judgePart, qualityTarget, type Acceptance } from '../../../src/lib/measurements/index';
+import { metricsAt } from './support';
+
+// Floors as formulators set them: "90 CRI" = Ra ≥ 90 and R9 ≥ 50 [common practice];
+// TM-30 P2 Rg ≥ 92 ; CIE 13.3: Ra not meaningful when DC ≥ 5.4×10⁻³.
+const t = qualityTarget({ kind: 'ansiBin', nominalCct: 3000 });
+const base: Acceptance = { tolerance: { kind: 'sdcm', steps: 5 }, floors: { raMin: 90, r9Min: 50, rgMin: 92, lerMin: 280 }, requireTargetBin: true };
+const at = (over: Parameters<typeof metricsAt>[2]) => judgePart(metricsAt(t.x, t.y, over), t, base);
+
+describe('pass/fail against the revision floors', () => {
+  it('a part on target meeting every floor passes', () => {
+    const v = at({});
+    expect(v.pass).toBe(true);
+    expect(v.offset.steps).toBeCloseTo(0, 9);
+  });
+  it('each floor shortfall is named with the value and the limit', () => {
+    const v = at({ ra: 88.44, r9: 12, rg: 91, ler: 275 });
+    expect(v.failures.map((f) => f.message)).toEqual(['Ra 88.4 < 90', 'R9 12.0 < 50', 'Rg 91.0 < 92', 'LER 275.0 < 280']);
+    expect(v.failures.map((f) => f.code)).toEqual(['raMin', 'r9Min', 'rgMin', 'lerMin']);
+  });
+  it('an Rg above its ceiling fails', () => {
+    const v = judgePart(metricsAt(t.x, t.y, { rg: 112 }), t, { ...base, floors: { rgMax: 110 } });
+    expect(v.failures.map((f) => f.message)).toEqual(['Rg 112.0 > 110']);
+  });
+  it('CRI that is not meaningful, or a missing TM-30 value, fails the floors that need it', () => {
+    const v = at({ criValid: false, rg: null });
+    expect(v.failures.map((f) => f.message)).toEqual([
+      'Ra not meaningful (source too far from the Planckian locus)',
+      'R9 not meaningful (source too far from the Planckian locus)',
+      'Rg not available'
+    ]);
+  });
+  it('a floor that is not set is not checked', () => {
+    expect(judgePart(metricsAt(t.x, t.y, { ra: 10 }), t, { ...base, floors: {} }).pass).toBe(true);
+  });
+});
+
+describe('colour tolerance kinds', () => {
+  // Δu′v′ and Δuv circles (CIE 15:2004 §8.1; CIE 1960 uv). A point moved by +0.004 in x from the target
+  // at 3000 K moves u′ by about 0.0023 — beyond a 0.002 Δu′v′ tolerance, within 0.003.
+  const off = metricsAt(t.x + 0.004, t.y);
+  it('Δu′v′', () => {
+    expect(judgePart(off, t, { ...base, floors: {}, tolerance: { kind: 'deltaUvPrime', value: 0.003 } }).pass).toBe(true);
+    const v = judgePart(off, t, { ...base, floors: {}, tolerance: { kind: 'deltaUvPrime', value: 0.002 } });
+    expect(v.failures[0].message).toMatch(/^Δu′v′ 0\.00\d\d > 0\.002$/);
+  });
+  it('Δuv (v = ⅔ v′, so never larger than Δu′v′)', () => {
+    const v = judgePart(off, t, { ...base, floors: {}, tolerance: { kind: 'deltaUv', value: 0.002 } });
+    expect(v.offset.deltaUv).toBeLessThanOrEqual(v.offset.deltaUvPrime);
+  });
+  it('labels', () => {
+    expect(describeTolerance({ kind: 'sdcm', steps: 3 })).toBe('3-step ellipse');
+    expect(describeTolerance({ kind: 'deltaUvPrime', value: 0.003 })).toBe('Δu′v′ ≤ 0.003');
+  });
+});
+
+describe('acceptance in force for a batch', () => {
+  const content = { target: { kind: 'ansiBin' as const, nominalCct: 3000 }, tolerance: { kind: 'deltaUvPrime' as const, value: 0.003 }, floors: { raMin: 90 } };
+  it('defaults to the revision tolerance and requires the bin for a bin target', () => {
+    const a = batchAcceptance(content, null);
+    expect(a).toEqual({ tolerance: { kind: 'deltaUvPrime', value: 0.003 }, floors: { raMin: 90 }, requireTargetBin: true });
+    expect(describeAcceptance(a)).toBe('Δu′v′ ≤ 0.003, inside the target ANSI bin');
+  });
+  it('a step ellipse chosen by quality replaces the colour tolerance only', () => {
+    const a = batchAcceptance(content, { mode: 'steps', steps: 3, requireTargetBin: false });
+    expect(a).toEqual({ tolerance: { kind: 'sdcm', steps: 3 }, floors: { raMin: 90 }, requireTargetBin: false });
+    expect(describeAcceptance(a)).toBe('3-step ellipse');
+  });
+});
+
+describe('step tolerance in pass/fail', () => {
+  // Target: ANSI 2700 K bin centre (Table 1: 2725 K, Duv 0). A point 2 steps and one 4 steps out along
+  // the default ellipse's major axis, judged against a 3-step tolerance.
+  const t2700 = qualityTarget({ kind: 'ansiBin', nominalCct: 2700 });
+  const e = stepEllipseAt(t2700);
+  const along = (n: number) => {
+    const th = (e.thetaDeg * Math.PI) / 180;
+    return metricsAt(t2700.x + n * e.a * Math.cos(th), t2700.y + n * e.a * Math.sin(th));
+  };
+  const acceptance = { tolerance: { kind: 'sdcm' as const, steps: 3 }, floors: {}, requireTargetBin: true };
+  it('2 steps passes a 3-step tolerance', () => {
+    const v = judgePart(along(2), t2700, acceptance);
+    expect(v.offset.steps).toBeCloseTo(2, 6);
+    expect(v.pass).toBe(true);
+  });
+  it('4 steps fails it, saying by how much', () => {
+    const v = judgePart(along(4), t2700, acceptance);
+    expect(v.pass).toBe(false);
+    expect(v.failures).toEqual([{ code: 'colour', message: '4.0 steps from target > 3' }]);
+  });
+});
