@@ -20,8 +20,16 @@ export default defineConfig({
     browserName: 'chromium',
     launchOptions: {
       executablePath: '/usr/bin/chromium',
-      args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--disable-background-networking',
-        '--disable-component-update', '--disable-sync', '--no-first-run']
+      args: [
+        '--headless',
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-quic',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+        '--no-first-run'
+      ]
     }
   },
   webServer: {
@@ -29,6 +37,11 @@ export default defineConfig({
     url: `${ORIGIN}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,
-    env: { PORT: String(PORT), HOST: '127.0.0.1', ORIGIN, AUTH_SECRET: process.env.AUTH_SECRET ?? 'test-secret-phosforge-at-least-32-characters-long' }
+    env: {
+      PORT: String(PORT),
+      HOST: '127.0.0.1',
+      ORIGIN,
+      AUTH_SECRET: process.env.AUTH_SECRET ?? 'test-secret-phosforge-at-least-32-characters-long'
+    }
   }
 });

@@ -23,9 +23,17 @@ const bucket = process.env.S3_BUCKET ?? 'phosforge-files';
 mkdirSync(s3Dir, { recursive: true });
 const maildev = new MailDev({ smtp: smtpPort, web: webPort, ip: '127.0.0.1', silent: true });
 await maildev.start();
-const s3 = new S3rver({ port: s3Port, address: '127.0.0.1', silent: true, directory: s3Dir, configureBuckets: [{ name: bucket, configs: [] }] });
+const s3 = new S3rver({
+  port: s3Port,
+  address: '127.0.0.1',
+  silent: true,
+  directory: s3Dir,
+  configureBuckets: [{ name: bucket, configs: [] }]
+});
 await s3.run();
-console.log(`fakes: SMTP catcher 127.0.0.1:${smtpPort} (inbox http://127.0.0.1:${webPort}), S3 fake http://127.0.0.1:${s3Port} bucket ${bucket}`);
+console.log(
+  `fakes: SMTP catcher 127.0.0.1:${smtpPort} (inbox http://127.0.0.1:${webPort}), S3 fake http://127.0.0.1:${s3Port} bucket ${bucket}`
+);
 
 let stopping = false;
 async function stop() {

@@ -17,15 +17,18 @@ const BATCH = 'BT-261201-001';
 
 export async function seed(knex: Knex): Promise<void> {
   if (!(await knex.schema.hasTable('measurement_uploads'))) return;
-  const batch = await knex('batches as b').join('formulation_revisions as r', 'r.id', 'b.revision_id')
-    .where({ 'b.batch_number': BATCH, 'b.state': 'complete' }).first('b.id', 'r.content_json');
+  const batch = await knex('batches as b')
+    .join('formulation_revisions as r', 'r.id', 'b.revision_id')
+    .where({ 'b.batch_number': BATCH, 'b.state': 'complete' })
+    .first('b.id', 'r.content_json');
   const quality = await knex('users').where({ email: 'ines.halloran@kestrelhollow.example' }).first('id');
   if (!batch || !quality) throw new Error(`seed 05_quality: no completed ${BATCH} or no quality user; the earlier seeds did not load.`);
   if (await knex('measurement_uploads').where({ batch_id: batch.id }).first('id')) return;
   const content = parseRecipe(batch.content_json);
   const loaded = await loadRevisionComponents(knex, content);
   const fractions = fractionsWithLeak(content);
-  const text = `# Integrating sphere export, ${BATCH}, 24 parts at 25 °C\n` +
+  const text =
+    `# Integrating sphere export, ${BATCH}, 24 parts at 25 °C\n` +
     syntheticPartsCsv(loaded.components, fractions, { parts: 24, prefix: `${BATCH}-P`, lastPhosphorScale: 1.04, scatter: 0.02 });
   const file = { name: `${BATCH}-sphere.csv`, contentType: 'text/csv', body: Buffer.from(text, 'utf8') };
   const measured = await measureFile(file);
@@ -33,8 +36,12 @@ export async function seed(knex: Knex): Promise<void> {
     await knex.transaction(async (trx) => {
       const { uploadId } = await insertMeasurements(trx, batch.id, file, measured, quality.id);
       await trx('audit_events').insert({
-        actor_id: quality.id, actor_email: 'ines.halloran@kestrelhollow.example', entity_type: 'batch', entity_id: String(batch.id),
-        action: 'measurements-upload', after_json: JSON.stringify({ uploadId, parts: measured.parts.length, seed: true })
+        actor_id: quality.id,
+        actor_email: 'ines.halloran@kestrelhollow.example',
+        entity_type: 'batch',
+        entity_id: String(batch.id),
+        action: 'measurements-upload',
+        after_json: JSON.stringify({ uploadId, parts: measured.parts.length, seed: true })
       });
     });
     console.log(`seed 05_quality: ${BATCH} measured (${measured.parts.length} parts), waiting for a decision.`);

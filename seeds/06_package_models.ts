@@ -18,8 +18,12 @@ import type { PackageFitInput } from '../src/lib/server/package-models/schema';
 const NAME = 'KH mid-power 3030 warm';
 const PHOSPHORS = ['ph-gl530', 'ph-yg555', 'ph-rd625'];
 const RECIPES = [
-  { c: [3, 6, 2], L: 0.25 }, { c: [5, 4, 3], L: 0.25 }, { c: [4, 7, 2.5], L: 0.25 },
-  { c: [2, 9, 1.5], L: 0.4 }, { c: [4, 5, 2.5], L: 0.4 }, { c: [3, 4, 3.5], L: 0.4 }
+  { c: [3, 6, 2], L: 0.25 },
+  { c: [5, 4, 3], L: 0.25 },
+  { c: [4, 7, 2.5], L: 0.25 },
+  { c: [2, 9, 1.5], L: 0.4 },
+  { c: [4, 5, 2.5], L: 0.4 },
+  { c: [3, 4, 3.5], L: 0.4 }
 ];
 
 export async function seed(knex: Knex): Promise<void> {
@@ -35,21 +39,43 @@ export async function seed(knex: Knex): Promise<void> {
     return;
   }
   const basis = prepareBasis({ pump: BLUE_PUMP, phosphors: specs }).loading!;
-  const truth = { absorptionPerWtPctMm: basis.absorptionPerWtPctMm.map((a, i) => a * [0.9, 1.1, 0.95][i]), pumpEscape: 1.25, iqeScale: 0.94 };
+  const truth = {
+    absorptionPerWtPctMm: basis.absorptionPerWtPctMm.map((a, i) => a * [0.9, 1.1, 0.95][i]),
+    pumpEscape: 1.25,
+    iqeScale: 0.94
+  };
   const rnd = mulberry32(2612);
   const scatter = () => (rnd() - 0.5) * 2;
   const input: PackageFitInput = {
-    name: NAME, packageType: '3030 mid-power, silicone-filled cavity', dispenseGeometry: 'fixedMass', pathLengthMm: 0.3,
-    pumpId: idOf(codes[0])!, phosphorIds: codes.slice(1).map((c) => idOf(c)!), cascade: false, fitEscape: true, fitIqeScale: true,
+    name: NAME,
+    packageType: '3030 mid-power, silicone-filled cavity',
+    dispenseGeometry: 'fixedMass',
+    pathLengthMm: 0.3,
+    pumpId: idOf(codes[0])!,
+    phosphorIds: codes.slice(1).map((c) => idOf(c)!),
+    cascade: false,
+    fitEscape: true,
+    fitIqeScale: true,
     bootstrap: { resamples: 30, seed: 1 },
     builds: RECIPES.map(({ c, L }, i) => {
       const o = packageObservables(packageSpd(basis, truth, c, L));
       const r4 = (v: number) => Number(v.toFixed(4));
-      return { label: `KH-B${i + 1}`, concentrationsWtPct: c, pathLengthMm: L, x: r4(o.xy[0] + 0.0003 * scatter()), y: r4(o.xy[1] + 0.0003 * scatter()),
-        outputWPerPumpW: Number((o.wPerPumpW * (1 + 0.005 * scatter())).toFixed(4)) };
+      return {
+        label: `KH-B${i + 1}`,
+        concentrationsWtPct: c,
+        pathLengthMm: L,
+        x: r4(o.xy[0] + 0.0003 * scatter()),
+        y: r4(o.xy[1] + 0.0003 * scatter()),
+        outputWPerPumpW: Number((o.wPerPumpW * (1 + 0.005 * scatter())).toFixed(4))
+      };
     })
   };
-  const fit = fitPackageModel(basis, input.builds.map(toPackageBuild), { pathLengthMm: 0.3, fitEscape: true, fitIqeScale: true }, input.bootstrap);
+  const fit = fitPackageModel(
+    basis,
+    input.builds.map(toPackageBuild),
+    { pathLengthMm: 0.3, fitEscape: true, fitIqeScale: true },
+    input.bootstrap
+  );
   const phosphors = codes.slice(1).map((code) => ({ materialId: idOf(code)!, code }));
   await knex.transaction((trx) => storeModel(trx, { id: author.id, email: author.email }, input, fit, phosphors));
   console.log(`seed 06_package_models: ${NAME} v1 (RMS ${fit.rmsSteps.toFixed(2)} steps, ${fit.reason}).`);

@@ -38,7 +38,8 @@ const guard: Handle = async ({ event, resolve }) => {
     if (early) return early;
   } catch (err) {
     if (isDbUnavailable(err)) {
-      if (isApi) return json({ error: 'The database is not reachable; try again shortly.' }, { status: 503, headers: { 'retry-after': '5' } });
+      if (isApi)
+        return json({ error: 'The database is not reachable; try again shortly.' }, { status: 503, headers: { 'retry-after': '5' } });
       error(503, 'The database is not reachable; try again shortly.');
     }
     throw err;
@@ -51,9 +52,10 @@ const guard: Handle = async ({ event, resolve }) => {
     const back = event.url.pathname + event.url.search;
     redirect(303, `/signin?redirectTo=${encodeURIComponent(back)}`);
   }
-  const reason = decision === 'unlisted'
-    ? 'This address is not open to any role.'
-    : `Your roles (${user?.roles.join(', ') || 'none'}) do not include access to this page or action.`;
+  const reason =
+    decision === 'unlisted'
+      ? 'This address is not open to any role.'
+      : `Your roles (${user?.roles.join(', ') || 'none'}) do not include access to this page or action.`;
   if (isApi) return json(errorBody(`Forbidden: ${reason}`), { status: 403 });
   if (event.request.method === 'GET' && !event.isDataRequest) {
     event.locals.denied = reason;
@@ -68,7 +70,11 @@ const headers: Handle = async ({ event, resolve }) => {
     response.headers.set('x-frame-options', 'DENY');
   } catch {
     // Response.redirect() (used by Auth.js) has immutable headers: copy into a mutable response.
-    response = new Response(response.body, { status: response.status, statusText: response.statusText, headers: new Headers(response.headers) });
+    response = new Response(response.body, {
+      status: response.status,
+      statusText: response.statusText,
+      headers: new Headers(response.headers)
+    });
   }
   for (const [k, v] of Object.entries(securityHeaders(event.url.pathname))) {
     if (!response.headers.has(k)) response.headers.set(k, v);

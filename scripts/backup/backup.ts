@@ -20,12 +20,26 @@ mkdirSync(join(dir, 'objects'), { recursive: true });
 const conn = connectionFromEnv();
 
 async function dumpDatabase(): Promise<void> {
-  const args = ['--no-defaults', `--host=${conn.host}`, `--port=${conn.port}`, `--user=${conn.user}`,
-    '--single-transaction', '--quick', '--routines', '--triggers', '--hex-blob', '--default-character-set=utf8mb4',
-    '--skip-add-locks', String(conn.database)];
+  const args = [
+    '--no-defaults',
+    `--host=${conn.host}`,
+    `--port=${conn.port}`,
+    `--user=${conn.user}`,
+    '--single-transaction',
+    '--quick',
+    '--routines',
+    '--triggers',
+    '--hex-blob',
+    '--default-character-set=utf8mb4',
+    '--skip-add-locks',
+    String(conn.database)
+  ];
   await new Promise<void>((ok, fail) => {
     const out = createWriteStream(join(dir, 'database.sql'));
-    const p = spawn('mariadb-dump', args, { env: { ...process.env, MYSQL_PWD: String(conn.password ?? '') }, stdio: ['ignore', 'pipe', 'pipe'] });
+    const p = spawn('mariadb-dump', args, {
+      env: { ...process.env, MYSQL_PWD: String(conn.password ?? '') },
+      stdio: ['ignore', 'pipe', 'pipe']
+    });
     let err = '';
     p.stderr.on('data', (d) => (err += d));
     p.stdout.pipe(out);
@@ -37,7 +51,9 @@ async function dumpDatabase(): Promise<void> {
 async function rowCounts(): Promise<Record<string, number>> {
   const knex = knexFactory({ client: 'mysql2', connection: conn });
   try {
-    const [tables] = await knex.raw('SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE() AND table_type = "BASE TABLE" ORDER BY table_name');
+    const [tables] = await knex.raw(
+      'SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE() AND table_type = "BASE TABLE" ORDER BY table_name'
+    );
     const counts: Record<string, number> = {};
     for (const { t } of tables as { t: string }[]) {
       const [[row]] = await knex.raw('SELECT COUNT(*) AS n FROM ??', [t]);
@@ -69,6 +85,13 @@ const t0 = Date.now();
 await dumpDatabase();
 const counts = await rowCounts();
 const objects = await copyObjects();
-writeFileSync(join(dir, 'manifest.json'), JSON.stringify({ createdAt: new Date().toISOString(), database: conn.database, bucket: bucketFromEnv(), rowCounts: counts, objects }, null, 2));
+writeFileSync(
+  join(dir, 'manifest.json'),
+  JSON.stringify(
+    { createdAt: new Date().toISOString(), database: conn.database, bucket: bucketFromEnv(), rowCounts: counts, objects },
+    null,
+    2
+  )
+);
 const rows = Object.values(counts).reduce((a, b) => a + b, 0);
 console.log(`backup: ${dir} — ${Object.keys(counts).length} tables, ${rows} rows, ${objects.length} objects, ${Date.now() - t0} ms`);

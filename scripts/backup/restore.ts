@@ -29,7 +29,9 @@ for (const o of manifest.objects) {
 }
 const conn = connectionFromEnv();
 if (!yes) {
-  console.log(`restore: folder OK (${Object.keys(manifest.rowCounts).length} tables, ${manifest.objects.length} objects). Re-run with --yes to replace database ${conn.database} and bucket ${bucketFromEnv()}.`);
+  console.log(
+    `restore: folder OK (${Object.keys(manifest.rowCounts).length} tables, ${manifest.objects.length} objects). Re-run with --yes to replace database ${conn.database} and bucket ${bucketFromEnv()}.`
+  );
   process.exit(0);
 }
 
@@ -38,13 +40,26 @@ const knex = knexFactory({ client: 'mysql2', connection: { ...conn, multipleStat
 try {
   const [tables] = await knex.raw('SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE()');
   const names = (tables as { t: string }[]).map((r) => r.t);
-  if (names.length) await knex.raw(`SET FOREIGN_KEY_CHECKS = 0; DROP TABLE IF EXISTS ${names.map((n) => `\`${n}\``).join(', ')}; SET FOREIGN_KEY_CHECKS = 1;`);
+  if (names.length)
+    await knex.raw(
+      `SET FOREIGN_KEY_CHECKS = 0; DROP TABLE IF EXISTS ${names.map((n) => `\`${n}\``).join(', ')}; SET FOREIGN_KEY_CHECKS = 1;`
+    );
 } finally {
   await knex.destroy();
 }
 await new Promise<void>((ok, fail) => {
-  const p = spawn('mariadb', ['--no-defaults', `--host=${conn.host}`, `--port=${conn.port}`, `--user=${conn.user}`, '--default-character-set=utf8mb4', String(conn.database)],
-    { env: { ...process.env, MYSQL_PWD: String(conn.password ?? '') }, stdio: ['pipe', 'inherit', 'pipe'] });
+  const p = spawn(
+    'mariadb',
+    [
+      '--no-defaults',
+      `--host=${conn.host}`,
+      `--port=${conn.port}`,
+      `--user=${conn.user}`,
+      '--default-character-set=utf8mb4',
+      String(conn.database)
+    ],
+    { env: { ...process.env, MYSQL_PWD: String(conn.password ?? '') }, stdio: ['pipe', 'inherit', 'pipe'] }
+  );
   let err = '';
   p.stderr.on('data', (d) => (err += d));
   createReadStream(join(dir, 'database.sql')).pipe(p.stdin);
@@ -62,4 +77,6 @@ try {
 for (const o of manifest.objects) {
   await s3.send(new PutObjectCommand({ Bucket, Key: o.key, Body: readFileSync(join(dir, 'objects', o.key)) }));
 }
-console.log(`restore: ${conn.database} and bucket ${Bucket} restored from ${dir} (${manifest.objects.length} objects) in ${Date.now() - t0} ms`);
+console.log(
+  `restore: ${conn.database} and bucket ${Bucket} restored from ${dir} (${manifest.objects.length} objects) in ${Date.now() - t0} ms`
+);

@@ -19,7 +19,8 @@ const RUNS = 5;
 const BUDGET_MS = 2000;
 
 const components = { pump: BLUE_PUMP, phosphors: ['ph-gl530', 'ph-yg555', 'ph-rd625'].map(demoPhosphor) };
-const fractions = solveBlend({ components, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 90 }, objective: 'maxLer' }).candidates[0].opticalFractions;
+const fractions = solveBlend({ components, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 90 }, objective: 'maxLer' })
+  .candidates[0].opticalFractions;
 const text = syntheticPartsCsv(components, fractions, { parts: PARTS, prefix: 'KH-P', lastPhosphorScale: 1.02, scatter: 0.03 });
 const target = { kind: 'ansiBin', nominalCct: 3000 } as const;
 const acceptance = defaultAcceptance({ target, tolerance: { kind: 'sdcm', steps: 3 }, floors: { raMin: 90 } });
@@ -49,5 +50,7 @@ for (let run = 0; run < RUNS; run++) {
 const median = (a: number[]) => [...a].sort((p, q) => p - q)[Math.floor(a.length / 2)];
 const out = Object.fromEntries(Object.entries(times).map(([k, v]) => [k, Number(median(v).toFixed(1))]));
 for (const [k, v] of Object.entries(out)) console.log(`quality  ${k.padEnd(8)} median ${v.toFixed(1)} ms`);
-console.log(`quality  ${PARTS} parts summarised in ${out.total} ms (budget ${BUDGET_MS} ms${out.total <= BUDGET_MS ? ', ok' : ', OVER'}); yield ${(yieldFraction * 100).toFixed(1)} %`);
+console.log(
+  `quality  ${PARTS} parts summarised in ${out.total} ms (budget ${BUDGET_MS} ms${out.total <= BUDGET_MS ? ', ok' : ', OVER'}); yield ${(yieldFraction * 100).toFixed(1)} %`
+);
 console.log(JSON.stringify({ bench: 'quality', unit: 'ms', parts: PARTS, medians: out }));

@@ -80,4 +80,12 @@ for (const [name, us] of Object.entries(results)) {
   const verdict = budget === undefined ? '' : us <= budget ? `  (budget ${budget} µs: ok)` : `  (budget ${budget} µs: OVER)`;
   console.log(`spectral  ${name.padEnd(34)} median ${us.toFixed(1).padStart(7)} µs${verdict}`);
 }
-console.log(JSON.stringify({ bench: 'spectral', unit: 'us', node: process.version, medians: Object.fromEntries(Object.entries(results).map(([k, v]) => [k, Number(v.toFixed(1))])), sink: Number.isFinite(sink) }));
+console.log(
+  JSON.stringify({
+    bench: 'spectral',
+    unit: 'us',
+    node: process.version,
+    medians: Object.fromEntries(Object.entries(results).map(([k, v]) => [k, Number(v.toFixed(1))])),
+    sink: Number.isFinite(sink)
+  })
+);

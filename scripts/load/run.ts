@@ -14,7 +14,10 @@ import { scenarios, type Scenario } from './scenarios';
 const base = process.env.LOAD_URL ?? 'http://127.0.0.1:4174';
 const seconds = Number(process.env.LOAD_SECONDS ?? 10);
 const connections = Number(process.env.LOAD_CONNECTIONS ?? 50);
-const only = (process.env.LOAD_ONLY ?? '').split(',').map((x) => x.trim()).filter(Boolean);
+const only = (process.env.LOAD_ONLY ?? '')
+  .split(',')
+  .map((x) => x.trim())
+  .filter(Boolean);
 
 function percentile(sorted: number[], p: number): number {
   if (sorted.length === 0) return NaN;
@@ -33,7 +36,9 @@ async function runOne(s: Scenario, token: string) {
     duration: seconds,
     timeout: 10,
     headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json', origin: base },
-    requests: s.body ? [{ method: s.method, path: s.path, setupRequest: (req) => ({ ...req, body: JSON.stringify(s.body!()) }) }] : undefined
+    requests: s.body
+      ? [{ method: s.method, path: s.path, setupRequest: (req) => ({ ...req, body: JSON.stringify(s.body!()) }) }]
+      : undefined
   });
   instance.on('response', (_client, status, _bytes, ms) => {
     latencies.push(ms);
@@ -70,7 +75,9 @@ for (const s of scenarios(draftContent).filter((x) => only.length === 0 || only.
   const r = await runOne(s, token);
   rows.push(r);
   const goal = r.goalMs ? (r.p95 <= r.goalMs ? `  (p95 goal ${r.goalMs} ms: ok)` : `  (p95 goal ${r.goalMs} ms: MISSED)`) : '';
-  console.log(`${r.route.padEnd(34)} ${String(r.rps).padStart(8)} req/s  p50 ${r.p50.toFixed(1).padStart(7)} ms  p95 ${r.p95.toFixed(1).padStart(7)} ms  p99 ${r.p99.toFixed(1).padStart(7)} ms  errors ${r.errors}${goal}${r.errors ? `  statuses ${JSON.stringify(r.statuses)}` : ''}`);
+  console.log(
+    `${r.route.padEnd(34)} ${String(r.rps).padStart(8)} req/s  p50 ${r.p50.toFixed(1).padStart(7)} ms  p95 ${r.p95.toFixed(1).padStart(7)} ms  p99 ${r.p99.toFixed(1).padStart(7)} ms  errors ${r.errors}${goal}${r.errors ? `  statuses ${JSON.stringify(r.statuses)}` : ''}`
+  );
 }
 console.log(JSON.stringify({ load: { connections, seconds, routes: rows } }));
 const failed = rows.some((r) => r.errors > 0);

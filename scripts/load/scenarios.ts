@@ -19,21 +19,42 @@ const RUN = Date.now().toString(36).toUpperCase();
 /** `draftContent`: a valid revision content (taken from the demo data) for the create-draft route. */
 export const scenarios = (draftContent: unknown): Scenario[] => [
   {
-    name: 'evaluate', method: 'POST', path: '/api/v1/evaluate', expect: 200, p95GoalMs: 100,
+    name: 'evaluate',
+    method: 'POST',
+    path: '/api/v1/evaluate',
+    expect: 200,
+    p95GoalMs: 100,
     // A slightly different white spectrum on every request, so nothing can be cached.
     body: () => {
-      const r = 0.5 + ((n++ % 50) / 100);
+      const r = 0.5 + (n++ % 50) / 100;
       return { spd: { wavelengths, values: wavelengths.map((l) => band(l, 450, 20) + 1.4 * band(l, 560, 110) + r * band(l, 625, 85)) } };
     }
   },
-  { name: 'mix', method: 'POST', path: '/api/v1/mix', expect: 200, body: () => ({ components, ratios: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2 + (n++ % 10) / 100] } }) },
   {
-    name: 'solve', method: 'POST', path: '/api/v1/solve', expect: 200,
-    body: () => ({ components, target: { kind: 'cctDuv', cct: 3000 + (n++ % 5) * 100, duv: 0 }, floors: { raMin: 80 }, objective: 'maxLer' })
+    name: 'mix',
+    method: 'POST',
+    path: '/api/v1/mix',
+    expect: 200,
+    body: () => ({ components, ratios: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2 + (n++ % 10) / 100] } })
+  },
+  {
+    name: 'solve',
+    method: 'POST',
+    path: '/api/v1/solve',
+    expect: 200,
+    body: () => ({
+      components,
+      target: { kind: 'cctDuv', cct: 3000 + (n++ % 5) * 100, duv: 0 },
+      floors: { raMin: 80 },
+      objective: 'maxLer'
+    })
   },
   { name: 'list formulations', method: 'GET', path: '/api/v1/formulations?page=1', expect: 200, p95GoalMs: 100 },
   {
-    name: 'create draft', method: 'POST', path: '/api/v1/formulations', expect: 201,
+    name: 'create draft',
+    method: 'POST',
+    path: '/api/v1/formulations',
+    expect: 201,
     body: () => ({ code: `LD-${RUN}-${n}`, name: `Load-run draft ${n++}`, description: 'made by npm run load', content: draftContent })
   }
 ];

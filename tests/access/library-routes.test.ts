@@ -13,7 +13,15 @@ describe('material library role rules', () => {
 
   it('lets every role read the table, the detail pages, files and the API', () => {
     for (const role of ROLES) {
-      for (const id of ['/(app)/library', '/(app)/library/[id]', '/(app)/library/[id]/files/[fileId]', '/api/v1/phosphors', '/api/v1/phosphors/[id]', '/api/v1/pumps', '/api/v1/pumps/[id]']) {
+      for (const id of [
+        '/(app)/library',
+        '/(app)/library/[id]',
+        '/(app)/library/[id]/files/[fileId]',
+        '/api/v1/phosphors',
+        '/api/v1/phosphors/[id]',
+        '/api/v1/pumps',
+        '/api/v1/pumps/[id]'
+      ]) {
         expect(decide(id, 'GET', [role]), `${role} GET ${id}`).toBe('allow');
       }
     }
@@ -21,10 +29,20 @@ describe('material library role rules', () => {
 
   it('keeps every change to formulators and admins', () => {
     const changes: [string, string][] = [
-      ['/(app)/library/new', 'GET'], ['/(app)/library/new', 'POST'], ['/(app)/library/[id]', 'POST'],
-      ['/(app)/library/[id]/edit', 'GET'], ['/(app)/library/[id]/edit', 'POST'], ['/(app)/library/[id]/spectrum', 'POST'],
-      ['/api/v1/phosphors', 'POST'], ['/api/v1/phosphors/[id]', 'PUT'], ['/api/v1/phosphors/[id]', 'DELETE'], ['/api/v1/phosphors/[id]/spectrum', 'POST'],
-      ['/api/v1/pumps', 'POST'], ['/api/v1/pumps/[id]', 'PUT'], ['/api/v1/pumps/[id]', 'DELETE'], ['/api/v1/pumps/[id]/spectrum', 'POST']
+      ['/(app)/library/new', 'GET'],
+      ['/(app)/library/new', 'POST'],
+      ['/(app)/library/[id]', 'POST'],
+      ['/(app)/library/[id]/edit', 'GET'],
+      ['/(app)/library/[id]/edit', 'POST'],
+      ['/(app)/library/[id]/spectrum', 'POST'],
+      ['/api/v1/phosphors', 'POST'],
+      ['/api/v1/phosphors/[id]', 'PUT'],
+      ['/api/v1/phosphors/[id]', 'DELETE'],
+      ['/api/v1/phosphors/[id]/spectrum', 'POST'],
+      ['/api/v1/pumps', 'POST'],
+      ['/api/v1/pumps/[id]', 'PUT'],
+      ['/api/v1/pumps/[id]', 'DELETE'],
+      ['/api/v1/pumps/[id]/spectrum', 'POST']
     ];
     for (const [id, method] of changes) {
       for (const role of editors) expect(decide(id, method, [role]), `${role} ${method} ${id}`).toBe('allow');

@@ -57,7 +57,9 @@ describe('the route table reads the same policies', () => {
 
   it('lets the roles of the approve command reach the approve endpoint, and nobody else', () => {
     for (const role of ROLES) {
-      expect(decide('/api/v1/formulations/[id]/revisions/[revisionId]/approve', 'POST', [role]) === 'allow').toBe(COMMAND_RULES.approve.roles.includes(role));
+      expect(decide('/api/v1/formulations/[id]/revisions/[revisionId]/approve', 'POST', [role]) === 'allow').toBe(
+        COMMAND_RULES.approve.roles.includes(role)
+      );
     }
     expect(policies.mayApprove.roles).toBe(COMMAND_RULES.approve.roles);
   });
@@ -65,7 +67,7 @@ describe('the route table reads the same policies', () => {
 
 describe('mayApprove(user, revision)', () => {
   const submitted = { state: 'submitted' as const, createdBy: 1 };
-  it('lets quality approve someone else\'s submitted revision', () => {
+  it("lets quality approve someone else's submitted revision", () => {
     expect(policies.mayApprove(who('quality'), submitted)).toBe(true);
   });
   it('refuses the author, other roles, other states and nobody', () => {

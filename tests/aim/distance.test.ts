@@ -7,7 +7,16 @@ import { uvToCct, xyToUv, type ChromaticityEllipse } from '../../src/lib/spectra
 
 // Published ellipse: ANSI 2700 K centre (0.4578, 0.4101), 3-step semi-axes a = 0.00810, b = 0.00420,
 // θ = 53.7° — seen on an LED package datasheet . 1-step: a = 0.0027, b = 0.0014.
-const ANSI_2700_3STEP: ChromaticityEllipse = { name: 'ANSI 2700 K 3-step', nominalCct: 2700, x: 0.4578, y: 0.4101, a: 0.0081, b: 0.0042, thetaDeg: 53.7, steps: 3 };
+const ANSI_2700_3STEP: ChromaticityEllipse = {
+  name: 'ANSI 2700 K 3-step',
+  nominalCct: 2700,
+  x: 0.4578,
+  y: 0.4101,
+  a: 0.0081,
+  b: 0.0042,
+  thetaDeg: 53.7,
+  steps: 3
+};
 const centre = { x: 0.4578, y: 0.4101, cct: 2725 };
 // cos 53.7° = 0.592013, sin 53.7° = 0.805928.
 const C = 0.592013;

@@ -13,7 +13,11 @@ export type Target =
   | { kind: 'node'; name: string }
   | { kind: 'framework'; name: string }; // $app/*, $env/*, svelte, @sveltejs/kit, ./$types
 
-export interface ImportRef { file: string; specifier: string; target: Target }
+export interface ImportRef {
+  file: string;
+  specifier: string;
+  target: Target;
+}
 
 const SPECIFIER =
   /(?:^|[\s;])(?:import|export)\s[^'"`;]*?from\s*['"]([^'"]+)['"]|import\s*\(\s*['"]([^'"]+)['"]\s*\)|^\s*import\s*['"]([^'"]+)['"]/gm;

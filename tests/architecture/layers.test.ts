@@ -12,8 +12,25 @@ import { codeOnly, importsOf, repoRoot, sourceFiles, within, type ImportRef } fr
 const lib = (...names: string[]) => names.map((n) => `src/lib/${n}`);
 
 /** The pure modules: computation, schemas and the types pages share with the server. */
-const PURE = lib('spectral', 'blend', 'aim', 'recipe', 'measurements', 'charts', 'formulations', 'library', 'designer',
-  'spectrum-file', 'access', 'accounts', 'batches', 'audit', 'storage', 'errors', 'roles');
+const PURE = lib(
+  'spectral',
+  'blend',
+  'aim',
+  'recipe',
+  'measurements',
+  'charts',
+  'formulations',
+  'library',
+  'designer',
+  'spectrum-file',
+  'access',
+  'accounts',
+  'batches',
+  'audit',
+  'storage',
+  'errors',
+  'roles'
+);
 const SERVER = lib('server');
 const DATABASE = lib('server/db');
 
@@ -98,7 +115,8 @@ function filesOf(rule: Rule): string[] {
 
 describe('import layers', () => {
   it('reads the main layers (the table points at real code)', () => {
-    for (const dir of lib('spectral', 'blend', 'batches/weighout', 'measurements', 'server')) expect(sourceFiles(dir).length, dir).toBeGreaterThan(3);
+    for (const dir of lib('spectral', 'blend', 'batches/weighout', 'measurements', 'server'))
+      expect(sourceFiles(dir).length, dir).toBeGreaterThan(3);
     expect(importsOf('src/lib/server/db/index.ts').some((i) => i.target.kind === 'package' && i.target.name === 'knex')).toBe(true);
   });
 
@@ -119,8 +137,8 @@ describe('import layers', () => {
 
   it('only src/lib/server/config.ts reads the environment', () => {
     const readsEnv = (f: string) =>
-      /\bprocess\.env\b/.test(codeOnly(readFileSync(join(repoRoot, f), 'utf8')))
-      || importsOf(f).some((i) => i.specifier.startsWith('$env/'));
+      /\bprocess\.env\b/.test(codeOnly(readFileSync(join(repoRoot, f), 'utf8'))) ||
+      importsOf(f).some((i) => i.specifier.startsWith('$env/'));
     const readers = sourceFiles('src').filter(readsEnv);
     expect(readers).toEqual(['src/lib/server/config.ts']);
   });

@@ -20,7 +20,7 @@ const RECIPES = [
 
 function builds(cascade: boolean, noise: number, seed = 7) {
   let s = seed;
-  const rnd = () => ((s = (s * 16807) % 2147483647) / 2147483647);
+  const rnd = () => (s = (s * 16807) % 2147483647) / 2147483647;
   const gauss = () => Math.sqrt(-2 * Math.log(rnd())) * Math.cos(2 * Math.PI * rnd());
   return RECIPES.map((c) => {
     const spd = beerLambertPhotonBudget({ ...lb, absorptionPerWtPctMm: TRUE_ALPHA }, c, L, cascade).spd;

@@ -20,14 +20,20 @@ const recipeC = concentrationsForFractions(basis.loading!, solved.candidates[0].
 
 /** The "real line": the red absorbs 20 % more and the green 10 % less than the model thinks. */
 const TRUE_ALPHA = basis.loading!.absorptionPerWtPctMm.map((a, i) => a * [0.9, 1, 1.2][i]);
-const build = (c: number[]) => xyOf(tristimulus(beerLambertPhotonBudget({ ...basis.loading!, absorptionPerWtPctMm: TRUE_ALPHA }, c, 0.3).spd));
+const build = (c: number[]) =>
+  xyOf(tristimulus(beerLambertPhotonBudget({ ...basis.loading!, absorptionPerWtPctMm: TRUE_ALPHA }, c, 0.3).spd));
 const err = ([x, y]: [number, number]) => colourDistance(x, y, target).deltaUvPrime;
 
 describe('correction of a biased batch', () => {
   it('loading recipe: the corrected recipe, built on the biased line, lands nearer the target', () => {
     const measured = build(recipeC);
     expect(err(measured)).toBeGreaterThan(0.002);
-    const res = correctRecipe(basis, { kind: 'loading', concentrationsWtPct: recipeC, loading }, [{ x: measured[0], y: measured[1] }], target);
+    const res = correctRecipe(
+      basis,
+      { kind: 'loading', concentrationsWtPct: recipeC, loading },
+      [{ x: measured[0], y: measured[1] }],
+      target
+    );
     expect(res.converged).toBe(true);
     expect(res.errorAfter.deltaUvPrime).toBeLessThan(1e-6);
     if (res.recipe.kind !== 'loading') throw new Error('kind');
@@ -40,7 +46,9 @@ describe('correction of a biased batch', () => {
     let last = err(build(c));
     for (let i = 0; i < 3; i++) {
       const m = build(c);
-      const res = correctRecipe(basis, { kind: 'loading', concentrationsWtPct: c, loading }, [{ x: m[0], y: m[1] }], target, { stepFraction: 0.8 });
+      const res = correctRecipe(basis, { kind: 'loading', concentrationsWtPct: c, loading }, [{ x: m[0], y: m[1] }], target, {
+        stepFraction: 0.8
+      });
       if (res.recipe.kind !== 'loading') throw new Error('kind');
       c = res.recipe.concentrationsWtPct;
       const now = err(build(c));
@@ -58,13 +66,19 @@ describe('correction of a biased batch', () => {
     expect(res.bias.dy).toBeCloseTo(offset.y, 6);
     expect(res.errorAfter.deltaUvPrime).toBeLessThan(1e-6);
     if (res.recipe.kind !== 'optical') throw new Error('kind');
-    const [x, y] = xyOf(tristimulus(res.recipe.fractions.reduce((acc, wk, k) => acc.map((v, i) => v + wk * basis.components[k].spd[i]), new Array<number>(471).fill(0))));
+    const [x, y] = xyOf(
+      tristimulus(
+        res.recipe.fractions.reduce((acc, wk, k) => acc.map((v, i) => v + wk * basis.components[k].spd[i]), new Array<number>(471).fill(0))
+      )
+    );
     expect(Math.hypot(x + offset.x - target.x, y + offset.y - target.y)).toBeLessThan(1e-6);
   });
 
   it('stepFraction 0.5 moves about half way', () => {
     const m = build(recipeC);
-    const res = correctRecipe(basis, { kind: 'loading', concentrationsWtPct: recipeC, loading }, [{ x: m[0], y: m[1] }], target, { stepFraction: 0.5 });
+    const res = correctRecipe(basis, { kind: 'loading', concentrationsWtPct: recipeC, loading }, [{ x: m[0], y: m[1] }], target, {
+      stepFraction: 0.5
+    });
     expect(res.errorAfter.deltaUvPrime).toBeGreaterThan(0.3 * res.errorBefore.deltaUvPrime);
     expect(res.errorAfter.deltaUvPrime).toBeLessThan(0.7 * res.errorBefore.deltaUvPrime);
   });
@@ -74,7 +88,13 @@ describe('correction of a biased batch', () => {
     const out = correctBatch({
       components: THREE,
       recipe: { kind: 'loading', concentrationsWtPct: recipeC, loading },
-      measured: { kind: 'xy', points: [{ x: m[0] + 0.001, y: m[1] }, { x: m[0] - 0.001, y: m[1] }] },
+      measured: {
+        kind: 'xy',
+        points: [
+          { x: m[0] + 0.001, y: m[1] },
+          { x: m[0] - 0.001, y: m[1] }
+        ]
+      },
       target: { kind: 'ansiBin', nominalCct: 3000 }
     });
     expect(out.measuredMean.x).toBeCloseTo(m[0], 12);

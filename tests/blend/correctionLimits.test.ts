@@ -12,7 +12,8 @@ import { THREE } from './fixtures';
 // applied as a share of the full correction and the share says how much it was capped.
 const target = resolveTarget({ kind: 'ansiBin', nominalCct: 3000 });
 const basis = prepareBasis(THREE);
-const w = solveBlend({ components: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 90 }, objective: 'maxLer' }).candidates[0].opticalFractions;
+const w = solveBlend({ components: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 90 }, objective: 'maxLer' })
+  .candidates[0].opticalFractions;
 // A gross offset towards blue-violet: no positive amounts of these phosphors reach the target with that bias.
 const gross = [{ x: target.x - 0.1, y: target.y - 0.1 }];
 
@@ -40,19 +41,29 @@ describe('correction refusals', () => {
     expect(res.refusal?.reason).toBe('belowZero');
     expect(res.refusal?.message).toMatch(/to zero or below/);
     expect(THREE.phosphors.some((p) => res.refusal!.message.includes(p.name))).toBe(true);
-    expect(() => correctBatch({ components: THREE, recipe: { kind: 'optical', fractions: w }, measured: { kind: 'xy', points: gross }, target: { kind: 'ansiBin', nominalCct: 3000 } }))
-      .toThrow(CorrectionRefusedError);
+    expect(() =>
+      correctBatch({
+        components: THREE,
+        recipe: { kind: 'optical', fractions: w },
+        measured: { kind: 'xy', points: gross },
+        target: { kind: 'ansiBin', nominalCct: 3000 }
+      })
+    ).toThrow(CorrectionRefusedError);
   });
 
   it('an iteration stopped before it lands is refused as not converged', () => {
-    const res = correctRecipe(basis, { kind: 'optical', fractions: w }, [{ x: target.x + 0.004, y: target.y - 0.003 }], target, { maxIterations: 1 });
+    const res = correctRecipe(basis, { kind: 'optical', fractions: w }, [{ x: target.x + 0.004, y: target.y - 0.003 }], target, {
+      maxIterations: 1
+    });
     expect(res.converged).toBe(false);
     expect(res.refusal?.reason).toBe('notConverged');
     expect(res.refusal?.message).toMatch(/does not converge: after 1 iterations the model is still \d+\.\d steps from target/);
   });
 
   it('a small offset is not refused, and the applied share is the one asked for', () => {
-    const res = correctRecipe(basis, { kind: 'optical', fractions: w }, [{ x: target.x + 0.004, y: target.y - 0.003 }], target, { stepFraction: 0.8 });
+    const res = correctRecipe(basis, { kind: 'optical', fractions: w }, [{ x: target.x + 0.004, y: target.y - 0.003 }], target, {
+      stepFraction: 0.8
+    });
     expect(res.refusal).toBeNull();
     expect(res.cap).toEqual({ requestedShare: 0.8, appliedShare: 0.8, limitedBy: 'stepFraction', maxTrimFactor: 2 });
   });
@@ -71,5 +82,4 @@ describe('correction refusals', () => {
     // The expected point is honest about what is left: still off target.
     expect(res.errorAfter.steps).toBeGreaterThan(1);
   });
-
 });

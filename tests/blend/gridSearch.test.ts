@@ -35,10 +35,38 @@ function gridBest(comps: BlendComponents, target: Target, floors: Floors, object
   return best;
 }
 
-const cases: { name: string; comps: BlendComponents; target: Target; floors: Floors; objective: Objective; allowance: (v: number) => number }[] = [
-  { name: '3000 K, Ra ≥ 90, R9 ≥ 50, max LER', comps: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 90, r9Min: 50 }, objective: 'maxLer', allowance: (v) => 0.005 * v },
-  { name: '3000 K, max Ra', comps: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: {}, objective: 'maxRa', allowance: () => 0.3 },
-  { name: '4000 K, Ra ≥ 88, max LER (cyan-green + yellow-green + red)', comps: blue('ph-cg505', 'ph-yg555', 'ph-rd625'), target: { kind: 'ansiBin', nominalCct: 4000 }, floors: { raMin: 88 }, objective: 'maxLer', allowance: (v) => 0.005 * v }
+const cases: {
+  name: string;
+  comps: BlendComponents;
+  target: Target;
+  floors: Floors;
+  objective: Objective;
+  allowance: (v: number) => number;
+}[] = [
+  {
+    name: '3000 K, Ra ≥ 90, R9 ≥ 50, max LER',
+    comps: THREE,
+    target: { kind: 'ansiBin', nominalCct: 3000 },
+    floors: { raMin: 90, r9Min: 50 },
+    objective: 'maxLer',
+    allowance: (v) => 0.005 * v
+  },
+  {
+    name: '3000 K, max Ra',
+    comps: THREE,
+    target: { kind: 'ansiBin', nominalCct: 3000 },
+    floors: {},
+    objective: 'maxRa',
+    allowance: () => 0.3
+  },
+  {
+    name: '4000 K, Ra ≥ 88, max LER (cyan-green + yellow-green + red)',
+    comps: blue('ph-cg505', 'ph-yg555', 'ph-rd625'),
+    target: { kind: 'ansiBin', nominalCct: 4000 },
+    floors: { raMin: 88 },
+    objective: 'maxLer',
+    allowance: (v) => 0.005 * v
+  }
 ];
 
 describe('solver best ≥ exhaustive 1 % grid (3 phosphors)', () => {

@@ -16,7 +16,10 @@ const run = (c: number[], cascade = false) => beerLambertPhotonBudget(lb, c, L, 
 describe('Beer–Lambert (Beer 1852) pump transmission', () => {
   it('flat absorption gives T = exp(−αcL) exactly', () => {
     // Source: Beer–Lambert law; no excitation spectrum → α independent of λ.
-    const flat = prepareBasis({ pump: BLUE_PUMP, phosphors: [{ ...demoPhosphor('ph-yg555'), excitation: undefined, absorptionPerWtPctMm: 0.4, absorptionReferenceNm: undefined }] });
+    const flat = prepareBasis({
+      pump: BLUE_PUMP,
+      phosphors: [{ ...demoPhosphor('ph-yg555'), excitation: undefined, absorptionPerWtPctMm: 0.4, absorptionReferenceNm: undefined }]
+    });
     const r = beerLambertPhotonBudget(flat.loading!, [8], 0.25);
     expect(r.pumpTransmission).toBeCloseTo(Math.exp(-0.4 * 8 * 0.25), 12);
   });

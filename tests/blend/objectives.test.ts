@@ -34,7 +34,12 @@ describe('objectives and loading output', () => {
   });
 
   it('binding floors are reported', () => {
-    const r = solveBlend({ components: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 90, r9Min: 50 }, objective: 'maxLer' });
+    const r = solveBlend({
+      components: THREE,
+      target: { kind: 'ansiBin', nominalCct: 3000 },
+      floors: { raMin: 90, r9Min: 50 },
+      objective: 'maxLer'
+    });
     expect(r.candidates[0].binding.some((b) => b === 'r9Min' || b === 'raMin')).toBe(true);
     expect(r.candidates[0].inAnsiBin).toBe(true);
   });

@@ -53,7 +53,12 @@ describe('package calibration recovers synthetic truth (Levenberg 1944; Marquard
   });
 
   it('small noise (x,y ± 0.0003, output ± 0.5 %): truth within 3× the stated uncertainty', () => {
-    const m = fitPackageModel(lb, synthetic(0.0003, 0.005), { ...geometry, fitEscape: true, fitIqeScale: true }, { resamples: 40, seed: 5 });
+    const m = fitPackageModel(
+      lb,
+      synthetic(0.0003, 0.005),
+      { ...geometry, fitEscape: true, fitIqeScale: true },
+      { resamples: 40, seed: 5 }
+    );
     expect(m.converged).toBe(true);
     const check = (fitted: number, truth: number, u: number) => {
       expect(u).toBeGreaterThan(0);
@@ -96,7 +101,14 @@ describe('package calibration recovers synthetic truth (Levenberg 1944; Marquard
   it('measured spectra instead of x,y (colour and shape compared): recovers the truth noiselessly', () => {
     const builds = RECIPES.map(({ c, L }, i) => {
       const o = packageObservables(packageSpd(lb, TRUTH, c, L));
-      return { label: `spd ${i + 1}`, concentrationsWtPct: c, pathLengthMm: L, measuredXy: o.xy, measuredSpd: o.spd.map((v) => v * 3.7), outputLmPerPumpW: o.lmPerPumpW };
+      return {
+        label: `spd ${i + 1}`,
+        concentrationsWtPct: c,
+        pathLengthMm: L,
+        measuredXy: o.xy,
+        measuredSpd: o.spd.map((v) => v * 3.7),
+        outputLmPerPumpW: o.lmPerPumpW
+      };
     });
     const fit = calibratePackage(lb, builds.slice(0, 4), { ...geometry, fitEscape: true, fitIqeScale: true });
     expect(fit.converged).toBe(true);
@@ -139,7 +151,11 @@ describe('bootstrap over builds (Efron 1979) is reproducible with a seed', () =>
 describe('round trip: any plausible truth → builds → fit → the same truth (property, fast-check)', () => {
   it('noiseless builds at two paths recover α, escape and IQE scale to 1e-3', () => {
     const truth = fc.record({
-      alpha: fc.tuple(fc.double({ min: 0.1, max: 0.8, noNaN: true }), fc.double({ min: 0.1, max: 0.8, noNaN: true }), fc.double({ min: 0.1, max: 0.8, noNaN: true })),
+      alpha: fc.tuple(
+        fc.double({ min: 0.1, max: 0.8, noNaN: true }),
+        fc.double({ min: 0.1, max: 0.8, noNaN: true }),
+        fc.double({ min: 0.1, max: 0.8, noNaN: true })
+      ),
       escape: fc.double({ min: 0.7, max: 1.6, noNaN: true }),
       iqe: fc.double({ min: 0.8, max: 1.05, noNaN: true })
     });

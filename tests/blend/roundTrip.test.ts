@@ -8,7 +8,13 @@ import { THREE, FOUR, blue } from './fixtures';
 // Source: XYZ is linear in the spectrum (CIE 15:2004 §7, tristimulus integrals); a mix
 // built from known ratios has a colour point the solver must hit again [common practice].
 const cases = [
-  { name: 'pump + 2 phosphors (exact solve)', comps: blue('ph-yg555', 'ph-rd625'), w: [0.12, 0.55, 0.33], tol: 1e-4, source: 'common practice' },
+  {
+    name: 'pump + 2 phosphors (exact solve)',
+    comps: blue('ph-yg555', 'ph-rd625'),
+    w: [0.12, 0.55, 0.33],
+    tol: 1e-4,
+    source: 'common practice'
+  },
   { name: 'pump + 3 phosphors', comps: THREE, w: [0.07, 0.2, 0.27, 0.46], tol: 1e-4, source: 'common practice' },
   { name: 'pump + 4 phosphors', comps: FOUR, w: [0.08, 0.15, 0.3, 0.37, 0.1], tol: 1e-4, source: 'common practice' }
 ];

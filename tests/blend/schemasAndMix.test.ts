@@ -7,25 +7,48 @@ import { THREE } from './fixtures';
 
 describe('zod schemas of the API bodies', () => {
   it('a demo solve problem parses and solves', () => {
-    const body = JSON.parse(JSON.stringify({ components: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 90, r9Min: 50 }, objective: 'maxLer', tolerance: { kind: 'sdcm', steps: 3 } }));
+    const body = JSON.parse(
+      JSON.stringify({
+        components: THREE,
+        target: { kind: 'ansiBin', nominalCct: 3000 },
+        floors: { raMin: 90, r9Min: 50 },
+        objective: 'maxLer',
+        tolerance: { kind: 'sdcm', steps: 3 }
+      })
+    );
     const parsed = solveProblemSchema.parse(body);
     expect(solveBlend(parsed).status).toBe('ok');
   });
 
   it('rejects bad bodies with readable messages', () => {
-    const one = solveProblemSchema.safeParse({ components: { ...THREE, phosphors: THREE.phosphors.slice(0, 1) }, target: { kind: 'ansiBin', nominalCct: 3000 }, objective: 'maxLer' });
+    const one = solveProblemSchema.safeParse({
+      components: { ...THREE, phosphors: THREE.phosphors.slice(0, 1) },
+      target: { kind: 'ansiBin', nominalCct: 3000 },
+      objective: 'maxLer'
+    });
     expect(one.success).toBe(false);
     expect(JSON.stringify(one.error?.issues)).toMatch(/at least 2 phosphors/);
     const obj = solveProblemSchema.safeParse({ components: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, objective: 'fastest' });
     expect(JSON.stringify(obj.error?.issues)).toMatch(/objective must be/);
-    const pump = mixRequestSchema.safeParse({ components: { pump: { id: 'p', name: 'p' }, phosphors: THREE.phosphors }, ratios: { kind: 'optical', fractions: [1, 1, 1, 1] } });
+    const pump = mixRequestSchema.safeParse({
+      components: { pump: { id: 'p', name: 'p' }, phosphors: THREE.phosphors },
+      ratios: { kind: 'optical', fractions: [1, 1, 1, 1] }
+    });
     expect(JSON.stringify(pump.error?.issues)).toMatch(/measured spectrum or parametric/);
-    const spd = mixRequestSchema.safeParse({ components: { ...THREE, phosphors: [{ ...THREE.phosphors[0], emission: { wavelengths: [1, 2, 3, 4, 5], values: [1, 2] } }] }, ratios: { kind: 'optical', fractions: [1, 1] } });
+    const spd = mixRequestSchema.safeParse({
+      components: { ...THREE, phosphors: [{ ...THREE.phosphors[0], emission: { wavelengths: [1, 2, 3, 4, 5], values: [1, 2] } }] },
+      ratios: { kind: 'optical', fractions: [1, 1] }
+    });
     expect(JSON.stringify(spd.error?.issues)).toMatch(/same length/);
   });
 
   it('correction request with measured spectra parses', () => {
-    const r = correctionRequestSchema.safeParse({ components: THREE, recipe: { kind: 'optical', fractions: [0.07, 0.2, 0.27, 0.46] }, measured: { kind: 'spd', spectra: [THREE.phosphors[1].emission] }, target: { kind: 'cctDuv', cct: 3000, duv: 0 } });
+    const r = correctionRequestSchema.safeParse({
+      components: THREE,
+      recipe: { kind: 'optical', fractions: [0.07, 0.2, 0.27, 0.46] },
+      measured: { kind: 'spd', spectra: [THREE.phosphors[1].emission] },
+      target: { kind: 'cctDuv', cct: 3000, duv: 0 }
+    });
     expect(r.success).toBe(true);
   });
 });

@@ -22,7 +22,12 @@ describe('targets outside the component gamut are reported, not faked', () => {
   it('floors no mix can meet give floorsNotMet with best values', () => {
     // Source: Ra ≤ 100 by definition (CIE 13.3-1995 eq. 5–6); a Ra 99.5 floor with three broad
     // bands and a blue pump is far beyond typical pc-LEDs [from memory].
-    const r = solveBlend({ components: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 99.5 }, objective: 'maxLer' });
+    const r = solveBlend({
+      components: THREE,
+      target: { kind: 'ansiBin', nominalCct: 3000 },
+      floors: { raMin: 99.5 },
+      objective: 'maxLer'
+    });
     expect(r.status).toBe('floorsNotMet');
     expect(r.reason).toMatch(/Ra ≥ 99.5/);
     expect(r.bestAchievable.raMin).toBeLessThan(99.5);
@@ -30,6 +35,8 @@ describe('targets outside the component gamut are reported, not faked', () => {
   });
 
   it('rejects a problem with fewer than 2 phosphors', () => {
-    expect(() => solveBlend({ components: blue('ph-yg555'), target: { kind: 'ansiBin', nominalCct: 5000 }, objective: 'maxLer' })).toThrow(/2–5 phosphors/);
+    expect(() => solveBlend({ components: blue('ph-yg555'), target: { kind: 'ansiBin', nominalCct: 5000 }, objective: 'maxLer' })).toThrow(
+      /2–5 phosphors/
+    );
   });
 });

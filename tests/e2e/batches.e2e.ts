@@ -9,7 +9,11 @@ test('a technician plans a batch, downloads the ticket and records weights inclu
   const lots = new Map<string, string>();
   try {
     for (const code of ['GL-530', 'YL-568', 'RD-625']) {
-      const row = await knex('material_lots as l').join('materials as m', 'm.id', 'l.material_id').where('m.code', code).orderBy('l.id', 'desc').first('l.lot_number');
+      const row = await knex('material_lots as l')
+        .join('materials as m', 'm.id', 'l.material_id')
+        .where('m.code', code)
+        .orderBy('l.id', 'desc')
+        .first('l.lot_number');
       lots.set(code, row.lot_number);
     }
   } finally {

@@ -9,7 +9,10 @@ const expect = baseExpect.configure({ timeout: 15_000 });
 
 async function addPhosphor(page: Page, code: string): Promise<void> {
   const select = page.getByLabel('Add a phosphor');
-  const value = await select.evaluate((el: HTMLSelectElement, c) => [...el.options].find((o) => o.text.startsWith(`${c} `))?.value ?? '', code);
+  const value = await select.evaluate(
+    (el: HTMLSelectElement, c) => [...el.options].find((o) => o.text.startsWith(`${c} `))?.value ?? '',
+    code
+  );
   expect(value, `${code} is in the demo library`).not.toBe('');
   await select.selectOption(value);
   await page.getByRole('button', { name: 'Add', exact: true }).click();
@@ -17,7 +20,10 @@ async function addPhosphor(page: Page, code: string): Promise<void> {
 
 async function choosePump(page: Page, code: string): Promise<void> {
   const select = page.getByLabel('Pump');
-  const value = await select.evaluate((el: HTMLSelectElement, c) => [...el.options].find((o) => o.text.startsWith(`${c} `))?.value ?? '', code);
+  const value = await select.evaluate(
+    (el: HTMLSelectElement, c) => [...el.options].find((o) => o.text.startsWith(`${c} `))?.value ?? '',
+    code
+  );
   await select.selectOption(value);
 }
 
@@ -46,7 +52,10 @@ test('a formulator builds a 3000 K blend, searches, puts a proposal on the desk 
   const proposals = page.getByTestId('proposal');
   expect(await proposals.count()).toBeGreaterThanOrEqual(2);
 
-  await proposals.first().getByRole('button', { name: /Put on the desk/ }).click();
+  await proposals
+    .first()
+    .getByRole('button', { name: /Put on the desk/ })
+    .click();
   // The solver places every proposal on the target (blend/solver/solveBlend.ts); 90 CRI class: Ra ≥ 90, R9 ≥ 50 (common practice).
   await expect(page.getByTestId('m-cct')).toHaveText('3000 K');
   await expect(page.getByTestId('m-bin')).toHaveText('3000 K');
@@ -54,8 +63,14 @@ test('a formulator builds a 3000 K blend, searches, puts a proposal on the desk 
   await expect(page.getByTestId('floor-r9Min')).toContainText('pass');
   expect(Number(await page.getByTestId('m-ra').textContent())).toBeGreaterThanOrEqual(90);
 
-  await proposals.nth(0).getByLabel(/Compare/).check();
-  await proposals.nth(1).getByLabel(/Compare/).check();
+  await proposals
+    .nth(0)
+    .getByLabel(/Compare/)
+    .check();
+  await proposals
+    .nth(1)
+    .getByLabel(/Compare/)
+    .check();
   await expect(page.getByTestId('side-by-side')).toBeVisible();
   await expect(page.locator('[data-layer="compared"]')).toHaveCount(2);
 
@@ -81,7 +96,9 @@ test('a formulator builds a 3000 K blend, searches, puts a proposal on the desk 
     const content = JSON.parse(rev.content_json);
     expect(content.pump.code).toBe('B-450');
     expect(content.phosphors.map((p: { code: string }) => p.code)).toEqual(['GL-530', 'YL-568', 'RD-625']);
-    expect(content.pumpLeakFraction + content.phosphors.reduce((s: number, p: { opticalFraction: number }) => s + p.opticalFraction, 0)).toBeCloseTo(1, 6);
+    expect(
+      content.pumpLeakFraction + content.phosphors.reduce((s: number, p: { opticalFraction: number }) => s + p.opticalFraction, 0)
+    ).toBeCloseTo(1, 6);
     expect(content.phosphors.every((p: { wtPct: number | null }) => p.wtPct !== null && p.wtPct > 0)).toBe(true);
     expect(content.silicone.siliconeSystemId).not.toBeNull();
     expect(content.target).toEqual({ kind: 'cctDuv', cct: 3000, duv: 0 });
@@ -101,8 +118,10 @@ test('a formulator builds a 3000 K blend, searches, puts a proposal on the desk 
 async function warmWhiteRevisionId(): Promise<number> {
   const knex = testDb();
   try {
-    const row = await knex('formulation_revisions as r').join('formulations as f', 'f.id', 'r.formulation_id')
-      .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' }).first('r.id');
+    const row = await knex('formulation_revisions as r')
+      .join('formulations as f', 'f.id', 'r.formulation_id')
+      .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' })
+      .first('r.id');
     return Number(row.id);
   } finally {
     await knex.destroy();
@@ -125,7 +144,11 @@ test('dragging a share slider re-evaluates every frame; frame times are recorded
     const slider = document.getElementById('share-3')!;
     slider.addEventListener('input', () => w.__probe.inputs.push(performance.now()));
     const out = document.querySelector('[data-testid="compute-ms"]')!;
-    new MutationObserver(() => w.__probe.computeMs.push(parseFloat(out.textContent!.replace(/[^\d.]/g, '')))).observe(out, { childList: true, characterData: true, subtree: true });
+    new MutationObserver(() => w.__probe.computeMs.push(parseFloat(out.textContent!.replace(/[^\d.]/g, '')))).observe(out, {
+      childList: true,
+      characterData: true,
+      subtree: true
+    });
     const loop = (t: number) => {
       w.__probe.frames.push(t);
       if (!w.__probe.stop) requestAnimationFrame(loop);

@@ -28,7 +28,11 @@ test.afterAll(async () => {
 
 test('a database outage answers 503 and the app recovers by itself', async () => {
   const ctx = await request.newContext({ baseURL: app.url });
-  const signIn = await ctx.post('/auth/callback/credentials', { headers: { Origin: app.url }, form: { email: DEMO.formulator, password: DEMO_PASSWORD, callbackUrl: '/' }, maxRedirects: 0 });
+  const signIn = await ctx.post('/auth/callback/credentials', {
+    headers: { Origin: app.url },
+    form: { email: DEMO.formulator, password: DEMO_PASSWORD, callbackUrl: '/' },
+    maxRedirects: 0
+  });
   expect(signIn.headers()['location'] ?? '').not.toContain('error');
   const me = async () => {
     const r = await ctx.get('/api/v1/me');

@@ -13,7 +13,18 @@ test.beforeAll(async () => {
   try {
     ids = await ensureDemoMaterials(knex);
     const s = await knex('silicone_systems').orderBy('id').first('id');
-    siliconeId = s ? s.id : (await knex('silicone_systems').insert({ name: 'E2E 1:1 encapsulant', ratio_a: 1, ratio_b: 1, pot_life_min: 240, cure: '1 h at 80 °C', safety_note: 'Follow the safety data sheet.' }))[0];
+    siliconeId = s
+      ? s.id
+      : (
+          await knex('silicone_systems').insert({
+            name: 'E2E 1:1 encapsulant',
+            ratio_a: 1,
+            ratio_b: 1,
+            pot_life_min: 240,
+            cure: '1 h at 80 °C',
+            safety_note: 'Follow the safety data sheet.'
+          })
+        )[0];
   } finally {
     await knex.destroy();
   }
@@ -35,7 +46,11 @@ async function as(browser: Browser, email: string): Promise<Page> {
 async function fillWarmWhite(page: Page) {
   await page.getByLabel('Pump', { exact: true }).selectOption(String(ids.get('B-450')));
   await page.getByLabel('Pump leak (optical fraction)').fill('0.07');
-  const rows: [string, string, string][] = [['GL-530', '0.2667', '9.32'], ['YL-568', '0.2346', '7.14'], ['RD-625', '0.4287', '8.29']];
+  const rows: [string, string, string][] = [
+    ['GL-530', '0.2667', '9.32'],
+    ['YL-568', '0.2346', '7.14'],
+    ['RD-625', '0.4287', '8.29']
+  ];
   for (const [i, [c, f, w]] of rows.entries()) {
     await page.getByLabel(`Phosphor ${i + 1}`, { exact: true }).selectOption(String(ids.get(c)));
     await page.getByLabel(`Optical fraction ${i + 1}`).fill(f);
@@ -127,25 +142,49 @@ test('a form post that edits a submitted revision is refused and the database ro
   const api = await signedInContext(DEMO.formulator);
   const m = (c: string) => ({ materialId: ids.get(c)!, code: c, name: c });
   const content = {
-    pump: m('B-450'), pumpLeakFraction: 0.07, loading: null,
-    phosphors: [{ ...m('GL-530'), opticalFraction: 0.2667, wtPct: null }, { ...m('YL-568'), opticalFraction: 0.2346, wtPct: null }, { ...m('RD-625'), opticalFraction: 0.4287, wtPct: null }],
+    pump: m('B-450'),
+    pumpLeakFraction: 0.07,
+    loading: null,
+    phosphors: [
+      { ...m('GL-530'), opticalFraction: 0.2667, wtPct: null },
+      { ...m('YL-568'), opticalFraction: 0.2346, wtPct: null },
+      { ...m('RD-625'), opticalFraction: 0.4287, wtPct: null }
+    ],
     silicone: { siliconeSystemId: siliconeId, name: '-', ratioA: 1, ratioB: 1, potLifeMin: 1, cure: '', densityGPerCm3: null },
-    target: { kind: 'cctDuv', cct: 3000, duv: 0 }, tolerance: { kind: 'sdcm', steps: 3 }, floors: { raMin: 90 }, notes: 'as submitted'
+    target: { kind: 'cctDuv', cct: 3000, duv: 0 },
+    tolerance: { kind: 'sdcm', steps: 3 },
+    floors: { raMin: 90 },
+    notes: 'as submitted'
   };
   const created = await api.post('/api/v1/formulations', { data: { name: 'E2E locked', content } });
   expect(created.status()).toBe(201);
   const { formulationId, revisionId } = await created.json();
-  expect((await api.post(`/api/v1/formulations/${formulationId}/revisions/${revisionId}/submit`, { data: { version: 1 } })).status()).toBe(200);
+  expect((await api.post(`/api/v1/formulations/${formulationId}/revisions/${revisionId}/submit`, { data: { version: 1 } })).status()).toBe(
+    200
+  );
   const before = await revisionRow(revisionId);
   const res = await api.post(`/formulations/${formulationId}/revisions/${revisionId}?/save`, {
-    headers: { Origin: BASE, accept: 'text/html' }, maxRedirects: 0, // as a browser posts the form without JavaScript
-    form: { version: String(before.version), pumpId: String(ids.get('B-450')), leak: '0.5', ph0: String(ids.get('YL-568')), of0: '0.5', siliconeId: String(siliconeId), cct: '5000', sdcm: '3', notes: 'tampered' }
+    headers: { Origin: BASE, accept: 'text/html' },
+    maxRedirects: 0, // as a browser posts the form without JavaScript
+    form: {
+      version: String(before.version),
+      pumpId: String(ids.get('B-450')),
+      leak: '0.5',
+      ph0: String(ids.get('YL-568')),
+      of0: '0.5',
+      siliconeId: String(siliconeId),
+      cct: '5000',
+      sdcm: '3',
+      notes: 'tampered'
+    }
   });
   const body = await res.text();
   expect(res.status()).toBe(409);
   expect(body).toContain('revision is submitted');
   expect(await revisionRow(revisionId)).toEqual(before);
-  const put = await api.put(`/api/v1/formulations/${formulationId}/revisions/${revisionId}`, { data: { version: before.version, content: { ...content, notes: 'tampered' } } });
+  const put = await api.put(`/api/v1/formulations/${formulationId}/revisions/${revisionId}`, {
+    data: { version: before.version, content: { ...content, notes: 'tampered' } }
+  });
   expect(put.status()).toBe(409);
   expect(await revisionRow(revisionId)).toEqual(before);
   await api.dispose();

@@ -20,7 +20,10 @@ const shortHostile = (field: string) => `${field}<b>x</b>'"; --%_${RUN}`;
 /** The page shows each text as characters: no element made from it, no script run, no dialog. */
 async function expectShownLiterally(page: Page, url: string, texts: string[]): Promise<void> {
   const dialogs: string[] = [];
-  page.on('dialog', (d) => { dialogs.push(d.message()); void d.dismiss(); });
+  page.on('dialog', (d) => {
+    dialogs.push(d.message());
+    void d.dismiss();
+  });
   await page.goto(url);
   const body = page.locator('main');
   for (const t of texts) await expect(body, `${url} shows ${t.slice(0, 12)}… as typed`).toContainText(t);
@@ -38,22 +41,33 @@ test('markup and SQL typed into every text field are stored and shown literally'
   const knex = testDb();
   try {
     // Material: every free-text field through the API, a lot through the page's form action.
-    const material = { name: hostile('name'), family: hostile('family'), supplier: hostile('supplier'), notes: hostile('notes'), safetyNote: hostile('safety') };
+    const material = {
+      name: hostile('name'),
+      family: hostile('family'),
+      supplier: hostile('supplier'),
+      notes: hostile('notes'),
+      safetyNote: hostile('safety')
+    };
     const created = await json(formulator, '/api/v1/phosphors', { code: `HX-${RUN}`, iqe: 0.9, densityGCm3: 4.6, ...material });
     expect(created.status(), await created.text()).toBe(201);
     const materialId = (await created.json()).id as number;
     const back = await (await formulator.get(`/api/v1/phosphors/${materialId}`)).json();
     for (const [k, v] of Object.entries(material)) expect(back[k], `API gives ${k} back as typed`).toBe(v);
     const lot = { lotNumber: shortHostile('lot'), supplier: shortHostile('lotsup'), notes: hostile('lotnotes') };
-    const addLot = await formulator.post(`/library/${materialId}?/addLot`, { headers: { Origin: BASE, 'x-sveltekit-action': 'true' }, form: { ...lot, receivedOn: '', expiresOn: '' } });
+    const addLot = await formulator.post(`/library/${materialId}?/addLot`, {
+      headers: { Origin: BASE, 'x-sveltekit-action': 'true' },
+      form: { ...lot, receivedOn: '', expiresOn: '' }
+    });
     expect(addLot.status()).toBe(200);
-    expect(JSON.parse((await addLot.text())).type, await addLot.text()).toBe('success');
+    expect(JSON.parse(await addLot.text()).type, await addLot.text()).toBe('success');
     const lotRow = (await knex('material_lots').where({ material_id: materialId }).first('lot_number', 'supplier', 'notes'))!;
     expect([lotRow.lot_number, lotRow.supplier, lotRow.notes]).toEqual([lot.lotNumber, lot.supplier, lot.notes]);
 
     // Formulation and its first revision (content copied from an approved demo revision).
-    const approved = await knex('formulation_revisions as r').join('formulations as f', 'f.id', 'r.formulation_id')
-      .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' }).first('r.id', 'r.content_json');
+    const approved = await knex('formulation_revisions as r')
+      .join('formulations as f', 'f.id', 'r.formulation_id')
+      .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' })
+      .first('r.id', 'r.content_json');
     const content = { ...JSON.parse(approved.content_json), notes: hostile('revnotes') };
     const meta = { name: hostile('fname'), description: hostile('fdesc') };
     const formulation = await json(formulator, '/api/v1/formulations', { ...meta, content });
@@ -65,7 +79,11 @@ test('markup and SQL typed into every text field are stored and shown literally'
     expect((await json(formulator, `${revBase}/submit`, { version: 1 })).status()).toBe(200);
     const revVersion = async () => (await knex('formulation_revisions').where({ id: revisionId }).first('version'))!.version as number;
     const reviewComment = hostile('review');
-    const reviewed = await json(quality, `${revBase}/review`, { version: await revVersion(), password: DEMO_PASSWORD, comment: reviewComment });
+    const reviewed = await json(quality, `${revBase}/review`, {
+      version: await revVersion(),
+      password: DEMO_PASSWORD,
+      comment: reviewComment
+    });
     expect(reviewed.status(), await reviewed.text()).toBe(200);
     const reason = hostile('reason');
     const returned = await json(quality, `${revBase}/return`, { version: await revVersion(), password: DEMO_PASSWORD, reason });
@@ -81,8 +99,12 @@ test('markup and SQL typed into every text field are stored and shown literally'
     // Batch notes (a technician plans a batch of the approved demo revision).
     const batchNotes = hostile('bnotes');
     const batch = await json(technician, '/api/v1/batches', {
-      revisionId: approved.id, sizing: { kind: 'mass', batchMassG: 50 }, loading: { mode: 'perPhosphor', basis: 'wtPctOfSlurry' },
-      additives: [], balance: { resolutionG: 0.01, minWeightG: 0.05 }, notes: batchNotes
+      revisionId: approved.id,
+      sizing: { kind: 'mass', batchMassG: 50 },
+      loading: { mode: 'perPhosphor', basis: 'wtPctOfSlurry' },
+      additives: [],
+      balance: { resolutionG: 0.01, minWeightG: 0.05 },
+      notes: batchNotes
     });
     expect(batch.status(), await batch.text()).toBe(201);
     const batchId = (await batch.json()).id as number;
@@ -90,12 +112,19 @@ test('markup and SQL typed into every text field are stored and shown literally'
 
     // Quality's signed release of a measured batch, with its comment.
     const measured = await completedBatch();
-    const upload = await quality.post(`/api/v1/measurements/${measured.id}`, { data: measured.csv, headers: { 'content-type': 'text/csv', Origin: BASE } });
+    const upload = await quality.post(`/api/v1/measurements/${measured.id}`, {
+      data: measured.csv,
+      headers: { 'content-type': 'text/csv', Origin: BASE }
+    });
     expect(upload.status(), await upload.text()).toBe(201);
     const dispositionComment = hostile('dcomment');
     const batchVersion = (await knex('batches').where({ id: measured.id }).first('version'))!.version;
     const released = await json(quality, `/api/v1/measurements/${measured.id}/disposition`, {
-      decision: 'release', meaning: DISPOSITION_MEANINGS.release[0], comment: dispositionComment, password: DEMO_PASSWORD, version: batchVersion
+      decision: 'release',
+      meaning: DISPOSITION_MEANINGS.release[0],
+      comment: dispositionComment,
+      password: DEMO_PASSWORD,
+      version: batchVersion
     });
     expect(released.status(), await released.text()).toBe(201);
 

@@ -38,19 +38,29 @@ function multipart(fileName: string, text: string): { body: Buffer; type: string
  * Starts the upload with its full Content-Length, waits for the server's "100 Continue" (the app
  * has the request), sends only `sendBytes` of the body, calls `whileStalled`, then cuts the connection.
  */
-function cutUpload(path: string, upload: { body: Buffer; type: string }, sendBytes: number, whileStalled: () => Promise<void>): Promise<void> {
+function cutUpload(
+  path: string,
+  upload: { body: Buffer; type: string },
+  sendBytes: number,
+  whileStalled: () => Promise<void>
+): Promise<void> {
   return new Promise((resolve, reject) => {
     const url = new URL(path, BASE);
     const req = http.request(url, {
       method: 'POST',
       headers: {
-        authorization: `Bearer ${token}`, origin: BASE, 'content-type': upload.type,
-        'content-length': String(upload.body.length), expect: '100-continue'
+        authorization: `Bearer ${token}`,
+        origin: BASE,
+        'content-type': upload.type,
+        'content-length': String(upload.body.length),
+        expect: '100-continue'
       }
     });
     let cut = false;
     req.on('response', (res) => reject(new Error(`the app answered ${res.statusCode} before the body was complete`)));
-    req.on('error', (err) => { if (!cut) reject(err); });
+    req.on('error', (err) => {
+      if (!cut) reject(err);
+    });
     req.on('continue', () => {
       req.write(upload.body.subarray(0, sendBytes), () => {
         whileStalled().then(() => {
@@ -67,7 +77,8 @@ function cutUpload(path: string, upload: { body: Buffer; type: string }, sendByt
 async function storedState() {
   const knex = testDb();
   try {
-    const count = async <T extends {}>(q: Knex.QueryBuilder<T>) => Number(((await q.count({ n: '*' }).first()) as { n: number | string }).n);
+    const count = async <T extends {}>(q: Knex.QueryBuilder<T>) =>
+      Number(((await q.count({ n: '*' }).first()) as { n: number | string }).n);
     return {
       files: await count(knex('stored_files').where({ entity_type: 'material', entity_id: String(materialId) })),
       cutFiles: await count(knex('stored_files').where('original_name', 'like', `cut-${run}-%`)),
@@ -82,7 +93,8 @@ async function storedState() {
 /** Object keys in the (shared) bucket holding this run's cut file names. */
 async function cutObjects(): Promise<string[]> {
   const s3 = new S3Client({
-    region: process.env.S3_REGION ?? 'us-east-1', endpoint: process.env.S3_ENDPOINT ?? 'http://127.0.0.1:4570',
+    region: process.env.S3_REGION ?? 'us-east-1',
+    endpoint: process.env.S3_ENDPOINT ?? 'http://127.0.0.1:4570',
     forcePathStyle: (process.env.S3_FORCE_PATH_STYLE ?? 'true') === 'true',
     credentials: { accessKeyId: process.env.S3_ACCESS_KEY_ID ?? 'S3RVER', secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? 'S3RVER' }
   });
@@ -90,7 +102,13 @@ async function cutObjects(): Promise<string[]> {
   let next: string | undefined;
   try {
     do {
-      const page = await s3.send(new ListObjectsV2Command({ Bucket: process.env.S3_BUCKET ?? 'phosforge-files', Prefix: 'spectrum-source/', ContinuationToken: next }));
+      const page = await s3.send(
+        new ListObjectsV2Command({
+          Bucket: process.env.S3_BUCKET ?? 'phosforge-files',
+          Prefix: 'spectrum-source/',
+          ContinuationToken: next
+        })
+      );
       for (const o of page.Contents ?? []) if (o.Key?.includes(`cut-${run}-`)) found.push(o.Key);
       next = page.IsTruncated ? page.NextContinuationToken : undefined;
     } while (next);
@@ -104,7 +122,9 @@ test.beforeAll(async () => {
   await makeUser(USER.email, ['formulator'], USER.password);
   token = await createApiToken(USER.email, USER.password, 'interrupted-upload');
   api = await tokenContext(BASE, token);
-  const res = await api.post('/api/v1/phosphors', { data: { code: `CUT-${run.toUpperCase()}`, name: 'Interrupted-upload test nitride', iqe: 0.88 } });
+  const res = await api.post('/api/v1/phosphors', {
+    data: { code: `CUT-${run.toUpperCase()}`, name: 'Interrupted-upload test nitride', iqe: 0.88 }
+  });
   expect(res.status(), await res.text()).toBe(201);
   materialId = (await res.json()).id;
 });
@@ -123,7 +143,10 @@ test('an upload cut off mid-body stores nothing, blocks no edit, and the app kee
   // Cut at half the body, then one byte short of the end (the closing boundary incomplete). The
   // cut uploads name no version, so had the app saved a partial body nothing would have refused it.
   let version = before.version;
-  for (const [label, fraction] of [['half', 0.5], ['all but the last byte', -1]] as const) {
+  for (const [label, fraction] of [
+    ['half', 0.5],
+    ['all but the last byte', -1]
+  ] as const) {
     const upload = multipart(`cut-${run}-${label.replace(/\W+/g, '-')}.csv`, text);
     const sendBytes = fraction < 0 ? upload.body.length - 1 : Math.floor(upload.body.length * fraction);
     await cutUpload(path, upload, sendBytes, async () => {
@@ -131,7 +154,9 @@ test('an upload cut off mid-body stores nothing, blocks no edit, and the app kee
       const t0 = Date.now();
       const edit = await api.put(`/api/v1/phosphors/${materialId}`, { data: { version, notes: `edited while an upload hung (${label})` } });
       expect(edit.status(), await edit.text()).toBe(200);
-      console.log(`interrupted upload (${label}, ${sendBytes} of ${upload.body.length} bytes sent): an edit of the same material answered in ${Date.now() - t0} ms`);
+      console.log(
+        `interrupted upload (${label}, ${sendBytes} of ${upload.body.length} bytes sent): an edit of the same material answered in ${Date.now() - t0} ms`
+      );
       version += 1;
     });
   }
@@ -139,7 +164,9 @@ test('an upload cut off mid-body stores nothing, blocks no edit, and the app kee
   // The app still answers, and the upload then goes through in full with the current version.
   const health = await api.get('/api/health');
   expect(health.status()).toBe(200);
-  const ok = await api.post(`${path}&version=${version}`, { multipart: { file: { name: `whole-${run}.csv`, mimeType: 'text/csv', buffer: Buffer.from(text) } } });
+  const ok = await api.post(`${path}&version=${version}`, {
+    multipart: { file: { name: `whole-${run}.csv`, mimeType: 'text/csv', buffer: Buffer.from(text) } }
+  });
   expect(ok.status(), await ok.text()).toBe(201);
   expect(await ok.json()).toMatchObject({ saved: true, version: version + 1, points: 801 });
 

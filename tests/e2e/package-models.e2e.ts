@@ -36,8 +36,10 @@ test('a formulator fits a package model from pasted builds; a bad line is named 
   const detail = await (await page.request.get(`/api/v1/package-models/${seeded.id}`)).json();
   // Refit the seeded model's own builds under a new name: the fit must land where the seed's did.
   const codes = detail.phosphors.map((p: { code: string }) => p.code);
-  const rows = detail.builds.map((b: { label: string; concentrationsWtPct: number[]; x: number; y: number; pathLengthMm: number; outputWPerPumpW: number }) =>
-    [b.label, ...b.concentrationsWtPct, b.x, b.y, b.pathLengthMm, b.outputWPerPumpW].join(','));
+  const rows = detail.builds.map(
+    (b: { label: string; concentrationsWtPct: number[]; x: number; y: number; pathLengthMm: number; outputWPerPumpW: number }) =>
+      [b.label, ...b.concentrationsWtPct, b.x, b.y, b.pathLengthMm, b.outputWPerPumpW].join(',')
+  );
   await page.getByLabel('Model name').fill(name);
   await page.getByLabel('Package type').fill('test cavity');
   await page.getByLabel('IQE scale (needs measured output)').check();

@@ -11,7 +11,9 @@ test('quality uploads a multi-part file, sees the plot and releases the batch', 
   await page.waitForURL(new RegExp(`/measurements/${batch.id}$`));
   await expect(page.getByTestId('batch-state')).toHaveText('complete');
 
-  await page.getByLabel('Measurement file', { exact: true }).setInputFiles({ name: 'sphere-export.csv', mimeType: 'text/csv', buffer: Buffer.from(batch.csv) });
+  await page
+    .getByLabel('Measurement file', { exact: true })
+    .setInputFiles({ name: 'sphere-export.csv', mimeType: 'text/csv', buffer: Buffer.from(batch.csv) });
   await page.getByRole('button', { name: 'Upload and measure' }).click();
   await expect(page.getByTestId('upload-done')).toContainText('12 parts measured and saved');
 

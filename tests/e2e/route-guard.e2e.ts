@@ -13,7 +13,10 @@ type Who = Role | 'anonymous' | `token:${Role}` | Dead;
 const DEAD_TOKENS: Dead[] = ['token:expired', 'token:revoked', 'token:deactivated'];
 
 function expected(audience: Audience, who: Who): 'allow' | 'signin' | 'forbidden' {
-  const role = who === 'anonymous' || who.endsWith(':expired') || who.endsWith(':revoked') || who.endsWith(':deactivated') ? null : (who.replace('token:', '') as Role);
+  const role =
+    who === 'anonymous' || who.endsWith(':expired') || who.endsWith(':revoked') || who.endsWith(':deactivated')
+      ? null
+      : (who.replace('token:', '') as Role);
   if (audience === 'public') return 'allow';
   if (!role) return 'signin';
   if (audience === 'signedIn') return 'allow';
@@ -42,7 +45,9 @@ test.beforeAll(async () => {
   const live = await tokenFor(session, 'live');
   const knex = testDb();
   try {
-    await knex('api_tokens').where({ user_id: staleId, name: 'to expire' }).update({ expires_at: new Date(Date.now() - 86_400_000) });
+    await knex('api_tokens')
+      .where({ user_id: staleId, name: 'to expire' })
+      .update({ expires_at: new Date(Date.now() - 86_400_000) });
     await knex('api_tokens').where({ user_id: staleId, name: 'to revoke' }).update({ revoked_at: new Date() });
     await knex('users').where({ id: deadId }).update({ active: false, deactivated_at: new Date() });
   } finally {
@@ -65,16 +70,31 @@ test('every route × role × method answers as the route table says', async () =
     const isApi = rule.sample.startsWith('/api/');
     if (id === '/signout') continue; // signing out would end the shared sessions; covered in sign-in.e2e.ts
     for (const [method, audience] of Object.entries(rule.methods) as [Method, Audience][]) {
-      const whos: Who[] = ['anonymous', ...ROLES, 'session:deactivated', ...(isApi ? [...ROLES.map((r) => `token:${r}` as Who), ...DEAD_TOKENS] : [])];
+      const whos: Who[] = [
+        'anonymous',
+        ...ROLES,
+        'session:deactivated',
+        ...(isApi ? [...ROLES.map((r) => `token:${r}` as Who), ...DEAD_TOKENS] : [])
+      ];
       for (const who of whos) {
         const ctx = contexts.get(who)!;
-        const res = await ctx.fetch(rule.sample, { method, headers: { Origin: BASE, accept: isApi ? 'application/json' : 'text/html' }, maxRedirects: 0, data: method === 'GET' ? undefined : {} });
+        const res = await ctx.fetch(rule.sample, {
+          method,
+          headers: { Origin: BASE, accept: isApi ? 'application/json' : 'text/html' },
+          maxRedirects: 0,
+          data: method === 'GET' ? undefined : {}
+        });
         const status = res.status();
         const want = expected(audience, who);
         const location = res.headers()['location'] ?? '';
-        const ok = want === 'forbidden' ? status === 403
-          : want === 'signin' ? (isApi ? status === 401 : status === 303 && location.startsWith('/signin'))
-          : status !== 401 && status !== 403 && !(status === 303 && location.startsWith('/signin'));
+        const ok =
+          want === 'forbidden'
+            ? status === 403
+            : want === 'signin'
+              ? isApi
+                ? status === 401
+                : status === 303 && location.startsWith('/signin')
+              : status !== 401 && status !== 403 && !(status === 303 && location.startsWith('/signin'));
         checks++;
         if (!ok) failures.push(`${method} ${rule.sample} as ${who}: expected ${want}, got ${status} ${location}`);
       }

@@ -7,9 +7,16 @@ import { BASE, DEMO, DEMO_PASSWORD, makeUser, postSignIn, signedInContext, testD
 
 test('form actions refuse a cross-site origin (CSRF)', async () => {
   const ctx = await signedInContext(DEMO.admin);
-  const res = await ctx.post('/profile?/createToken', { headers: { Origin: 'https://evil.example' }, form: { name: 'csrf', days: '1' }, maxRedirects: 0 });
+  const res = await ctx.post('/profile?/createToken', {
+    headers: { Origin: 'https://evil.example' },
+    form: { name: 'csrf', days: '1' },
+    maxRedirects: 0
+  });
   expect(res.status()).toBe(403);
-  const ok = await ctx.post('/profile?/createToken', { headers: { Origin: BASE, 'x-sveltekit-action': 'true' }, form: { name: 'same-site', days: '1' } });
+  const ok = await ctx.post('/profile?/createToken', {
+    headers: { Origin: BASE, 'x-sveltekit-action': 'true' },
+    form: { name: 'same-site', days: '1' }
+  });
   expect(ok.status()).toBe(200);
   await ctx.dispose();
 });
@@ -38,9 +45,16 @@ test.describe('production mode', () => {
 
   test('session cookies are Secure, HttpOnly and SameSite behind an https origin', async () => {
     const ctx = await request.newContext({ baseURL: app.url });
-    const res = await ctx.post('/auth/callback/credentials', { headers: { Origin: origin }, form: { email: DEMO.quality, password: DEMO_PASSWORD, callbackUrl: '/' }, maxRedirects: 0 });
+    const res = await ctx.post('/auth/callback/credentials', {
+      headers: { Origin: origin },
+      form: { email: DEMO.quality, password: DEMO_PASSWORD, callbackUrl: '/' },
+      maxRedirects: 0
+    });
     expect(res.status()).toBe(302);
-    const cookies = res.headersArray().filter((h) => h.name.toLowerCase() === 'set-cookie').map((h) => h.value);
+    const cookies = res
+      .headersArray()
+      .filter((h) => h.name.toLowerCase() === 'set-cookie')
+      .map((h) => h.value);
     const session = cookies.find((c) => /session-token=/.test(c));
     expect(session, cookies.join('\n')).toMatch(/^__Secure-authjs\.session-token=[^;]+;/);
     expect(session).toMatch(/;\s*Secure/i);
@@ -80,7 +94,8 @@ test('form posts with a body that is not a readable form are refused with 400, n
   const materialId = (await knex('materials').first('id'))!.id;
   await knex.destroy();
   // A multipart body cut off before its closing boundary, as a dropped connection leaves it.
-  const cutOff = '--XYZ\r\nContent-Disposition: form-data; name="file"; filename="spd.csv"\r\nContent-Type: text/csv\r\n\r\n380,0.1\r\n381,0.2\r\n';
+  const cutOff =
+    '--XYZ\r\nContent-Disposition: form-data; name="file"; filename="spd.csv"\r\nContent-Type: text/csv\r\n\r\n380,0.1\r\n381,0.2\r\n';
   const headers = { Origin: BASE, 'content-type': 'multipart/form-data; boundary=XYZ', accept: 'text/html' };
   const anonymous = await request.newContext({ baseURL: BASE });
   expect((await anonymous.post('/signin', { headers, data: cutOff, maxRedirects: 0 })).status()).toBe(400);

@@ -79,7 +79,10 @@ test.describe('throttling and deactivation over HTTP', () => {
     const me = await bearer.get('/api/v1/me');
     expect(me.status()).toBe(200);
     expect((await me.json()).roles).toEqual(['formulator']);
-    await page.getByRole('row', { name: /revocation probe/ }).getByRole('button', { name: 'Revoke' }).click();
+    await page
+      .getByRole('row', { name: /revocation probe/ })
+      .getByRole('button', { name: 'Revoke' })
+      .click();
     await expect(page.getByRole('row', { name: /revocation probe/ })).toContainText('revoked');
     expect((await bearer.get('/api/v1/me')).status()).toBe(401);
     await bearer.dispose();

@@ -46,7 +46,10 @@ test('a session made on one instance is honoured by the other (shared secret, no
   const a = await ctxFor(BASE);
   expect(await postSignIn(a, email, 'right-password-123')).not.toContain('error');
   const state = await a.storageState();
-  const b = await request.newContext({ baseURL: second.url, storageState: { cookies: state.cookies.map((c) => ({ ...c, domain: '127.0.0.1' })), origins: [] } });
+  const b = await request.newContext({
+    baseURL: second.url,
+    storageState: { cookies: state.cookies.map((c) => ({ ...c, domain: '127.0.0.1' })), origins: [] }
+  });
   contexts.push(b);
   const me = await b.get('/api/v1/me');
   expect(me.status()).toBe(200);
@@ -68,7 +71,10 @@ async function both(who: string): Promise<{ a: APIRequestContext; b: APIRequestC
   return { a, b };
 }
 
-const unique = (prefix: string) => `${prefix}-${Date.now().toString(36).toUpperCase()}${Math.floor(Math.random() * 1296).toString(36).toUpperCase()}`;
+const unique = (prefix: string) =>
+  `${prefix}-${Date.now().toString(36).toUpperCase()}${Math.floor(Math.random() * 1296)
+    .toString(36)
+    .toUpperCase()}`;
 
 /** A content known to be valid: the first approved demo revision's (seeds/03_formulations.ts). */
 async function validContent(): Promise<Record<string, unknown>> {
@@ -82,7 +88,10 @@ async function validContent(): Promise<Record<string, unknown>> {
   }
 }
 
-async function newDraft(api: APIRequestContext, notes: string): Promise<{ formulationId: number; revisionId: number; content: Record<string, unknown> }> {
+async function newDraft(
+  api: APIRequestContext,
+  notes: string
+): Promise<{ formulationId: number; revisionId: number; content: Record<string, unknown> }> {
   const content = { ...(await validContent()), notes };
   const res = await api.post('/api/v1/formulations', { data: { code: unique('TI'), name: 'Two-instance test blend', content } });
   expect(res.status(), await res.text()).toBe(201);
@@ -104,7 +113,9 @@ test.describe('writes through both instances', () => {
   test('a material read on A and edited on B: the stale edit on A gets 409 and overwrites nothing', async () => {
     const { a, b } = await both('author');
     const code = unique('TI');
-    const created = await a.post('/api/v1/phosphors', { data: { code, name: 'Two-instance test garnet', iqe: 0.9, supplier: 'Larkspur Luminescent Materials' } });
+    const created = await a.post('/api/v1/phosphors', {
+      data: { code, name: 'Two-instance test garnet', iqe: 0.9, supplier: 'Larkspur Luminescent Materials' }
+    });
     expect(created.status(), await created.text()).toBe(201);
     const id = (await created.json()).id as number;
     const knex = testDb();
@@ -115,7 +126,9 @@ test.describe('writes through both instances', () => {
       expect(onB.status(), await onB.text()).toBe(200);
       expect((await onB.json()).version).toBe(2);
 
-      const stale = await a.put(`/api/v1/phosphors/${id}`, { data: { version: read.version, name: 'Stale rename on instance A', iqe: 0.7 } });
+      const stale = await a.put(`/api/v1/phosphors/${id}`, {
+        data: { version: read.version, name: 'Stale rename on instance A', iqe: 0.7 }
+      });
       expect(stale.status()).toBe(409);
       const why = (await stale.json()).error as string;
       expect(why).toMatch(/changed by someone else/);
@@ -124,7 +137,9 @@ test.describe('writes through both instances', () => {
       // The row still holds B's edit, and only one update reached the audit trail.
       const row = (await knex('materials').where({ id }).first('name', 'iqe', 'version'))!;
       expect({ ...row, iqe: Number(row.iqe) }).toEqual({ name: 'Renamed on instance B', iqe: 0.85, version: 2 });
-      const updates = await knex('audit_events').where({ entity_type: 'material', entity_id: String(id), action: 'update' }).count<{ n: number }[]>('* as n');
+      const updates = await knex('audit_events')
+        .where({ entity_type: 'material', entity_id: String(id), action: 'update' })
+        .count<{ n: number }[]>('* as n');
       expect(Number(updates[0].n)).toBe(1);
 
       // Both instances write version 2 at the same moment: the row lock lets exactly one through.
@@ -164,7 +179,11 @@ test.describe('writes through both instances', () => {
     const knex = testDb();
     try {
       const row = (await knex('formulation_revisions').where({ id: draft.revisionId }).first('content_json', 'version', 'state'))!;
-      expect({ notes: JSON.parse(row.content_json).notes, version: row.version, state: row.state }).toEqual({ notes: 'saved on instance B', version: 2, state: 'draft' });
+      expect({ notes: JSON.parse(row.content_json).notes, version: row.version, state: row.state }).toEqual({
+        notes: 'saved on instance B',
+        version: 2,
+        state: 'draft'
+      });
     } finally {
       await knex.destroy();
     }
@@ -199,9 +218,15 @@ test.describe('writes through both instances', () => {
 
     const knex = testDb();
     try {
-      const signatures = await knex('revision_signatures').where({ revision_id: draft.revisionId }).select('meaning', 'signer_id', 'comment');
+      const signatures = await knex('revision_signatures')
+        .where({ revision_id: draft.revisionId })
+        .select('meaning', 'signer_id', 'comment');
       expect(signatures).toEqual([{ meaning: 'approved', signer_id: ids.approver, comment: 'Signed on instance B' }]);
-      expect(await knex('formulation_revisions').where({ id: draft.revisionId }).first('state', 'decided_by', 'version')).toEqual({ state: 'approved', decided_by: ids.approver, version: 3 });
+      expect(await knex('formulation_revisions').where({ id: draft.revisionId }).first('state', 'decided_by', 'version')).toEqual({
+        state: 'approved',
+        decided_by: ids.approver,
+        version: 3
+      });
     } finally {
       await knex.destroy();
     }
@@ -229,7 +254,10 @@ test.describe('writes through both instances', () => {
     try {
       const signatures = await knex('revision_signatures').where({ revision_id: draft.revisionId }).select('meaning', 'signer_id');
       expect(signatures).toEqual([{ meaning: 'approved', signer_id: winner }]);
-      expect(await knex('formulation_revisions').where({ id: draft.revisionId }).first('state', 'decided_by')).toEqual({ state: 'approved', decided_by: winner });
+      expect(await knex('formulation_revisions').where({ id: draft.revisionId }).first('state', 'decided_by')).toEqual({
+        state: 'approved',
+        decided_by: winner
+      });
     } finally {
       await knex.destroy();
     }

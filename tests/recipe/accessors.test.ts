@@ -1,10 +1,21 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { fractionsWithLeak, loadingOf, materialIdsOf, parseRecipe, phosphorLines, recipeLines, type RevisionContent } from '../../src/lib/recipe';
+import {
+  fractionsWithLeak,
+  loadingOf,
+  materialIdsOf,
+  parseRecipe,
+  phosphorLines,
+  recipeLines,
+  type RevisionContent
+} from '../../src/lib/recipe';
 import { LEGACY_ROW } from './fixtures';
 
 const content = parseRecipe(LEGACY_ROW);
-const withWt = (wt: (number | null)[]): RevisionContent => ({ ...content, phosphors: content.phosphors.map((p, i) => ({ ...p, wtPct: wt[i] })) });
+const withWt = (wt: (number | null)[]): RevisionContent => ({
+  ...content,
+  phosphors: content.phosphors.map((p, i) => ({ ...p, wtPct: wt[i] }))
+});
 
 describe('recipe lines (values from tests/recipe/fixtures.ts)', () => {
   it('lists the optical fractions pump leak first, then the phosphors as listed (the mix order)', () => {
@@ -34,14 +45,25 @@ describe('round trip: stored text → parseRecipe → stored text', () => {
     wtPct: fc.option(fc.double({ min: 0, max: 100, noNaN: true }), { nil: null })
   });
   it('reads any valid content to the same lines, with or without the version tag', () => {
-    fc.assert(fc.property(fc.array(line, { minLength: 1, maxLength: 5 }), fc.double({ min: 0, max: 1, noNaN: true }), fc.boolean(), (phosphors, leak, tagged) => {
-      const { contentVersion: _v, ...untagged } = { ...content, phosphors, pumpLeakFraction: leak };
-      const stored = JSON.stringify(tagged ? { contentVersion: 1, ...untagged } : untagged);
-      const read = parseRecipe(stored);
-      expect(read.contentVersion).toBe(1);
-      expect(phosphorLines(read)).toEqual(JSON.parse(stored).phosphors);
-      expect(fractionsWithLeak(read)).toEqual([JSON.parse(stored).pumpLeakFraction, ...JSON.parse(stored).phosphors.map((p: { opticalFraction: number }) => p.opticalFraction)]);
-      expect(parseRecipe(JSON.stringify(read))).toEqual(read);
-    }), { numRuns: 200 });
+    fc.assert(
+      fc.property(
+        fc.array(line, { minLength: 1, maxLength: 5 }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.boolean(),
+        (phosphors, leak, tagged) => {
+          const { contentVersion: _v, ...untagged } = { ...content, phosphors, pumpLeakFraction: leak };
+          const stored = JSON.stringify(tagged ? { contentVersion: 1, ...untagged } : untagged);
+          const read = parseRecipe(stored);
+          expect(read.contentVersion).toBe(1);
+          expect(phosphorLines(read)).toEqual(JSON.parse(stored).phosphors);
+          expect(fractionsWithLeak(read)).toEqual([
+            JSON.parse(stored).pumpLeakFraction,
+            ...JSON.parse(stored).phosphors.map((p: { opticalFraction: number }) => p.opticalFraction)
+          ]);
+          expect(parseRecipe(JSON.stringify(read))).toEqual(read);
+        }
+      ),
+      { numRuns: 200 }
+    );
   });
 });

@@ -11,7 +11,15 @@ const legacyContent = {
   ],
   pumpLeakFraction: 0.15,
   loading: { pathLengthMm: 0.3, basis: 'wtPctOfSlurry' },
-  silicone: { siliconeSystemId: 7, name: 'Test 1:1 encapsulant', ratioA: 1, ratioB: 1, potLifeMin: 240, cure: '1 h at 80 °C, then 2 h at 150 °C', densityGPerCm3: 1.08 },
+  silicone: {
+    siliconeSystemId: 7,
+    name: 'Test 1:1 encapsulant',
+    ratioA: 1,
+    ratioB: 1,
+    potLifeMin: 240,
+    cure: '1 h at 80 °C, then 2 h at 150 °C',
+    densityGPerCm3: 1.08
+  },
   target: { kind: 'cctDuv', cct: 3000, duv: 0 },
   tolerance: { kind: 'sdcm', steps: 3 },
   floors: { raMin: 90 },

@@ -13,8 +13,11 @@ import { createHash } from 'node:crypto';
 const sha256 = (text: string) => createHash('sha256').update(text, 'utf8').digest('hex');
 
 let c: Cast;
-const approvedRow = () => db()('formulation_revisions as r').join('formulations as f', 'f.id', 'r.formulation_id')
-  .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' }).first('r.*');
+const approvedRow = () =>
+  db()('formulation_revisions as r')
+    .join('formulations as f', 'f.id', 'r.formulation_id')
+    .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' })
+    .first('r.*');
 
 describe('stored revisions in the database, read through the recipe reader', () => {
   beforeAll(async () => {
@@ -47,8 +50,14 @@ describe('stored revisions in the database, read through the recipe reader', () 
     const code = uniqueCode('LG');
     const [formulationId] = await db()('formulations').insert({ code, name: `Legacy ${code}`, created_by: c.rhea.id });
     const [id] = await db()('formulation_revisions').insert({
-      formulation_id: formulationId, revision_no: 1, state: 'draft', content_json: legacyText, predicted_json: seeded.predicted_json,
-      core_version: seeded.core_version, content_sha256: legacyHash, created_by: c.rhea.id
+      formulation_id: formulationId,
+      revision_no: 1,
+      state: 'draft',
+      content_json: legacyText,
+      predicted_json: seeded.predicted_json,
+      core_version: seeded.core_version,
+      content_sha256: legacyHash,
+      created_by: c.rhea.id
     });
     await submit(c.rhea, id);
     await sign(c.ines, id, 'approved', { password: DEMO_PASSWORD, comment: 'legacy row' });
@@ -66,8 +75,14 @@ describe('stored revisions in the database, read through the recipe reader', () 
     const code = uniqueCode('LG');
     const [formulationId] = await db()('formulations').insert({ code, name: `Altered ${code}`, created_by: c.rhea.id });
     const [id] = await db()('formulation_revisions').insert({
-      formulation_id: formulationId, revision_no: 1, state: 'draft', content_json: seeded.content_json, predicted_json: seeded.predicted_json,
-      core_version: seeded.core_version, content_sha256: sha256('something else'), created_by: c.rhea.id
+      formulation_id: formulationId,
+      revision_no: 1,
+      state: 'draft',
+      content_json: seeded.content_json,
+      predicted_json: seeded.predicted_json,
+      core_version: seeded.core_version,
+      content_sha256: sha256('something else'),
+      created_by: c.rhea.id
     });
     expect(await storedContentVerified(id)).toBe(false);
     await expect(submit(c.rhea, id)).rejects.toThrow(/no longer matches its recorded SHA-256/);

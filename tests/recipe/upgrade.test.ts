@@ -1,8 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import {
-  CONTENT_VERSION, RECIPE_VERSIONS, RecipeContentError, checkRecipe, createRecipeReader, fractionsWithLeak, parseRecipe,
-  revisionContentV1Schema, type ContentVersion, type RevisionContentV1
+  CONTENT_VERSION,
+  RECIPE_VERSIONS,
+  RecipeContentError,
+  checkRecipe,
+  createRecipeReader,
+  fractionsWithLeak,
+  parseRecipe,
+  revisionContentV1Schema,
+  type ContentVersion,
+  type RevisionContentV1
 } from '../../src/lib/recipe';
 import { compareRatios, compareSettings } from '../../src/lib/formulations/compare';
 import { weighoutInputFromRevision } from '../../src/lib/batches/weighout/from-revision';
@@ -77,7 +85,9 @@ describe('after a (test-only) version 2 adds a field', () => {
     expect(rows[1]).toMatchObject({ changed: false });
     expect(rows[2]).toMatchObject({ changed: true });
     expect(rows[2].deltaOptical).toBeCloseTo(0.02, 12);
-    const settings = compareSettings(legacy, v1).filter((r) => r.changed).map((r) => r.label);
+    const settings = compareSettings(legacy, v1)
+      .filter((r) => r.changed)
+      .map((r) => r.label);
     expect(settings).toEqual(['Tolerance', 'Notes']);
   });
 
@@ -89,7 +99,10 @@ describe('after a (test-only) version 2 adds a field', () => {
     const result = computeWeighout(built.input);
     if (!result.ok) throw new Error(result.errors.map((e) => e.message).join('; '));
     expect(result.plan.lines.map((l) => [l.code, l.targetG])).toEqual([
-      ['PART A', '8.500'], ['YL-568', '2.400'], ['RD-625', '0.600'], ['PART B', '8.500']
+      ['PART A', '8.500'],
+      ['YL-568', '2.400'],
+      ['RD-625', '0.600'],
+      ['PART B', '8.500']
     ]);
   });
 
@@ -114,9 +127,17 @@ describe('content that cannot be read gets an error naming what is wrong', () =>
   const cases: { name: string; input: unknown; message: RegExp }[] = [
     { name: 'not JSON', input: '{"pump":', message: /not valid JSON/ },
     { name: 'not an object', input: '[1,2]', message: /\(content\): expected a JSON object/ },
-    { name: 'a tag that is not a version', input: { ...JSON.parse(V1_ROW), contentVersion: '1' }, message: /contentVersion: "1" is not a known version/ },
+    {
+      name: 'a tag that is not a version',
+      input: { ...JSON.parse(V1_ROW), contentVersion: '1' },
+      message: /contentVersion: "1" is not a known version/
+    },
     { name: 'a missing pump', input: { ...JSON.parse(V1_ROW), pump: undefined }, message: /version 1\) is invalid: pump: / },
-    { name: 'a fraction above 1', input: JSON.stringify({ ...JSON.parse(LEGACY_ROW), pumpLeakFraction: 1.5 }), message: /pumpLeakFraction: / }
+    {
+      name: 'a fraction above 1',
+      input: JSON.stringify({ ...JSON.parse(LEGACY_ROW), pumpLeakFraction: 1.5 }),
+      message: /pumpLeakFraction: /
+    }
   ];
   it.each(cases)('$name', ({ input, message }) => {
     expect(() => parseRecipe(input)).toThrow(RecipeContentError);

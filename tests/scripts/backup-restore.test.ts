@@ -22,7 +22,9 @@ let source: Knex;
 let target: Knex;
 
 async function tableChecksums(k: Knex): Promise<Record<string, string>> {
-  const [tables] = await k.raw('SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE() AND table_type = "BASE TABLE" ORDER BY table_name');
+  const [tables] = await k.raw(
+    'SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE() AND table_type = "BASE TABLE" ORDER BY table_name'
+  );
   const out: Record<string, string> = {};
   for (const { t } of tables as { t: string }[]) {
     const [[c]] = await k.raw('SELECT COUNT(*) AS n FROM ??', [t]);
@@ -40,7 +42,9 @@ describe('npm run backup / npm run restore', () => {
     target = knexFactory({ client: 'mysql2', connection: { ...connectionFromEnv(), database: restoreDb } });
     // Something recognisable in both stores: a sign-in attempt row (ordinary table) and an object.
     await source('sign_in_attempts').insert({ email: 'backup.marker@kestrelhollow.example', succeeded: false, ip: '127.0.0.1' });
-    await s3FromEnv().send(new PutObjectCommand({ Bucket: bucketFromEnv(), Key: 'backup-check/marker.txt', Body: 'Kestrel Hollow backup marker ✓' }));
+    await s3FromEnv().send(
+      new PutObjectCommand({ Bucket: bucketFromEnv(), Key: 'backup-check/marker.txt', Body: 'Kestrel Hollow backup marker ✓' })
+    );
   });
 
   afterAll(async () => {
@@ -59,14 +63,19 @@ describe('npm run backup / npm run restore', () => {
     expect(restore.stdout).toMatch(/restored/);
 
     expect(await tableChecksums(target)).toEqual(await tableChecksums(source));
-    const [triggers] = await target.raw('SELECT trigger_name AS n FROM information_schema.triggers WHERE trigger_schema = DATABASE() ORDER BY n');
-    expect((triggers as { n: string }[]).map((r) => r.n)).toEqual(expect.arrayContaining(['audit_events_no_delete', 'audit_events_no_update']));
+    const [triggers] = await target.raw(
+      'SELECT trigger_name AS n FROM information_schema.triggers WHERE trigger_schema = DATABASE() ORDER BY n'
+    );
+    expect((triggers as { n: string }[]).map((r) => r.n)).toEqual(
+      expect.arrayContaining(['audit_events_no_delete', 'audit_events_no_update'])
+    );
     const obj = await s3FromEnv().send(new GetObjectCommand({ Bucket: restoreBucket, Key: 'backup-check/marker.txt' }));
     expect(await obj.Body!.transformToString()).toBe('Kestrel Hollow backup marker ✓');
   }, 180_000);
 
   it('refuses a folder that is not a backup and changes nothing', async () => {
-    await expect(run('node', ['--import', 'tsx', 'scripts/backup/restore.ts', tmpdir(), '--yes'], { env: { ...process.env, DB_NAME: restoreDb } }))
-      .rejects.toMatchObject({ code: 2 });
+    await expect(
+      run('node', ['--import', 'tsx', 'scripts/backup/restore.ts', tmpdir(), '--yes'], { env: { ...process.env, DB_NAME: restoreDb } })
+    ).rejects.toMatchObject({ code: 2 });
   });
 });

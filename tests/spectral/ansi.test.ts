@@ -17,16 +17,116 @@ import { ANSI_2700K_3STEP } from '../../src/lib/spectral/data/chromaticity-ellip
 // transcription of ANSI C78.377-2015 Table 1 [S]; 2200/2500 K were computed from the 2017 edition's flexible-CCT rule (not printed values; from memory).
 type P = [number, number];
 const published: { nominal: number; centre: P; corners: [P, P, P, P]; source: string }[] = [
-  { nominal: 2200, centre: [0.5019, 0.4155], corners: [[0.5259, 0.4343], [0.5046, 0.4347], [0.48, 0.397], [0.4993, 0.3968]], source: 'computed from the flexible-CCT rule (from memory)' },
-  { nominal: 2500, centre: [0.4807, 0.4145], corners: [[0.5046, 0.4347], [0.4814, 0.4323], [0.4594, 0.3947], [0.48, 0.397]], source: 'computed from the flexible-CCT rule (from memory)' },
-  { nominal: 2700, centre: [0.4578, 0.4101], corners: [[0.4813, 0.4319], [0.4562, 0.426], [0.4373, 0.3893], [0.4593, 0.3944]], source: 'ANSI C78.377-2015 transcription' },
-  { nominal: 3000, centre: [0.4339, 0.4033], corners: [[0.4562, 0.426], [0.4303, 0.4173], [0.415, 0.3821], [0.4373, 0.3893]], source: 'ANSI C78.377-2015 transcription' },
-  { nominal: 3500, centre: [0.4078, 0.393], corners: [[0.4303, 0.4173], [0.4003, 0.4035], [0.3895, 0.3709], [0.415, 0.3821]], source: 'ANSI C78.377-2015 transcription' },
-  { nominal: 4000, centre: [0.3818, 0.3797], corners: [[0.4003, 0.4035], [0.3737, 0.388], [0.3671, 0.3583], [0.3895, 0.3709]], source: 'ANSI C78.377-2015 transcription' },
-  { nominal: 4500, centre: [0.3613, 0.367], corners: [[0.3737, 0.3882], [0.355, 0.3754], [0.3514, 0.3482], [0.3672, 0.3585]], source: 'ANSI C78.377-2015 transcription' },
-  { nominal: 5000, centre: [0.3446, 0.3551], corners: [[0.355, 0.3753], [0.3375, 0.3619], [0.3366, 0.3373], [0.3515, 0.3481]], source: 'ANSI C78.377-2015 transcription' },
-  { nominal: 5700, centre: [0.3287, 0.3425], corners: [[0.3375, 0.3619], [0.3205, 0.3476], [0.3221, 0.3256], [0.3366, 0.3374]], source: 'ANSI C78.377-2015 transcription' },
-  { nominal: 6500, centre: [0.3123, 0.3283], corners: [[0.3205, 0.3477], [0.3026, 0.3311], [0.3067, 0.3119], [0.3221, 0.3255]], source: 'ANSI C78.377-2015 transcription' }
+  {
+    nominal: 2200,
+    centre: [0.5019, 0.4155],
+    corners: [
+      [0.5259, 0.4343],
+      [0.5046, 0.4347],
+      [0.48, 0.397],
+      [0.4993, 0.3968]
+    ],
+    source: 'computed from the flexible-CCT rule (from memory)'
+  },
+  {
+    nominal: 2500,
+    centre: [0.4807, 0.4145],
+    corners: [
+      [0.5046, 0.4347],
+      [0.4814, 0.4323],
+      [0.4594, 0.3947],
+      [0.48, 0.397]
+    ],
+    source: 'computed from the flexible-CCT rule (from memory)'
+  },
+  {
+    nominal: 2700,
+    centre: [0.4578, 0.4101],
+    corners: [
+      [0.4813, 0.4319],
+      [0.4562, 0.426],
+      [0.4373, 0.3893],
+      [0.4593, 0.3944]
+    ],
+    source: 'ANSI C78.377-2015 transcription'
+  },
+  {
+    nominal: 3000,
+    centre: [0.4339, 0.4033],
+    corners: [
+      [0.4562, 0.426],
+      [0.4303, 0.4173],
+      [0.415, 0.3821],
+      [0.4373, 0.3893]
+    ],
+    source: 'ANSI C78.377-2015 transcription'
+  },
+  {
+    nominal: 3500,
+    centre: [0.4078, 0.393],
+    corners: [
+      [0.4303, 0.4173],
+      [0.4003, 0.4035],
+      [0.3895, 0.3709],
+      [0.415, 0.3821]
+    ],
+    source: 'ANSI C78.377-2015 transcription'
+  },
+  {
+    nominal: 4000,
+    centre: [0.3818, 0.3797],
+    corners: [
+      [0.4003, 0.4035],
+      [0.3737, 0.388],
+      [0.3671, 0.3583],
+      [0.3895, 0.3709]
+    ],
+    source: 'ANSI C78.377-2015 transcription'
+  },
+  {
+    nominal: 4500,
+    centre: [0.3613, 0.367],
+    corners: [
+      [0.3737, 0.3882],
+      [0.355, 0.3754],
+      [0.3514, 0.3482],
+      [0.3672, 0.3585]
+    ],
+    source: 'ANSI C78.377-2015 transcription'
+  },
+  {
+    nominal: 5000,
+    centre: [0.3446, 0.3551],
+    corners: [
+      [0.355, 0.3753],
+      [0.3375, 0.3619],
+      [0.3366, 0.3373],
+      [0.3515, 0.3481]
+    ],
+    source: 'ANSI C78.377-2015 transcription'
+  },
+  {
+    nominal: 5700,
+    centre: [0.3287, 0.3425],
+    corners: [
+      [0.3375, 0.3619],
+      [0.3205, 0.3476],
+      [0.3221, 0.3256],
+      [0.3366, 0.3374]
+    ],
+    source: 'ANSI C78.377-2015 transcription'
+  },
+  {
+    nominal: 6500,
+    centre: [0.3123, 0.3283],
+    corners: [
+      [0.3205, 0.3477],
+      [0.3026, 0.3311],
+      [0.3067, 0.3119],
+      [0.3221, 0.3255]
+    ],
+    source: 'ANSI C78.377-2015 transcription'
+  }
 ];
 
 const quads = new Map(ansiNominalQuadrangles().map((q) => [q.nominalCct, q]));

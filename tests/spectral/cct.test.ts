@@ -28,7 +28,14 @@ describe('Ohno 2014 on the Planckian locus (LEUKOS 10:47; accuracy claim ±1 K)'
 describe('inverse (CCT, Duv) → u,v → (CCT, Duv) round trip (Ohno 2014 §4)', () => {
   const duvs = [-0.03, -0.02, -0.006, -0.0015, 0, 0.001, 0.0025, 0.006, 0.02, 0.03];
   const ts = [1000, 1700, 2700, 4000, 6500, 10000, 15000, 20000];
-  const cases = ts.flatMap((t) => duvs.map((d) => ({ name: `${t} K, Duv ${d}`, input: [t, d], tol: { cctK: 1, duv: 1e-5 }, source: 'Ohno 2014: within 1 K for |Duv| ≤ 0.03' })));
+  const cases = ts.flatMap((t) =>
+    duvs.map((d) => ({
+      name: `${t} K, Duv ${d}`,
+      input: [t, d],
+      tol: { cctK: 1, duv: 1e-5 },
+      source: 'Ohno 2014: within 1 K for |Duv| ≤ 0.03'
+    }))
+  );
   it.each(cases)('$name', ({ input: [t, d], tol }) => {
     const [u, v] = cctDuvToUv(t, d);
     const r = uvToCctOhno2014(u, v);

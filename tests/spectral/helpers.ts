@@ -12,8 +12,6 @@ export function gridSpd(values: Float64Array): Spd {
 /** A sum of Gaussian bands on 380–780 nm at 1 nm: [peakNm, fwhmNm, amplitude]. */
 export function bandsSpd(bands: [number, number, number][]): Spd {
   const wavelengths = Array.from({ length: 401 }, (_, i) => 380 + i);
-  const values = wavelengths.map((l) =>
-    bands.reduce((s, [p, w, a]) => s + a * Math.exp(-0.5 * ((l - p) / (w / 2.3548)) ** 2), 0)
-  );
+  const values = wavelengths.map((l) => bands.reduce((s, [p, w, a]) => s + a * Math.exp(-0.5 * ((l - p) / (w / 2.3548)) ** 2), 0));
   return { wavelengths, values };
 }

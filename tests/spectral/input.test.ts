@@ -7,15 +7,27 @@ const ok = [1, 2, 3, 4, 3, 2, 1];
 const cases: { name: string; input: unknown; expected: RegExp }[] = [
   { name: 'lengths differ', input: { wavelengths: wl, values: ok.slice(1) }, expected: /differ in length/ },
   { name: 'fewer than 5 points', input: { wavelengths: [400, 500, 600, 700], values: [1, 1, 1, 1] }, expected: /at least 5/ },
-  { name: 'non-increasing wavelengths', input: { wavelengths: [400, 450, 450, 550, 600, 650, 700], values: ok }, expected: /increase strictly/ },
+  {
+    name: 'non-increasing wavelengths',
+    input: { wavelengths: [400, 450, 450, 550, 600, 650, 700], values: ok },
+    expected: /increase strictly/
+  },
   { name: 'decreasing wavelengths', input: { wavelengths: [...wl].reverse(), values: ok }, expected: /increase strictly/ },
   { name: 'NaN value', input: { wavelengths: wl, values: [1, 2, Number.NaN, 4, 3, 2, 1] }, expected: /not a finite number/ },
-  { name: 'Infinity wavelength', input: { wavelengths: [400, 450, 500, 550, 600, 650, Infinity], values: ok }, expected: /not a finite number/ },
+  {
+    name: 'Infinity wavelength',
+    input: { wavelengths: [400, 450, 500, 550, 600, 650, Infinity], values: ok },
+    expected: /not a finite number/
+  },
   { name: 'negative beyond noise', input: { wavelengths: wl, values: [1, 2, 3, 4, -0.5, 2, 1] }, expected: /below −1 %/ },
   { name: 'zero power', input: { wavelengths: wl, values: [0, 0, 0, 0, 0, 0, 0] }, expected: /zero power/ },
   { name: 'wavelength below 300 nm', input: { wavelengths: [250, 450, 500, 550, 600, 650, 700], values: ok }, expected: /outside 300–900/ },
   { name: 'wavelength above 900 nm', input: { wavelengths: [400, 450, 500, 550, 600, 650, 950], values: ok }, expected: /outside 300–900/ },
-  { name: 'no power inside 360–830 nm', input: { wavelengths: [300, 310, 320, 330, 340], values: [1, 1, 1, 1, 1] }, expected: /inside 360–830/ },
+  {
+    name: 'no power inside 360–830 nm',
+    input: { wavelengths: [300, 310, 320, 330, 340], values: [1, 1, 1, 1, 1] },
+    expected: /inside 360–830/
+  },
   { name: 'not an object', input: null, expected: /must be an object/ },
   { name: 'values not an array', input: { wavelengths: wl, values: 'abc' }, expected: /arrays of numbers/ },
   { name: 'string inside values', input: { wavelengths: wl, values: [1, 2, '3', 4, 3, 2, 1] }, expected: /not a finite number/ }
@@ -50,7 +62,10 @@ describe('input validation (SpectrumInputError, message says what is wrong)', ()
 // Found by the upload fuzz: a file of finite but huge values (1e306) gave LER = Infinity, which the
 // measurement table cannot store (an error 500), and 1e308 or 1e-310 were refused as "no luminous power".
 describe('extreme magnitudes: every metric is scale-free, so finite input gives the same finite metrics', () => {
-  const band = bandsSpd([[450, 20, 1], [560, 110, 2.5]]);
+  const band = bandsSpd([
+    [450, 20, 1],
+    [560, 110, 2.5]
+  ]);
   const peak = Math.max(...band.values);
   const white = { wavelengths: band.wavelengths, values: band.values.map((v) => v / peak) }; // maximum 1
   const reference = evaluateSpectrum(white);

@@ -25,8 +25,20 @@ describe('LER, 683.002 lm/W · ΣVS/ΣS over 360–830 nm (CIE 15:2004; K_m from
 
 describe('peak, centroid, FWHM (common practice)', () => {
   const cases = [
-    { name: 'Gaussian 450 nm, FWHM 20 nm', input: bandsSpd([[450, 20, 1]]), expected: { peak: 450, centroid: 450, fwhm: 20 }, tol: 0.1, source: 'Gaussian: FWHM = 2.3548 σ' },
-    { name: 'Gaussian 630 nm, FWHM 80 nm', input: bandsSpd([[630, 80, 1]]), expected: { peak: 630, centroid: 630, fwhm: 80 }, tol: 0.2, source: 'Gaussian: FWHM = 2.3548 σ' }
+    {
+      name: 'Gaussian 450 nm, FWHM 20 nm',
+      input: bandsSpd([[450, 20, 1]]),
+      expected: { peak: 450, centroid: 450, fwhm: 20 },
+      tol: 0.1,
+      source: 'Gaussian: FWHM = 2.3548 σ'
+    },
+    {
+      name: 'Gaussian 630 nm, FWHM 80 nm',
+      input: bandsSpd([[630, 80, 1]]),
+      expected: { peak: 630, centroid: 630, fwhm: 80 },
+      tol: 0.2,
+      source: 'Gaussian: FWHM = 2.3548 σ'
+    }
   ];
   it.each(cases)('$name', ({ input, expected, tol }) => {
     const e = evaluateSpectrum(input, { cri: false, tm30: false });
@@ -38,7 +50,13 @@ describe('peak, centroid, FWHM (common practice)', () => {
 
 describe('fast path options', () => {
   it('skips CRI and TM-30 when asked', () => {
-    const e = evaluateSpectrum(bandsSpd([[450, 20, 1], [560, 110, 1.5]]), { tm30: false });
+    const e = evaluateSpectrum(
+      bandsSpd([
+        [450, 20, 1],
+        [560, 110, 1.5]
+      ]),
+      { tm30: false }
+    );
     expect(e.tm30).toBeNull();
     expect(e.cri?.ri).toHaveLength(14);
   });

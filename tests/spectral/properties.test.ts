@@ -3,8 +3,16 @@ import { describe, expect, it } from 'vitest';
 import { cctDuvToUv, evaluateSpectrum, SpectrumInputError, uvToCctOhno2014, type Spd } from '../../src/lib/spectral/index';
 import { bandsSpd } from './helpers';
 
-const band = fc.tuple(fc.double({ min: 420, max: 680, noNaN: true }), fc.double({ min: 15, max: 130, noNaN: true }), fc.double({ min: 0.05, max: 2, noNaN: true }));
-const phosphor = fc.tuple(fc.double({ min: 520, max: 650, noNaN: true }), fc.double({ min: 40, max: 130, noNaN: true }), fc.double({ min: 0.5, max: 3, noNaN: true }));
+const band = fc.tuple(
+  fc.double({ min: 420, max: 680, noNaN: true }),
+  fc.double({ min: 15, max: 130, noNaN: true }),
+  fc.double({ min: 0.05, max: 2, noNaN: true })
+);
+const phosphor = fc.tuple(
+  fc.double({ min: 520, max: 650, noNaN: true }),
+  fc.double({ min: 40, max: 130, noNaN: true }),
+  fc.double({ min: 0.5, max: 3, noNaN: true })
+);
 // Pump + one main phosphor band + up to two extra bands: white-ish LED-like spectra.
 const whiteish = fc
   .tuple(fc.double({ min: 440, max: 460, noNaN: true }), phosphor, fc.array(band, { maxLength: 2 }))
@@ -22,7 +30,19 @@ describe('property: scaling an SPD changes no metric', () => {
         const a = evaluateSpectrum(spd);
         fc.pre(Math.abs(a.duv) < 0.05); // metrics are defined near the locus
         const b = evaluateSpectrum({ wavelengths: spd.wavelengths, values: spd.values.map((v) => v * k) });
-        const pairs: [number, number][] = [[a.x, b.x], [a.y, b.y], [a.cct, b.cct], [a.duv, b.duv], [a.cri.ra, b.cri.ra], [a.cri.ri[8], b.cri.ri[8]], [a.tm30.rf, b.tm30.rf], [a.tm30.rg, b.tm30.rg], [a.ler, b.ler], [a.peakNm, b.peakNm], [a.fwhmNm, b.fwhmNm]];
+        const pairs: [number, number][] = [
+          [a.x, b.x],
+          [a.y, b.y],
+          [a.cct, b.cct],
+          [a.duv, b.duv],
+          [a.cri.ra, b.cri.ra],
+          [a.cri.ri[8], b.cri.ri[8]],
+          [a.tm30.rf, b.tm30.rf],
+          [a.tm30.rg, b.tm30.rg],
+          [a.ler, b.ler],
+          [a.peakNm, b.peakNm],
+          [a.fwhmNm, b.fwhmNm]
+        ];
         for (const [p, q] of pairs) expect(rel(p, q)).toBeLessThan(1e-7);
       }),
       { numRuns: 60 }

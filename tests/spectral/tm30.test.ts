@@ -23,7 +23,11 @@ describe('CIE 224:2017 / TM-30-20 by definition: reference sources score 100', (
   const cases = [
     { name: 'Planckian 2700 K', input: gridSpd(planckSpd(2700)), source: 'CIE 224: Rf = 100 when test = reference' },
     { name: 'Planckian 4000 K', input: gridSpd(planckSpd(4000)), source: 'CIE 224' },
-    { name: 'CIE D65 table', input: tableSpd(CIE_D65.values, CIE_D65.startNm, CIE_D65.stepNm), source: 'CIE 224 (D65 ≈ daylight reference at 6504 K)' }
+    {
+      name: 'CIE D65 table',
+      input: tableSpd(CIE_D65.values, CIE_D65.startNm, CIE_D65.stepNm),
+      source: 'CIE 224 (D65 ≈ daylight reference at 6504 K)'
+    }
   ];
   it.each(cases)('$name: Rf = 100, Rg = 100', ({ input }) => {
     const { tm30 } = evaluateSpectrum(input);
@@ -91,7 +95,11 @@ describe('CIE 224 §4.3 blended reference 4000–5000 K', () => {
 // The 1 nm table (CIE 224:2017 CES, copied from colour-science v0.4.6, BSD-3-Clause) is kept as a test fixture.
 const CES_1NM = fileURLToPath(new URL('./fixtures/tm30_ces99_1nm.csv', import.meta.url));
 describe('5 nm CES table reproduces 1 nm CES results (CIE 224 tables)', () => {
-  const rows = readFileSync(CES_1NM, 'utf8').trim().split('\n').slice(1).map((l) => l.split(',').map(Number));
+  const rows = readFileSync(CES_1NM, 'utf8')
+    .trim()
+    .split('\n')
+    .slice(1)
+    .map((l) => l.split(',').map(Number));
   const ces = Array.from({ length: 99 }, (_, s) => {
     const g = new Float64Array(471);
     for (const r of rows) g[r[0] - 360] = r[s + 1];
@@ -100,10 +108,14 @@ describe('5 nm CES table reproduces 1 nm CES results (CIE 224 tables)', () => {
   function rfDirect(spd: Float64Array, ref: Float64Array): number {
     const { xBar, yBar, zBar } = CMF_1964_10DEG;
     const xyz = (s: Float64Array, r: Float64Array | null): number[] => {
-      let X = 0, Y = 0, Z = 0;
+      let X = 0,
+        Y = 0,
+        Z = 0;
       for (let i = 20; i <= 420; i++) {
         const w = s[i] * (r ? r[i] : 1);
-        X += w * xBar[i]; Y += w * yBar[i]; Z += w * zBar[i];
+        X += w * xBar[i];
+        Y += w * yBar[i];
+        Z += w * zBar[i];
       }
       return [X, Y, Z];
     };
@@ -130,8 +142,23 @@ describe('5 nm CES table reproduces 1 nm CES results (CIE 224 tables)', () => {
   const cases = [
     { name: 'CIE F2', input: tableToGrid(CIE_ILLUMINANTS_F.series.F2, 380, 5), tol: 0.1 },
     { name: 'CIE F11', input: tableToGrid(CIE_ILLUMINANTS_F.series.F11, 380, 5), tol: 0.1 },
-    { name: 'blue + YAG-like', input: led([[450, 20, 1], [560, 120, 1.6]]), tol: 0.1 },
-    { name: 'blue + narrow green + 631 nm line', input: led([[450, 20, 1], [530, 50, 1], [631, 6, 1.2]]), tol: 0.1 }
+    {
+      name: 'blue + YAG-like',
+      input: led([
+        [450, 20, 1],
+        [560, 120, 1.6]
+      ]),
+      tol: 0.1
+    },
+    {
+      name: 'blue + narrow green + 631 nm line',
+      input: led([
+        [450, 20, 1],
+        [530, 50, 1],
+        [631, 6, 1.2]
+      ]),
+      tol: 0.1
+    }
   ];
   it.each(cases)('$name: |ΔRf| ≤ 0.1', ({ input, tol }) => {
     const [X, Y, Z] = spdToXyz(input);

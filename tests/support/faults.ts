@@ -110,8 +110,11 @@ export async function keysContaining(prefix: string, text: string): Promise<stri
 /** Waits until none of `keys` is in object storage (clean-up runs once the rollback is done); returns the wait in ms. */
 export async function expectObjectsGone(keys: readonly string[], timeoutMs = 15_000): Promise<number> {
   const t0 = Date.now();
-  await vi.waitFor(async () => {
-    for (const k of keys) expect(await objectExists(k), `object ${k} is still stored`).toBe(false);
-  }, { timeout: timeoutMs, interval: 50 });
+  await vi.waitFor(
+    async () => {
+      for (const k of keys) expect(await objectExists(k), `object ${k} is still stored`).toBe(false);
+    },
+    { timeout: timeoutMs, interval: 50 }
+  );
   return Date.now() - t0;
 }

@@ -30,4 +30,3 @@ export async function waitForMail(match: (m: CaughtMail) => boolean, expected = 
   }
   return found;
 }
-

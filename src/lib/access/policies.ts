@@ -54,4 +54,3 @@ export function mayApprove(user: Who | null | undefined, revision: RevisionFacts
   return !!user && refusal('approve', user, revision) === null;
 }
 mayApprove.roles = COMMAND_RULES.approve.roles;
-

@@ -13,8 +13,10 @@ export const rolesSchema = z.object({ userId: z.coerce.number().int().positive()
 
 export const activeSchema = z.object({ userId: z.coerce.number().int().positive(), active: z.enum(['true', 'false']) });
 
-export const acceptSchema = z.object({
-  name: z.string().trim().min(2, 'Enter your name').max(120, 'At most 120 characters'),
-  password: z.string().min(12, 'At least 12 characters').max(200, 'At most 200 characters'),
-  confirm: z.string()
-}).refine((v) => v.password === v.confirm, { message: 'The two passwords differ', path: ['confirm'] });
+export const acceptSchema = z
+  .object({
+    name: z.string().trim().min(2, 'Enter your name').max(120, 'At most 120 characters'),
+    password: z.string().min(12, 'At least 12 characters').max(200, 'At most 200 characters'),
+    confirm: z.string()
+  })
+  .refine((v) => v.password === v.confirm, { message: 'The two passwords differ', path: ['confirm'] });

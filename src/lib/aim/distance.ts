@@ -33,17 +33,19 @@ export interface ColourDistance {
   steps: number;
 }
 
-export type Tolerance =
-  | { kind: 'deltaUvPrime'; value: number }
-  | { kind: 'deltaUv'; value: number }
-  | { kind: 'sdcm'; steps: number };
+export type Tolerance = { kind: 'deltaUvPrime'; value: number } | { kind: 'deltaUv'; value: number } | { kind: 'sdcm'; steps: number };
 
 /** The 1-step ellipse used around a centre: IEC 60081 shape at the centre's CCT, centred on it. */
 export function stepEllipseAt(centre: ColourCentre): ChromaticityEllipse {
   return { ...ellipseForCct(centre.cct), x: centre.x, y: centre.y, steps: 1 };
 }
 
-export function colourDistance(x: number, y: number, centre: ColourCentre, ellipse: ChromaticityEllipse = stepEllipseAt(centre)): ColourDistance {
+export function colourDistance(
+  x: number,
+  y: number,
+  centre: ColourCentre,
+  ellipse: ChromaticityEllipse = stepEllipseAt(centre)
+): ColourDistance {
   const [up, vp] = xyToUvPrime(x, y);
   const [upc, vpc] = xyToUvPrime(centre.x, centre.y);
   const [u, v] = xyToUv(x, y);

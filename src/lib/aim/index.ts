@@ -7,6 +7,15 @@
 export { resolveTarget, ansiQuadrangle, type Target, type ResolvedTarget } from './target';
 export { colourDistance, stepEllipseAt, withinTolerance, type ColourCentre, type ColourDistance, type Tolerance } from './distance';
 export {
-  FLOOR_RULES, BINDING_MARGIN, needsTm30, violation, violatedFloors, bindingFloors, objectiveValue, type Floors, type Objective, type LoopMetrics
+  FLOOR_RULES,
+  BINDING_MARGIN,
+  needsTm30,
+  violation,
+  violatedFloors,
+  bindingFloors,
+  objectiveValue,
+  type Floors,
+  type Objective,
+  type LoopMetrics
 } from './floors';
 export { targetSchema, toleranceSchema, floorsSchema } from './schema';

@@ -6,9 +6,16 @@
 import { z } from 'zod';
 
 export const targetSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('cctDuv'), cct: z.number().min(1000, 'CCT must be 1000–20000 K').max(20000, 'CCT must be 1000–20000 K'), duv: z.number().min(-0.05, 'Duv must be within ±0.05').max(0.05, 'Duv must be within ±0.05') }),
+  z.object({
+    kind: z.literal('cctDuv'),
+    cct: z.number().min(1000, 'CCT must be 1000–20000 K').max(20000, 'CCT must be 1000–20000 K'),
+    duv: z.number().min(-0.05, 'Duv must be within ±0.05').max(0.05, 'Duv must be within ±0.05')
+  }),
   z.object({ kind: z.literal('xy'), x: z.number().gt(0).lt(1), y: z.number().gt(0).lt(1) }),
-  z.object({ kind: z.literal('ansiBin'), nominalCct: z.number().int().min(2200, 'ANSI nominal CCT 2200–6500 K').max(6500, 'ANSI nominal CCT 2200–6500 K') })
+  z.object({
+    kind: z.literal('ansiBin'),
+    nominalCct: z.number().int().min(2200, 'ANSI nominal CCT 2200–6500 K').max(6500, 'ANSI nominal CCT 2200–6500 K')
+  })
 ]);
 
 export const toleranceSchema = z.discriminatedUnion('kind', [

@@ -11,9 +11,7 @@ import { cctDuvToXy, uvToCct } from '../spectral/cct/index';
 import { xyToUv } from '../spectral/colorimetry/chromaticity';
 
 export type Target =
-  | { kind: 'cctDuv'; cct: number; duv: number }
-  | { kind: 'xy'; x: number; y: number }
-  | { kind: 'ansiBin'; nominalCct: number };
+  { kind: 'cctDuv'; cct: number; duv: number } | { kind: 'xy'; x: number; y: number } | { kind: 'ansiBin'; nominalCct: number };
 
 export interface ResolvedTarget {
   x: number;

@@ -18,15 +18,22 @@ export function fieldsToRequest(f: PlanFields, phosphorCount: number): CreateBat
   const idx = Array.from({ length: phosphorCount }, (_, i) => i);
   const additives = Array.from({ length: MAX_ADDITIVES }, (_, j) => j)
     .filter((j) => (f[`add${j}Code`] ?? '').trim() !== '' || (f[`add${j}Pct`] ?? '').trim() !== '')
-    .map((j) => ({ code: (f[`add${j}Code`] ?? '').trim(), name: (f[`add${j}Name`] ?? '').trim() || (f[`add${j}Code`] ?? '').trim(), pct: num(f[`add${j}Pct`]), tolerance: tol(f, `add${j}Tol`) }));
+    .map((j) => ({
+      code: (f[`add${j}Code`] ?? '').trim(),
+      name: (f[`add${j}Name`] ?? '').trim() || (f[`add${j}Code`] ?? '').trim(),
+      pct: num(f[`add${j}Pct`]),
+      tolerance: tol(f, `add${j}Tol`)
+    }));
   return {
     revisionId: num(f.revisionId),
-    sizing: f.sizingKind === 'parts'
-      ? { kind: 'parts', partCount: num(f.partCount), dispenseMassG: num(f.dispenseMassG), yieldLossPct: num(f.yieldLossPct) }
-      : { kind: 'mass', batchMassG: num(f.batchMassG) },
-    loading: f.loadingMode === 'total'
-      ? { mode: 'total', basis, totalPct: num(f.totalPct) }
-      : { mode: 'perPhosphor', basis, pcts: idx.map((i) => num(f[`pct${i}`])) },
+    sizing:
+      f.sizingKind === 'parts'
+        ? { kind: 'parts', partCount: num(f.partCount), dispenseMassG: num(f.dispenseMassG), yieldLossPct: num(f.yieldLossPct) }
+        : { kind: 'mass', batchMassG: num(f.batchMassG) },
+    loading:
+      f.loadingMode === 'total'
+        ? { mode: 'total', basis, totalPct: num(f.totalPct) }
+        : { mode: 'perPhosphor', basis, pcts: idx.map((i) => num(f[`pct${i}`])) },
     phosphorTolerances: idx.map((i) => tol(f, `p${i}Tol`)),
     siliconeTolerances: { a: tol(f, 'aTol'), b: tol(f, 'bTol') },
     additives,
@@ -39,16 +46,31 @@ export function fieldsToRequest(f: PlanFields, phosphorCount: number): CreateBat
 /** Starting values of the form for a revision (loadings from its loading model when it has them). */
 export function defaultFields(revisionId: number, phosphorCount: number, loadings: number[] | null): PlanFields {
   const f: PlanFields = {
-    revisionId: String(revisionId), sizingKind: 'mass', batchMassG: '20', partCount: '500', dispenseMassG: '0.025', yieldLossPct: '15',
-    loadingMode: 'perPhosphor', basis: 'wtPctOfSlurry', totalPct: loadings ? String(Number(loadings.reduce((a, b) => a + b, 0).toFixed(4))) : '',
-    aTolKind: 'pct', aTolValue: '1', bTolKind: 'pct', bTolValue: '1',
-    resolutionG: '0.001', minWeightG: '0.05', balanceRef: '', plantLimitMin: '', notes: ''
+    revisionId: String(revisionId),
+    sizingKind: 'mass',
+    batchMassG: '20',
+    partCount: '500',
+    dispenseMassG: '0.025',
+    yieldLossPct: '15',
+    loadingMode: 'perPhosphor',
+    basis: 'wtPctOfSlurry',
+    totalPct: loadings ? String(Number(loadings.reduce((a, b) => a + b, 0).toFixed(4))) : '',
+    aTolKind: 'pct',
+    aTolValue: '1',
+    bTolKind: 'pct',
+    bTolValue: '1',
+    resolutionG: '0.001',
+    minWeightG: '0.05',
+    balanceRef: '',
+    plantLimitMin: '',
+    notes: ''
   };
   for (let i = 0; i < phosphorCount; i++) {
     f[`pct${i}`] = loadings ? String(loadings[i]) : '';
     f[`p${i}TolKind`] = 'pct';
     f[`p${i}TolValue`] = '0.5';
   }
-  for (let j = 0; j < MAX_ADDITIVES; j++) Object.assign(f, { [`add${j}Code`]: '', [`add${j}Name`]: '', [`add${j}Pct`]: '', [`add${j}TolKind`]: 'pct', [`add${j}TolValue`]: '1' });
+  for (let j = 0; j < MAX_ADDITIVES; j++)
+    Object.assign(f, { [`add${j}Code`]: '', [`add${j}Name`]: '', [`add${j}Pct`]: '', [`add${j}TolKind`]: 'pct', [`add${j}TolValue`]: '1' });
   return f;
 }

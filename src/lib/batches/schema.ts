@@ -10,7 +10,11 @@ import { PAPER_SIZES } from './weighout/paper';
 export const BATCH_STATES = ['planned', 'weighing', 'complete', 'released', 'rejected'] as const;
 export type BatchState = (typeof BATCH_STATES)[number];
 export const BATCH_STATE_LABELS: Record<BatchState, string> = {
-  planned: 'Planned', weighing: 'Weighing', complete: 'Complete', released: 'Released', rejected: 'Rejected'
+  planned: 'Planned',
+  weighing: 'Weighing',
+  complete: 'Complete',
+  released: 'Released',
+  rejected: 'Rejected'
 };
 
 const id = z.number('must be a number').int().positive();
@@ -19,12 +23,24 @@ const version = z.number('version is required (the version you read)').int().pos
 export const createBatchSchema = z.object({
   revisionId: id,
   sizing: sizingSchema,
-  loading: z.discriminatedUnion('mode', [
-    /** Per-phosphor loadings; omitted = the revision's loading-model wt % (converted to phr on that basis). */
-    z.object({ mode: z.literal('perPhosphor'), basis: z.enum(LOADING_BASES), pcts: z.array(z.number().finite().gt(0, 'each phosphor loading must be > 0')).min(1).max(5).optional() }),
-    /** A total, split in the revision's proportions. */
-    z.object({ mode: z.literal('total'), basis: z.enum(LOADING_BASES), totalPct: z.number().finite().gt(0, 'total loading must be > 0').max(1000) })
-  ], 'loading must be { mode: "perPhosphor" | "total", basis, ... }'),
+  loading: z.discriminatedUnion(
+    'mode',
+    [
+      /** Per-phosphor loadings; omitted = the revision's loading-model wt % (converted to phr on that basis). */
+      z.object({
+        mode: z.literal('perPhosphor'),
+        basis: z.enum(LOADING_BASES),
+        pcts: z.array(z.number().finite().gt(0, 'each phosphor loading must be > 0')).min(1).max(5).optional()
+      }),
+      /** A total, split in the revision's proportions. */
+      z.object({
+        mode: z.literal('total'),
+        basis: z.enum(LOADING_BASES),
+        totalPct: z.number().finite().gt(0, 'total loading must be > 0').max(1000)
+      })
+    ],
+    'loading must be { mode: "perPhosphor" | "total", basis, ... }'
+  ),
   phosphorTolerances: z.array(toleranceSpecSchema).max(5).optional(),
   siliconeTolerances: z.object({ a: toleranceSpecSchema, b: toleranceSpecSchema }).optional(),
   additives: z.array(additiveSchema).max(5).default([]),
@@ -34,7 +50,13 @@ export const createBatchSchema = z.object({
     ref: z.string().trim().max(80).optional()
   }),
   /** Plant slurry-age limit (min), when shorter than the silicone's pot life. */
-  plantLimitMin: z.number().int().positive().max(24 * 60).nullable().optional(),
+  plantLimitMin: z
+    .number()
+    .int()
+    .positive()
+    .max(24 * 60)
+    .nullable()
+    .optional(),
   /** Must be the revision's silicone system when given (a different silicone needs a new revision). */
   siliconeSystemId: id.nullable().optional(),
   notes: z.string().trim().max(2000).optional()
@@ -58,10 +80,13 @@ export const overrideLineSchema = z.object({
 
 export const mixSchema = z.object({ version, mixedAt: z.coerce.date().optional() });
 export const completeSchema = z.object({ version });
-export const scaleSchema = z.union([
-  z.object({ version, batchMassG: z.number().finite().gt(0).max(100_000) }),
-  z.object({ version, factor: z.number().finite().gt(0).max(100) })
-], 'give batchMassG or factor');
+export const scaleSchema = z.union(
+  [
+    z.object({ version, batchMassG: z.number().finite().gt(0).max(100_000) }),
+    z.object({ version, factor: z.number().finite().gt(0).max(100) })
+  ],
+  'give batchMassG or factor'
+);
 
 export const listQuerySchema = z.object({
   state: z.enum(BATCH_STATES).optional(),

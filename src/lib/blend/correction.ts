@@ -28,9 +28,7 @@ import { type CorrectionRefusal, type TrimCap, refusalOf, trimCap } from './corr
 import { normaliseRatios } from './superposition';
 import type { LoadingParams } from './types';
 
-export type Recipe =
-  | { kind: 'optical'; fractions: number[] }
-  | { kind: 'loading'; concentrationsWtPct: number[]; loading: LoadingParams };
+export type Recipe = { kind: 'optical'; fractions: number[] } | { kind: 'loading'; concentrationsWtPct: number[]; loading: LoadingParams };
 
 export interface CorrectionResult {
   recipe: Recipe;

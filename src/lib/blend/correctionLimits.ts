@@ -77,7 +77,8 @@ export function refusalOf(c: RefusalCheck): CorrectionRefusal | null {
   if (m[lowest] < RUNAWAY_MULTIPLIER) {
     return {
       reason: 'belowZero',
-      message: `the target cannot be reached without taking ${c.knobNames[lowest]} to zero or below: ` +
+      message:
+        `the target cannot be reached without taking ${c.knobNames[lowest]} to zero or below: ` +
         `the trim runs it down to ${rundown(m[lowest])}${c.converged ? '' : ' and still does not land'}. ` +
         `The measured offset is beyond what these phosphors can trim. ${CHECK_BUILD}`
     };
@@ -91,7 +92,8 @@ export function refusalOf(c: RefusalCheck): CorrectionRefusal | null {
   if (c.appliedTotalWtPct !== null && c.appliedTotalWtPct >= 100) {
     return {
       reason: 'overLoaded',
-      message: `the trim needs ${c.appliedTotalWtPct.toFixed(1)} wt % phosphor in total, which leaves no silicone; ` +
+      message:
+        `the trim needs ${c.appliedTotalWtPct.toFixed(1)} wt % phosphor in total, which leaves no silicone; ` +
         'the target cannot be reached by trimming this recipe.'
     };
   }

@@ -9,7 +9,10 @@ import { floorsSchema, targetSchema, toleranceSchema } from '../aim/schema';
 
 export const spdSchema = z
   .object({
-    wavelengths: z.array(z.number().finite(), 'wavelengths must be an array of numbers (nm)').min(5, 'a spectrum needs at least 5 points').max(5000, 'at most 5000 points'),
+    wavelengths: z
+      .array(z.number().finite(), 'wavelengths must be an array of numbers (nm)')
+      .min(5, 'a spectrum needs at least 5 points')
+      .max(5000, 'at most 5000 points'),
     values: z.array(z.number().finite(), 'values must be an array of numbers').max(5000, 'at most 5000 points')
   })
   .refine((s) => s.wavelengths.length === s.values.length, 'wavelengths and values must have the same length');
@@ -57,7 +60,10 @@ export const loadingParamsSchema = z.object({
 const componentsFor = (min: number) =>
   z.object({
     pump: pumpSchema,
-    phosphors: z.array(phosphorSchema).min(min, `at least ${min} phosphor${min > 1 ? 's' : ''}`).max(5, 'at most 5 phosphors')
+    phosphors: z
+      .array(phosphorSchema)
+      .min(min, `at least ${min} phosphor${min > 1 ? 's' : ''}`)
+      .max(5, 'at most 5 phosphors')
   });
 
 export const recipeSchema = z.discriminatedUnion('kind', [
@@ -85,7 +91,10 @@ export const correctionRequestSchema = z.object({
   components: componentsFor(2),
   recipe: recipeSchema,
   measured: z.discriminatedUnion('kind', [
-    z.object({ kind: z.literal('xy'), points: z.array(z.object({ x: z.number().gt(0).lt(1), y: z.number().gt(0).lt(1) })).min(1, 'at least one measured point') }),
+    z.object({
+      kind: z.literal('xy'),
+      points: z.array(z.object({ x: z.number().gt(0).lt(1), y: z.number().gt(0).lt(1) })).min(1, 'at least one measured point')
+    }),
     z.object({ kind: z.literal('spd'), spectra: z.array(spdSchema).min(1, 'at least one measured spectrum') })
   ]),
   target: targetSchema,

@@ -72,8 +72,12 @@ export function equalAspectScales(box: PlotBox, domain: PlaneDomain): PlaneScale
   const halfX = innerW / pxPerUnit / 2;
   const halfY = innerH / pxPerUnit / 2;
   return {
-    x: scaleLinear().domain([cx - halfX, cx + halfX]).range([margin.left, margin.left + innerW]),
-    y: scaleLinear().domain([cy - halfY, cy + halfY]).range([margin.top + innerH, margin.top]),
+    x: scaleLinear()
+      .domain([cx - halfX, cx + halfX])
+      .range([margin.left, margin.left + innerW]),
+    y: scaleLinear()
+      .domain([cy - halfY, cy + halfY])
+      .range([margin.top + innerH, margin.top]),
     pxPerUnit
   };
 }
@@ -88,5 +92,8 @@ export function polylinePath(points: readonly Pair[], closed = false): string {
 
 /** Plane points → pixel path with the given scales. */
 export function planePath(points: readonly Pair[], scales: Pick<PlaneScales, 'x' | 'y'>, closed = false): string {
-  return polylinePath(points.map(([a, b]) => [scales.x(a), scales.y(b)] as Pair), closed);
+  return polylinePath(
+    points.map(([a, b]) => [scales.x(a), scales.y(b)] as Pair),
+    closed
+  );
 }

@@ -41,6 +41,8 @@ export function testSampleColours(): { name: string; hex: string }[] {
 let bins: string[] | null = null;
 
 export function hueBinColours(): string[] {
-  bins ??= Array.from({ length: 16 }, (_, i) => new Color('lch', [62, 45, binCentreHueDeg(i + 1)]).to('srgb').toGamut().toString({ format: 'hex', collapse: false }));
+  bins ??= Array.from({ length: 16 }, (_, i) =>
+    new Color('lch', [62, 45, binCentreHueDeg(i + 1)]).to('srgb').toGamut().toString({ format: 'hex', collapse: false })
+  );
   return bins;
 }

@@ -22,13 +22,20 @@ export interface ProfileScales {
 export function profileScales(box: PlotBox, yMax: number, domainNm: [number, number] = PROFILE_DOMAIN_NM): ProfileScales {
   const { margin } = box;
   return {
-    x: scaleLinear().domain(domainNm).range([margin.left, box.width - margin.right]),
-    y: scaleLinear().domain([0, yMax > 0 ? yMax : 1]).range([box.height - margin.bottom, margin.top])
+    x: scaleLinear()
+      .domain(domainNm)
+      .range([margin.left, box.width - margin.right]),
+    y: scaleLinear()
+      .domain([0, yMax > 0 ? yMax : 1])
+      .range([box.height - margin.bottom, margin.top])
   };
 }
 
 /** Cumulative bands: band k spans Σ_{j<k} wⱼÊⱼ … Σ_{j≤k} wⱼÊⱼ; the last upper edge is the total SPD. */
-export function stackContributions(components: readonly Float64Array[], fractions: readonly number[]): { lower: Float64Array; upper: Float64Array }[] {
+export function stackContributions(
+  components: readonly Float64Array[],
+  fractions: readonly number[]
+): { lower: Float64Array; upper: Float64Array }[] {
   let below = new Float64Array(GRID_LENGTH);
   return components.map((spd, k) => {
     const upper = new Float64Array(GRID_LENGTH);
@@ -54,7 +61,11 @@ function indicesInRange(domainNm: [number, number], stride: number): number[] {
 }
 
 /** SVG area between the lower and upper edges of a band. */
-export function bandPath(scales: ProfileScales, band: { lower: ArrayLike<number>; upper: ArrayLike<number> }, stride = PROFILE_STRIDE): string {
+export function bandPath(
+  scales: ProfileScales,
+  band: { lower: ArrayLike<number>; upper: ArrayLike<number> },
+  stride = PROFILE_STRIDE
+): string {
   const idx = indicesInRange(scales.x.domain() as [number, number], stride);
   return (
     area<number>()
@@ -67,7 +78,11 @@ export function bandPath(scales: ProfileScales, band: { lower: ArrayLike<number>
 /** SVG line of a gridded series. */
 export function seriesPath(scales: ProfileScales, values: ArrayLike<number>, stride = PROFILE_STRIDE): string {
   const idx = indicesInRange(scales.x.domain() as [number, number], stride);
-  return line<number>().x((i) => scales.x(GRID_START_NM + i)).y((i) => scales.y(values[i]))(idx) ?? '';
+  return (
+    line<number>()
+      .x((i) => scales.x(GRID_START_NM + i))
+      .y((i) => scales.y(values[i]))(idx) ?? ''
+  );
 }
 
 /** V(λ) scaled so its maximum (1 at 555 nm) reaches `top`. */

@@ -53,7 +53,13 @@ export function ellipseOutlineXy(xc: number, yc: number, cctK: number, steps: nu
   return out;
 }
 
-export function macadamEllipses(mode: ChromaticityMode, xc: number, yc: number, cctK: number, steps: readonly number[] = ELLIPSE_STEPS): { steps: number; points: Pair[] }[] {
+export function macadamEllipses(
+  mode: ChromaticityMode,
+  xc: number,
+  yc: number,
+  cctK: number,
+  steps: readonly number[] = ELLIPSE_STEPS
+): { steps: number; points: Pair[] }[] {
   return steps.map((n) => ({ steps: n, points: ellipseOutlineXy(xc, yc, cctK, n).map(([x, y]) => toPlane(mode, x, y)) }));
 }
 

@@ -3,7 +3,16 @@
  * tolerance in SDCM steps and floors (Ra, R9, Rf, LER), as edited in the form, turned into
  * the blend model's Target / Tolerance / Floors through the same zod schemas the API uses.
  */
-import { floorsSchema, resolveTarget, targetSchema, type Floors, type Objective, type ResolvedTarget, type Target, type Tolerance } from '../aim/index';
+import {
+  floorsSchema,
+  resolveTarget,
+  targetSchema,
+  type Floors,
+  type Objective,
+  type ResolvedTarget,
+  type Target,
+  type Tolerance
+} from '../aim/index';
 import { ANSI_C78377_2017_TABLE1 } from '../spectral/data/ansi-c78377-2017';
 
 export type TargetKind = Target['kind'];
@@ -72,7 +81,10 @@ export function floorsOf(f: AimFloors): Floors {
 export function resolveAim(aim: AimState): AimResult {
   const errors: Partial<Record<'target' | 'tolerance' | 'floors', string>> = {};
   const t = targetSchema.safeParse(targetInput(aim));
-  if (!t.success) errors.target = t.error.issues.map((i) => (i.code === 'invalid_type' ? `${String(i.path.at(-1) ?? 'value')} is required` : i.message)).join('; ');
+  if (!t.success)
+    errors.target = t.error.issues
+      .map((i) => (i.code === 'invalid_type' ? `${String(i.path.at(-1) ?? 'value')} is required` : i.message))
+      .join('; ');
   const steps = aim.toleranceSdcm;
   if (blank(steps) || !(steps > 0 && steps <= 20)) errors.tolerance = 'tolerance must be 0–20 SDCM steps';
   const f = floorsSchema.safeParse(floorsOf(aim.floors));

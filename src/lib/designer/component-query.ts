@@ -9,7 +9,12 @@ export const componentQuerySchema = z.object({
   phosphors: z
     .string('phosphors: give up to 5 material ids separated by commas')
     .default('')
-    .transform((s) => s.split(',').filter((p) => p.trim() !== '').map(Number))
+    .transform((s) =>
+      s
+        .split(',')
+        .filter((p) => p.trim() !== '')
+        .map(Number)
+    )
     .pipe(z.array(listedId).max(5, 'phosphors: at most 5'))
     .refine((ids) => new Set(ids).size === ids.length, 'phosphors: each phosphor may appear only once')
 });

@@ -30,14 +30,17 @@ export const designedBlendSchema = z
 
 export type DesignedBlend = z.infer<typeof designedBlendSchema>;
 
-const blendField = z.string('the blend is missing').transform((text, ctx) => {
-  try {
-    return JSON.parse(text) as unknown;
-  } catch {
-    ctx.addIssue({ code: 'custom', message: 'the blend could not be read; reload the designer' });
-    return z.NEVER;
-  }
-}).pipe(designedBlendSchema);
+const blendField = z
+  .string('the blend is missing')
+  .transform((text, ctx) => {
+    try {
+      return JSON.parse(text) as unknown;
+    } catch {
+      ctx.addIssue({ code: 'custom', message: 'the blend could not be read; reload the designer' });
+      return z.NEVER;
+    }
+  })
+  .pipe(designedBlendSchema);
 
 const common = {
   notes: z.string().trim().max(5000, 'notes: at most 5000 characters').default(''),
@@ -46,25 +49,44 @@ const common = {
 };
 
 /** The whole filing form: a new formulation, or a new revision of an existing one. */
-export const filingFormSchema = z.discriminatedUnion('mode', [
-  z.object({
-    mode: z.literal('new'),
-    name: z.string().trim().min(1, 'give the formulation a name').max(200, 'name: at most 200 characters'),
-    code: z.string().trim().max(40).optional().transform((v) => (v ? v : undefined)),
-    ...common
-  }),
-  z.object({
-    mode: z.literal('revision'),
-    formulationId: z.coerce.number('pick the formulation').int().positive('pick the formulation'),
-    basedOnRevisionId: z.coerce.number().int().positive().optional().or(z.literal('').transform(() => undefined)),
-    ...common
-  })
-], 'choose a new formulation or a new revision');
+export const filingFormSchema = z.discriminatedUnion(
+  'mode',
+  [
+    z.object({
+      mode: z.literal('new'),
+      name: z.string().trim().min(1, 'give the formulation a name').max(200, 'name: at most 200 characters'),
+      code: z
+        .string()
+        .trim()
+        .max(40)
+        .optional()
+        .transform((v) => (v ? v : undefined)),
+      ...common
+    }),
+    z.object({
+      mode: z.literal('revision'),
+      formulationId: z.coerce.number('pick the formulation').int().positive('pick the formulation'),
+      basedOnRevisionId: z.coerce
+        .number()
+        .int()
+        .positive()
+        .optional()
+        .or(z.literal('').transform(() => undefined)),
+      ...common
+    })
+  ],
+  'choose a new formulation or a new revision'
+);
 
 export type FilingForm = z.infer<typeof filingFormSchema>;
 
 /** Revision content from a designed blend, with references and silicone looked up by the caller. */
-export function revisionContentFrom(blend: DesignedBlend, refs: { pump: MaterialRef; phosphors: MaterialRef[] }, silicone: SiliconeSpec, notes: string): RevisionContent {
+export function revisionContentFrom(
+  blend: DesignedBlend,
+  refs: { pump: MaterialRef; phosphors: MaterialRef[] },
+  silicone: SiliconeSpec,
+  notes: string
+): RevisionContent {
   const shares = roundedShares(blend.fractions, 4);
   return {
     contentVersion: CONTENT_VERSION,

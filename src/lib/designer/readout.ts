@@ -31,7 +31,8 @@ export function floorChecks(floors: Floors, e: SpectrumEvaluation): FloorCheck[]
     const criMetric = r.metric === 'ra' || r.metric === 'r9';
     const value = criMetric && !e.cri.valid ? null : metricValue(e, r.metric);
     const pass = value !== null && r.sense * (limit - value) <= 0;
-    const note = value !== null ? null : criMetric ? 'not defined: too far from the Planckian locus (CIE 13.3 §5.3)' : 'not defined for this spectrum';
+    const note =
+      value !== null ? null : criMetric ? 'not defined: too far from the Planckian locus (CIE 13.3 §5.3)' : 'not defined for this spectrum';
     return { key: r.key, label: r.label, sense: r.sense > 0 ? '≥' : '≤', limit, value, pass, note };
   });
 }

@@ -7,7 +7,14 @@
 import { STATUS_OF_KIND } from './http-status';
 
 export const ERROR_KINDS = [
-  'invalid', 'forbidden', 'not_found', 'conflict', 'too_large', 'unsupported_type', 'unprocessable', 'unavailable'
+  'invalid',
+  'forbidden',
+  'not_found',
+  'conflict',
+  'too_large',
+  'unsupported_type',
+  'unprocessable',
+  'unavailable'
 ] as const;
 export type ErrorKind = (typeof ERROR_KINDS)[number];
 
@@ -30,7 +37,11 @@ export class DomainError extends Error {
   readonly issues: readonly Issue[];
   readonly title: string | undefined;
 
-  constructor(readonly kind: ErrorKind, message: string, options: DomainErrorOptions = {}) {
+  constructor(
+    readonly kind: ErrorKind,
+    message: string,
+    options: DomainErrorOptions = {}
+  ) {
     super(message);
     this.issues = options.issues ?? [];
     this.title = options.title;

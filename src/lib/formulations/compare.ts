@@ -42,12 +42,28 @@ const differs = (a: number | null, b: number | null, digits: number) =>
 
 export function compareRatios(a: RevisionContent, b: RevisionContent): RatioRow[] {
   const leak = (c: RevisionContent) => ({ opticalFraction: c.pumpLeakFraction, wtPct: null });
-  const rows: RatioRow[] = [{ code: `${a.pump.code} leak`, name: `Pump leak (${a.pump.code === b.pump.code ? a.pump.code : `${a.pump.code} / ${b.pump.code}`})`, a: leak(a), b: leak(b), deltaOptical: 0, changed: false }];
+  const rows: RatioRow[] = [
+    {
+      code: `${a.pump.code} leak`,
+      name: `Pump leak (${a.pump.code === b.pump.code ? a.pump.code : `${a.pump.code} / ${b.pump.code}`})`,
+      a: leak(a),
+      b: leak(b),
+      deltaOptical: 0,
+      changed: false
+    }
+  ];
   const codes = [...new Set([...a.phosphors.map((p) => p.code), ...b.phosphors.map((p) => p.code)])];
   for (const code of codes) {
     const pa = a.phosphors.find((p) => p.code === code);
     const pb = b.phosphors.find((p) => p.code === code);
-    rows.push({ code, name: (pa ?? pb)!.name, a: pa ? { opticalFraction: pa.opticalFraction, wtPct: pa.wtPct } : null, b: pb ? { opticalFraction: pb.opticalFraction, wtPct: pb.wtPct } : null, deltaOptical: 0, changed: false });
+    rows.push({
+      code,
+      name: (pa ?? pb)!.name,
+      a: pa ? { opticalFraction: pa.opticalFraction, wtPct: pa.wtPct } : null,
+      b: pb ? { opticalFraction: pb.opticalFraction, wtPct: pb.wtPct } : null,
+      deltaOptical: 0,
+      changed: false
+    });
   }
   return rows.map((r) => {
     const deltaOptical = (r.b?.opticalFraction ?? 0) - (r.a?.opticalFraction ?? 0);
@@ -74,14 +90,28 @@ export function compareMetrics(a: RevisionPrediction, b: RevisionPrediction): Me
   return METRICS.map((m) => {
     const va = m.get(a);
     const vb = m.get(b);
-    return { label: m.label, unit: m.unit, digits: m.digits, a: va, b: vb, delta: va !== null && vb !== null ? vb - va : null, changed: differs(va, vb, m.digits) };
+    return {
+      label: m.label,
+      unit: m.unit,
+      digits: m.digits,
+      a: va,
+      b: vb,
+      delta: va !== null && vb !== null ? vb - va : null,
+      changed: differs(va, vb, m.digits)
+    };
   });
 }
 
 export function floorsText(c: RevisionContent): string {
   const f = c.floors;
-  const parts = [f.raMin !== undefined && `Ra ≥ ${f.raMin}`, f.r9Min !== undefined && `R9 ≥ ${f.r9Min}`, f.rfMin !== undefined && `Rf ≥ ${f.rfMin}`,
-    f.rgMin !== undefined && `Rg ≥ ${f.rgMin}`, f.rgMax !== undefined && `Rg ≤ ${f.rgMax}`, f.lerMin !== undefined && `LER ≥ ${f.lerMin}`].filter(Boolean);
+  const parts = [
+    f.raMin !== undefined && `Ra ≥ ${f.raMin}`,
+    f.r9Min !== undefined && `R9 ≥ ${f.r9Min}`,
+    f.rfMin !== undefined && `Rf ≥ ${f.rfMin}`,
+    f.rgMin !== undefined && `Rg ≥ ${f.rgMin}`,
+    f.rgMax !== undefined && `Rg ≤ ${f.rgMax}`,
+    f.lerMin !== undefined && `LER ≥ ${f.lerMin}`
+  ].filter(Boolean);
   return parts.join(', ') || 'none';
 }
 
@@ -98,16 +128,24 @@ export function toleranceText(c: RevisionContent): string {
 }
 
 export function compareSettings(a: RevisionContent, b: RevisionContent): SettingRow[] {
-  const silicone = (c: RevisionContent) => `${c.silicone.name} (A:B ${c.silicone.ratioA}:${c.silicone.ratioB}, pot life ${c.silicone.potLifeMin} min)`;
+  const silicone = (c: RevisionContent) =>
+    `${c.silicone.name} (A:B ${c.silicone.ratioA}:${c.silicone.ratioB}, pot life ${c.silicone.potLifeMin} min)`;
   const rows: [string, (c: RevisionContent) => string][] = [
     ['Pump', (c) => (c.pump.name.startsWith(c.pump.code) ? c.pump.name : `${c.pump.code} ${c.pump.name}`)],
     ['Silicone', silicone],
     ['Target', targetText],
     ['Tolerance', toleranceText],
     ['Floors', floorsText],
-    ['Loading basis', (c) => (c.loading ? `wt % of slurry, path ${c.loading.pathLengthMm} mm` : c.phosphors.some((p) => p.wtPct !== null) ? 'wt % of slurry, entered directly' : 'not modelled')],
+    [
+      'Loading basis',
+      (c) =>
+        c.loading
+          ? `wt % of slurry, path ${c.loading.pathLengthMm} mm`
+          : c.phosphors.some((p) => p.wtPct !== null)
+            ? 'wt % of slurry, entered directly'
+            : 'not modelled'
+    ],
     ['Notes', (c) => c.notes || '—']
   ];
   return rows.map(([label, f]) => ({ label, a: f(a), b: f(b), changed: f(a) !== f(b) }));
 }
-

@@ -46,7 +46,13 @@ export function formValuesToRaw(v: FormValues): unknown {
   const phosphors = [];
   for (let i = 0; i < MAX_PHOSPHORS; i++) {
     if (!v[`ph${i}`]) continue;
-    phosphors.push({ materialId: num(v[`ph${i}`]), code: '?', name: '?', opticalFraction: num(v[`of${i}`]), wtPct: num(v[`wt${i}`]) ?? null });
+    phosphors.push({
+      materialId: num(v[`ph${i}`]),
+      code: '?',
+      name: '?',
+      opticalFraction: num(v[`of${i}`]),
+      wtPct: num(v[`wt${i}`]) ?? null
+    });
   }
   const floors: Record<string, number | undefined> = {};
   for (const k of FLOOR_KEYS) if (v[k]) floors[k] = num(v[k]);
@@ -55,7 +61,15 @@ export function formValuesToRaw(v: FormValues): unknown {
     phosphors,
     pumpLeakFraction: num(v.leak),
     loading: v.pathMm ? { pathLengthMm: num(v.pathMm), basis: 'wtPctOfSlurry' } : null,
-    silicone: { siliconeSystemId: num(v.siliconeId) ?? null, name: v.siliconeId ? '?' : '', ratioA: 1, ratioB: 1, potLifeMin: 1, cure: '', densityGPerCm3: null },
+    silicone: {
+      siliconeSystemId: num(v.siliconeId) ?? null,
+      name: v.siliconeId ? '?' : '',
+      ratioA: 1,
+      ratioB: 1,
+      potLifeMin: 1,
+      cure: '',
+      densityGPerCm3: null
+    },
     target: { kind: 'cctDuv', cct: num(v.cct), duv: num(v.duv) ?? 0 },
     tolerance: { kind: 'sdcm', steps: num(v.sdcm) },
     floors,

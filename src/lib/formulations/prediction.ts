@@ -43,10 +43,15 @@ const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
 const round = (v: number, digits: number) => Number(v.toFixed(digits));
 
 /** Floors the prediction misses; Ra/R9 floors count as missed when CIE 13.3 is not meaningful (DC ≥ 5.4e-3). */
-function missedFloors(content: RevisionContent, m: { ra: number | null; r9: number | null; rf: number | null; rg: number | null; ler: number }): string[] {
+function missedFloors(
+  content: RevisionContent,
+  m: { ra: number | null; r9: number | null; rf: number | null; rg: number | null; ler: number }
+): string[] {
   const f = content.floors;
-  const undefinedCri = (f.raMin !== undefined || f.r9Min !== undefined) && m.ra === null
-    ? ['Ra/R9 not defined (colour point too far from the Planckian locus, CIE 13.3 §5.3)'] : [];
+  const undefinedCri =
+    (f.raMin !== undefined || f.r9Min !== undefined) && m.ra === null
+      ? ['Ra/R9 not defined (colour point too far from the Planckian locus, CIE 13.3 §5.3)']
+      : [];
   return [...undefinedCri, ...violatedFloors(f, { ra: m.ra ?? 100, r9: m.r9 ?? 100, rf: m.rf, rg: m.rg, ler: m.ler, costPer1000Lm: null })];
 }
 

@@ -32,9 +32,13 @@ export const COMMAND_RULES: Record<RevisionCommand, CommandRule> = {
 
 /** The only state changes a revision can make (mirrored by the database trigger). */
 export const STATE_TRANSITIONS: readonly (readonly [RevisionState, RevisionState])[] = [
-  ['draft', 'submitted'], ['draft', 'withdrawn'],
-  ['submitted', 'approved'], ['submitted', 'returned'], ['submitted', 'withdrawn'],
-  ['approved', 'superseded'], ['approved', 'withdrawn']
+  ['draft', 'submitted'],
+  ['draft', 'withdrawn'],
+  ['submitted', 'approved'],
+  ['submitted', 'returned'],
+  ['submitted', 'withdrawn'],
+  ['approved', 'superseded'],
+  ['approved', 'withdrawn']
 ];
 
 export interface Actor {

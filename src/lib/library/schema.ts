@@ -5,20 +5,36 @@
 import { z } from 'zod';
 
 const text = (max: number, label: string) =>
-  z.preprocess((v) => (typeof v === 'string' ? v.trim() : v), z.string(`${label} must be text`).max(max, `${label}: at most ${max} characters`));
+  z.preprocess(
+    (v) => (typeof v === 'string' ? v.trim() : v),
+    z.string(`${label} must be text`).max(max, `${label}: at most ${max} characters`)
+  );
 
 const optionalText = (max: number, label: string) =>
-  z.preprocess((v) => (v === undefined || v === null || (typeof v === 'string' && v.trim() === '') ? null : typeof v === 'string' ? v.trim() : v),
-    z.string(`${label} must be text`).max(max, `${label}: at most ${max} characters`).nullable());
+  z.preprocess(
+    (v) => (v === undefined || v === null || (typeof v === 'string' && v.trim() === '') ? null : typeof v === 'string' ? v.trim() : v),
+    z.string(`${label} must be text`).max(max, `${label}: at most ${max} characters`).nullable()
+  );
 
 const optionalNumber = (label: string, min: number, max: number, unit = '') =>
   z.preprocess(
-    (v) => (v === undefined || v === null || (typeof v === 'string' && v.trim() === '') ? null : typeof v === 'string' ? Number(v.trim().replace(',', '.')) : v),
-    z.number(`${label} must be a number`).min(min, `${label} must be ${min}–${max}${unit}`).max(max, `${label} must be ${min}–${max}${unit}`).nullable()
+    (v) =>
+      v === undefined || v === null || (typeof v === 'string' && v.trim() === '')
+        ? null
+        : typeof v === 'string'
+          ? Number(v.trim().replace(',', '.'))
+          : v,
+    z
+      .number(`${label} must be a number`)
+      .min(min, `${label} must be ${min}–${max}${unit}`)
+      .max(max, `${label} must be ${min}–${max}${unit}`)
+      .nullable()
   );
 
 export const materialFieldsSchema = z.object({
-  code: text(40, 'Code').pipe(z.string().regex(/^[A-Za-z0-9][A-Za-z0-9._-]*$/, 'Code: letters, digits, dot, dash or underscore, no spaces (e.g. YL-568)')),
+  code: text(40, 'Code').pipe(
+    z.string().regex(/^[A-Za-z0-9][A-Za-z0-9._-]*$/, 'Code: letters, digits, dot, dash or underscore, no spaces (e.g. YL-568)')
+  ),
   name: text(200, 'Name').pipe(z.string().min(2, 'Name: at least 2 characters')),
   family: optionalText(200, 'Chemistry / family'),
   supplier: optionalText(200, 'Supplier'),
@@ -36,7 +52,8 @@ export type MaterialFieldsInput = z.infer<typeof materialFieldsSchema>;
 
 /** Rules that depend on the kind: a phosphor needs its IQE for every blend computation. */
 export function kindIssues(kind: 'pump' | 'phosphor', fields: Partial<MaterialFieldsInput>): { path: string; message: string }[] {
-  if (kind === 'phosphor' && (fields.iqe === null || fields.iqe === undefined)) return [{ path: 'iqe', message: 'IQE is required for a phosphor (0.01–1).' }];
+  if (kind === 'phosphor' && (fields.iqe === null || fields.iqe === undefined))
+    return [{ path: 'iqe', message: 'IQE is required for a phosphor (0.01–1).' }];
   return [];
 }
 
@@ -45,13 +62,23 @@ export const versionSchema = z.coerce.number('Version must be a number').int().p
 /** API PUT: any subset of the fields, plus the version the client read (optimistic lock). */
 export const materialUpdateApiSchema = materialFieldsSchema.partial().extend({ version: versionSchema });
 
-export const lotSchema = z.object({
-  lotNumber: text(80, 'Lot number').pipe(z.string().min(1, 'Lot number is required').regex(/^[^\s].*$/, 'Lot number is required')),
-  supplier: optionalText(200, 'Supplier'),
-  receivedOn: optionalText(10, 'Received on').pipe(z.iso.date('Received on: use a date like 2026-03-14').nullable()),
-  expiresOn: optionalText(10, 'Expires on').pipe(z.iso.date('Expires on: use a date like 2027-03-14').nullable()),
-  notes: optionalText(2000, 'Notes')
-}).refine((l) => !l.receivedOn || !l.expiresOn || l.expiresOn >= l.receivedOn, { message: 'Expires on must not be before received on', path: ['expiresOn'] });
+export const lotSchema = z
+  .object({
+    lotNumber: text(80, 'Lot number').pipe(
+      z
+        .string()
+        .min(1, 'Lot number is required')
+        .regex(/^[^\s].*$/, 'Lot number is required')
+    ),
+    supplier: optionalText(200, 'Supplier'),
+    receivedOn: optionalText(10, 'Received on').pipe(z.iso.date('Received on: use a date like 2026-03-14').nullable()),
+    expiresOn: optionalText(10, 'Expires on').pipe(z.iso.date('Expires on: use a date like 2027-03-14').nullable()),
+    notes: optionalText(2000, 'Notes')
+  })
+  .refine((l) => !l.receivedOn || !l.expiresOn || l.expiresOn >= l.receivedOn, {
+    message: 'Expires on must not be before received on',
+    path: ['expiresOn']
+  });
 
 export const spectrumKindSchema = z.enum(['emission', 'excitation'], 'Spectrum kind must be emission or excitation');
 

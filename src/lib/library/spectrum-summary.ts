@@ -29,7 +29,15 @@ export function summariseSpectrum(spd: Spd): SpectrumSummary {
   const e = evaluateGrid(resampleToGrid(spd), { cri: false, tm30: false });
   const nearLocus = Number.isFinite(e.duv) && Math.abs(e.duv) <= CCT_DUV_LIMIT && e.cct >= CCT_RANGE_K[0] && e.cct <= CCT_RANGE_K[1];
   return {
-    peakNm: e.peakNm, fwhmNm: e.fwhmNm, centroidNm: e.centroidNm, x: e.x, y: e.y, uPrime: e.uPrime, vPrime: e.vPrime,
-    lerLmPerW: e.ler, cctK: nearLocus ? e.cct : null, duv: nearLocus ? e.duv : null
+    peakNm: e.peakNm,
+    fwhmNm: e.fwhmNm,
+    centroidNm: e.centroidNm,
+    x: e.x,
+    y: e.y,
+    uPrime: e.uPrime,
+    vPrime: e.vPrime,
+    lerLmPerW: e.ler,
+    cctK: nearLocus ? e.cct : null,
+    duv: nearLocus ? e.duv : null
   };
 }

@@ -38,11 +38,15 @@ export function floorFailures(m: PartMetrics, floors: Acceptance['floors']): Par
     if (limit === undefined) continue;
     const value = metricValue(m, r.metric);
     if (value === null) {
-      const message = r.metric === 'ra' || r.metric === 'r9' ? `${r.label} not meaningful (source too far from the Planckian locus)` : `${r.label} not available`;
+      const message =
+        r.metric === 'ra' || r.metric === 'r9'
+          ? `${r.label} not meaningful (source too far from the Planckian locus)`
+          : `${r.label} not available`;
       out.push({ code: r.key, message });
       continue;
     }
-    if (r.sense * (limit - value) > 0) out.push({ code: r.key, message: `${r.label} ${value.toFixed(1)} ${r.sense > 0 ? '<' : '>'} ${limit}` });
+    if (r.sense * (limit - value) > 0)
+      out.push({ code: r.key, message: `${r.label} ${value.toFixed(1)} ${r.sense > 0 ? '<' : '>'} ${limit}` });
   }
   return out;
 }

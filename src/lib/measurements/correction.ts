@@ -53,7 +53,12 @@ export interface BatchCorrection {
 const round = (v: number, digits: number): number => Number(v.toFixed(digits));
 
 /** Corrected ratios written into a copy of the revision content (with a note saying where they came from). */
-export function correctedContent(content: RevisionContent, components: BlendComponents, res: CorrectionResponse, note: string): RevisionContent {
+export function correctedContent(
+  content: RevisionContent,
+  components: BlendComponents,
+  res: CorrectionResponse,
+  note: string
+): RevisionContent {
   const recipe = res.recipe;
   const fractions = recipe.kind === 'optical' ? recipe.fractions : mix(components, recipe).opticalFractions;
   const wt = recipe.kind === 'loading' ? recipe.concentrationsWtPct : null;
@@ -61,7 +66,10 @@ export function correctedContent(content: RevisionContent, components: BlendComp
     ...content,
     pumpLeakFraction: round(fractions[0], 6),
     phosphors: content.phosphors.map((p, i) => ({ ...p, opticalFraction: round(fractions[i + 1], 6), wtPct: wt ? round(wt[i], 4) : null })),
-    notes: [content.notes, note].filter((s) => s.trim()).join('\n\n').slice(0, 5000)
+    notes: [content.notes, note]
+      .filter((s) => s.trim())
+      .join('\n\n')
+      .slice(0, 5000)
   };
 }
 
@@ -71,12 +79,14 @@ const signed = (v: number, digits: number) => `${v < 0 ? '−' : '+'}${Math.abs(
 /** The trim in words: how much of the full correction is applied, what capped it, and the colour to expect. */
 export function trimNote(res: CorrectionResponse): string {
   const { cap, predicted: p } = res;
-  const expect = `expect x ${p.x.toFixed(4)}, y ${p.y.toFixed(4)} (${Math.round(p.cct)} K, Duv ${signed(p.duv, 4)}), ` +
+  const expect =
+    `expect x ${p.x.toFixed(4)}, y ${p.y.toFixed(4)} (${Math.round(p.cct)} K, Duv ${signed(p.duv, 4)}), ` +
     `${res.errorAfter.steps.toFixed(1)} steps from target.`;
   if (cap.limitedBy === 'none') return `Full correction applied; ${expect}`;
-  const why = cap.limitedBy === 'stepFraction'
-    ? `the step share asked for`
-    : `${pct(cap.requestedShare)} was asked for, and no phosphor may change by more than ×${cap.maxTrimFactor} in one trim`;
+  const why =
+    cap.limitedBy === 'stepFraction'
+      ? `the step share asked for`
+      : `${pct(cap.requestedShare)} was asked for, and no phosphor may change by more than ×${cap.maxTrimFactor} in one trim`;
   return `Trim capped at ${pct(cap.appliedShare)} of the full correction (by ${pct(1 - cap.appliedShare)}: ${why}); ${expect}`;
 }
 

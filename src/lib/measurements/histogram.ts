@@ -33,7 +33,11 @@ export function histogram(values: readonly (number | null)[], targetBins = 10): 
   const step = niceStep(hi - lo, targetBins);
   const start = Math.floor(lo / step) * step;
   const count = Math.max(1, Math.ceil(tidy((hi - start) / step)));
-  const bins: HistogramBin[] = Array.from({ length: count }, (_, i) => ({ x0: tidy(start + i * step), x1: tidy(start + (i + 1) * step), count: 0 }));
+  const bins: HistogramBin[] = Array.from({ length: count }, (_, i) => ({
+    x0: tidy(start + i * step),
+    x1: tidy(start + (i + 1) * step),
+    count: 0
+  }));
   for (const x of v) {
     const i = Math.min(count - 1, Math.max(0, Math.floor(tidy((x - start) / step))));
     bins[i].count++;

@@ -6,7 +6,15 @@
 export type * from './types';
 export { SUMMARY_QUANTITIES } from './types';
 export { partMetrics } from './partMetrics';
-export { measureParts, measurePartsPaced, measurePartsStepwise, MAX_PARTS_PER_UPLOAD, type PartColumns, type PartError, type MeasureResult } from './measureParts';
+export {
+  measureParts,
+  measurePartsPaced,
+  measurePartsStepwise,
+  MAX_PARTS_PER_UPLOAD,
+  type PartColumns,
+  type PartError,
+  type MeasureResult
+} from './measureParts';
 export { qualityTarget } from './target';
 export { judgePart, floorFailures, colourFailure, describeTolerance } from './acceptance';
 export { describe as describeValues } from './statistics';
@@ -16,7 +24,12 @@ export { summariseBatch, type BatchSummary } from './summarise';
 export { ellipseOutline, toleranceOutline, planckianOutline, quadrangleOutline } from './outlines';
 export { judgeBatch, defaultAcceptance, batchAcceptance, describeAcceptance, type JudgedBatch, type AcceptanceChoice } from './judgeBatch';
 export {
-  correctFromBatch, correctionRequest, correctedContent, revisionRecipe, DEFAULT_STEP_FRACTION, type BatchCorrection
+  correctFromBatch,
+  correctionRequest,
+  correctedContent,
+  revisionRecipe,
+  DEFAULT_STEP_FRACTION,
+  type BatchCorrection
 } from './correction';
 export { fitDomain, type PlotDomain } from './plotDomain';
 export { chromaticityPlotModel, type ChromaticityPlotModel, type PlotPart, type PlotMarker } from './plotModel';

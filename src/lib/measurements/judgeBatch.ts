@@ -29,7 +29,10 @@ export interface AcceptanceChoice {
 }
 
 /** The acceptance in force: the revision's defaults unless quality chose otherwise for the batch. */
-export function batchAcceptance(content: Pick<RevisionContent, 'tolerance' | 'floors' | 'target'>, choice: AcceptanceChoice | null): Acceptance {
+export function batchAcceptance(
+  content: Pick<RevisionContent, 'tolerance' | 'floors' | 'target'>,
+  choice: AcceptanceChoice | null
+): Acceptance {
   if (!choice) return defaultAcceptance(content);
   const tolerance: Tolerance = choice.mode === 'steps' && choice.steps !== null ? { kind: 'sdcm', steps: choice.steps } : content.tolerance;
   return { tolerance, floors: content.floors, requireTargetBin: choice.requireTargetBin };

@@ -27,8 +27,13 @@ export const MAX_PARTS_PER_UPLOAD = 2000;
 /** Evaluates the parts one by one, yielding (done, total) after each; returns the result. */
 export function* measurePartsStepwise(input: PartColumns): Generator<{ done: number; total: number }, MeasureResult> {
   const total = input.columns.length;
-  if (total === 0) return { ok: false, errors: [{ part: '(file)', column: 1, message: 'no intensity column: a file needs a wavelength column and at least one part column' }] };
-  if (total > MAX_PARTS_PER_UPLOAD) return { ok: false, errors: [{ part: '(file)', column: 1, message: `${total} parts in one file; at most ${MAX_PARTS_PER_UPLOAD}` }] };
+  if (total === 0)
+    return {
+      ok: false,
+      errors: [{ part: '(file)', column: 1, message: 'no intensity column: a file needs a wavelength column and at least one part column' }]
+    };
+  if (total > MAX_PARTS_PER_UPLOAD)
+    return { ok: false, errors: [{ part: '(file)', column: 1, message: `${total} parts in one file; at most ${MAX_PARTS_PER_UPLOAD}` }] };
   const parts: MeasuredPart[] = [];
   const errors: PartError[] = [];
   const seen = new Map<string, number>();
@@ -63,7 +68,12 @@ export function measureParts(input: PartColumns, onProgress?: (done: number, tot
 }
 
 /** Same, pausing every `every` parts (e.g. to let a server stream progress); `pause` is supplied by the caller. */
-export async function measurePartsPaced(input: PartColumns, pause: () => Promise<void>, onProgress?: (done: number, total: number) => void, every = 25): Promise<MeasureResult> {
+export async function measurePartsPaced(
+  input: PartColumns,
+  pause: () => Promise<void>,
+  onProgress?: (done: number, total: number) => void,
+  every = 25
+): Promise<MeasureResult> {
   const steps = measurePartsStepwise(input);
   for (;;) {
     const next = steps.next();

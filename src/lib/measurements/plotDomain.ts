@@ -8,7 +8,13 @@ export interface PlotDomain {
   y: [number, number];
 }
 
-export function fitDomain(points: readonly (readonly [number, number])[], widthPx: number, heightPx: number, padFraction = 0.08, minSpan = 0.004): PlotDomain {
+export function fitDomain(
+  points: readonly (readonly [number, number])[],
+  widthPx: number,
+  heightPx: number,
+  padFraction = 0.08,
+  minSpan = 0.004
+): PlotDomain {
   let x0 = Infinity;
   let x1 = -Infinity;
   let y0 = Infinity;

@@ -52,20 +52,28 @@ export function chromaticityPlotModel(batch: JudgedBatch, markers: PlotMarker[] 
   const outlines: ChromaticityPlotModel['outlines'] = [
     { kind: 'tolerance', label: `Allowed: ${describeTolerance(tol)}`, points: tolerancePts },
     ...REFERENCE_STEPS.filter((n) => !(tol.kind === 'sdcm' && tol.steps === n)).map((n) => ({
-      kind: 'steps' as const, label: `${n}-step ellipse`, points: ellipseOutline(ellipse, n, 72).map(round)
+      kind: 'steps' as const,
+      label: `${n}-step ellipse`,
+      points: ellipseOutline(ellipse, n, 72).map(round)
     }))
   ];
-  const quads = ansiNominalQuadrangles().map((q) => ({ nominalCct: q.nominalCct, isTarget: t.ansiBin?.nominalCct === q.nominalCct && t.ansiBin.cctMin === q.cctMin, points: quadrangleOutline(q).map(round) }));
-  if (t.ansiBin && !quads.some((q) => q.isTarget)) quads.push({ nominalCct: t.ansiBin.nominalCct, isTarget: true, points: quadrangleOutline(t.ansiBin).map(round) });
-  const parts = batch.parts.map((p) => ({
-    label: p.label, x: p.metrics.x, y: p.metrics.y, pass: p.verdict.pass, steps: p.verdict.offset.steps, cct: p.metrics.cct, duv: p.metrics.duv
+  const quads = ansiNominalQuadrangles().map((q) => ({
+    nominalCct: q.nominalCct,
+    isTarget: t.ansiBin?.nominalCct === q.nominalCct && t.ansiBin.cctMin === q.cctMin,
+    points: quadrangleOutline(q).map(round)
   }));
-  const focus: Pair[] = [
-    [t.x, t.y],
-    ...tolerancePts,
-    ...parts.map((p): Pair => [p.x, p.y]),
-    ...markers.map((m): Pair => [m.x, m.y])
-  ];
+  if (t.ansiBin && !quads.some((q) => q.isTarget))
+    quads.push({ nominalCct: t.ansiBin.nominalCct, isTarget: true, points: quadrangleOutline(t.ansiBin).map(round) });
+  const parts = batch.parts.map((p) => ({
+    label: p.label,
+    x: p.metrics.x,
+    y: p.metrics.y,
+    pass: p.verdict.pass,
+    steps: p.verdict.offset.steps,
+    cct: p.metrics.cct,
+    duv: p.metrics.duv
+  }));
+  const focus: Pair[] = [[t.x, t.y], ...tolerancePts, ...parts.map((p): Pair => [p.x, p.y]), ...markers.map((m): Pair => [m.x, m.y])];
   return {
     parts,
     target: { x: t.x, y: t.y, label: t.label },

@@ -38,9 +38,16 @@ export function recordMeasurementSummary(
   const bins = summary.bins.map((b) => `${b.nominalCct === null ? 'no bin' : `${b.nominalCct} K`}: ${b.count}`).join(', ');
   const rows = [
     { label: 'Parts measured', value: String(summary.parts) },
-    { label: 'Yield', value: summary.yieldFraction === null ? '—' : `${(summary.yieldFraction * 100).toFixed(1)} % (${summary.passed} of ${summary.parts} pass)` },
+    {
+      label: 'Yield',
+      value:
+        summary.yieldFraction === null ? '—' : `${(summary.yieldFraction * 100).toFixed(1)} % (${summary.passed} of ${summary.parts} pass)`
+    },
     { label: 'Target', value: targetLabel },
-    { label: 'Acceptance', value: `${describeTolerance(acceptance.tolerance)}${acceptance.requireTargetBin ? ', inside the target ANSI bin' : ''}` },
+    {
+      label: 'Acceptance',
+      value: `${describeTolerance(acceptance.tolerance)}${acceptance.requireTargetBin ? ', inside the target ANSI bin' : ''}`
+    },
     { label: 'x', value: stat(s.x, 4) },
     { label: 'y', value: stat(s.y, 4) },
     { label: 'CCT', value: stat(s.cct, 0, ' K') },
@@ -48,11 +55,19 @@ export function recordMeasurementSummary(
     { label: 'Ra', value: stat(s.ra, 1) },
     { label: 'R9', value: stat(s.r9, 1) },
     { label: 'LER', value: stat(s.ler, 0, ' lm/W') },
-    { label: 'Mean point to target', value: summary.meanOffset ? `${summary.meanOffset.steps.toFixed(1)} steps (Δx ${summary.meanOffset.dx.toFixed(4)}, Δy ${summary.meanOffset.dy.toFixed(4)})` : '—' },
+    {
+      label: 'Mean point to target',
+      value: summary.meanOffset
+        ? `${summary.meanOffset.steps.toFixed(1)} steps (Δx ${summary.meanOffset.dx.toFixed(4)}, Δy ${summary.meanOffset.dy.toFixed(4)})`
+        : '—'
+    },
     { label: 'ANSI C78.377 bins', value: bins || '—' }
   ];
   if (prediction) {
-    rows.push({ label: 'Measured − predicted', value: `Δx ${prediction.offset.dx.toFixed(4)}, Δy ${prediction.offset.dy.toFixed(4)}, ${prediction.offset.steps.toFixed(1)} steps` });
+    rows.push({
+      label: 'Measured − predicted',
+      value: `Δx ${prediction.offset.dx.toFixed(4)}, Δy ${prediction.offset.dy.toFixed(4)}, ${prediction.offset.steps.toFixed(1)} steps`
+    });
   }
   if (signature) {
     rows.push(

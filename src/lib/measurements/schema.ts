@@ -7,16 +7,25 @@ import { z } from 'zod';
 const version = z.coerce.number('version is required (the version you read)').int().positive('version is required (the version you read)');
 
 /** Colour acceptance chosen for a batch: the revision's own tolerance, or an n-step ellipse. */
-export const acceptanceSchema = z.object({
-  mode: z.enum(['revision', 'steps'], 'choose the revision tolerance or a step ellipse'),
-  steps: z.coerce.number('steps must be a number').min(1, 'steps must be 1–7').max(7, 'steps must be 1–7').optional(),
-  requireTargetBin: z.union([z.boolean(), z.enum(['on', 'true', 'false'])]).optional().transform((v) => v === true || v === 'on' || v === 'true'),
-  version: z.coerce.number().int().min(0).default(0)
-}).refine((v) => v.mode === 'revision' || v.steps !== undefined, { message: 'enter the number of steps (1–7)', path: ['steps'] });
+export const acceptanceSchema = z
+  .object({
+    mode: z.enum(['revision', 'steps'], 'choose the revision tolerance or a step ellipse'),
+    steps: z.coerce.number('steps must be a number').min(1, 'steps must be 1–7').max(7, 'steps must be 1–7').optional(),
+    requireTargetBin: z
+      .union([z.boolean(), z.enum(['on', 'true', 'false'])])
+      .optional()
+      .transform((v) => v === true || v === 'on' || v === 'true'),
+    version: z.coerce.number().int().min(0).default(0)
+  })
+  .refine((v) => v.mode === 'revision' || v.steps !== undefined, { message: 'enter the number of steps (1–7)', path: ['steps'] });
 export type AcceptanceInput = z.infer<typeof acceptanceSchema>;
 
 export const correctionSchema = z.object({
-  stepFraction: z.coerce.number('step must be a number').min(0.1, 'apply between 10 % and 100 % of the correction').max(1, 'apply between 10 % and 100 % of the correction').default(0.8)
+  stepFraction: z.coerce
+    .number('step must be a number')
+    .min(0.1, 'apply between 10 % and 100 % of the correction')
+    .max(1, 'apply between 10 % and 100 % of the correction')
+    .default(0.8)
 });
 
 export const DISPOSITION_MEANINGS = {
@@ -24,13 +33,18 @@ export const DISPOSITION_MEANINGS = {
   reject: ['Rejection: the batch does not meet its revision', 'Rejection for rework']
 } as const;
 
-export const dispositionSchema = z.object({
-  decision: z.enum(['release', 'reject'], 'choose release or reject'),
-  meaning: z.string().trim().min(1, 'choose the meaning of your signature'),
-  comment: z.string().trim().min(3, 'a comment is required (at least 3 characters)').max(2000, 'at most 2000 characters'),
-  password: z.string().min(1, 're-enter your password to sign').max(200),
-  version
-}).refine((v) => (DISPOSITION_MEANINGS[v.decision] as readonly string[]).includes(v.meaning), { message: 'choose one of the listed meanings for this decision', path: ['meaning'] });
+export const dispositionSchema = z
+  .object({
+    decision: z.enum(['release', 'reject'], 'choose release or reject'),
+    meaning: z.string().trim().min(1, 'choose the meaning of your signature'),
+    comment: z.string().trim().min(3, 'a comment is required (at least 3 characters)').max(2000, 'at most 2000 characters'),
+    password: z.string().min(1, 're-enter your password to sign').max(200),
+    version
+  })
+  .refine((v) => (DISPOSITION_MEANINGS[v.decision] as readonly string[]).includes(v.meaning), {
+    message: 'choose one of the listed meanings for this decision',
+    path: ['meaning']
+  });
 export type DispositionInput = z.infer<typeof dispositionSchema>;
 
 export const withdrawUploadSchema = z.object({

@@ -29,9 +29,10 @@ export interface BatchSummary {
 }
 
 export function summariseBatch(parts: readonly JudgedPart[], target: ResolvedTarget): BatchSummary {
-  const stats = Object.fromEntries(
-    SUMMARY_QUANTITIES.map((q) => [q, describe(parts.map((p) => p.metrics[q]))])
-  ) as Record<SummaryQuantity, Stat | null>;
+  const stats = Object.fromEntries(SUMMARY_QUANTITIES.map((q) => [q, describe(parts.map((p) => p.metrics[q]))])) as Record<
+    SummaryQuantity,
+    Stat | null
+  >;
   const passed = parts.filter((p) => p.verdict.pass).length;
   const meanPoint = stats.x && stats.y ? colourPoint(stats.x.mean, stats.y.mean) : null;
 

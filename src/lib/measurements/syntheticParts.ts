@@ -22,7 +22,7 @@ export function syntheticPartsCsv(components: BlendComponents, fractions: number
     const f = fractions.map((v, i) => {
       if (i === 0) return v;
       const wobble = 1 + (o.scatter ?? 0.01) * Math.sin(1.7 * (k + 1) * i + 0.3 * i * i);
-      return v * wobble * (i === last ? o.lastPhosphorScale ?? 1 : 1);
+      return v * wobble * (i === last ? (o.lastPhosphorScale ?? 1) : 1);
     });
     const spd = mix(components, { kind: 'optical', fractions: f }).spd;
     return wavelengths.map((w) => spd.values[w - spd.wavelengths[0]]);

@@ -3,11 +3,23 @@
  * the current content, checked by the schema of every version it passes through. Used on every
  * read; the result is never written back (the stored text is what the signature hash covers).
  */
-import { RECIPE_VERSIONS, upgradeContent, assertChain, type ContentIssue, type ContentVersionChain, type RevisionContent, type UpgradeResult } from './upgrade';
+import {
+  RECIPE_VERSIONS,
+  upgradeContent,
+  assertChain,
+  type ContentIssue,
+  type ContentVersionChain,
+  type RevisionContent,
+  type UpgradeResult
+} from './upgrade';
 
 /** Stored content that cannot be read: the message names the field and what is wrong with it. */
 export class RecipeContentError extends Error {
-  constructor(message: string, readonly issues: ContentIssue[], readonly storedVersion: number | null) {
+  constructor(
+    message: string,
+    readonly issues: ContentIssue[],
+    readonly storedVersion: number | null
+  ) {
     super(message);
     this.name = 'RecipeContentError';
   }
@@ -30,7 +42,12 @@ export function createRecipeReader<T>(chain: ContentVersionChain<T>): RecipeRead
     try {
       raw = JSON.parse(json);
     } catch {
-      return { ok: false, storedVersion: null, message: 'recipe content cannot be read: it is not valid JSON', issues: [{ path: '(content)', message: 'not valid JSON' }] };
+      return {
+        ok: false,
+        storedVersion: null,
+        message: 'recipe content cannot be read: it is not valid JSON',
+        issues: [{ path: '(content)', message: 'not valid JSON' }]
+      };
     }
     return upgradeContent(chain, raw);
   };

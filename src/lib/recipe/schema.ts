@@ -31,7 +31,11 @@ export const siliconeSchema = z.object({
   name: z.string().min(1).max(200),
   ratioA: z.number().positive().max(100),
   ratioB: z.number().positive().max(100),
-  potLifeMin: z.number().int().positive().max(24 * 60),
+  potLifeMin: z
+    .number()
+    .int()
+    .positive()
+    .max(24 * 60),
   cure: z.string().max(300),
   densityGPerCm3: z.number().positive().max(5).nullable()
 });

@@ -26,14 +26,14 @@ export interface ContentIssue {
 }
 
 export type UpgradeResult<T> =
-  | { ok: true; content: T; storedVersion: number }
-  | { ok: false; storedVersion: number | null; message: string; issues: ContentIssue[] };
+  { ok: true; content: T; storedVersion: number } | { ok: false; storedVersion: number | null; message: string; issues: ContentIssue[] };
 
 /** Throws when the chain itself is malformed (a programming error, caught by the module's tests). */
 export function assertChain(chain: readonly ContentVersion[]): void {
   if (chain.length === 0) throw new Error('recipe: the version chain is empty');
   chain.forEach((step, i) => {
-    if (i > 0 && step.version !== chain[i - 1].version + 1) throw new Error(`recipe: version ${step.version} does not follow ${chain[i - 1].version}`);
+    if (i > 0 && step.version !== chain[i - 1].version + 1)
+      throw new Error(`recipe: version ${step.version} does not follow ${chain[i - 1].version}`);
     if (i > 0 && !step.upgrade) throw new Error(`recipe: version ${step.version} has no upgrader from ${chain[i - 1].version}`);
   });
 }
@@ -54,9 +54,10 @@ export function upgradeContent<T>(chain: ContentVersionChain<T>, raw: unknown): 
   const start = chain.findIndex((step) => step.version === tag);
   if (start < 0) {
     const newest = chain[chain.length - 1].version;
-    const known = typeof tag === 'number' && Number.isInteger(tag) && tag > newest
-      ? `version ${tag} is newer than this software reads (up to ${newest})`
-      : `${JSON.stringify(tag)} is not a known version (1 to ${newest})`;
+    const known =
+      typeof tag === 'number' && Number.isInteger(tag) && tag > newest
+        ? `version ${tag} is newer than this software reads (up to ${newest})`
+        : `${JSON.stringify(tag)} is not a known version (1 to ${newest})`;
     return failure(null, 'recipe content cannot be read', [{ path: 'contentVersion', message: known }]);
   }
   const storedVersion = chain[start].version;
@@ -66,7 +67,10 @@ export function upgradeContent<T>(chain: ContentVersionChain<T>, raw: unknown): 
     const input = i === start ? value : step.upgrade!(value as never);
     const parsed = step.schema.safeParse(input);
     if (!parsed.success) {
-      const intro = i === start ? `recipe content (version ${storedVersion}) is invalid` : `recipe content upgraded from version ${storedVersion} to ${step.version} is invalid`;
+      const intro =
+        i === start
+          ? `recipe content (version ${storedVersion}) is invalid`
+          : `recipe content upgraded from version ${storedVersion} to ${step.version} is invalid`;
       return failure(storedVersion, intro, issuesOf(parsed.error));
     }
     value = parsed.data;

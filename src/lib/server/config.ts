@@ -23,8 +23,10 @@ const envSchema = z.object({
   S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
   S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('true'),
   DB_POOL_MAX: z.coerce.number().int().min(2, 'DB_POOL_MAX must be at least 2').max(500, 'DB_POOL_MAX must be at most 500').default(20),
-  PF_SOLVE_WORKERS: z.preprocess((v) => (v === '' ? undefined : v),
-    z.coerce.number(SOLVE_WORKERS_RULE).int(SOLVE_WORKERS_RULE).min(0, SOLVE_WORKERS_RULE).max(16, SOLVE_WORKERS_RULE).optional()),
+  PF_SOLVE_WORKERS: z.preprocess(
+    (v) => (v === '' ? undefined : v),
+    z.coerce.number(SOLVE_WORKERS_RULE).int(SOLVE_WORKERS_RULE).min(0, SOLVE_WORKERS_RULE).max(16, SOLVE_WORKERS_RULE).optional()
+  ),
   PF_SOLVE_WORKER: z.string().min(1).default('build/solve-worker.js'),
   NODE_ENV: z.string().default('development')
 });

@@ -25,11 +25,7 @@ export const GRID_WAVELENGTHS_NM: Float64Array = (() => {
  * Linear interpolation of a uniformly tabulated series onto the working grid; zero
  * outside the tabulated range. Used for the generated data tables (5 nm → 1 nm).
  */
-export function tableToGrid(
-  values: readonly number[],
-  startNm: number,
-  stepNm: number
-): Float64Array {
+export function tableToGrid(values: readonly number[], startNm: number, stepNm: number): Float64Array {
   const out = new Float64Array(GRID_LENGTH);
   const endNm = startNm + stepNm * (values.length - 1);
   for (let i = 0; i < GRID_LENGTH; i++) {

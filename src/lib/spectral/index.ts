@@ -15,8 +15,17 @@ export { resampleToGrid, validateSpd } from './resample';
 export { CMF_1931_2DEG, CMF_1964_10DEG, type Observer, type CmfGrid } from './colorimetry/cmf';
 export { spdToXyz, tristimulusSums, type Xyz } from './colorimetry/tristimulus';
 export {
-  xyzToXy, xyzToUv, xyzToUvPrime, xyToUv, uvToXy, uvToUvPrime, uvPrimeToUv,
-  xyToUvPrime, uvPrimeToXy, xyToXyz, type Pair
+  xyzToXy,
+  xyzToUv,
+  xyzToUvPrime,
+  xyToUv,
+  uvToXy,
+  uvToUvPrime,
+  uvPrimeToUv,
+  xyToUvPrime,
+  uvPrimeToXy,
+  xyToXyz,
+  type Pair
 } from './colorimetry/chromaticity';
 
 // Illuminants
@@ -44,7 +53,13 @@ export { spectralShape, type SpectralShape } from './metrics/spectral-shape';
 
 // Chromaticity bins
 export {
-  findAnsiBin, ansiNominalQuadrangles, ansiFlexibleQuadrangle, ansiDuvTarget, ansiCctTolerance,
-  isInQuadrangle, type AnsiQuadrangle, type AnsiBinMatch
+  findAnsiBin,
+  ansiNominalQuadrangles,
+  ansiFlexibleQuadrangle,
+  ansiDuvTarget,
+  ansiCctTolerance,
+  isInQuadrangle,
+  type AnsiQuadrangle,
+  type AnsiBinMatch
 } from './ansi/c78377';
 export { sdcmSteps, sdcmFromTarget, ellipseForCct, type ChromaticityEllipse } from './ansi/macadam';

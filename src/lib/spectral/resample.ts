@@ -41,14 +41,10 @@ export function validateSpd(spd: unknown): asserts spd is Spd {
     throw new SpectrumInputError('wavelengths and values must both be arrays of numbers');
   }
   if (wavelengths.length !== values.length) {
-    throw new SpectrumInputError(
-      `wavelengths (${wavelengths.length}) and values (${values.length}) differ in length`
-    );
+    throw new SpectrumInputError(`wavelengths (${wavelengths.length}) and values (${values.length}) differ in length`);
   }
   if (wavelengths.length < MIN_POINTS) {
-    throw new SpectrumInputError(
-      `spectrum has ${wavelengths.length} points; at least ${MIN_POINTS} are needed`
-    );
+    throw new SpectrumInputError(`spectrum has ${wavelengths.length} points; at least ${MIN_POINTS} are needed`);
   }
   let max = -Infinity;
   for (let i = 0; i < wavelengths.length; i++) {
@@ -61,14 +57,10 @@ export function validateSpd(spd: unknown): asserts spd is Spd {
       throw new SpectrumInputError(`value at index ${i} (${w} nm) is not a finite number`);
     }
     if (w < MIN_WAVELENGTH_NM || w > MAX_WAVELENGTH_NM) {
-      throw new SpectrumInputError(
-        `wavelength ${w} nm at index ${i} is outside ${MIN_WAVELENGTH_NM}–${MAX_WAVELENGTH_NM} nm`
-      );
+      throw new SpectrumInputError(`wavelength ${w} nm at index ${i} is outside ${MIN_WAVELENGTH_NM}–${MAX_WAVELENGTH_NM} nm`);
     }
     if (i > 0 && !(w > wavelengths[i - 1])) {
-      throw new SpectrumInputError(
-        `wavelengths must increase strictly: ${wavelengths[i - 1]} nm then ${w} nm at index ${i}`
-      );
+      throw new SpectrumInputError(`wavelengths must increase strictly: ${wavelengths[i - 1]} nm then ${w} nm at index ${i}`);
     }
     if (p > max) max = p;
   }
@@ -77,9 +69,7 @@ export function validateSpd(spd: unknown): asserts spd is Spd {
   }
   for (let i = 0; i < values.length; i++) {
     if (values[i] < -NEGATIVE_NOISE_FRACTION * max) {
-      throw new SpectrumInputError(
-        `negative power ${values[i]} at ${wavelengths[i]} nm is below −1 % of the maximum (${max})`
-      );
+      throw new SpectrumInputError(`negative power ${values[i]} at ${wavelengths[i]} nm is below −1 % of the maximum (${max})`);
     }
   }
 }

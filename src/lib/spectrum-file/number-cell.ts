@@ -20,7 +20,10 @@ export function shownField(s: string): string {
 }
 
 /** One field as a number, or the reason it is not one (plain function: wide multi-part files have ~10⁵ fields). */
-export function readNumberCell(raw: string, decimal: SpectrumFileDialect['decimal']): { ok: true; value: number } | { ok: false; message: string } {
+export function readNumberCell(
+  raw: string,
+  decimal: SpectrumFileDialect['decimal']
+): { ok: true; value: number } | { ok: false; message: string } {
   const s = raw.trim();
   if (s === '') return { ok: false, message: 'is empty' };
   const pattern = decimal === 'comma' ? COMMA_NUMBER : POINT_NUMBER;

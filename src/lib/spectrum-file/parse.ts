@@ -56,7 +56,10 @@ function splitFields(lines: SourceLine[], delimiter: keyof typeof DELIMITER_CHAR
     });
   if (joined !== -1) {
     const line = lines[joined].line;
-    errors.push({ line, message: `Line ${line}: a quoted field opens here and is not closed on the same line (a field may not span lines).` });
+    errors.push({
+      line,
+      message: `Line ${line}: a quoted field opens here and is not closed on the same line (a field may not span lines).`
+    });
   }
   const rows = parsed.data.map((cells, i) => ({ line: lines[i]?.line ?? 0, cells: cells.map((c) => c.trim()) }));
   return { rows, errors };
@@ -66,7 +69,8 @@ export function parseSpectrumFile(text: string, options: ParseOptions = {}): Spe
   const maxBytes = options.maxBytes ?? DEFAULT_MAX_BYTES;
   const bytes = byteLength(text);
   if (bytes > maxBytes) return fail([{ line: null, message: `The file is ${formatBytes(bytes)}; the limit is ${formatBytes(maxBytes)}.` }]);
-  if (text.includes('\u0000')) return fail([{ line: null, message: 'This is not a text file (it contains binary data). Export the spectrum as CSV or TXT.' }]);
+  if (text.includes('\u0000'))
+    return fail([{ line: null, message: 'This is not a text file (it contains binary data). Export the spectrum as CSV or TXT.' }]);
 
   const { lines, comments } = contentLines(text);
   if (lines.length === 0) return fail([{ line: null, message: 'The file holds no data rows (only blank or comment lines).' }]);
@@ -77,17 +81,33 @@ export function parseSpectrumFile(text: string, options: ParseOptions = {}): Spe
   // Header rows: non-numeric rows above the first data row.
   let first = 0;
   while (first < split.rows.length && !looksNumeric(split.rows[first].cells[0] ?? '')) first++;
-  if (first === split.rows.length) return fail([{ line: split.rows[0].line, message: `Line ${split.rows[0].line}: no numeric data found in the file; expected wavelength and intensity columns.` }]);
+  if (first === split.rows.length)
+    return fail([
+      {
+        line: split.rows[0].line,
+        message: `Line ${split.rows[0].line}: no numeric data found in the file; expected wavelength and intensity columns.`
+      }
+    ]);
   if (first > MAX_HEADER_ROWS) {
     const r = split.rows[MAX_HEADER_ROWS];
-    return fail([{ line: r.line, message: `Line ${r.line}: "${shownField(r.cells[0])}" is not a number; at most ${MAX_HEADER_ROWS} header lines may precede the data (mark other lines as comments with #).` }]);
+    return fail([
+      {
+        line: r.line,
+        message: `Line ${r.line}: "${shownField(r.cells[0])}" is not a number; at most ${MAX_HEADER_ROWS} header lines may precede the data (mark other lines as comments with #).`
+      }
+    ]);
   }
   const header = first > 0 ? split.rows[first - 1] : null;
   const dataRows = split.rows.slice(first);
 
-  const width = options.multiColumn ? Math.max(2, dataRows[0].cells.filter((c, i, a) => c !== '' || a.slice(i).some((x) => x !== '')).length) : 2;
+  const width = options.multiColumn
+    ? Math.max(2, dataRows[0].cells.filter((c, i, a) => c !== '' || a.slice(i).some((x) => x !== '')).length)
+    : 2;
   const names = columnNames(header?.cells ?? [], width, Boolean(options.multiColumn));
-  const decimal = detectDecimal(delimiter, dataRows.map((r) => r.cells));
+  const decimal = detectDecimal(
+    delimiter,
+    dataRows.map((r) => r.cells)
+  );
 
   const numeric = rowsSchema(decimal, names).safeParse(dataRows);
   if (!numeric.success) return fail(numeric.error.issues.map((i) => lineIssue(dataRows, i.path, i.message)));
@@ -98,12 +118,15 @@ export function parseSpectrumFile(text: string, options: ParseOptions = {}): Spe
 
   const rows = checked.data;
   const warnings: string[] = [];
-  warnings.push(`Read as ${delimiter === 'whitespace' ? 'space' : delimiter}-separated columns with decimal ${decimal === 'comma' ? 'commas' : 'points'}${header ? `, header on line ${header.line}` : ', no header'}.`);
+  warnings.push(
+    `Read as ${delimiter === 'whitespace' ? 'space' : delimiter}-separated columns with decimal ${decimal === 'comma' ? 'commas' : 'points'}${header ? `, header on line ${header.line}` : ', no header'}.`
+  );
   if (comments) warnings.push(`${comments} comment line${comments === 1 ? '' : 's'} skipped.`);
   const columns = names.slice(1).map((name, k) => {
     const values = rows.map((r) => r.values[k + 1]);
     const clamped = values.filter((v) => v < 0).length;
-    if (clamped) warnings.push(`${clamped} small negative value${clamped === 1 ? '' : 's'} in ${name} (noise, within 1 % of the maximum) set to 0.`);
+    if (clamped)
+      warnings.push(`${clamped} small negative value${clamped === 1 ? '' : 's'} in ${name} (noise, within 1 % of the maximum) set to 0.`);
     return { name, values: values.map((v) => (v < 0 ? 0 : v)) };
   });
   return {

@@ -5,12 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import { prepareBasis } from '../../../src/lib/blend/basis';
 import { beerLambertPhotonBudget, opticalDepthsOf } from '../../../src/lib/blend/loading/beerLambertPhotonBudget';
-import {
-  effectiveWtPct,
-  slurryDensityGPerCm3,
-  volumeFractions,
-  wtPctFromEffective
-} from '../../../src/lib/blend/loading/dispenseGeometry';
+import { effectiveWtPct, slurryDensityGPerCm3, volumeFractions, wtPctFromEffective } from '../../../src/lib/blend/loading/dispenseGeometry';
 import { blue } from '../fixtures';
 
 describe('volume fractions (hand calculation, ideal mixing)', () => {

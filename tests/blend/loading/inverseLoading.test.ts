@@ -72,7 +72,11 @@ describe('fraction evaluator of the inverse equals the full photon budget', () =
   const lb = prepareBasis(THREE).loading!;
   for (const cascade of [false, true]) {
     it(`cascade ${cascade}`, () => {
-      for (const tau of [[0.1, 0.2, 0.05], [1, 3, 2], [0, 0.5, 4]]) {
+      for (const tau of [
+        [0.1, 0.2, 0.05],
+        [1, 3, 2],
+        [0, 0.5, 4]
+      ]) {
         const fast = budgetFractionsForDepths(lb, tau, cascade, 0.8);
         const full = photonBudgetForDepths(lb, tau, cascade, 0.8).opticalFractions;
         fast.forEach((v, i) => expect(v).toBeCloseTo(full[i], 9));

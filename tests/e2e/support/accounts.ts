@@ -44,7 +44,9 @@ export async function makeUser(email: string, roles: Role[], password = 'throwaw
 /** Posts the credentials the way the sign-in form does; returns the final redirect location. */
 export async function postSignIn(ctx: APIRequestContext, email: string, password: string, origin = BASE): Promise<string> {
   const res = await ctx.post('/auth/callback/credentials', {
-    headers: { Origin: origin }, form: { email, password, callbackUrl: '/' }, maxRedirects: 0
+    headers: { Origin: origin },
+    form: { email, password, callbackUrl: '/' },
+    maxRedirects: 0
   });
   expect(res.status()).toBe(302);
   return res.headers()['location'] ?? '';

@@ -35,7 +35,10 @@ export async function startApp(port: number, env: Record<string, string> = {}): 
   });
   let stderr = '';
   let output = '';
-  child.stderr?.on('data', (d) => { stderr += d; output += d; });
+  child.stderr?.on('data', (d) => {
+    stderr += d;
+    output += d;
+  });
   child.stdout?.on('data', (d) => (output += d));
   try {
     await waitFor(`${url}/api/health`);
@@ -46,11 +49,12 @@ export async function startApp(port: number, env: Record<string, string> = {}): 
   return {
     url,
     logs: () => output,
-    stop: () => new Promise<void>((ok) => {
-      if (child.exitCode !== null) return ok();
-      child.once('exit', () => ok());
-      child.kill('SIGTERM');
-    })
+    stop: () =>
+      new Promise<void>((ok) => {
+        if (child.exitCode !== null) return ok();
+        child.once('exit', () => ok());
+        child.kill('SIGTERM');
+      })
   };
 }
 

@@ -4,7 +4,10 @@ import { BASE, signedInContext } from './accounts';
 
 /** Creates a token through the profile page's action with a signed-in context and returns it. */
 export async function tokenFor(ctx: APIRequestContext, name = 'e2e', days = 1): Promise<string> {
-  const res = await ctx.post('/profile?/createToken', { headers: { Origin: BASE, 'x-sveltekit-action': 'true' }, form: { name, days: String(days) } });
+  const res = await ctx.post('/profile?/createToken', {
+    headers: { Origin: BASE, 'x-sveltekit-action': 'true' },
+    form: { name, days: String(days) }
+  });
   expect(res.status()).toBe(200);
   const token = JSON.parse((await res.json()).data).find((v: unknown) => typeof v === 'string' && v.startsWith('pfk_'));
   // The action returns the new token once: the prefix and 30 random bytes in base64url.

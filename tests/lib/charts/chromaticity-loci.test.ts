@@ -35,7 +35,10 @@ describe('Planckian locus, isotherms and Duv lines', () => {
   it('passes through illuminant A', () => {
     const pts = referenceLines('xy').planckian;
     const toSegment = (p: number[], a: number[], b: number[]) => {
-      const t = Math.max(0, Math.min(1, ((p[0] - a[0]) * (b[0] - a[0]) + (p[1] - a[1]) * (b[1] - a[1])) / ((b[0] - a[0]) ** 2 + (b[1] - a[1]) ** 2)));
+      const t = Math.max(
+        0,
+        Math.min(1, ((p[0] - a[0]) * (b[0] - a[0]) + (p[1] - a[1]) * (b[1] - a[1])) / ((b[0] - a[0]) ** 2 + (b[1] - a[1]) ** 2))
+      );
       return Math.hypot(p[0] - a[0] - t * (b[0] - a[0]), p[1] - a[1] - t * (b[1] - a[1]));
     };
     const nearest = Math.min(...pts.slice(1).map((b, i) => toSegment([0.44757, 0.40745], pts[i], b)));

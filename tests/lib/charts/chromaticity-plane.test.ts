@@ -59,6 +59,15 @@ describe('CIE 1976 u′,v′ plane', () => {
 describe('path strings', () => {
   it('draws plane points through the scales, closed on request', () => {
     const s = equalAspectScales(box, { x: [0.3, 0.5], y: [0.3, 0.5] });
-    expect(planePath([[0.4, 0.4], [0.5, 0.4]], s, true)).toBe('M300.00,250.00L510.00,250.00Z');
+    expect(
+      planePath(
+        [
+          [0.4, 0.4],
+          [0.5, 0.4]
+        ],
+        s,
+        true
+      )
+    ).toBe('M300.00,250.00L510.00,250.00Z');
   });
 });

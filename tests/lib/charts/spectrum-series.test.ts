@@ -14,7 +14,8 @@ describe('spectrum chart helpers', () => {
   });
 
   it('describes a series in words for screen readers', () => {
-    expect(describeSeries({ name: 'Emission', wavelengths: [400, 700], values: [1, 1] }, { peakNm: 550.04, fwhmNm: 80 }))
-      .toBe('Emission: 400–700 nm, 2 points, peak 550 nm, FWHM 80 nm.');
+    expect(describeSeries({ name: 'Emission', wavelengths: [400, 700], values: [1, 1] }, { peakNm: 550.04, fwhmNm: 80 })).toBe(
+      'Emission: 400–700 nm, 2 points, peak 550 nm, FWHM 80 nm.'
+    );
   });
 });

@@ -5,7 +5,12 @@ import { xyToUvPrime } from '../../../src/lib/spectral/colorimetry/chromaticity'
 
 describe('ANSI C78.377 quadrangles on the colour map', () => {
   // ANSI C78.377 3000 K corners (x,y) as published (public transcription of ANSI C78.377-2015 Table 1):
-  const published3000 = [[0.4562, 0.426], [0.4303, 0.4173], [0.415, 0.3821], [0.4373, 0.3893]];
+  const published3000 = [
+    [0.4562, 0.426],
+    [0.4303, 0.4173],
+    [0.415, 0.3821],
+    [0.4373, 0.3893]
+  ];
 
   it('draws the 3000 K bin at the published corners and marks it as the target bin', () => {
     const quads = ansiQuadrangleShapes('xy', 3000);
@@ -15,11 +20,16 @@ describe('ANSI C78.377 quadrangles on the colour map', () => {
       expect(Math.abs(x - published3000[i][0])).toBeLessThan(4e-4);
       expect(Math.abs(y - published3000[i][1])).toBeLessThan(4e-4);
     });
-    expect(quads.filter((s) => s.role === 'neighbour').map((s) => s.nominalCct).sort()).toEqual([2700, 3500]);
+    expect(
+      quads
+        .filter((s) => s.role === 'neighbour')
+        .map((s) => s.nominalCct)
+        .sort()
+    ).toEqual([2700, 3500]);
   });
 
   it('maps the corners into u′,v′ in the other plane', () => {
-    const [u, v] = xyToUvPrime(...published3000[0] as [number, number]);
+    const [u, v] = xyToUvPrime(...(published3000[0] as [number, number]));
     const q = ansiQuadrangleShapes('uv', 3000).find((s) => s.nominalCct === 3000)!;
     expect(Math.abs(q.corners[0][0] - u)).toBeLessThan(4e-4);
     expect(Math.abs(q.corners[0][1] - v)).toBeLessThan(4e-4);
@@ -50,7 +60,12 @@ describe('MacAdam-type ellipses around the target', () => {
 
 describe('reachable region of a component set', () => {
   it('is the convex hull of the component points: an inner point is dropped', () => {
-    const hull = reachablePolygon('xy', [[0.15, 0.03], [0.35, 0.6], [0.68, 0.31], [0.4, 0.35]]);
+    const hull = reachablePolygon('xy', [
+      [0.15, 0.03],
+      [0.35, 0.6],
+      [0.68, 0.31],
+      [0.4, 0.35]
+    ]);
     expect(hull).toHaveLength(3);
     expect(hull).not.toContainEqual([0.4, 0.35]);
   });

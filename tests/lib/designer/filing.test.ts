@@ -4,11 +4,28 @@ import { revisionContentSchema } from '../../../src/lib/recipe';
 import { componentQuerySchema, componentQueryString } from '../../../src/lib/designer/component-query';
 
 const blend: DesignedBlend = {
-  pumpId: 1, phosphorIds: [3, 4, 5], fractions: [0.07, 0.26671, 0.23459, 0.4287], wtPct: [9.321, 7.14, 8.2901], pathLengthMm: 0.3,
-  target: { kind: 'cctDuv', cct: 3000, duv: 0 }, tolerance: { kind: 'sdcm', steps: 3 }, floors: { raMin: 90, r9Min: 50 }
+  pumpId: 1,
+  phosphorIds: [3, 4, 5],
+  fractions: [0.07, 0.26671, 0.23459, 0.4287],
+  wtPct: [9.321, 7.14, 8.2901],
+  pathLengthMm: 0.3,
+  target: { kind: 'cctDuv', cct: 3000, duv: 0 },
+  tolerance: { kind: 'sdcm', steps: 3 },
+  floors: { raMin: 90, r9Min: 50 }
 };
-const refs = { pump: { materialId: 1, code: 'B-450', name: 'B-450 royal blue chip' }, phosphors: [3, 4, 5].map((id) => ({ materialId: id, code: `P-${id}`, name: `P ${id}` })) };
-const silicone = { siliconeSystemId: 2, name: '1:1 clear', ratioA: 1, ratioB: 1, potLifeMin: 240, cure: '1 h at 80 °C', densityGPerCm3: 1.08 };
+const refs = {
+  pump: { materialId: 1, code: 'B-450', name: 'B-450 royal blue chip' },
+  phosphors: [3, 4, 5].map((id) => ({ materialId: id, code: `P-${id}`, name: `P ${id}` }))
+};
+const silicone = {
+  siliconeSystemId: 2,
+  name: '1:1 clear',
+  ratioA: 1,
+  ratioB: 1,
+  potLifeMin: 240,
+  cure: '1 h at 80 °C',
+  densityGPerCm3: 1.08
+};
 
 describe('filing a designed blend', () => {
   it('builds revision content the formulations contract accepts, fractions adding up to 1', () => {
@@ -41,7 +58,12 @@ describe('filing a designed blend', () => {
     expect(text).toContain('give the formulation a name');
     expect(text).toContain('pick a silicone system');
     expect(text).toContain('the blend could not be read');
-    const short = filingFormSchema.safeParse({ mode: 'new', name: 'x', siliconeSystemId: '1', blend: JSON.stringify({ ...blend, fractions: [1] }) });
+    const short = filingFormSchema.safeParse({
+      mode: 'new',
+      name: 'x',
+      siliconeSystemId: '1',
+      blend: JSON.stringify({ ...blend, fractions: [1] })
+    });
     expect(short.success ? '' : short.error.issues[0].message).toContain('one fraction per component');
   });
 });

@@ -49,14 +49,19 @@ describe('mixing-desk shares', () => {
 
   it('always adds up to 1 (property)', () => {
     fc.assert(
-      fc.property(fc.array(fc.double({ min: 0, max: 10, noNaN: true }), { minLength: 2, maxLength: 6 }), fc.nat(), fc.double({ min: 0, max: 1, noNaN: true }), (w, k, s) => {
-        const out = setShare(normaliseShares(w), k % w.length, s);
-        const prop = setShareProportional(normaliseShares(w), k % w.length, s);
-        expect(prop.reduce((a, b) => a + b, 0)).toBeCloseTo(1, 9);
-        expect(Math.min(...out)).toBeGreaterThanOrEqual(0);
-        expect(out.reduce((a, b) => a + b, 0)).toBeCloseTo(1, 9);
-        expect(out[k % w.length]).toBeCloseTo(s, 12);
-      })
+      fc.property(
+        fc.array(fc.double({ min: 0, max: 10, noNaN: true }), { minLength: 2, maxLength: 6 }),
+        fc.nat(),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (w, k, s) => {
+          const out = setShare(normaliseShares(w), k % w.length, s);
+          const prop = setShareProportional(normaliseShares(w), k % w.length, s);
+          expect(prop.reduce((a, b) => a + b, 0)).toBeCloseTo(1, 9);
+          expect(Math.min(...out)).toBeGreaterThanOrEqual(0);
+          expect(out.reduce((a, b) => a + b, 0)).toBeCloseTo(1, 9);
+          expect(out[k % w.length]).toBeCloseTo(s, 12);
+        }
+      )
     );
   });
 

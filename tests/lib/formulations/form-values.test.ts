@@ -21,8 +21,18 @@ const content: RevisionContent = {
 describe('draft form fields ↔ content', () => {
   it('round-trips every value the form edits (ids; names and silicone details come from the library on save)', () => {
     const raw = revisionContentSchema.parse(formValuesToRaw(contentToFormValues(content)));
-    expect(raw.phosphors.map((p) => [p.materialId, p.opticalFraction, p.wtPct])).toEqual([[12, 0.2667, 9.32], [13, 0.6633, null]]);
-    expect(raw).toMatchObject({ pumpLeakFraction: 0.07, loading: content.loading, target: content.target, tolerance: content.tolerance, floors: content.floors, notes: 'line red' });
+    expect(raw.phosphors.map((p) => [p.materialId, p.opticalFraction, p.wtPct])).toEqual([
+      [12, 0.2667, 9.32],
+      [13, 0.6633, null]
+    ]);
+    expect(raw).toMatchObject({
+      pumpLeakFraction: 0.07,
+      loading: content.loading,
+      target: content.target,
+      tolerance: content.tolerance,
+      floors: content.floors,
+      notes: 'line red'
+    });
     expect(raw.pump.materialId).toBe(11);
     expect(raw.silicone.siliconeSystemId).toBe(2);
   });

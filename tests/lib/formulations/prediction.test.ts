@@ -7,7 +7,11 @@ const ref = (materialId: number, code: string) => ({ materialId, code, name: cod
 const content = (leak: number, fractions: number[], floors: RevisionContent['floors'] = {}): RevisionContent => ({
   contentVersion: 1,
   pump: ref(1, 'B-450'),
-  phosphors: [{ ...ref(2, 'GL-530'), opticalFraction: fractions[0], wtPct: null }, { ...ref(3, 'YL-568'), opticalFraction: fractions[1], wtPct: null }, { ...ref(4, 'RD-625'), opticalFraction: fractions[2], wtPct: null }],
+  phosphors: [
+    { ...ref(2, 'GL-530'), opticalFraction: fractions[0], wtPct: null },
+    { ...ref(3, 'YL-568'), opticalFraction: fractions[1], wtPct: null },
+    { ...ref(4, 'RD-625'), opticalFraction: fractions[2], wtPct: null }
+  ],
   pumpLeakFraction: leak,
   loading: null,
   silicone: { siliconeSystemId: null, name: 'S', ratioA: 1, ratioB: 1, potLifeMin: 240, cure: '', densityGPerCm3: null },

@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { COMMAND_RULES, STATE_TRANSITIONS, allowedCommands, refusal, type RevisionCommand } from '../../../src/lib/formulations/workflow-rules';
+import {
+  COMMAND_RULES,
+  STATE_TRANSITIONS,
+  allowedCommands,
+  refusal,
+  type RevisionCommand
+} from '../../../src/lib/formulations/workflow-rules';
 import { REVISION_STATES, type RevisionState } from '../../../src/lib/formulations/workflow-rules';
 import type { Role } from '../../../src/lib/roles';
 import { ALLOWED, type Person } from './permission-table';
@@ -16,7 +22,6 @@ const who: { label: Person; roles: Role[]; id: number }[] = [
   { label: 'quality reviewer', roles: ['quality'], id: OTHER },
   { label: 'administrator', roles: ['admin'], id: OTHER }
 ];
-
 
 describe('revision state machine: every command × state × person', () => {
   for (const p of who) {

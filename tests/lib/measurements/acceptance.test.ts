@@ -1,12 +1,23 @@
 import { describe, expect, it } from 'vitest';
 import { stepEllipseAt } from '../../../src/lib/aim/index';
-import { batchAcceptance, describeAcceptance, describeTolerance, judgePart, qualityTarget, type Acceptance } from '../../../src/lib/measurements/index';
+import {
+  batchAcceptance,
+  describeAcceptance,
+  describeTolerance,
+  judgePart,
+  qualityTarget,
+  type Acceptance
+} from '../../../src/lib/measurements/index';
 import { metricsAt } from './support';
 
 // Floors as formulators set them: "90 CRI" = Ra ≥ 90 and R9 ≥ 50 [common practice];
 // TM-30 P2 Rg ≥ 92 ; CIE 13.3: Ra not meaningful when DC ≥ 5.4×10⁻³.
 const t = qualityTarget({ kind: 'ansiBin', nominalCct: 3000 });
-const base: Acceptance = { tolerance: { kind: 'sdcm', steps: 5 }, floors: { raMin: 90, r9Min: 50, rgMin: 92, lerMin: 280 }, requireTargetBin: true };
+const base: Acceptance = {
+  tolerance: { kind: 'sdcm', steps: 5 },
+  floors: { raMin: 90, r9Min: 50, rgMin: 92, lerMin: 280 },
+  requireTargetBin: true
+};
 const at = (over: Parameters<typeof metricsAt>[2]) => judgePart(metricsAt(t.x, t.y, over), t, base);
 
 describe('pass/fail against the revision floors', () => {
@@ -57,7 +68,11 @@ describe('colour tolerance kinds', () => {
 });
 
 describe('acceptance in force for a batch', () => {
-  const content = { target: { kind: 'ansiBin' as const, nominalCct: 3000 }, tolerance: { kind: 'deltaUvPrime' as const, value: 0.003 }, floors: { raMin: 90 } };
+  const content = {
+    target: { kind: 'ansiBin' as const, nominalCct: 3000 },
+    tolerance: { kind: 'deltaUvPrime' as const, value: 0.003 },
+    floors: { raMin: 90 }
+  };
   it('defaults to the revision tolerance and requires the bin for a bin target', () => {
     const a = batchAcceptance(content, null);
     expect(a).toEqual({ tolerance: { kind: 'deltaUvPrime', value: 0.003 }, floors: { raMin: 90 }, requireTargetBin: true });

@@ -9,24 +9,112 @@ import { metricsAt } from './support';
 // Target CCT ± tolerance and Duv target ± 0.006: ANSI C78.377-2017 Table 1 (transcription).
 type P = [number, number];
 const ansi2015: { nominal: number; centre: P; corners: [P, P, P, P] }[] = [
-  { nominal: 2700, centre: [0.4578, 0.4101], corners: [[0.4813, 0.4319], [0.4562, 0.426], [0.4373, 0.3893], [0.4593, 0.3944]] },
-  { nominal: 3000, centre: [0.4339, 0.4033], corners: [[0.4562, 0.426], [0.4303, 0.4173], [0.415, 0.3821], [0.4373, 0.3893]] },
-  { nominal: 3500, centre: [0.4078, 0.393], corners: [[0.4303, 0.4173], [0.4003, 0.4035], [0.3895, 0.3709], [0.415, 0.3821]] },
-  { nominal: 4000, centre: [0.3818, 0.3797], corners: [[0.4003, 0.4035], [0.3737, 0.388], [0.3671, 0.3583], [0.3895, 0.3709]] },
-  { nominal: 4500, centre: [0.3613, 0.367], corners: [[0.3737, 0.3882], [0.355, 0.3754], [0.3514, 0.3482], [0.3672, 0.3585]] },
-  { nominal: 5000, centre: [0.3446, 0.3551], corners: [[0.355, 0.3753], [0.3375, 0.3619], [0.3366, 0.3373], [0.3515, 0.3481]] },
-  { nominal: 5700, centre: [0.3287, 0.3425], corners: [[0.3375, 0.3619], [0.3205, 0.3476], [0.3221, 0.3256], [0.3366, 0.3374]] },
-  { nominal: 6500, centre: [0.3123, 0.3283], corners: [[0.3205, 0.3477], [0.3026, 0.3311], [0.3067, 0.3119], [0.3221, 0.3255]] }
+  {
+    nominal: 2700,
+    centre: [0.4578, 0.4101],
+    corners: [
+      [0.4813, 0.4319],
+      [0.4562, 0.426],
+      [0.4373, 0.3893],
+      [0.4593, 0.3944]
+    ]
+  },
+  {
+    nominal: 3000,
+    centre: [0.4339, 0.4033],
+    corners: [
+      [0.4562, 0.426],
+      [0.4303, 0.4173],
+      [0.415, 0.3821],
+      [0.4373, 0.3893]
+    ]
+  },
+  {
+    nominal: 3500,
+    centre: [0.4078, 0.393],
+    corners: [
+      [0.4303, 0.4173],
+      [0.4003, 0.4035],
+      [0.3895, 0.3709],
+      [0.415, 0.3821]
+    ]
+  },
+  {
+    nominal: 4000,
+    centre: [0.3818, 0.3797],
+    corners: [
+      [0.4003, 0.4035],
+      [0.3737, 0.388],
+      [0.3671, 0.3583],
+      [0.3895, 0.3709]
+    ]
+  },
+  {
+    nominal: 4500,
+    centre: [0.3613, 0.367],
+    corners: [
+      [0.3737, 0.3882],
+      [0.355, 0.3754],
+      [0.3514, 0.3482],
+      [0.3672, 0.3585]
+    ]
+  },
+  {
+    nominal: 5000,
+    centre: [0.3446, 0.3551],
+    corners: [
+      [0.355, 0.3753],
+      [0.3375, 0.3619],
+      [0.3366, 0.3373],
+      [0.3515, 0.3481]
+    ]
+  },
+  {
+    nominal: 5700,
+    centre: [0.3287, 0.3425],
+    corners: [
+      [0.3375, 0.3619],
+      [0.3205, 0.3476],
+      [0.3221, 0.3256],
+      [0.3366, 0.3374]
+    ]
+  },
+  {
+    nominal: 6500,
+    centre: [0.3123, 0.3283],
+    corners: [
+      [0.3205, 0.3477],
+      [0.3026, 0.3311],
+      [0.3067, 0.3119],
+      [0.3221, 0.3255]
+    ]
+  }
 ];
 // ANSI C78.377-2017 Table 1: nominal, target CCT, CCT tolerance, target Duv (tolerance ±0.006).
 const table1: [number, number, number, number][] = [
-  [2700, 2725, 145, 0.0], [3000, 3045, 175, 0.0001], [3500, 3465, 245, 0.0005], [4000, 3985, 275, 0.001],
-  [4500, 4503, 243, 0.0015], [5000, 5029, 283, 0.002], [5700, 5667, 355, 0.0025], [6500, 6532, 510, 0.0031]
+  [2700, 2725, 145, 0.0],
+  [3000, 3045, 175, 0.0001],
+  [3500, 3465, 245, 0.0005],
+  [4000, 3985, 275, 0.001],
+  [4500, 4503, 243, 0.0015],
+  [5000, 5029, 283, 0.002],
+  [5700, 5667, 355, 0.0025],
+  [6500, 6532, 510, 0.0031]
 ];
-const NEXT: Record<number, number | null> = { 2700: 3000, 3000: 3500, 3500: 4000, 4000: 4500, 4500: 5000, 5000: 5700, 5700: 6500, 6500: null };
+const NEXT: Record<number, number | null> = {
+  2700: 3000,
+  3000: 3500,
+  3500: 4000,
+  4000: 4500,
+  4500: 5000,
+  5000: 5700,
+  5700: 6500,
+  6500: null
+};
 
 const accept: Acceptance = { tolerance: { kind: 'sdcm', steps: 20 }, floors: {}, requireTargetBin: true };
-const verdictAt = (nominal: number, [x, y]: P) => judgePart(metricsAt(x, y), qualityTarget({ kind: 'ansiBin', nominalCct: nominal }), accept);
+const verdictAt = (nominal: number, [x, y]: P) =>
+  judgePart(metricsAt(x, y), qualityTarget({ kind: 'ansiBin', nominalCct: nominal }), accept);
 
 describe('ANSI C78.377-2015 centre points fall in their own bin', () => {
   it.each(ansi2015)('$nominal K centre', ({ nominal, centre }) => {
@@ -41,7 +129,12 @@ describe('ANSI C78.377-2017 Table 1 tolerances: CCT ± ΔT and Duv target ± 0.0
   // Points are placed by CCT/Duv (inverse of Ohno 2014 through the core); 15 K and 0.0005 Duv margins
   // keep them clear of the straight-edge approximation of the curved band (≤ 0.0002 in x,y).
   it.each(table1)('%i K: inside just within each tolerance, outside just beyond', (nominal, cct, tol, duv) => {
-    for (const inside of [cctDuvToXy(cct - tol + 15, duv), cctDuvToXy(cct + tol - 15, duv), cctDuvToXy(cct, duv + 0.0055), cctDuvToXy(cct, duv - 0.0055)]) {
+    for (const inside of [
+      cctDuvToXy(cct - tol + 15, duv),
+      cctDuvToXy(cct + tol - 15, duv),
+      cctDuvToXy(cct, duv + 0.0055),
+      cctDuvToXy(cct, duv - 0.0055)
+    ]) {
       expect(verdictAt(nominal, inside).ansiBin).toBe(nominal);
     }
     for (const outside of [cctDuvToXy(cct, duv + 0.0065), cctDuvToXy(cct, duv - 0.0065)]) {

@@ -19,7 +19,8 @@ import { metricsAt } from './support';
 // toward the target. Components are the invented demo set (green, yellow-green, red on a 450 nm chip).
 const components: BlendComponents = { pump: BLUE_PUMP, phosphors: ['ph-gl530', 'ph-yg555', 'ph-rd625'].map(demoPhosphor) };
 const target = resolveTarget({ kind: 'ansiBin', nominalCct: 3000 });
-const solved = solveBlend({ components, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 90 }, objective: 'maxLer' }).candidates[0];
+const solved = solveBlend({ components, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 90 }, objective: 'maxLer' })
+  .candidates[0];
 const w = solved.opticalFractions;
 const loading = { pathLengthMm: 0.3 };
 const basis = prepareBasis(components);
@@ -29,10 +30,24 @@ function content(withLoading: boolean): RevisionContent {
   return {
     contentVersion: 1,
     pump: { materialId: 1, code: 'B-450', name: 'B-450 royal blue chip' },
-    phosphors: components.phosphors.map((p, i) => ({ materialId: i + 2, code: p.name.split(' ')[0], name: p.name, opticalFraction: w[i + 1], wtPct: withLoading ? wt[i] : null })),
+    phosphors: components.phosphors.map((p, i) => ({
+      materialId: i + 2,
+      code: p.name.split(' ')[0],
+      name: p.name,
+      opticalFraction: w[i + 1],
+      wtPct: withLoading ? wt[i] : null
+    })),
     pumpLeakFraction: w[0],
     loading: withLoading ? { ...loading, basis: 'wtPctOfSlurry' } : null,
-    silicone: { siliconeSystemId: null, name: 'Brackenfield 1:1 optical silicone', ratioA: 1, ratioB: 1, potLifeMin: 240, cure: '1 h 100 °C + 2 h 150 °C', densityGPerCm3: 1.1 },
+    silicone: {
+      siliconeSystemId: null,
+      name: 'Brackenfield 1:1 optical silicone',
+      ratioA: 1,
+      ratioB: 1,
+      potLifeMin: 240,
+      cure: '1 h 100 °C + 2 h 150 °C',
+      densityGPerCm3: 1.1
+    },
     target: { kind: 'ansiBin', nominalCct: 3000 },
     tolerance: { kind: 'sdcm', steps: 3 },
     floors: { raMin: 90 },
@@ -49,9 +64,19 @@ describe('correction of a synthetic batch with a known constant colour bias (opt
   // The line builds every part at model point + (+0.004, −0.003) in x,y, with symmetric scatter of ±0.001.
   const model = mix(components, { kind: 'optical', fractions: w }).evaluation;
   const bias = { x: 0.004, y: -0.003 };
-  const scatter = [[0.001, 0], [-0.001, 0], [0, 0.001], [0, -0.001], [0, 0]];
+  const scatter = [
+    [0.001, 0],
+    [-0.001, 0],
+    [0, 0.001],
+    [0, -0.001],
+    [0, 0]
+  ];
   const parts = scatter.map(([ex, ey], i) => ({ label: `P${i + 1}`, metrics: metricsAt(model.x + bias.x + ex, model.y + bias.y + ey) }));
-  const mean = judgeBatch(parts, { kind: 'ansiBin', nominalCct: 3000 }, { tolerance: { kind: 'sdcm', steps: 3 }, floors: {}, requireTargetBin: true }).summary.meanPoint!;
+  const mean = judgeBatch(
+    parts,
+    { kind: 'ansiBin', nominalCct: 3000 },
+    { tolerance: { kind: 'sdcm', steps: 3 }, floors: {}, requireTargetBin: true }
+  ).summary.meanPoint!;
 
   it('uses the optical recipe when the revision has no loading model', () => {
     expect(revisionRecipe(content(false), components).kind).toBe('optical');
@@ -67,8 +92,10 @@ describe('correction of a synthetic batch with a known constant colour bias (opt
     const rebuilt = mix(components, { kind: 'optical', fractions: fr }).evaluation;
     expect(duvp({ x: rebuilt.x + bias.x, y: rebuilt.y + bias.y }, target)).toBeLessThan(1e-5);
     // The note says what was applied and which colour point to expect (here: the target itself, 0 steps away).
-    expect(next.notes).toBe(`first build\n\nCorrection from batch KH-B-0001 Full correction applied; expect x ${target.x.toFixed(4)}, ` +
-      `y ${target.y.toFixed(4)} (${Math.round(target.cct)} K, Duv ${target.duv < 0 ? '−' : '+'}${Math.abs(target.duv).toFixed(4)}), 0.0 steps from target.`);
+    expect(next.notes).toBe(
+      `first build\n\nCorrection from batch KH-B-0001 Full correction applied; expect x ${target.x.toFixed(4)}, ` +
+        `y ${target.y.toFixed(4)} (${Math.round(target.cct)} K, Duv ${target.duv < 0 ? '−' : '+'}${Math.abs(target.duv).toFixed(4)}), 0.0 steps from target.`
+    );
     expect(next.phosphors.every((p) => p.wtPct === null)).toBe(true);
   });
 

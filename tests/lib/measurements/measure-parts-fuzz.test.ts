@@ -23,9 +23,16 @@ const ODD_NAMES = [' ', 'KH-1', 'kh-1', 'KH-1 ', 'x'.repeat(120), 'Λ-ü 1', '  
 
 const renamed = fc
   .tuple(spectrumModel(PARTS), fc.array(fc.oneof(fc.constantFrom(...ODD_NAMES), fc.string({ maxLength: 12 })), { maxLength: 4 }))
-  .map(([m, names]) => new TextEncoder().encode(fileText(renderSpectrum({ ...m, labels: m.labels.map((l, i) => (i > 0 && names[i - 1] !== undefined ? names[i - 1] : l)) }, true))));
+  .map(([m, names]) =>
+    new TextEncoder().encode(
+      fileText(renderSpectrum({ ...m, labels: m.labels.map((l, i) => (i > 0 && names[i - 1] !== undefined ? names[i - 1] : l)) }, true))
+    )
+  );
 
-const uploads = fc.oneof(malformedFile(PARTS).map((f) => f.bytes), renamed);
+const uploads = fc.oneof(
+  malformedFile(PARTS).map((f) => f.bytes),
+  renamed
+);
 
 describe('measurement reader fuzz: parse, then measure every part', () => {
   it(`${RUNS} files: measuring never throws; measured parts are named and have finite metrics`, () => {
@@ -57,14 +64,17 @@ describe('measurement reader fuzz: parse, then measure every part', () => {
         for (const p of r.parts) {
           expect(p.label.trim()).toBe(p.label);
           expect(p.label.length).toBeGreaterThan(0);
-          for (const key of ['x', 'y', 'cct', 'duv', 'ler'] as const) expect(Number.isFinite(p.metrics[key]), `${p.label}: ${key} = ${p.metrics[key]}`).toBe(true);
+          for (const key of ['x', 'y', 'cct', 'duv', 'ler'] as const)
+            expect(Number.isFinite(p.metrics[key]), `${p.label}: ${key} = ${p.metrics[key]}`).toBe(true);
           findAnsiBin(p.metrics.x, p.metrics.y);
           JSON.stringify(p.metrics);
         }
       }),
       { numRuns: RUNS }
     );
-    console.log(`measurement reader fuzz: ${RUNS} files, ${tally.refusedByParser} refused by the parser, ${tally.refusedByCore} by the core, ${tally.measured} measured (${tally.parts} parts), ${Math.round(performance.now() - t0)} ms`);
+    console.log(
+      `measurement reader fuzz: ${RUNS} files, ${tally.refusedByParser} refused by the parser, ${tally.refusedByCore} by the core, ${tally.measured} measured (${tally.parts} parts), ${Math.round(performance.now() - t0)} ms`
+    );
     expect(tally.measured).toBeGreaterThan(0);
   });
 });

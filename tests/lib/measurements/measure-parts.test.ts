@@ -9,7 +9,15 @@ import { CIE_D65 } from '../../../src/lib/spectral/data/cie-d65';
 const wavelengths = CIE_ILLUMINANT_A.values.map((_, i) => CIE_ILLUMINANT_A.startNm + i * CIE_ILLUMINANT_A.stepNm);
 const a = [...CIE_ILLUMINANT_A.values];
 const d = CIE_D65.values.slice(0, a.length);
-const file = { wavelengths, columns: [{ name: 'A-1', values: a }, { name: 'D65-1', values: d }, { name: 'A-2', values: a.map((v) => v * 2) }, { name: 'D65-2', values: d.map((v) => v / 3) }] };
+const file = {
+  wavelengths,
+  columns: [
+    { name: 'A-1', values: a },
+    { name: 'D65-1', values: d },
+    { name: 'A-2', values: a.map((v) => v * 2) },
+    { name: 'D65-2', values: d.map((v) => v / 3) }
+  ]
+};
 
 describe('measuring a multi-part file', () => {
   it('measures every part and reports progress', () => {
@@ -26,7 +34,11 @@ describe('measuring a multi-part file', () => {
   it('batch mean and spread of x, worked by hand from the published points', () => {
     const res = measureParts(file);
     if (!res.ok) throw new Error('parts');
-    const s = judgeBatch(res.parts, { kind: 'cctDuv', cct: 4000, duv: 0 }, { tolerance: { kind: 'sdcm', steps: 7 }, floors: {}, requireTargetBin: false }).summary;
+    const s = judgeBatch(
+      res.parts,
+      { kind: 'cctDuv', cct: 4000, duv: 0 },
+      { tolerance: { kind: 'sdcm', steps: 7 }, floors: {}, requireTargetBin: false }
+    ).summary;
     // x̄ = (2·0.44757 + 2·0.31272)/4 = 0.380145; deviations ±0.067425 → s = √(4·0.067425²/3) = 0.077856.
     expect(Math.abs(s.stats.x!.mean - 0.380145)).toBeLessThan(3e-4);
     expect(Math.abs(s.stats.x!.sd - 0.077856)).toBeLessThan(3e-4);
@@ -37,7 +49,14 @@ describe('measuring a multi-part file', () => {
   });
 
   it('a bad part column is named and nothing is measured', () => {
-    const bad = { wavelengths, columns: [{ name: 'A-1', values: a }, { name: 'dark', values: a.map(() => 0) }, { name: 'A-1', values: a }] };
+    const bad = {
+      wavelengths,
+      columns: [
+        { name: 'A-1', values: a },
+        { name: 'dark', values: a.map(() => 0) },
+        { name: 'A-1', values: a }
+      ]
+    };
     const res = measureParts(bad);
     expect(res.ok).toBe(false);
     if (res.ok) return;
@@ -49,7 +68,14 @@ describe('measuring a multi-part file', () => {
 
   it('the paced form pauses every n parts and gives the same parts', async () => {
     let pauses = 0;
-    const res = await measurePartsPaced(file, async () => { pauses++; }, undefined, 2);
+    const res = await measurePartsPaced(
+      file,
+      async () => {
+        pauses++;
+      },
+      undefined,
+      2
+    );
     expect(pauses).toBe(2);
     expect(res.ok && res.parts.map((p) => p.label)).toEqual(['A-1', 'D65-1', 'A-2', 'D65-2']);
   });

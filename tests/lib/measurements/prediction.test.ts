@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { colourDistance, stepEllipseAt } from '../../../src/lib/aim/index';
-import { ellipseOutline, planckianOutline, predictedVsMeasured, qualityTarget, quadrangleOutline, toleranceOutline } from '../../../src/lib/measurements/index';
+import {
+  ellipseOutline,
+  planckianOutline,
+  predictedVsMeasured,
+  qualityTarget,
+  quadrangleOutline,
+  toleranceOutline
+} from '../../../src/lib/measurements/index';
 
 describe('predicted vs measured (worked by hand)', () => {
   // Predicted (0.4339, 0.4033) = ANSI 3000 K centre (C78.377-2015); measured mean (0.4370, 0.4010).
@@ -28,7 +35,8 @@ describe('plot outlines', () => {
     for (const [x, y] of ellipseOutline(stepEllipseAt(t), 3)) expect(colourDistance(x, y, t).steps).toBeCloseTo(3, 9);
   });
   it('a Δu′v′ outline is a circle of that radius in u′v′', () => {
-    for (const [x, y] of toleranceOutline(t, { kind: 'deltaUvPrime', value: 0.004 })) expect(colourDistance(x, y, t).deltaUvPrime).toBeCloseTo(0.004, 9);
+    for (const [x, y] of toleranceOutline(t, { kind: 'deltaUvPrime', value: 0.004 }))
+      expect(colourDistance(x, y, t).deltaUvPrime).toBeCloseTo(0.004, 9);
   });
   it('the quadrangle outline is closed and the locus runs from warm (high x) to cool', () => {
     const q = quadrangleOutline(t.ansiBin!);

@@ -13,10 +13,22 @@ const rows = Papa.parse<Record<string, string>>(text.trim(), { header: true }).d
 const num = (s: string) => (s === '' ? null : Number(s));
 const parts: MeasuredPart[] = rows.map((r) => ({
   label: r.part,
-  metrics: metricsAt(Number(r.x), Number(r.y), { cct: Number(r.cct), duv: Number(r.duv), ra: num(r.ra), r9: num(r.r9), rf: num(r.rf), rg: num(r.rg), ler: Number(r.ler) })
+  metrics: metricsAt(Number(r.x), Number(r.y), {
+    cct: Number(r.cct),
+    duv: Number(r.duv),
+    ra: num(r.ra),
+    r9: num(r.r9),
+    rf: num(r.rf),
+    rg: num(r.rg),
+    ler: Number(r.ler)
+  })
 }));
 // Target: ANSI C78.377 3000 K bin; floors of a "90 CRI" part (Ra ≥ 90) [common practice].
-const batch = judgeBatch(parts, { kind: 'ansiBin', nominalCct: 3000 }, { tolerance: { kind: 'sdcm', steps: 7 }, floors: { raMin: 90 }, requireTargetBin: true });
+const batch = judgeBatch(
+  parts,
+  { kind: 'ansiBin', nominalCct: 3000 },
+  { tolerance: { kind: 'sdcm', steps: 7 }, floors: { raMin: 90 }, requireTargetBin: true }
+);
 const s = batch.summary;
 
 describe('summary statistics of five-parts.csv (worked by hand)', () => {
@@ -79,7 +91,11 @@ describe('summary statistics of five-parts.csv (worked by hand)', () => {
 
 describe('an empty batch', () => {
   it('has no statistics and no yield', () => {
-    const e = judgeBatch([], { kind: 'ansiBin', nominalCct: 3000 }, { tolerance: { kind: 'sdcm', steps: 7 }, floors: {}, requireTargetBin: true }).summary;
+    const e = judgeBatch(
+      [],
+      { kind: 'ansiBin', nominalCct: 3000 },
+      { tolerance: { kind: 'sdcm', steps: 7 }, floors: {}, requireTargetBin: true }
+    ).summary;
     expect(e.yieldFraction).toBeNull();
     expect(e.stats.x).toBeNull();
     expect(e.meanPoint).toBeNull();

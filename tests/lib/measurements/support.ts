@@ -6,7 +6,22 @@ import { xyToUvPrime } from '../../../src/lib/spectral/colorimetry/chromaticity'
 export function metricsAt(x: number, y: number, over: Partial<PartMetrics> = {}): PartMetrics {
   const [uPrime, vPrime] = xyToUvPrime(x, y);
   return {
-    x, y, uPrime, vPrime, cct: 3000, duv: 0, ra: 92, r9: 60, ri: [], criValid: true, rf: 90, rg: 100, ler: 300,
-    peakNm: 450, fwhmNm: 20, centroidNm: 560, ...over
+    x,
+    y,
+    uPrime,
+    vPrime,
+    cct: 3000,
+    duv: 0,
+    ra: 92,
+    r9: 60,
+    ri: [],
+    criValid: true,
+    rf: 90,
+    rg: 100,
+    ler: 300,
+    peakNm: 450,
+    fwhmNm: 20,
+    centroidNm: 560,
+    ...over
   };
 }

@@ -62,7 +62,16 @@ export interface RenderedSpectrum {
 const WAVELENGTH_LABELS = ['Wavelength (nm)', 'nm', 'lambda/nm', 'WL[nm]', 'λ (nm)', 'Wellenlänge [nm]'];
 const INTENSITY_LABELS = ['Intensity', 'Counts', 'Intensity (a.u.)', 'rel. power', 'W/nm'];
 const TITLE_WORDS = ['Kestrel', 'Hollow', 'sphere', 'export', 'integration', 'operator', 'lot', 'dark', 'corrected'];
-const COMMENTS = ['# exported by the sphere', '// integration 100 ms', '% dark subtracted', '! Kestrel Hollow Lighting', '* lot KH-2611', '', '   ', '\t'];
+const COMMENTS = [
+  '# exported by the sphere',
+  '// integration 100 ms',
+  '% dark subtracted',
+  '! Kestrel Hollow Lighting',
+  '* lot KH-2611',
+  '',
+  '   ',
+  '\t'
+];
 
 const frac = fc.double({ min: 0, max: 1, noNaN: true });
 
@@ -75,7 +84,10 @@ export function spectrumModel(parts: { min: number; max: number }): fc.Arbitrary
       decimalComma: fc.boolean(),
       quoted: fc.boolean(),
       header: fc.boolean(),
-      titles: fc.array(fc.array(fc.constantFrom(...TITLE_WORDS), { minLength: 1, maxLength: 4 }).map((w) => w.join(' ')), { maxLength: 2 }),
+      titles: fc.array(
+        fc.array(fc.constantFrom(...TITLE_WORDS), { minLength: 1, maxLength: 4 }).map((w) => w.join(' ')),
+        { maxLength: 2 }
+      ),
       wavelengthLabel: fc.constantFrom(...WAVELENGTH_LABELS),
       intensityLabel: fc.constantFrom(...INTENSITY_LABELS),
       firstPart: fc.integer({ min: 1, max: 9000 }),
@@ -84,7 +96,8 @@ export function spectrumModel(parts: { min: number; max: number }): fc.Arbitrary
       startFrac: frac,
       parts: fc.array(
         fc.record({
-          centreFrac: frac, widthFrac: frac,
+          centreFrac: frac,
+          widthFrac: frac,
           amplitude: fc.double({ min: 0.01, max: 10, noNaN: true }),
           baseline: fc.double({ min: 0, max: 0.05, noNaN: true }),
           noise: fc.double({ min: 0, max: 0.004, noNaN: true })
@@ -115,15 +128,25 @@ export function spectrumModel(parts: { min: number; max: number }): fc.Arbitrary
       const hi = Math.floor(Math.min(560, 900 - span));
       const names = r.parts.length === 1 ? [r.intensityLabel] : r.parts.map((_, k) => `KH-${r.firstPart + k}`);
       return {
-        sep: r.sep, spaces: r.spaces, quoted,
+        sep: r.sep,
+        spaces: r.spaces,
+        quoted,
         decimalComma: r.decimalComma && (r.sep !== 'comma' || quoted),
         header,
         // Titles only above a header, and not with quoted fields (their spaces would make the file look space-separated).
         titles: header && !quoted ? r.titles.map(noSpaces) : [],
         labels: [r.wavelengthLabel, ...names].map(noSpaces),
-        step: r.step, n, start: lo + Math.floor(r.startFrac * (hi - lo)),
-        parts: r.parts, magnitude: r.magnitude, digits: r.digits, exponent: r.exponent, comments: r.comments,
-        eol: r.eol, trailingEol: r.trailingEol, bom: r.bom
+        step: r.step,
+        n,
+        start: lo + Math.floor(r.startFrac * (hi - lo)),
+        parts: r.parts,
+        magnitude: r.magnitude,
+        digits: r.digits,
+        exponent: r.exponent,
+        comments: r.comments,
+        eol: r.eol,
+        trailingEol: r.trailingEol,
+        bom: r.bom
       };
     });
 }
@@ -159,9 +182,15 @@ export function renderSpectrum(m: SpectrumModel, multiColumn = m.parts.length > 
   const wavelengths = wavelengthText.map(readBack);
   const exact = partValues(m, wavelengths);
   const printed = exact.map((col) => col.map((v) => printNumber(v, m)));
-  const content = [...m.titles, ...(m.header ? [row(m.labels)] : []), ...wavelengthText.map((w, i) => row([w, ...printed.map((c) => c[i])]))];
+  const content = [
+    ...m.titles,
+    ...(m.header ? [row(m.labels)] : []),
+    ...wavelengthText.map((w, i) => row([w, ...printed.map((c) => c[i])]))
+  ];
   const firstData = content.length - m.n;
-  const kinds: ('data' | 'header' | 'title' | 'comment')[] = content.map((_, i) => (i >= firstData ? 'data' : i === firstData - 1 && m.header ? 'header' : 'title'));
+  const kinds: ('data' | 'header' | 'title' | 'comment')[] = content.map((_, i) =>
+    i >= firstData ? 'data' : i === firstData - 1 && m.header ? 'header' : 'title'
+  );
   for (const c of m.comments) {
     const at = c.at % (content.length + 1);
     content.splice(at, 0, c.text);
@@ -170,7 +199,9 @@ export function renderSpectrum(m: SpectrumModel, multiColumn = m.parts.length > 
   const eols = content.map((_, i) => (i < content.length - 1 || m.trailingEol ? m.eol : ''));
   const names = m.header ? m.labels.slice(1) : m.parts.map((_, k) => (multiColumn ? `column ${k + 2}` : 'intensity'));
   return {
-    lines: content, eols, bom: m.bom,
+    lines: content,
+    eols,
+    bom: m.bom,
     dataLines: kinds.flatMap((k, i) => (k === 'data' ? [i + 1] : [])),
     wavelengths,
     columns: printed.map((col, k) => ({ name: names[k], values: col.map((s) => Math.max(0, readBack(s))) })),

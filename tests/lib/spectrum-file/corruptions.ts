@@ -9,14 +9,66 @@ import fc from 'fast-check';
 import { fileText, renderSpectrum, SEPARATOR_CHAR, spectrumModel, type RenderedSpectrum, type SpectrumModel } from './arbitraries';
 
 /** A number as the dialect writes it (so a comma-separated line is not read as one decimal-comma number). */
-const numberPattern = (decimalComma: boolean) => (decimalComma ? /[+-]?(\d+,?\d*|,\d+)([eE][+-]?\d+)?/g : /[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?/g);
-const NOT_NUMBERS = ['n/a', 'abc', 'NaN', 'Infinity', '-Infinity', 'inf', '1e400', '-1e400', '1.2.3', '12abc', '0x1A', '１２', '--5', '+', '.', 'e5', '1 000', '∞', '1_000', '', '""', '"', "'5'", '5%', '4,5,6', '450nm', 'null'];
-const EXTREMES = ['1.7976931348623157e308', '1e308', '1e306', '-1e306', '5e-324', '1e-310', '1e-300', '9'.repeat(400), '0.' + '0'.repeat(400) + '1', '-0', '+0.5', '00000450', '4.5e2'];
+const numberPattern = (decimalComma: boolean) =>
+  decimalComma ? /[+-]?(\d+,?\d*|,\d+)([eE][+-]?\d+)?/g : /[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?/g;
+const NOT_NUMBERS = [
+  'n/a',
+  'abc',
+  'NaN',
+  'Infinity',
+  '-Infinity',
+  'inf',
+  '1e400',
+  '-1e400',
+  '1.2.3',
+  '12abc',
+  '0x1A',
+  '１２',
+  '--5',
+  '+',
+  '.',
+  'e5',
+  '1 000',
+  '∞',
+  '1_000',
+  '',
+  '""',
+  '"',
+  "'5'",
+  '5%',
+  '4,5,6',
+  '450nm',
+  'null'
+];
+const EXTREMES = [
+  '1.7976931348623157e308',
+  '1e308',
+  '1e306',
+  '-1e306',
+  '5e-324',
+  '1e-310',
+  '1e-300',
+  '9'.repeat(400),
+  '0.' + '0'.repeat(400) + '1',
+  '-0',
+  '+0.5',
+  '00000450',
+  '4.5e2'
+];
 const INSERTS = ['\uFEFF', '\u0000', '"', "'", '\uFFFD', '\uD800', 'µ°', '\u00A0', '\t', ' ', '#', '\u200B', ';', ',', '\u2028', '\u0085'];
 const LINE_ENDS = ['\n', '\r\n', '\r', '\n\r', '\r\r\n', '\u2028', '\u0085', ''];
 const WRONG_SEPARATORS = ['; ', '\t', ' ', '|', ',,', ':', ';', ',', '\t\t', ', '];
 const HUGE_UNITS = ['x', '1,', '4', '0.5;', 'a b ', '9\t'];
-const EMPTY_FILES = ['', '\n', '   \r\n', '\uFEFF', '# only a comment\n', '\r\r\r', 'wavelength,intensity', 'Wavelength (nm);Counts\r\n# no data\r\n'];
+const EMPTY_FILES = [
+  '',
+  '\n',
+  '   \r\n',
+  '\uFEFF',
+  '# only a comment\n',
+  '\r\r\r',
+  'wavelength,intensity',
+  'Wavelength (nm);Counts\r\n# no data\r\n'
+];
 
 export type Corruption =
   | { kind: 'cell' | 'extreme' | 'negate'; at: number; token: number; text: string }
@@ -43,12 +95,21 @@ const corruption: fc.Arbitrary<Corruption> = fc.oneof(
   fc.record({ kind: fc.constant('eol' as const), at: fc.nat(), text: fc.constantFrom(...LINE_ENDS) }),
   fc.record({ kind: fc.constant('garbageLine' as const), at: fc.nat(), text: fc.string({ unit: 'binary', maxLength: 60 }) }),
   fc.record({ kind: fc.constant('insert' as const), at: fc.nat(), pos: fc.nat(), text: fc.constantFrom(...INSERTS) }),
-  fc.record({ kind: fc.constant('hugeLine' as const), at: fc.nat(), unit: fc.constantFrom(...HUGE_UNITS), length: fc.integer({ min: 500, max: 20_000 }) }),
+  fc.record({
+    kind: fc.constant('hugeLine' as const),
+    at: fc.nat(),
+    unit: fc.constantFrom(...HUGE_UNITS),
+    length: fc.integer({ min: 500, max: 20_000 })
+  }),
   fc.record({ kind: fc.constant('extraColumns' as const), at: fc.nat(), count: fc.integer({ min: 1, max: 3 }), all: fc.boolean() }),
   fc.record({ kind: fc.constant('truncate' as const), pos: fc.nat() }),
   fc.record({ kind: fc.constant('headerOnly' as const) }),
   fc.record({ kind: fc.constant('empty' as const), text: fc.constantFrom(...EMPTY_FILES) }),
-  fc.record({ kind: fc.constant('bytes' as const), pos: fc.nat(), bytes: fc.array(fc.integer({ min: 0x80, max: 0xff }), { minLength: 1, maxLength: 3 }) })
+  fc.record({
+    kind: fc.constant('bytes' as const),
+    pos: fc.nat(),
+    bytes: fc.array(fc.integer({ min: 0x80, max: 0xff }), { minLength: 1, maxLength: 3 })
+  })
 );
 
 interface Draft {
@@ -72,9 +133,18 @@ function replaceToken(line: string, decimalComma: boolean, token: number, text: 
 
 function apply(d: Draft, c: Corruption): void {
   const n = d.lines.length;
-  if (c.kind === 'empty') { d.text = c.text; return; }
-  if (c.kind === 'truncate') { d.truncateAt = c.pos; return; }
-  if (c.kind === 'bytes') { d.byteOps.push(c); return; }
+  if (c.kind === 'empty') {
+    d.text = c.text;
+    return;
+  }
+  if (c.kind === 'truncate') {
+    d.truncateAt = c.pos;
+    return;
+  }
+  if (c.kind === 'bytes') {
+    d.byteOps.push(c);
+    return;
+  }
   if (c.kind === 'headerOnly') {
     const kept = d.lines.map((l, i) => [l, d.eols[i]] as const).filter(([l]) => !/^\s*"?[+-]?[\d.,]/.test(l));
     d.lines = kept.map(([l]) => l);
@@ -84,13 +154,30 @@ function apply(d: Draft, c: Corruption): void {
   if (n === 0) return;
   const at = c.at % n;
   switch (c.kind) {
-    case 'cell': case 'extreme': case 'negate':
-      d.lines[at] = replaceToken(d.lines[at], d.decimalComma, c.token, c.text, c.kind === 'negate'); break;
-    case 'delete': d.lines.splice(at, 1); d.eols.splice(at, 1); break;
-    case 'duplicate': d.lines.splice(at, 0, d.lines[at]); d.eols.splice(at, 0, d.eols[at] || '\n'); break;
-    case 'decimalSwap': d.lines[at] = /\./.test(d.lines[at]) ? d.lines[at].replace('.', ',') : d.lines[at].replace(',', '.'); break;
-    case 'swap': { const o = c.other % n; [d.lines[at], d.lines[o]] = [d.lines[o], d.lines[at]]; break; }
-    case 'reverse': d.lines.splice(at, c.length, ...d.lines.slice(at, at + c.length).reverse()); break;
+    case 'cell':
+    case 'extreme':
+    case 'negate':
+      d.lines[at] = replaceToken(d.lines[at], d.decimalComma, c.token, c.text, c.kind === 'negate');
+      break;
+    case 'delete':
+      d.lines.splice(at, 1);
+      d.eols.splice(at, 1);
+      break;
+    case 'duplicate':
+      d.lines.splice(at, 0, d.lines[at]);
+      d.eols.splice(at, 0, d.eols[at] || '\n');
+      break;
+    case 'decimalSwap':
+      d.lines[at] = /\./.test(d.lines[at]) ? d.lines[at].replace('.', ',') : d.lines[at].replace(',', '.');
+      break;
+    case 'swap': {
+      const o = c.other % n;
+      [d.lines[at], d.lines[o]] = [d.lines[o], d.lines[at]];
+      break;
+    }
+    case 'reverse':
+      d.lines.splice(at, c.length, ...d.lines.slice(at, at + c.length).reverse());
+      break;
     case 'separator': {
       const line = d.lines[at];
       const i = d.sep === ' ' ? line.search(/\S\s/) + 1 : line.indexOf(d.sep);
@@ -98,12 +185,28 @@ function apply(d: Draft, c: Corruption): void {
       d.lines[at] = i > 0 ? line.slice(0, i) + c.text + line.slice(end) : line + c.text;
       break;
     }
-    case 'eol': d.eols[at] = c.text; break;
-    case 'garbageLine': d.lines.splice(at, 0, c.text); d.eols.splice(at, 0, '\n'); break;
-    case 'insert': { const p = c.pos % (d.lines[at].length + 1); d.lines[at] = d.lines[at].slice(0, p) + c.text + d.lines[at].slice(p); break; }
-    case 'hugeLine': d.lines.splice(at, 0, c.unit.repeat(Math.ceil(c.length / c.unit.length))); d.eols.splice(at, 0, '\n'); break;
+    case 'eol':
+      d.eols[at] = c.text;
+      break;
+    case 'garbageLine':
+      d.lines.splice(at, 0, c.text);
+      d.eols.splice(at, 0, '\n');
+      break;
+    case 'insert': {
+      const p = c.pos % (d.lines[at].length + 1);
+      d.lines[at] = d.lines[at].slice(0, p) + c.text + d.lines[at].slice(p);
+      break;
+    }
+    case 'hugeLine':
+      d.lines.splice(at, 0, c.unit.repeat(Math.ceil(c.length / c.unit.length)));
+      d.eols.splice(at, 0, '\n');
+      break;
     case 'extraColumns': {
-      const extra = (d.sep === ' ' ? '  ' : d.sep) + Array(c.count).fill('0.5').join(d.sep === ' ' ? '  ' : d.sep);
+      const extra =
+        (d.sep === ' ' ? '  ' : d.sep) +
+        Array(c.count)
+          .fill('0.5')
+          .join(d.sep === ' ' ? '  ' : d.sep);
       d.lines = d.lines.map((l, i) => (c.all || i === at ? l + extra : l));
       break;
     }
@@ -114,7 +217,14 @@ const encoder = new TextEncoder();
 
 /** The bytes of a valid file after the corruptions, in order. */
 export function corruptedBytes(file: RenderedSpectrum, model: SpectrumModel, corruptions: Corruption[]): Uint8Array<ArrayBuffer> {
-  const d: Draft = { lines: [...file.lines], eols: [...file.eols], bom: file.bom, sep: SEPARATOR_CHAR[model.sep], decimalComma: model.decimalComma, byteOps: [] };
+  const d: Draft = {
+    lines: [...file.lines],
+    eols: [...file.eols],
+    bom: file.bom,
+    sep: SEPARATOR_CHAR[model.sep],
+    decimalComma: model.decimalComma,
+    byteOps: []
+  };
   for (const c of corruptions) apply(d, c);
   let text = d.text ?? fileText(d);
   if (d.truncateAt !== undefined) text = text.slice(0, d.truncateAt % (text.length + 1));
@@ -135,7 +245,9 @@ export interface MalformedFile {
 /** A valid file with one to three corruptions (most are refused; some, like a deleted comment, are not). */
 export function malformedFile(parts: { min: number; max: number }): fc.Arbitrary<MalformedFile> {
   return fc.tuple(spectrumModel(parts), fc.array(corruption, { minLength: 1, maxLength: 3 })).map(([model, corruptions]) => ({
-    model, corruptions, bytes: corruptedBytes(renderSpectrum(model), model, corruptions)
+    model,
+    corruptions,
+    bytes: corruptedBytes(renderSpectrum(model), model, corruptions)
   }));
 }
 
@@ -153,7 +265,10 @@ export function badLines(parts: { min: number; max: number }): fc.Arbitrary<{ te
   return fc
     .tuple(
       spectrumModel(parts),
-      fc.array(fc.record({ pick: fc.nat(), kind: fc.constantFrom<LineFault>('word', 'duplicate', 'quote'), span: fc.integer({ min: 0, max: 3 }) }), { minLength: 1, maxLength: 3 }),
+      fc.array(
+        fc.record({ pick: fc.nat(), kind: fc.constantFrom<LineFault>('word', 'duplicate', 'quote'), span: fc.integer({ min: 0, max: 3 }) }),
+        { minLength: 1, maxLength: 3 }
+      ),
       fc.constantFrom(...PLAIN_NOT_NUMBERS),
       fc.nat()
     )

@@ -10,7 +10,13 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_MAX_POINTS, DEFAULT_MIN_POINTS, parseSpectrumFile, type ParseOptions, type SpectrumFileResult } from '../../../src/lib/spectrum-file/parse';
+import {
+  DEFAULT_MAX_POINTS,
+  DEFAULT_MIN_POINTS,
+  parseSpectrumFile,
+  type ParseOptions,
+  type SpectrumFileResult
+} from '../../../src/lib/spectrum-file/parse';
 import { decodeText } from '../../../src/lib/spectrum-file/decode';
 import { MAX_MEASUREMENT_FILE_BYTES } from '../../../src/lib/measurements/schema';
 import { fileText, lineCount, renderSpectrum, spectrumModel } from './arbitraries';
@@ -53,7 +59,10 @@ function expectContract(text: string, r: SpectrumFileResult, multiColumn: boolea
   expect(r.columns.length).toBeGreaterThanOrEqual(1);
   for (const c of r.columns) {
     expect(c.values).toHaveLength(wl.length);
-    expect(c.values.every((v) => Number.isFinite(v) && v >= 0), c.name).toBe(true);
+    expect(
+      c.values.every((v) => Number.isFinite(v) && v >= 0),
+      c.name
+    ).toBe(true);
     expect(Math.max(...c.values)).toBeGreaterThan(0);
   }
   return true;
@@ -79,7 +88,9 @@ describe.each(MODES)('spectrum-file parser fuzz: $name', ({ name, options, parts
       }),
       { numRuns: RUNS }
     );
-    console.log(`parser fuzz, ${name}: ${RUNS} malformed files, ${tally.refused} refused (${tally.namingLine} naming a line), ${tally.accepted} accepted, ${Math.round(performance.now() - t0)} ms`);
+    console.log(
+      `parser fuzz, ${name}: ${RUNS} malformed files, ${tally.refused} refused (${tally.namingLine} naming a line), ${tally.accepted} accepted, ${Math.round(performance.now() - t0)} ms`
+    );
     expect(tally.refused).toBeGreaterThan(RUNS * 0.8);
   });
 

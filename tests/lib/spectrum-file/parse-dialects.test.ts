@@ -6,13 +6,62 @@ import { file, INTENSITIES, rows, WAVELENGTHS } from './fixtures';
 // European exports with semicolon separator and decimal comma, tab- and space-separated TXT).
 describe('spectrum files: accepted dialects', () => {
   const cases = [
-    { name: 'comma-separated, decimal point, with header', text: file('Wavelength (nm),Intensity (a.u.)', ...rows(',')), delimiter: 'comma', decimal: 'point', headerLine: 1, column: 'Intensity (a.u.)' },
-    { name: 'semicolon-separated, decimal comma, with header', text: file('nm;Counts', ...rows(';', true)), delimiter: 'semicolon', decimal: 'comma', headerLine: 1, column: 'Counts' },
-    { name: 'tab-separated, decimal point, no header', text: file(...rows('\t')), delimiter: 'tab', decimal: 'point', headerLine: null, column: 'intensity' },
-    { name: 'tab-separated, decimal comma', text: file(...rows('\t', true)), delimiter: 'tab', decimal: 'comma', headerLine: null, column: 'intensity' },
-    { name: 'space-aligned columns, decimal point', text: file(...rows('    ')), delimiter: 'whitespace', decimal: 'point', headerLine: null, column: 'intensity' },
-    { name: 'space-aligned columns, decimal comma', text: file(...rows('  ', true)), delimiter: 'whitespace', decimal: 'comma', headerLine: null, column: 'intensity' },
-    { name: 'quoted CSV fields with decimal commas', text: file(...rows('","', true).map((l) => `"${l}"`)), delimiter: 'comma', decimal: 'comma', headerLine: null, column: 'intensity' }
+    {
+      name: 'comma-separated, decimal point, with header',
+      text: file('Wavelength (nm),Intensity (a.u.)', ...rows(',')),
+      delimiter: 'comma',
+      decimal: 'point',
+      headerLine: 1,
+      column: 'Intensity (a.u.)'
+    },
+    {
+      name: 'semicolon-separated, decimal comma, with header',
+      text: file('nm;Counts', ...rows(';', true)),
+      delimiter: 'semicolon',
+      decimal: 'comma',
+      headerLine: 1,
+      column: 'Counts'
+    },
+    {
+      name: 'tab-separated, decimal point, no header',
+      text: file(...rows('\t')),
+      delimiter: 'tab',
+      decimal: 'point',
+      headerLine: null,
+      column: 'intensity'
+    },
+    {
+      name: 'tab-separated, decimal comma',
+      text: file(...rows('\t', true)),
+      delimiter: 'tab',
+      decimal: 'comma',
+      headerLine: null,
+      column: 'intensity'
+    },
+    {
+      name: 'space-aligned columns, decimal point',
+      text: file(...rows('    ')),
+      delimiter: 'whitespace',
+      decimal: 'point',
+      headerLine: null,
+      column: 'intensity'
+    },
+    {
+      name: 'space-aligned columns, decimal comma',
+      text: file(...rows('  ', true)),
+      delimiter: 'whitespace',
+      decimal: 'comma',
+      headerLine: null,
+      column: 'intensity'
+    },
+    {
+      name: 'quoted CSV fields with decimal commas',
+      text: file(...rows('","', true).map((l) => `"${l}"`)),
+      delimiter: 'comma',
+      decimal: 'comma',
+      headerLine: null,
+      column: 'intensity'
+    }
   ] as const;
 
   it.each(cases)('$name', ({ text, delimiter, decimal, headerLine, column }) => {
@@ -26,7 +75,8 @@ describe('spectrum files: accepted dialects', () => {
   });
 
   it('skips comment lines, blank lines, a byte-order mark and CRLF endings, and keeps line numbers', () => {
-    const text = '\uFEFF# exported by a spectrometer\r\n// integration 100 ms\r\n\r\nwavelength,intensity\r\n' + rows(',').join('\r\n') + '\r\n';
+    const text =
+      '\uFEFF# exported by a spectrometer\r\n// integration 100 ms\r\n\r\nwavelength,intensity\r\n' + rows(',').join('\r\n') + '\r\n';
     const r = parseSpectrumFile(text);
     if (!r.ok) throw new Error(JSON.stringify(r.errors));
     expect(r.wavelengths).toHaveLength(30);

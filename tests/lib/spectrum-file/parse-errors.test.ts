@@ -30,13 +30,18 @@ describe('spectrum files: refused files name the line', () => {
 
   it('a missing intensity and an extra column', () => {
     expect(errorsOf(withRow(3, '430'))[0]).toMatchObject({ line: 5, message: expect.stringMatching(/has 1 value; 2 are expected/) });
-    expect(errorsOf(withRow(3, '430,0.1,0.2'))[0]).toMatchObject({ line: 5, message: expect.stringMatching(/has 3 values; 2 are expected/) });
+    expect(errorsOf(withRow(3, '430,0.1,0.2'))[0]).toMatchObject({
+      line: 5,
+      message: expect.stringMatching(/has 3 values; 2 are expected/)
+    });
   });
 
   it('decreasing wavelengths', () => {
     // row 8 is 480 nm; writing 465 there puts it below row 7 (470 nm, line 9)
     const errors = errorsOf(withRow(8, '465,0.2'));
-    expect(errors).toEqual([{ line: 10, message: 'Line 10: wavelength 465 nm is lower than 470 nm on line 9; wavelengths must increase.' }]);
+    expect(errors).toEqual([
+      { line: 10, message: 'Line 10: wavelength 465 nm is lower than 470 nm on line 9; wavelengths must increase.' }
+    ]);
   });
 
   it('a duplicate wavelength', () => {
@@ -88,7 +93,9 @@ describe('spectrum files: refused files name the line', () => {
   // into one row, so the file could pass with a point missing, and every later error named the line above its own.
   it('a quote left open on a line, closed on a later line', () => {
     const errors = errorsOf(withRow(4, '440,"0.2').replace('\n450,', '\n450",').replace('\n500,', '\nbad,'));
-    expect(errors).toEqual([{ line: 6, message: 'Line 6: a quoted field opens here and is not closed on the same line (a field may not span lines).' }]);
+    expect(errors).toEqual([
+      { line: 6, message: 'Line 6: a quoted field opens here and is not closed on the same line (a field may not span lines).' }
+    ]);
     const unclosed = errorsOf(withRow(4, '440,"0.2'));
     expect(unclosed.map((e) => e.line)).toEqual([6]);
   });

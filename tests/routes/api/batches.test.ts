@@ -22,7 +22,10 @@ afterAll(closeDb);
 
 function ev(user: User | null, body?: unknown, params: Record<string, string> = {}, query = '') {
   return {
-    request: new Request(`http://local/api${query}`, body === undefined ? {} : { method: 'POST', body: JSON.stringify(body), headers: { 'content-type': 'application/json' } }),
+    request: new Request(
+      `http://local/api${query}`,
+      body === undefined ? {} : { method: 'POST', body: JSON.stringify(body), headers: { 'content-type': 'application/json' } }
+    ),
     url: new URL(`http://local/api${query}`),
     params,
     locals: { user, viaToken: false, denied: null }
@@ -33,7 +36,8 @@ describe('/api/v1/batches', () => {
   let id: number;
 
   it('lets technicians and admins plan a batch, not formulators or quality', async () => {
-    for (const role of ['formulator', 'quality'] as const) expect((await call(create, ev(who[role], request(fx.revisionId)))).status).toBe(403);
+    for (const role of ['formulator', 'quality'] as const)
+      expect((await call(create, ev(who[role], request(fx.revisionId)))).status).toBe(403);
     const res = await call(create, ev(who.technician, request(fx.revisionId)));
     expect(res.status).toBe(201);
     id = res.body.id;

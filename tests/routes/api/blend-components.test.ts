@@ -7,7 +7,10 @@ import { call, fakeUser } from './support';
 let ids: Map<string, number>;
 
 function get(query: string, roles: Parameters<typeof fakeUser>[0] | null = ['formulator']) {
-  return call(GET, { url: new URL(`http://local/api/v1/blend-components?${query}`), locals: { user: roles ? fakeUser(roles) : null, viaToken: false, denied: null } });
+  return call(GET, {
+    url: new URL(`http://local/api/v1/blend-components?${query}`),
+    locals: { user: roles ? fakeUser(roles) : null, viaToken: false, denied: null }
+  });
 }
 
 describe('GET /api/v1/blend-components', () => {

@@ -34,7 +34,10 @@ describe('POST /api/v1/mix', () => {
   });
 
   it('gives sensitivities with the same keys on the loading model (wt %)', async () => {
-    const { status, body } = await call(mixPost, jsonEvent({ components, ratios: { kind: 'loading', concentrationsWtPct: [3, 6, 2], loading: { pathLengthMm: 0.3 } } }));
+    const { status, body } = await call(
+      mixPost,
+      jsonEvent({ components, ratios: { kind: 'loading', concentrationsWtPct: [3, 6, 2], loading: { pathLengthMm: 0.3 } } })
+    );
     expect(status).toBe(200);
     expect(body.sensitivities).toHaveLength(3);
     for (const s of body.sensitivities) expect(Object.keys(s).sort()).toEqual(SENSITIVITY_KEYS);
@@ -55,12 +58,15 @@ describe('POST /api/v1/mix', () => {
 
 describe('POST /api/v1/solve', () => {
   it('finds a 3000 K blend inside 3 SDCM with its floors met', async () => {
-    const { status, body } = await call(solvePost, jsonEvent({
-      components,
-      target: { kind: 'cctDuv', cct: 3000, duv: 0 },
-      floors: { raMin: 80 },
-      objective: 'maxLer'
-    }));
+    const { status, body } = await call(
+      solvePost,
+      jsonEvent({
+        components,
+        target: { kind: 'cctDuv', cct: 3000, duv: 0 },
+        floors: { raMin: 80 },
+        objective: 'maxLer'
+      })
+    );
     expect(status).toBe(200);
     expect(body.status).toBe('ok');
     const best = body.candidates[0];
@@ -71,7 +77,10 @@ describe('POST /api/v1/solve', () => {
   });
 
   it('answers 400 for an unknown objective', async () => {
-    const { status, body } = await call(solvePost, jsonEvent({ components, target: { kind: 'cctDuv', cct: 3000, duv: 0 }, objective: 'fastest' }));
+    const { status, body } = await call(
+      solvePost,
+      jsonEvent({ components, target: { kind: 'cctDuv', cct: 3000, duv: 0 }, objective: 'fastest' })
+    );
     expect(status).toBe(400);
     expect(body.error).toMatch(/objective/);
   });
@@ -81,12 +90,15 @@ describe('POST /api/v1/correct', () => {
   it('returns corrected ratios for measured points off target', async () => {
     const [tx, ty] = cctDuvToXy(3000, 0);
     const target = { x: tx, y: ty };
-    const { status, body } = await call(correctPost, jsonEvent({
-      components,
-      recipe: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2] },
-      measured: { kind: 'xy', points: [{ x: target.x + 0.01, y: target.y + 0.005 }] },
-      target: { kind: 'cctDuv', cct: 3000, duv: 0 }
-    }));
+    const { status, body } = await call(
+      correctPost,
+      jsonEvent({
+        components,
+        recipe: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2] },
+        measured: { kind: 'xy', points: [{ x: target.x + 0.01, y: target.y + 0.005 }] },
+        target: { kind: 'cctDuv', cct: 3000, duv: 0 }
+      })
+    );
     expect(status).toBe(200);
     expect(body.multipliers).toHaveLength(3);
     expect(body.measuredMean.x).toBeCloseTo(target.x + 0.01, 9);
@@ -96,12 +108,15 @@ describe('POST /api/v1/correct', () => {
 
   it('answers 422 with the reason when the trim would need a phosphor at or below zero (gross offset)', async () => {
     const [tx, ty] = cctDuvToXy(3000, 0);
-    const { status, body } = await call(correctPost, jsonEvent({
-      components,
-      recipe: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2] },
-      measured: { kind: 'xy', points: [{ x: tx + 0.1, y: ty - 0.1 }] },
-      target: { kind: 'cctDuv', cct: 3000, duv: 0 }
-    }));
+    const { status, body } = await call(
+      correctPost,
+      jsonEvent({
+        components,
+        recipe: { kind: 'optical', fractions: [0.2, 0.3, 0.3, 0.2] },
+        measured: { kind: 'xy', points: [{ x: tx + 0.1, y: ty - 0.1 }] },
+        target: { kind: 'cctDuv', cct: 3000, duv: 0 }
+      })
+    );
     expect(status).toBe(422);
     expect(body.error).toMatch(/without taking YL-568 garnet yellow to zero or below/);
   });

@@ -16,7 +16,10 @@ let c: Cast;
 
 function event(user: User | null, opts: { body?: unknown; params?: Record<string, string>; query?: string; method?: string } = {}) {
   const url = new URL(`http://local/api/v1/formulations${opts.query ?? ''}`);
-  const init: RequestInit = opts.body === undefined ? { method: opts.method ?? 'GET' } : { method: opts.method ?? 'POST', body: JSON.stringify(opts.body), headers: { 'content-type': 'application/json' } };
+  const init: RequestInit =
+    opts.body === undefined
+      ? { method: opts.method ?? 'GET' }
+      : { method: opts.method ?? 'POST', body: JSON.stringify(opts.body), headers: { 'content-type': 'application/json' } };
   return { request: new Request(url, init), url, params: opts.params ?? {}, locals: { user, viaToken: false, denied: null } };
 }
 
@@ -73,11 +76,17 @@ describe('/api/v1/formulations', () => {
 
   it('updates a draft with its version; a stale version is a 409 and changes nothing', async () => {
     const f = await created(c.rhea);
-    const ok = await call(revision.PUT, event(c.rhea, { method: 'PUT', params: path(f), body: { version: 1, content: await warmWhite({ notes: 'v2' }) } }));
+    const ok = await call(
+      revision.PUT,
+      event(c.rhea, { method: 'PUT', params: path(f), body: { version: 1, content: await warmWhite({ notes: 'v2' }) } })
+    );
     expect(ok.status).toBe(200);
     expect(ok.body).toMatchObject({ version: 2 });
     const before = await rowOf(f.revisionId);
-    const stale = await call(revision.PUT, event(c.rhea, { method: 'PUT', params: path(f), body: { version: 1, content: await warmWhite({ notes: 'old screen' }) } }));
+    const stale = await call(
+      revision.PUT,
+      event(c.rhea, { method: 'PUT', params: path(f), body: { version: 1, content: await warmWhite({ notes: 'old screen' }) } })
+    );
     expect(stale.status).toBe(409);
     expect(stale.body.error).toMatch(/you have version 1, it is now version 2/);
     expect(await rowOf(f.revisionId)).toEqual(before);
@@ -87,13 +96,20 @@ describe('/api/v1/formulations', () => {
     const f = await created(c.rhea);
     expect((await call(submitRoute.POST, event(c.rhea, { params: path(f), body: { version: 1 } }))).status).toBe(200);
     const before = await rowOf(f.revisionId);
-    const res = await call(revision.PUT, event(c.rhea, { method: 'PUT', params: path(f), body: { version: before.version, content: await warmWhite({ notes: 'after submit' }) } }));
+    const res = await call(
+      revision.PUT,
+      event(c.rhea, {
+        method: 'PUT',
+        params: path(f),
+        body: { version: before.version, content: await warmWhite({ notes: 'after submit' }) }
+      })
+    );
     expect(res.status).toBe(409);
     expect(res.body.error).toMatch(/revision is submitted/);
     expect(await rowOf(f.revisionId)).toEqual(before);
   });
 
-  it('approves only with the right password, never one\'s own revision, and only for quality', async () => {
+  it("approves only with the right password, never one's own revision, and only for quality", async () => {
     const f = await created(c.rhea);
     await call(submitRoute.POST, event(c.rhea, { params: path(f), body: {} }));
     const wrong = await call(approveRoute.POST, event(c.ines, { params: path(f), body: { password: 'guess', comment: '' } }));
@@ -125,7 +141,9 @@ describe('/api/v1/formulations', () => {
   it('answers 404 for unknown ids and for a revision of another formulation', async () => {
     const f = await created(c.rhea);
     const g = await created(c.rhea);
-    expect((await call(revision.GET, event(c.rhea, { params: { id: String(g.formulationId), revisionId: String(f.revisionId) } }))).status).toBe(404);
+    expect(
+      (await call(revision.GET, event(c.rhea, { params: { id: String(g.formulationId), revisionId: String(f.revisionId) } }))).status
+    ).toBe(404);
     expect((await call(one.GET, event(c.rhea, { params: { id: '999999' } }))).status).toBe(404);
     expect((await call(revisions.POST, event(c.rhea, { params: { id: 'abc' }, body: {} }))).status).toBe(404);
   });

@@ -15,7 +15,18 @@ import { closeDb } from '../../../src/lib/server/db/index';
 import { getBatch } from '../../../src/lib/server/batches/read';
 import type { User } from '../../../src/lib/server/accounts/users';
 import { fuzzRoute, refreshEvery, type FuzzCase } from './fuzz-support';
-import { SIGNER_PASSWORD, type BatchStage, lineReading, probeApprovedRevision, probeBatch, probeSigner, retireSigner, technician, author, versionReader } from './fuzz-probes';
+import {
+  SIGNER_PASSWORD,
+  type BatchStage,
+  lineReading,
+  probeApprovedRevision,
+  probeBatch,
+  probeSigner,
+  retireSigner,
+  technician,
+  author,
+  versionReader
+} from './fuzz-probes';
 
 const TABLES = ['batches', 'batch_lines', 'stored_files', 'audit_events'];
 
@@ -48,19 +59,28 @@ afterAll(async () => {
 const readBatchVersion = versionReader('batches');
 const readLineVersion = versionReader('batch_lines');
 const batchVersion = (id: number, last: number | undefined) => readBatchVersion({ id }, last);
-const lineVersion = (t: { batchId: number; seq: number }, last: number | undefined) => readLineVersion({ batch_id: t.batchId, seq: t.seq }, last);
+const lineVersion = (t: { batchId: number; seq: number }, last: number | undefined) =>
+  readLineVersion({ batch_id: t.batchId, seq: t.seq }, last);
 const batchParams = (id: number) => ({ id: String(id) });
 const lineParams = (t: { batchId: number; seq: number }) => ({ id: String(t.batchId), seq: String(t.seq) });
 
 /** A once-per-batch command: a fresh batch at `stage` every `every` runs; the body names its version. */
-function onFreshBatch(command: keyof typeof freshBatch, handler: FuzzCase['handler'], stage: BatchStage, every: number, body = () => ({})): FuzzCase {
+function onFreshBatch(
+  command: keyof typeof freshBatch,
+  handler: FuzzCase['handler'],
+  stage: BatchStage,
+  every: number,
+  body = () => ({})
+): FuzzCase {
   return {
     name: `POST /api/v1/batches/[id]/${command}`,
     handler,
     user: () => tech,
     tables: TABLES,
     params: () => batchParams(freshBatch[command]),
-    prepare: refreshEvery(every, async () => { freshBatch[command] = await probeBatch(tech, revisionId, stage); }),
+    prepare: refreshEvery(every, async () => {
+      freshBatch[command] = await probeBatch(tech, revisionId, stage);
+    }),
     valid: async (_i, last) => ({ version: await batchVersion(freshBatch[command], last), ...body() })
   };
 }
@@ -88,7 +108,10 @@ const cases = (): FuzzCase[] => [
     user: () => tech,
     tables: TABLES,
     params: () => batchParams(scaleBatchId),
-    valid: async (i, last) => ({ version: await batchVersion(scaleBatchId, last), ...(i % 2 ? { batchMassG: 10 + (i % 7) } : { factor: 1 + (i % 3) / 10 }) })
+    valid: async (i, last) => ({
+      version: await batchVersion(scaleBatchId, last),
+      ...(i % 2 ? { batchMassG: 10 + (i % 7) } : { factor: 1 + (i % 3) / 10 })
+    })
   },
   {
     name: 'POST /api/v1/batches/[id]/lines/[seq]',
@@ -96,7 +119,11 @@ const cases = (): FuzzCase[] => [
     user: () => tech,
     tables: TABLES,
     params: () => lineParams(lineTarget),
-    valid: async (_i, last) => ({ actualG: lineTarget.actualG, lotNumber: lineTarget.lotNumber, version: await lineVersion(lineTarget, last) })
+    valid: async (_i, last) => ({
+      actualG: lineTarget.actualG,
+      lotNumber: lineTarget.lotNumber,
+      version: await lineVersion(lineTarget, last)
+    })
   },
   {
     name: 'POST /api/v1/batches/[id]/lines/[seq]/override',
@@ -104,7 +131,11 @@ const cases = (): FuzzCase[] => [
     user: () => signer,
     tables: TABLES,
     params: () => lineParams(overrideTarget),
-    valid: async (_i, last) => ({ reason: 'Fuzz probe: inside the colour window of the revision.', password: SIGNER_PASSWORD, version: await lineVersion(overrideTarget, last) })
+    valid: async (_i, last) => ({
+      reason: 'Fuzz probe: inside the colour window of the revision.',
+      password: SIGNER_PASSWORD,
+      version: await lineVersion(overrideTarget, last)
+    })
   },
   // Noting the mixing time is once per batch: a fresh batch with part B read every 50 runs.
   onFreshBatch('mix', mixPost, 'partB', 50, () => ({ mixedAt: new Date().toISOString() })),

@@ -17,12 +17,31 @@ const valid: Record<string, unknown> = {
   evaluate: { spd: { wavelengths: wl, values: wl.map((l) => Math.exp(-(((l - 560) / 80) ** 2))) } },
   mix: { components, ratios: { kind: 'optical', fractions: [0.3, 0.4, 0.3] } },
   solve: { components, target: { kind: 'cctDuv', cct: 3500, duv: 0 }, objective: 'maxLer', maxCandidates: 1 },
-  correct: { components, recipe: { kind: 'optical', fractions: [0.3, 0.4, 0.3] }, measured: { kind: 'xy', points: [{ x: 0.41, y: 0.39 }] }, target: { kind: 'cctDuv', cct: 3500, duv: 0 } }
+  correct: {
+    components,
+    recipe: { kind: 'optical', fractions: [0.3, 0.4, 0.3] },
+    measured: { kind: 'xy', points: [{ x: 0.41, y: 0.39 }] },
+    target: { kind: 'cctDuv', cct: 3500, duv: 0 }
+  }
 };
 
 // Hostile leaves: wrong types, non-finite stand-ins, huge and tiny numbers, injection-looking strings.
 const hostileLeaf = fc.oneof(
-  fc.constantFrom(null, true, '', 'NaN', 'Infinity', '<script>alert(1)</script>', "'; DROP TABLE users; --", -1, 0, 1e308, -1e308, 5e-324, 2 ** 53),
+  fc.constantFrom(
+    null,
+    true,
+    '',
+    'NaN',
+    'Infinity',
+    '<script>alert(1)</script>',
+    "'; DROP TABLE users; --",
+    -1,
+    0,
+    1e308,
+    -1e308,
+    5e-324,
+    2 ** 53
+  ),
   fc.double(),
   fc.string(),
   fc.array(fc.double(), { maxLength: 8 }),
@@ -38,7 +57,10 @@ function mutate(body: unknown, choices: number[], leaf: unknown): unknown {
     if (keys.length === 0) break;
     const k = keys[c % keys.length];
     const next = (node as Record<string, unknown>)[k];
-    if (next && typeof next === 'object' && c % 3 !== 0) { node = next as Record<string, unknown>; continue; }
+    if (next && typeof next === 'object' && c % 3 !== 0) {
+      node = next as Record<string, unknown>;
+      continue;
+    }
     if (c % 5 === 0 && !Array.isArray(node)) delete (node as Record<string, unknown>)[k];
     else (node as Record<string, unknown>)[k] = leaf;
     return clone;
@@ -74,11 +96,17 @@ describe.each(Object.keys(handlers) as (keyof typeof handlers)[])('fuzzing POST 
 
   it('answers 200 arbitrary JSON values and raw strings without an exception', async () => {
     await fc.assert(
-      fc.asyncProperty(fc.oneof(fc.jsonValue(), fc.string().map((s) => ({ raw: s }))), async (v) => {
-        const text = typeof v === 'object' && v !== null && 'raw' in v ? String((v as { raw: string }).raw) : JSON.stringify(v);
-        const res = await handlers[name](jsonEvent(text) as never);
-        expect(ALLOWED.has(res.status)).toBe(true);
-      }),
+      fc.asyncProperty(
+        fc.oneof(
+          fc.jsonValue(),
+          fc.string().map((s) => ({ raw: s }))
+        ),
+        async (v) => {
+          const text = typeof v === 'object' && v !== null && 'raw' in v ? String((v as { raw: string }).raw) : JSON.stringify(v);
+          const res = await handlers[name](jsonEvent(text) as never);
+          expect(ALLOWED.has(res.status)).toBe(true);
+        }
+      ),
       { numRuns: 200, seed: 7 }
     );
   });

@@ -15,7 +15,17 @@ import { POST as withdrawPost } from '../../../src/routes/api/v1/formulations/[i
 import { closeDb } from '../../../src/lib/server/db/index';
 import type { User } from '../../../src/lib/server/accounts/users';
 import { fuzzRoute, refreshEvery, type FuzzCase } from './fuzz-support';
-import { SIGNER_PASSWORD, author, probeDraft, probeFormulation, probeSigner, probeSubmitted, retireSigner, versionReader, type ProbeFormulation } from './fuzz-probes';
+import {
+  SIGNER_PASSWORD,
+  author,
+  probeDraft,
+  probeFormulation,
+  probeSigner,
+  probeSubmitted,
+  retireSigner,
+  versionReader,
+  type ProbeFormulation
+} from './fuzz-probes';
 
 const TABLES = ['formulations', 'formulation_revisions', 'revision_signatures', 'audit_events'];
 /**
@@ -71,13 +81,26 @@ type Command = 'submit' | 'review' | 'approve' | 'return' | 'withdraw';
  * command that uses its target up gets a fresh one every `fresh.every` runs (and every fifth body
  * is the valid one plus an unknown key, so the command itself runs often enough).
  */
-function onRevision(command: Command, handler: FuzzCase['handler'], user: () => User, tables: string[], body: Record<string, unknown>,
-  fresh?: { every: number; make: () => Promise<number> }): FuzzCase {
+function onRevision(
+  command: Command,
+  handler: FuzzCase['handler'],
+  user: () => User,
+  tables: string[],
+  body: Record<string, unknown>,
+  fresh?: { every: number; make: () => Promise<number> }
+): FuzzCase {
   return {
     name: `POST /api/v1/formulations/[id]/revisions/[revisionId]/${command}`,
-    handler, user, tables,
+    handler,
+    user,
+    tables,
     params: () => revisionParams(target[command]),
-    ...(fresh && { prepare: refreshEvery(fresh.every, async () => { target[command] = await fresh.make(); }), extraKeyEvery: 5 }),
+    ...(fresh && {
+      prepare: refreshEvery(fresh.every, async () => {
+        target[command] = await fresh.make();
+      }),
+      extraKeyEvery: 5
+    }),
     valid: async (_i, last) => ({ ...body, version: await version(target[command], last) })
   };
 }
@@ -102,11 +125,30 @@ const cases = (): FuzzCase[] => [
   },
   onRevision('submit', submitPost, () => rhea, TABLES, {}, { every: MAILING_FRESH_EVERY, make: async () => take(pool.submit) }),
   onRevision('review', reviewPost, () => signer, SIGNING_TABLES, { password: SIGNER_PASSWORD, comment: 'Fuzz probe: reviewed.' }),
-  onRevision('approve', approvePost, () => signer, SIGNING_TABLES, { password: SIGNER_PASSWORD, comment: 'Fuzz probe: approved.' },
-    { every: MAILING_FRESH_EVERY, make: async () => take(pool.approve) }),
-  onRevision('return', returnPost, () => signer, SIGNING_TABLES, { password: SIGNER_PASSWORD, reason: 'Fuzz probe: returned for rework.' },
-    { every: MAILING_FRESH_EVERY, make: async () => take(pool.return) }),
-  onRevision('withdraw', withdrawPost, () => rhea, TABLES, { reason: 'Fuzz probe: no longer needed.' }, { every: FRESH_EVERY, make: () => probeDraft(rhea, f) })
+  onRevision(
+    'approve',
+    approvePost,
+    () => signer,
+    SIGNING_TABLES,
+    { password: SIGNER_PASSWORD, comment: 'Fuzz probe: approved.' },
+    { every: MAILING_FRESH_EVERY, make: async () => take(pool.approve) }
+  ),
+  onRevision(
+    'return',
+    returnPost,
+    () => signer,
+    SIGNING_TABLES,
+    { password: SIGNER_PASSWORD, reason: 'Fuzz probe: returned for rework.' },
+    { every: MAILING_FRESH_EVERY, make: async () => take(pool.return) }
+  ),
+  onRevision(
+    'withdraw',
+    withdrawPost,
+    () => rhea,
+    TABLES,
+    { reason: 'Fuzz probe: no longer needed.' },
+    { every: FRESH_EVERY, make: () => probeDraft(rhea, f) }
+  )
 ];
 
 describe.each(cases().map((c) => [c.name, c] as const))('fuzzing %s', (_name, c) => {

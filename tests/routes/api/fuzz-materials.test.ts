@@ -24,9 +24,18 @@ let pumpId: number;
 const readVersion = versionReader('materials');
 
 const fields = (code: string, kind: 'phosphor' | 'pump') => ({
-  code, name: `Fuzz probe ${kind}`, family: kind === 'pump' ? 'InGaN' : 'garnet, Ce-activated', supplier: 'Larkspur Luminescent Materials',
-  densityGCm3: kind === 'pump' ? null : 4.6, iqe: kind === 'pump' ? null : 0.9, absorptionPerWtPctMm: null, absorptionReferenceNm: null,
-  costPerKg: 150, d50Um: null, notes: 'fuzz probe', safetyNote: null
+  code,
+  name: `Fuzz probe ${kind}`,
+  family: kind === 'pump' ? 'InGaN' : 'garnet, Ce-activated',
+  supplier: 'Larkspur Luminescent Materials',
+  densityGCm3: kind === 'pump' ? null : 4.6,
+  iqe: kind === 'pump' ? null : 0.9,
+  absorptionPerWtPctMm: null,
+  absorptionReferenceNm: null,
+  costPerKg: 150,
+  d50Um: null,
+  notes: 'fuzz probe',
+  safetyNote: null
 });
 
 beforeAll(async () => {
@@ -50,7 +59,12 @@ const edit = (kind: 'phosphor' | 'pump', handler: FuzzCase['handler'], id: () =>
   user: () => rhea,
   tables: TABLES,
   params: () => ({ id: String(id()) }),
-  valid: async (i, last) => ({ version: await readVersion({ id: id() }, last), costPerKg: 100 + i, notes: `fuzz probe edit ${i}`, d50Um: 12.5 })
+  valid: async (i, last) => ({
+    version: await readVersion({ id: id() }, last),
+    costPerKg: 100 + i,
+    notes: `fuzz probe edit ${i}`,
+    d50Um: 12.5
+  })
 });
 
 const cases = (): FuzzCase[] => [

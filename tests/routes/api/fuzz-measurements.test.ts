@@ -13,7 +13,17 @@ import { POST as withdrawPost } from '../../../src/routes/api/v1/measurements/[b
 import { closeDb } from '../../../src/lib/server/db/index';
 import type { User } from '../../../src/lib/server/accounts/users';
 import { fuzzRoute, refreshEvery, type FuzzCase } from './fuzz-support';
-import { SIGNER_PASSWORD, author, probeApprovedRevision, probeBatch, probeSigner, probeUpload, retireSigner, technician, versionReader } from './fuzz-probes';
+import {
+  SIGNER_PASSWORD,
+  author,
+  probeApprovedRevision,
+  probeBatch,
+  probeSigner,
+  probeUpload,
+  retireSigner,
+  technician,
+  versionReader
+} from './fuzz-probes';
 
 let signer: User;
 let tech: User;
@@ -58,7 +68,9 @@ const cases = (): FuzzCase[] => [
     tables: ['batches', 'batch_acceptance', 'audit_events'],
     params: () => batchParams(acceptanceBatchId),
     valid: async (i, last) => ({
-      mode: i % 2 ? 'steps' : 'revision', steps: 3 + (i % 3), requireTargetBin: i % 3 === 0,
+      mode: i % 2 ? 'steps' : 'revision',
+      steps: 3 + (i % 3),
+      requireTargetBin: i % 3 === 0,
       version: await readAcceptanceVersion({ batch_id: acceptanceBatchId }, last)
     }),
     extraKeyEvery: 5
@@ -84,9 +96,14 @@ const cases = (): FuzzCase[] => [
     // password is checked, then the transaction refuses (409) and must leave nothing behind.
     params: (i) => batchParams(i % 2 ? stale.batchId : dispositionBatchId),
     // A disposition is once per batch and builds the signed batch record PDF: a fresh batch every 250 runs.
-    prepare: refreshEvery(250, async () => { dispositionBatchId = await probeBatch(tech, revisionId, 'complete'); }),
+    prepare: refreshEvery(250, async () => {
+      dispositionBatchId = await probeBatch(tech, revisionId, 'complete');
+    }),
     valid: async (i, last) => ({
-      decision: 'reject', meaning: 'Rejection for rework', comment: 'Fuzz probe: rejected for rework.', password: SIGNER_PASSWORD,
+      decision: 'reject',
+      meaning: 'Rejection for rework',
+      comment: 'Fuzz probe: rejected for rework.',
+      password: SIGNER_PASSWORD,
       version: i % 2 ? stale.version : await readBatchVersion({ id: dispositionBatchId }, last)
     }),
     extraKeyEvery: 5
@@ -98,7 +115,9 @@ const cases = (): FuzzCase[] => [
     tables: ['measurement_uploads', 'part_measurements', 'audit_events'],
     params: () => ({ batchId: String(measuredBatchId), uploadId: String(uploadId) }),
     // An upload is withdrawn once: a fresh one-part upload every 50 runs.
-    prepare: refreshEvery(50, async () => { uploadId = await probeUpload(signer, measuredBatchId, 1, `FZW-${Date.now() % 1e6}-${uploads++}`); }),
+    prepare: refreshEvery(50, async () => {
+      uploadId = await probeUpload(signer, measuredBatchId, 1, `FZW-${Date.now() % 1e6}-${uploads++}`);
+    }),
     valid: () => ({ reason: 'Fuzz probe: sphere not calibrated.' }),
     extraKeyEvery: 5
   }

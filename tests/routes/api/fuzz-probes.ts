@@ -51,13 +51,19 @@ export async function retireSigner(): Promise<void> {
 
 /** The content of the seeded, approved KH-W30-90 revision (its materials have current lots). */
 async function approvedContent(): Promise<unknown> {
-  const row = await db()('formulation_revisions as r').join('formulations as f', 'f.id', 'r.formulation_id')
-    .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' }).first('r.content_json');
+  const row = await db()('formulation_revisions as r')
+    .join('formulations as f', 'f.id', 'r.formulation_id')
+    .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' })
+    .first('r.content_json');
   if (!row) throw new Error('no approved revision of KH-W30-90: run the tests in a seeded sandbox');
   return JSON.parse(row.content_json);
 }
 
-export interface ProbeFormulation { formulationId: number; firstRevisionId: number; content: unknown }
+export interface ProbeFormulation {
+  formulationId: number;
+  firstRevisionId: number;
+  content: unknown;
+}
 
 /**
  * A new formulation by the demo formulator, its first revision a draft with the KH-W30-90 content.
@@ -66,7 +72,12 @@ export interface ProbeFormulation { formulationId: number; firstRevisionId: numb
 export async function probeFormulation(author: User, label: string): Promise<ProbeFormulation> {
   const content = await approvedContent();
   const stamp = `${Date.now().toString(36)}${Math.floor(Math.random() * 1296).toString(36)}`.toUpperCase();
-  const made = await createFormulationWithDraft(author, { code: `FZ-${label.toUpperCase()}-${stamp}`, name: `Fuzz probe ${label} ${stamp}`, description: 'fuzz probe', content });
+  const made = await createFormulationWithDraft(author, {
+    code: `FZ-${label.toUpperCase()}-${stamp}`,
+    name: `Fuzz probe ${label} ${stamp}`,
+    description: 'fuzz probe',
+    content
+  });
   return { formulationId: made.formulationId, firstRevisionId: made.revisionId, content };
 }
 
@@ -91,8 +102,11 @@ export async function probeApprovedRevision(author: User, signer: User, label: s
 export type BatchStage = 'planned' | 'partB' | 'outOfRange' | 'mixed' | 'complete';
 
 async function currentLot(materialId: number): Promise<string> {
-  const lot = await db()('material_lots').where({ material_id: materialId })
-    .where((w) => w.whereNull('expires_on').orWhere('expires_on', '>', new Date())).orderBy('id', 'desc').first('lot_number');
+  const lot = await db()('material_lots')
+    .where({ material_id: materialId })
+    .where((w) => w.whereNull('expires_on').orWhere('expires_on', '>', new Date()))
+    .orderBy('id', 'desc')
+    .first('lot_number');
   if (!lot) throw new Error(`material ${materialId} has no current lot`);
   return lot.lot_number;
 }
@@ -110,10 +124,17 @@ export async function lineReading(line: { materialId: number | null; targetG: st
  * mixed batches, and the quality routes do not read the stored record).
  */
 export async function probeBatch(technician: User, revisionId: number, stage: BatchStage): Promise<number> {
-  const { id } = await createBatch(technician, createBatchSchema.parse({
-    revisionId, sizing: { kind: 'mass', batchMassG: 10 }, loading: { mode: 'perPhosphor', basis: 'wtPctOfSlurry' },
-    additives: [], balance: { resolutionG: 0.001, minWeightG: 0.05, ref: 'BAL-FZ1' }, plantLimitMin: 120
-  }));
+  const { id } = await createBatch(
+    technician,
+    createBatchSchema.parse({
+      revisionId,
+      sizing: { kind: 'mass', batchMassG: 10 },
+      loading: { mode: 'perPhosphor', basis: 'wtPctOfSlurry' },
+      additives: [],
+      balance: { resolutionG: 0.001, minWeightG: 0.05, ref: 'BAL-FZ1' },
+      plantLimitMin: 120
+    })
+  );
   if (stage === 'planned') return id;
   const lines = (await getBatch(id))!.lines;
   const read = async (line: (typeof lines)[number], actualG?: string) =>
@@ -130,7 +151,9 @@ export async function probeBatch(technician: User, revisionId: number, stage: Ba
   for (const line of lines) await read(line);
   await markMixed(technician, id, { version: (await getBatch(id))!.batch.version });
   if (stage === 'complete') {
-    await db()('batches').where({ id }).update({ state: 'complete', completed_at: new Date(), completed_by: technician.id, version: db().raw('version + 1') });
+    await db()('batches')
+      .where({ id })
+      .update({ state: 'complete', completed_at: new Date(), completed_by: technician.id, version: db().raw('version + 1') });
   }
   return id;
 }

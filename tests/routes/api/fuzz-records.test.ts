@@ -40,7 +40,14 @@ const cases = (): FuzzCase[] => [
     handler: phosphorPost,
     user: () => formulator,
     tables: ['materials', 'material_spectra', 'material_lots', 'stored_files', 'audit_events'],
-    valid: (i: number) => ({ code: `FZ-${run}-${i}`, name: 'Fuzz probe phosphor', family: 'fuzz probe family', iqe: 0.9, densityGCm3: 4.5, costPerKg: 900 })
+    valid: (i: number) => ({
+      code: `FZ-${run}-${i}`,
+      name: 'Fuzz probe phosphor',
+      family: 'fuzz probe family',
+      iqe: 0.9,
+      densityGCm3: 4.5,
+      costPerKg: 900
+    })
   },
   {
     name: 'POST /api/v1/formulations',
@@ -73,7 +80,9 @@ describe('hostile text is stored literally', () => {
     const name = `<script>alert('x')</script>'; DROP TABLE materials; -- ${run}`;
     const res = await phosphorPost(apiEvent(formulator, { code: `FZ-LIT-${run}`, name, iqe: 0.9, notes: '" OR 1=1 -- \\ %_' }) as never);
     expect(res.status).toBe(201);
-    const row = (await db()('materials').where({ code: `FZ-LIT-${run}` }).first('name', 'notes'))!;
+    const row = (await db()('materials')
+      .where({ code: `FZ-LIT-${run}` })
+      .first('name', 'notes'))!;
     expect(row.name).toBe(name);
     expect(row.notes).toBe('" OR 1=1 -- \\ %_');
   });

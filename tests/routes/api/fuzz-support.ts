@@ -23,8 +23,45 @@ export const hostileLeaf = fc.oneof(
   fc.string({ maxLength: 300 }),
   fc.string({ unit: 'binary', maxLength: 300 }),
   fc.string({ unit: 'binary', minLength: 2001, maxLength: 6000 }),
-  fc.constantFrom('\u0000', '\ud800', 'a\udfffb', '😀'.repeat(40), 'é'.repeat(81), ' '.repeat(5), '\u202e', 'Infinity', '-0', '1e400', '0x10', ' 12 ', '12,5', '9'.repeat(30)),
-  fc.constantFrom(1e-7, 5e-324, -0, 0.0001, 0.1, 1, 7, 7.5, 10, 100, 1000, 1001, 10_000, 100_000, 100_001, 1e7, 1e7 + 1, 2 ** 31 - 1, 2 ** 31, Number.MAX_SAFE_INTEGER, -(2 ** 31)),
+  fc.constantFrom(
+    '\u0000',
+    '\ud800',
+    'a\udfffb',
+    '😀'.repeat(40),
+    'é'.repeat(81),
+    ' '.repeat(5),
+    '\u202e',
+    'Infinity',
+    '-0',
+    '1e400',
+    '0x10',
+    ' 12 ',
+    '12,5',
+    '9'.repeat(30)
+  ),
+  fc.constantFrom(
+    1e-7,
+    5e-324,
+    -0,
+    0.0001,
+    0.1,
+    1,
+    7,
+    7.5,
+    10,
+    100,
+    1000,
+    1001,
+    10_000,
+    100_000,
+    100_001,
+    1e7,
+    1e7 + 1,
+    2 ** 31 - 1,
+    2 ** 31,
+    Number.MAX_SAFE_INTEGER,
+    -(2 ** 31)
+  ),
   fc.array(fc.oneof(fc.double(), fc.string()), { maxLength: 6 }),
   fc.dictionary(fc.string({ maxLength: 5 }), fc.integer(), { maxKeys: 3 })
 );
@@ -38,7 +75,10 @@ export function mutate(body: unknown, choices: number[], leaf: unknown): unknown
     if (keys.length === 0) break;
     const k = keys[c % keys.length];
     const next = node[k];
-    if (next && typeof next === 'object' && c % 3 !== 0) { node = next as Record<string, unknown>; continue; }
+    if (next && typeof next === 'object' && c % 3 !== 0) {
+      node = next as Record<string, unknown>;
+      continue;
+    }
     if (c % 5 === 0 && !Array.isArray(node)) delete node[k];
     else node[k] = leaf;
     return clone;
@@ -47,13 +87,21 @@ export function mutate(body: unknown, choices: number[], leaf: unknown): unknown
   return clone;
 }
 
-export interface EventOptions { method?: string; params?: Record<string, string>; url?: string }
+export interface EventOptions {
+  method?: string;
+  params?: Record<string, string>;
+  url?: string;
+}
 
 /** The event a SvelteKit handler gets: a JSON request from a signed-in user (API token style). */
 export function apiEvent(user: User, body: unknown, opts: EventOptions = {}) {
   const url = new URL(opts.url ?? 'http://local/api');
   return {
-    request: new Request(url, { method: opts.method ?? 'POST', body: JSON.stringify(body), headers: { 'content-type': 'application/json' } }),
+    request: new Request(url, {
+      method: opts.method ?? 'POST',
+      body: JSON.stringify(body),
+      headers: { 'content-type': 'application/json' }
+    }),
     locals: { user, viaToken: true, denied: null },
     params: opts.params ?? {},
     url
@@ -117,7 +165,11 @@ export function refreshEvery(n: number, make: () => Promise<void>): NonNullable<
 
 export type Tally = Map<number, number>;
 
-export const tallyText = (t: Tally) => [...t].sort(([a], [b]) => a - b).map(([s, n]) => `${s}×${n}`).join(' ');
+export const tallyText = (t: Tally) =>
+  [...t]
+    .sort(([a], [b]) => a - b)
+    .map(([s, n]) => `${s}×${n}`)
+    .join(' ');
 
 /**
  * 1,000 bodies, each a valid body with one leaf replaced, deleted or added: no answer is a 500,
@@ -135,7 +187,10 @@ export async function fuzzRoute(c: FuzzCase): Promise<Tally> {
       if (c.prepare && (await c.prepare(run, last))) baseline = await tableState(c.tables);
       const before = baseline;
       const valid = await c.valid(run, last);
-      const body = c.extraKeyEvery && run % c.extraKeyEvery === c.extraKeyEvery - 1 ? { ...(valid as object), unexpected: leaf } : mutate(valid, choices, leaf);
+      const body =
+        c.extraKeyEvery && run % c.extraKeyEvery === c.extraKeyEvery - 1
+          ? { ...(valid as object), unexpected: leaf }
+          : mutate(valid, choices, leaf);
       const res = await c.handler(apiEvent(c.user(), body, { method: c.method, params: c.params?.(run) }) as never);
       last = res.status;
       tally.set(res.status, (tally.get(res.status) ?? 0) + 1);

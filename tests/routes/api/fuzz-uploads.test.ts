@@ -21,12 +21,34 @@ import { lineCount } from '../../lib/spectrum-file/arbitraries';
 import { demoUser, phosphorFields } from '../../server/library/support';
 import { completedBatch } from '../../server/measurements/support';
 import { expectObjectsGone, objectExists, watchPuts } from '../../support/faults';
-import { checksums, fileBytes, markedObjects, removeMeasurements, send, storageMonth, uploadArb, uploadRequest, type Answer, type Upload } from './upload-requests';
+import {
+  checksums,
+  fileBytes,
+  markedObjects,
+  removeMeasurements,
+  send,
+  storageMonth,
+  uploadArb,
+  uploadRequest,
+  type Answer,
+  type Upload
+} from './upload-requests';
 import type { User } from '../../../src/lib/server/accounts/users';
 
 const RUNS = 1000;
 const run = Date.now().toString(36);
-const MATERIAL_QUERIES = ['?kind=EMISSION', '?kind=both', '?kind=', '?version=abc', '?version=-1', '?version=1.5', '?version=1e400', '?version=0x10', '?dryRun=yes', '?version=99999999999999999999'];
+const MATERIAL_QUERIES = [
+  '?kind=EMISSION',
+  '?kind=both',
+  '?kind=',
+  '?version=abc',
+  '?version=-1',
+  '?version=1.5',
+  '?version=1e400',
+  '?version=0x10',
+  '?dryRun=yes',
+  '?version=99999999999999999999'
+];
 
 interface Route {
   name: string;
@@ -57,11 +79,22 @@ let uploadsSent = 0;
 function materialRoute(kind: 'phosphor' | 'pump', handler: Route['handler']): Route {
   const m = material[kind];
   return {
-    name: `${kind} spectrum`, handler, path: (id) => `/api/v1/${kind}s/${id}/spectrum`, paramName: 'id', param: () => String(m.id),
-    user: () => formulator, otherUser: () => technician, parts: { min: 1, max: 1 },
+    name: `${kind} spectrum`,
+    handler,
+    path: (id) => `/api/v1/${kind}s/${id}/spectrum`,
+    paramName: 'id',
+    param: () => String(m.id),
+    user: () => formulator,
+    otherUser: () => technician,
+    parts: { min: 1, max: 1 },
     cleanQueries: () => ['', '?kind=emission', '?kind=excitation', '?dryRun=1', '?dryRun=true', `?version=${m.version}`, '?version=1'],
-    badQueries: MATERIAL_QUERIES, tables: ['materials', 'material_spectra', 'stored_files', 'audit_events'], purpose: 'spectrum-source', ndjson: false,
-    accepted: (body) => { m.version = body.version ?? m.version; }
+    badQueries: MATERIAL_QUERIES,
+    tables: ['materials', 'material_spectra', 'stored_files', 'audit_events'],
+    purpose: 'spectrum-source',
+    ndjson: false,
+    accepted: (body) => {
+      m.version = body.version ?? m.version;
+    }
   };
 }
 
@@ -69,13 +102,22 @@ const ROUTES: Route[] = [
   materialRoute('phosphor', phosphorUpload as Route['handler']),
   materialRoute('pump', pumpUpload as Route['handler']),
   {
-    name: 'measurements', handler: measurementUpload as Route['handler'], path: (id) => `/api/v1/measurements/${id}`, paramName: 'batchId', param: () => String(batchId),
-    user: () => quality, otherUser: () => technician, parts: { min: 1, max: 3 },
-    cleanQueries: () => [''], badQueries: ['?dryRun=1', '?kind=x', '?batchId=0'],
-    tables: ['measurement_uploads', 'part_measurements', 'stored_files', 'audit_events', 'batches'], purpose: 'measurement',
+    name: 'measurements',
+    handler: measurementUpload as Route['handler'],
+    path: (id) => `/api/v1/measurements/${id}`,
+    paramName: 'batchId',
+    param: () => String(batchId),
+    user: () => quality,
+    otherUser: () => technician,
+    parts: { min: 1, max: 3 },
+    cleanQueries: () => [''],
+    badQueries: ['?dryRun=1', '?kind=x', '?batchId=0'],
+    tables: ['measurement_uploads', 'part_measurements', 'stored_files', 'audit_events', 'batches'],
+    purpose: 'measurement',
     // Part names new to the batch, so a valid file is not refused as measured already.
     labels: (n) => Array.from({ length: n }, (_, k) => `FZ-${run}-${uploadsSent}-${k + 1}`),
-    ndjson: true, accepted: () => undefined
+    ndjson: true,
+    accepted: () => undefined
   }
 ];
 
@@ -122,7 +164,12 @@ async function fuzzRoute(r: Route): Promise<void> {
         const url = `http://local${r.path(encodeURIComponent(param))}${u.query ?? clean[u.pick % clean.length]}`;
         const request = await uploadRequest(url, u, bytes, mark, r.ndjson && u.ndjson);
         puts.keys.length = 0;
-        const event = { request, url: new URL(url), params: { [r.paramName]: param }, locals: { user: u.otherRole ? r.otherUser() : r.user(), viaToken: false, denied: null } };
+        const event = {
+          request,
+          url: new URL(url),
+          params: { [r.paramName]: param },
+          locals: { user: u.otherRole ? r.otherUser() : r.user(), viaToken: false, denied: null }
+        };
         const a = await send(r.handler, event);
         tally.set(a.status, (tally.get(a.status) ?? 0) + 1);
         const context = describeUpload(u, a);
@@ -149,7 +196,10 @@ async function fuzzRoute(r: Route): Promise<void> {
     puts.stop();
   }
   const seconds = ((performance.now() - t0) / 1000).toFixed(1);
-  const statuses = [...tally].sort((x, y) => x[0] - y[0]).map(([s, n]) => `${s}×${n}`).join(', ');
+  const statuses = [...tally]
+    .sort((x, y) => x[0] - y[0])
+    .map(([s, n]) => `${s}×${n}`)
+    .join(', ');
   console.log(`upload fuzz, ${r.name}: ${RUNS} requests in ${seconds} s — ${statuses}; ${accepted} accepted`);
   expect(accepted).toBeGreaterThan(0);
   expect(accepted).toBeLessThan(RUNS * 0.15);

@@ -11,13 +11,25 @@ import type { User } from '../../../src/lib/server/accounts/users';
 
 const people = new Map<Role, User>();
 
-function event(role: Role, init: { method?: string; body?: unknown; params?: Record<string, string>; query?: string; headers?: Record<string, string>; raw?: BodyInit } = {}) {
+function event(
+  role: Role,
+  init: {
+    method?: string;
+    body?: unknown;
+    params?: Record<string, string>;
+    query?: string;
+    headers?: Record<string, string>;
+    raw?: BodyInit;
+  } = {}
+) {
   const url = new URL(`http://local/api${init.query ?? ''}`);
   const body = init.raw ?? (init.body === undefined ? undefined : JSON.stringify(init.body));
-  const headers = init.raw ? init.headers ?? {} : { 'content-type': 'application/json', ...(init.headers ?? {}) };
+  const headers = init.raw ? (init.headers ?? {}) : { 'content-type': 'application/json', ...(init.headers ?? {}) };
   return {
     request: new Request(url, { method: init.method ?? (body ? 'POST' : 'GET'), body, headers }),
-    url, params: init.params ?? {}, locals: { user: people.get(role)!, viaToken: false, denied: null }
+    url,
+    params: init.params ?? {},
+    locals: { user: people.get(role)!, viaToken: false, denied: null }
   };
 }
 
@@ -85,7 +97,10 @@ describe('/api/v1/phosphors and /api/v1/pumps', () => {
   it('uploads a spectrum as CSV body and as multipart, and checks without saving on dryRun', async () => {
     const created = await call(phosphors.POST, event('formulator', { body: phosphorFields('TST-A4') }));
     const id = String(created.body.id);
-    const dry = await call(phosphorSpectrum.POST, event('formulator', { params: { id }, query: '?dryRun=1', raw: gaussianCsv(600, 45), headers: { 'content-type': 'text/csv' } }));
+    const dry = await call(
+      phosphorSpectrum.POST,
+      event('formulator', { params: { id }, query: '?dryRun=1', raw: gaussianCsv(600, 45), headers: { 'content-type': 'text/csv' } })
+    );
     expect(dry.status).toBe(200);
     expect(dry.body).toMatchObject({ saved: false, points: 81 });
     expect((await db()('material_spectra').where({ material_id: Number(id) })).length).toBe(0);
@@ -95,10 +110,20 @@ describe('/api/v1/phosphors and /api/v1/pumps', () => {
     expect(saved.status).toBe(201);
     expect(saved.body).toMatchObject({ saved: true, version: 2 });
     expect(saved.body.metrics.peakNm).toBeCloseTo(600, 1);
-    const bad = await call(phosphorSpectrum.POST, event('formulator', { params: { id }, raw: 'wavelength,intensity\n400,1\n390,1\n', headers: { 'content-type': 'text/csv' } }));
+    const bad = await call(
+      phosphorSpectrum.POST,
+      event('formulator', { params: { id }, raw: 'wavelength,intensity\n400,1\n390,1\n', headers: { 'content-type': 'text/csv' } })
+    );
     expect(bad.status).toBe(422);
-    expect(bad.body.issues[0]).toEqual({ path: 'line 3', line: 3, message: 'Line 3: wavelength 390 nm is lower than 400 nm on line 2; wavelengths must increase.' });
-    const tech = await call(phosphorSpectrum.POST, event('technician', { params: { id }, raw: gaussianCsv(), headers: { 'content-type': 'text/csv' } }));
+    expect(bad.body.issues[0]).toEqual({
+      path: 'line 3',
+      line: 3,
+      message: 'Line 3: wavelength 390 nm is lower than 400 nm on line 2; wavelengths must increase.'
+    });
+    const tech = await call(
+      phosphorSpectrum.POST,
+      event('technician', { params: { id }, raw: gaussianCsv(), headers: { 'content-type': 'text/csv' } })
+    );
     expect(tech.status).toBe(403);
   });
 
@@ -108,7 +133,11 @@ describe('/api/v1/phosphors and /api/v1/pumps', () => {
     expect((await call(phosphor.DELETE, event('technician', { method: 'DELETE', params: { id } }))).status).toBe(403);
     const r = await phosphor.DELETE(event('formulator', { method: 'DELETE', params: { id } }) as never);
     expect(r.status).toBe(204);
-    expect(await db()('materials').where({ id: Number(id) }).first()).toBeUndefined();
+    expect(
+      await db()('materials')
+        .where({ id: Number(id) })
+        .first()
+    ).toBeUndefined();
     expect((await call(phosphor.DELETE, event('formulator', { method: 'DELETE', params: { id: '999999' } }))).status).toBe(404);
   });
 });

@@ -14,7 +14,12 @@ let csv: string;
 
 function event(user: User | null, init: RequestInit & { path?: string } = {}, batchId = b.batchId) {
   const url = `http://local/api/v1/measurements/${batchId}${init.path ?? ''}`;
-  return { request: new Request(url, init), url: new URL(url), params: { batchId: String(batchId) }, locals: { user, viaToken: false, denied: null } };
+  return {
+    request: new Request(url, init),
+    url: new URL(url),
+    params: { batchId: String(batchId) },
+    locals: { user, viaToken: false, denied: null }
+  };
 }
 const multipart = (text: string, name = 'export.csv') => {
   const fd = new FormData();
@@ -46,7 +51,10 @@ describe('POST /api/v1/measurements/{batchId} (upload)', () => {
   it('streams progress as NDJSON and ends with the result', async () => {
     const res = await POST(event(quality, { method: 'POST', body: multipart(csv), headers: { accept: 'application/x-ndjson' } }) as never);
     expect(res.headers.get('content-type')).toMatch(/application\/x-ndjson/);
-    const lines = (await res.text()).trim().split('\n').map((l) => JSON.parse(l));
+    const lines = (await res.text())
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l));
     expect(lines[0]).toEqual({ type: 'progress', phase: 'parsing' });
     expect(lines.some((l) => l.phase === 'measuring' && l.done === 6 && l.total === 6)).toBe(true);
     expect(lines.at(-1)).toMatchObject({ type: 'done', status: 201, result: { parts: 6 } });
@@ -71,20 +79,40 @@ describe('GET /api/v1/measurements/{batchId}', () => {
 
 describe('PUT acceptance and POST disposition validate their bodies', () => {
   it('acceptance: steps out of range is a 400', async () => {
-    const res = await call(ACCEPT, event(quality, { method: 'PUT', path: '/acceptance', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ mode: 'steps', steps: 12, version: 0 }) }));
+    const res = await call(
+      ACCEPT,
+      event(quality, {
+        method: 'PUT',
+        path: '/acceptance',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ mode: 'steps', steps: 12, version: 0 })
+      })
+    );
     expect(res.status).toBe(400);
     expect(res.body.error).toMatch(/steps must be 1–7/);
   });
   it('disposition: a comment and the password are required; a meaning must fit the decision', async () => {
     const body = { decision: 'release', meaning: 'Rejection for rework', comment: '', password: '', version: 1 };
-    const res = await call(DISPOSE, event(quality, { method: 'POST', path: '/disposition', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) }));
+    const res = await call(
+      DISPOSE,
+      event(quality, { method: 'POST', path: '/disposition', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })
+    );
     expect(res.status).toBe(400);
     expect(res.body.error).toMatch(/comment/);
     expect(res.body.error).toMatch(/password/);
   });
   it('disposition by a technician is a 403', async () => {
-    const body = { decision: 'release', meaning: 'Release approval: the batch meets its revision', comment: 'ok for me', password: DEMO_PASSWORD, version: 1 };
-    const res = await call(DISPOSE, event(tech, { method: 'POST', path: '/disposition', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) }));
+    const body = {
+      decision: 'release',
+      meaning: 'Release approval: the batch meets its revision',
+      comment: 'ok for me',
+      password: DEMO_PASSWORD,
+      version: 1
+    };
+    const res = await call(
+      DISPOSE,
+      event(tech, { method: 'POST', path: '/disposition', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })
+    );
     expect(res.status).toBe(403);
   });
 });

@@ -40,10 +40,46 @@ export interface Upload {
   ndjson: boolean;
 }
 
-const ODD_NAMES = ['export', 'spectrum.csv', 'Messung µW °C.txt', '../../etc/passwd', 'C:\\data\\sphere.csv', 'x'.repeat(300), '"quoted".csv', 'line\nbreak', '   ', '🙂', '.hidden', 'a/b/c.csv'];
-const ODD_TYPES = ['text/csv', 'text/plain', '', 'application/octet-stream', 'application/x-msdownload', 'text/csv; charset=utf-16', 'image/png'];
-const EXTRA_FIELDS: [string, string][] = [['notes', 'x'.repeat(5000)], ['kind', 'excitation'], ['version', '-1'], ['notes', "'; DROP TABLE materials; --"], ['file2', 'abc'], ['batchId', '0']];
-const RAW_TYPES = ['text/csv', 'text/plain; charset=utf-8', 'text/tab-separated-values', 'TEXT/CSV', 'application/json', 'text/html', 'application/x-www-form-urlencoded'];
+const ODD_NAMES = [
+  'export',
+  'spectrum.csv',
+  'Messung µW °C.txt',
+  '../../etc/passwd',
+  'C:\\data\\sphere.csv',
+  'x'.repeat(300),
+  '"quoted".csv',
+  'line\nbreak',
+  '   ',
+  '🙂',
+  '.hidden',
+  'a/b/c.csv'
+];
+const ODD_TYPES = [
+  'text/csv',
+  'text/plain',
+  '',
+  'application/octet-stream',
+  'application/x-msdownload',
+  'text/csv; charset=utf-16',
+  'image/png'
+];
+const EXTRA_FIELDS: [string, string][] = [
+  ['notes', 'x'.repeat(5000)],
+  ['kind', 'excitation'],
+  ['version', '-1'],
+  ['notes', "'; DROP TABLE materials; --"],
+  ['file2', 'abc'],
+  ['batchId', '0']
+];
+const RAW_TYPES = [
+  'text/csv',
+  'text/plain; charset=utf-8',
+  'text/tab-separated-values',
+  'TEXT/CSV',
+  'application/json',
+  'text/html',
+  'application/x-www-form-urlencoded'
+];
 const BAD_PARAMS = ['abc', '0', '-1', '1e9', '999999999', '1.5', '', '%00', '1 OR 1=1'];
 
 export function uploadArb(parts: { min: number; max: number }, badQueries: string[]): fc.Arbitrary<Upload> {
@@ -56,7 +92,11 @@ export function uploadArb(parts: { min: number; max: number }, badQueries: strin
     {
       arbitrary: fc.record({
         kind: fc.constant('form' as const),
-        name: fc.oneof({ arbitrary: fc.constant('sphere-export.csv'), weight: 3 }, fc.constantFrom(...ODD_NAMES), fc.string({ unit: 'binary', maxLength: 40 })),
+        name: fc.oneof(
+          { arbitrary: fc.constant('sphere-export.csv'), weight: 3 },
+          fc.constantFrom(...ODD_NAMES),
+          fc.string({ unit: 'binary', maxLength: 40 })
+        ),
         type: fc.constantFrom(...ODD_TYPES),
         extra: fc.subarray(EXTRA_FIELDS, { maxLength: 2 }),
         twice: fc.boolean()
@@ -65,7 +105,14 @@ export function uploadArb(parts: { min: number; max: number }, badQueries: strin
     },
     { arbitrary: fc.record({ kind: fc.constantFrom('fileAsText' as const, 'noFile' as const, 'tooLarge' as const) }), weight: 4 },
     { arbitrary: fc.record({ kind: fc.constant('rawText' as const), type: fc.constantFrom(...RAW_TYPES) }), weight: 6 },
-    { arbitrary: fc.record({ kind: fc.constant('brokenMultipart' as const), how: fc.constantFrom('noBoundary' as const, 'wrongBoundary' as const, 'truncate' as const, 'flip' as const), pos: fc.nat() }), weight: 6 }
+    {
+      arbitrary: fc.record({
+        kind: fc.constant('brokenMultipart' as const),
+        how: fc.constantFrom('noBoundary' as const, 'wrongBoundary' as const, 'truncate' as const, 'flip' as const),
+        pos: fc.nat()
+      }),
+      weight: 6
+    }
   );
   return fc.record({
     file,
@@ -88,7 +135,13 @@ export function fileBytes(file: FileChoice, labels?: (n: number) => string[]): U
 }
 
 /** The request of an upload; `mark` ends every file name so the test finds its own objects in the shared bucket. */
-export async function uploadRequest(url: string, u: Upload, bytes: Uint8Array<ArrayBuffer>, mark: string, ndjson = false): Promise<Request> {
+export async function uploadRequest(
+  url: string,
+  u: Upload,
+  bytes: Uint8Array<ArrayBuffer>,
+  mark: string,
+  ndjson = false
+): Promise<Request> {
   const headers: Record<string, string> = ndjson ? { accept: 'application/x-ndjson' } : {};
   const e = u.envelope;
   const name = `${e.kind === 'form' ? e.name : 'export'}-${mark}.csv`;
@@ -158,7 +211,9 @@ export async function send(handler: (e: never) => Promise<Response> | Response, 
 
 /** One CHECKSUM TABLE statement over the tables: equal strings mean no row was added, removed or changed. */
 export async function checksums(tables: readonly string[]): Promise<string> {
-  const [rows] = (await db().raw(`CHECKSUM TABLE ${tables.map((t) => `\`${t}\``).join(', ')}`)) as [{ Table: string; Checksum: string | number | null }[]];
+  const [rows] = (await db().raw(`CHECKSUM TABLE ${tables.map((t) => `\`${t}\``).join(', ')}`)) as [
+    { Table: string; Checksum: string | number | null }[]
+  ];
   return rows.map((r) => `${r.Table.split('.').pop()}=${r.Checksum}`).join(' ');
 }
 
@@ -173,12 +228,19 @@ export const storageMonth = () => new Date().toISOString().slice(0, 7);
 
 /** Removes a test batch's measurement uploads: parts, uploads, their stored files and objects. */
 export async function removeMeasurements(batchId: number): Promise<void> {
-  const files: { id: number; key: string }[] = await db()('measurement_uploads as m').join('stored_files as f', 'f.id', 'm.stored_file_id')
-    .where('m.batch_id', batchId).select('f.id', 'f.storage_key as key');
+  const files: { id: number; key: string }[] = await db()('measurement_uploads as m')
+    .join('stored_files as f', 'f.id', 'm.stored_file_id')
+    .where('m.batch_id', batchId)
+    .select('f.id', 'f.storage_key as key');
   await db().transaction(async (trx) => {
     await trx('part_measurements').where({ batch_id: batchId }).delete();
     await trx('measurement_uploads').where({ batch_id: batchId }).delete();
-    await trx('stored_files').whereIn('id', files.map((f) => f.id)).delete();
+    await trx('stored_files')
+      .whereIn(
+        'id',
+        files.map((f) => f.id)
+      )
+      .delete();
   });
   for (const f of files) await deleteStoredObject(f.key);
 }

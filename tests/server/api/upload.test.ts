@@ -9,7 +9,8 @@ import { DomainError } from '../../../src/lib/errors/domain-error';
 import { readUploadedFile } from '../../../src/lib/server/api/upload';
 
 const KIND = { maxBytes: 2 * 1024 * 1024, what: 'spectrum', defaultName: 'spectrum.csv' };
-const post = (body: BodyInit, headers: Record<string, string> = {}) => new Request('http://local/upload', { method: 'POST', body, headers });
+const post = (body: BodyInit, headers: Record<string, string> = {}) =>
+  new Request('http://local/upload', { method: 'POST', body, headers });
 
 async function refusal(request: Request): Promise<DomainError> {
   try {

@@ -12,8 +12,23 @@ const type = `probe_${Date.now().toString(36)}`;
 describe('audit trail search and export', () => {
   beforeAll(async () => {
     c = await cast();
-    await record({ actorId: c.rhea.id, actorEmail: c.rhea.email, entityType: type, entityId: 1, action: 'create', after: { name: '=HYPERLINK("x")' } });
-    await record({ actorId: c.ines.id, actorEmail: c.ines.email, entityType: type, entityId: 1, action: 'approve', before: { state: 'submitted' }, after: { state: 'approved' } });
+    await record({
+      actorId: c.rhea.id,
+      actorEmail: c.rhea.email,
+      entityType: type,
+      entityId: 1,
+      action: 'create',
+      after: { name: '=HYPERLINK("x")' }
+    });
+    await record({
+      actorId: c.ines.id,
+      actorEmail: c.ines.email,
+      entityType: type,
+      entityId: 1,
+      action: 'approve',
+      before: { state: 'submitted' },
+      after: { state: 'approved' }
+    });
     await record({ actorId: c.ines.id, actorEmail: c.ines.email, entityType: type, entityId: '=2+3', action: 'create' });
   });
   afterAll(closeDb);
@@ -42,7 +57,19 @@ describe('audit trail search and export', () => {
   it('exports CSV (RFC 4180) with a header, UTC times, and formula-like cells escaped', async () => {
     const csv = (await auditCsv(auditQuerySchema.parse({ entityType: type })))!;
     const parsed = Papa.parse<Record<string, string>>(csv, { header: true });
-    expect(parsed.meta.fields).toEqual(['id', 'at_utc', 'actor_id', 'actor_email', 'actor_name', 'entity_type', 'entity_id', 'action', 'before', 'after', 'ip']);
+    expect(parsed.meta.fields).toEqual([
+      'id',
+      'at_utc',
+      'actor_id',
+      'actor_email',
+      'actor_name',
+      'entity_type',
+      'entity_id',
+      'action',
+      'before',
+      'after',
+      'ip'
+    ]);
     expect(parsed.data.map((r) => r.action)).toEqual(['create', 'approve', 'create']);
     expect(parsed.data[0].at_utc).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/);
     // OWASP "CSV injection": a cell starting with "=" is prefixed with a quote mark.

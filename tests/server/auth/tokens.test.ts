@@ -16,7 +16,7 @@ describe('personal API tokens', () => {
     await closeDb();
   });
 
-  it('stores only a hash and resolves the token to its user with that user\'s roles', async () => {
+  it("stores only a hash and resolves the token to its user with that user's roles", async () => {
     const { id, token } = await tokens.create(userId, 'probe', 30);
     const row = (await db()('api_tokens').where({ id }).first())!;
     expect(row.token_hash).toBe(tokens.sha256Hex(token));
@@ -31,7 +31,9 @@ describe('personal API tokens', () => {
     expect(await tokens.revoke(userId, a.id)).toBe(true);
     expect(await tokens.userForToken(a.token)).toBeNull();
     const b = await tokens.create(userId, 'to expire', 30);
-    await db()('api_tokens').where({ id: b.id }).update({ expires_at: new Date(Date.now() - 1000) });
+    await db()('api_tokens')
+      .where({ id: b.id })
+      .update({ expires_at: new Date(Date.now() - 1000) });
     expect(await tokens.userForToken(b.token)).toBeNull();
     expect(await tokens.userForToken('pfk_unknown')).toBeNull();
     expect(await tokens.userForToken('no-prefix')).toBeNull();
@@ -54,7 +56,9 @@ describe('personal API tokens', () => {
     const e = await tokens.create(userId, 'busy client', 30);
     await tokens.userForToken(e.token); // sets last use, so the calls below only read
     let lookups = 0;
-    const count = (q: { sql: string }) => { if (/from `api_tokens`/i.test(q.sql) && /^select/i.test(q.sql)) lookups++; };
+    const count = (q: { sql: string }) => {
+      if (/from `api_tokens`/i.test(q.sql) && /^select/i.test(q.sql)) lookups++;
+    };
     db().on('query', count);
     try {
       const all = await Promise.all(Array.from({ length: 20 }, () => tokens.userForToken(e.token)));
@@ -74,7 +78,9 @@ describe('personal API tokens', () => {
     const f = await tokens.create(userId, 'slow lookup', 30);
     await tokens.userForToken(f.token);
     let lookups = 0;
-    const count = (q: { sql: string }) => { if (/from `api_tokens`/i.test(q.sql) && /^select/i.test(q.sql)) lookups++; };
+    const count = (q: { sql: string }) => {
+      if (/from `api_tokens`/i.test(q.sql) && /^select/i.test(q.sql)) lookups++;
+    };
     db().on('query', count);
     const realNow = Date.now;
     try {

@@ -24,7 +24,12 @@ beforeAll(async () => {
 afterAll(closeDb);
 
 async function refusal(p: Promise<unknown>): Promise<DomainError> {
-  try { await p; } catch (err) { if (err instanceof DomainError) return err; throw err; }
+  try {
+    await p;
+  } catch (err) {
+    if (err instanceof DomainError) return err;
+    throw err;
+  }
   throw new Error('expected a refusal');
 }
 
@@ -39,7 +44,10 @@ describe('planning a batch', () => {
     expect(d.batch.formulationCode).toBe(fx.formulationCode);
     // 10.000 g: A 8.227, green 0.700, red 0.250, B 0.823 (worked in tests/lib/batches/weighout/compute.test.ts).
     expect(d.lines.map((l) => [l.code, l.targetG, l.lowG, l.highG])).toEqual([
-      ['PART A', '8.227', '8.145', '8.309'], [fx.green.code, '0.700', '0.697', '0.703'], [fx.red.code, '0.250', '0.249', '0.251'], ['PART B', '0.823', '0.815', '0.830']
+      ['PART A', '8.227', '8.145', '8.309'],
+      [fx.green.code, '0.700', '0.697', '0.703'],
+      [fx.red.code, '0.250', '0.249', '0.251'],
+      ['PART B', '0.823', '0.815', '0.830']
     ]);
     expect(d.batch.batchMassG).toBe('10.000');
     expect(d.batch.target.ansiBin).toBe(3000); // 3000 K, Duv 0 lies in the ANSI C78.377 3000 K quadrangle
@@ -63,7 +71,7 @@ describe('planning a batch', () => {
     expect(await db()('batches').count({ n: '*' })).toEqual(before);
   });
 
-  it('refuses a silicone system other than the revision\'s', async () => {
+  it("refuses a silicone system other than the revision's", async () => {
     const e = await refusal(createBatch(tech, plan({ siliconeSystemId: fx.siliconeSystemId + 1000 })));
     expect(e.status).toBe(400);
     expect(e.message).toMatch(/needs a new revision/);
@@ -84,7 +92,9 @@ describe('planning a batch', () => {
 
 describe('weighing, deviations and completion', () => {
   let id: number;
-  beforeAll(async () => { id = (await createBatch(tech, plan())).id; });
+  beforeAll(async () => {
+    id = (await createBatch(tech, plan())).id;
+  });
   const line = async (seq: number) => (await getBatch(id))!.lines[seq - 1];
 
   it('checks each reading against its range at once and moves the batch to weighing', async () => {
@@ -93,7 +103,7 @@ describe('weighing, deviations and completion', () => {
     expect((await getBatch(id))!.batch.state).toBe('weighing');
   });
 
-  it('accepts only a known, current lot of the line\'s material', async () => {
+  it("accepts only a known, current lot of the line's material", async () => {
     const v = (await line(2)).version;
     const unknown = await refusal(recordLine(tech, id, 2, { actualG: '0.700', lotNumber: 'NOPE-1', version: v }));
     expect(unknown.status).toBe(400);
@@ -127,11 +137,21 @@ describe('weighing, deviations and completion', () => {
 
   it('lets only quality accept a deviation, signed with the password, not by the person who weighed it', async () => {
     const v = (await line(3)).version;
-    expect((await refusal(acceptDeviation(tech2, id, 3, { reason: 'looks fine to me, honestly', password: DEMO_PASSWORD, version: v }))).status).toBe(403);
-    const wrong = await refusal(acceptDeviation(quality, id, 3, { reason: 'Within the colour window of the revision.', password: 'wrong-password', version: v }));
+    expect(
+      (await refusal(acceptDeviation(tech2, id, 3, { reason: 'looks fine to me, honestly', password: DEMO_PASSWORD, version: v }))).status
+    ).toBe(403);
+    const wrong = await refusal(
+      acceptDeviation(quality, id, 3, { reason: 'Within the colour window of the revision.', password: 'wrong-password', version: v })
+    );
     expect(wrong.status).toBe(403);
     expect(wrong.message).toMatch(/password is not correct/);
-    const inRange = await refusal(acceptDeviation(quality, id, 2, { reason: 'Within the colour window of the revision.', password: DEMO_PASSWORD, version: (await line(2)).version }));
+    const inRange = await refusal(
+      acceptDeviation(quality, id, 2, {
+        reason: 'Within the colour window of the revision.',
+        password: DEMO_PASSWORD,
+        version: (await line(2)).version
+      })
+    );
     expect(inRange.status).toBe(409);
     await acceptDeviation(quality, id, 3, { reason: 'Within the colour window of the revision.', password: DEMO_PASSWORD, version: v });
     expect((await line(3)).overrideByName).toBe(quality.name);

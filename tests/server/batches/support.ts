@@ -36,7 +36,8 @@ export async function makeFixture(opts: { withWtPct?: boolean } = {}): Promise<F
   const k = db();
   const sfx = Math.random().toString(36).slice(2, 7).toUpperCase();
   const admin = await demoUser('admin');
-  const mat = async (code: string, name: string) => (await k('materials').insert({ kind: 'phosphor', code, name, family: 'test', created_by: admin.id }))[0];
+  const mat = async (code: string, name: string) =>
+    (await k('materials').insert({ kind: 'phosphor', code, name, family: 'test', created_by: admin.id }))[0];
   const greenCode = `TG-${sfx}`;
   const redCode = `TR-${sfx}`;
   const greenId = await mat(greenCode, 'test green garnet');
@@ -47,8 +48,14 @@ export async function makeFixture(opts: { withWtPct?: boolean } = {}): Promise<F
     { material_id: redId, lot_number: `LR-${sfx}-01`, supplier: 'Tidewater Phosphor Works', expires_on: null }
   ]);
   const [siliconeSystemId] = await k('silicone_systems').insert({
-    name: `Test 10:1 ${sfx}`, supplier: 'Brackenfield Silicones', ratio_a: 10, ratio_b: 1, pot_life_min: 240,
-    cure: '1 h at 80 °C, then 2 h at 150 °C', degas_notes: 'Vacuum below 5 kPa for 15 min.', safety_note: 'Keep the crosslinker away from moisture.'
+    name: `Test 10:1 ${sfx}`,
+    supplier: 'Brackenfield Silicones',
+    ratio_a: 10,
+    ratio_b: 1,
+    pot_life_min: 240,
+    cure: '1 h at 80 °C, then 2 h at 150 °C',
+    degas_notes: 'Vacuum below 5 kPa for 15 min.',
+    safety_note: 'Keep the crosslinker away from moisture.'
   });
   const code = `KH-T${sfx}`;
   const [formulationId] = await k('formulations').insert({ code, name: `Test warm white ${sfx}`, created_by: admin.id });
@@ -61,20 +68,37 @@ export async function makeFixture(opts: { withWtPct?: boolean } = {}): Promise<F
     ],
     pumpLeakFraction: 0.4,
     loading: null,
-    silicone: { siliconeSystemId, name: `Test 10:1 ${sfx}`, ratioA: 10, ratioB: 1, potLifeMin: 240, cure: '1 h at 80 °C, then 2 h at 150 °C', densityGPerCm3: 1.05 },
+    silicone: {
+      siliconeSystemId,
+      name: `Test 10:1 ${sfx}`,
+      ratioA: 10,
+      ratioB: 1,
+      potLifeMin: 240,
+      cure: '1 h at 80 °C, then 2 h at 150 °C',
+      densityGPerCm3: 1.05
+    },
     target: { kind: 'cctDuv', cct: 3000, duv: 0 },
     tolerance: { kind: 'sdcm', steps: 3 },
     floors: { raMin: 90 },
     notes: ''
   };
   const rev = (revision_no: number, state: 'approved' | 'draft') => ({
-    formulation_id: formulationId, revision_no, state, content_json: JSON.stringify(content), predicted_json: '{}',
-    core_version: 'test', content_sha256: '0'.repeat(64), created_by: admin.id
+    formulation_id: formulationId,
+    revision_no,
+    state,
+    content_json: JSON.stringify(content),
+    predicted_json: '{}',
+    core_version: 'test',
+    content_sha256: '0'.repeat(64),
+    created_by: admin.id
   });
   const [revisionId] = await k('formulation_revisions').insert(rev(1, 'approved'));
   const [draftRevisionId] = await k('formulation_revisions').insert(rev(2, 'draft'));
   return {
-    revisionId, draftRevisionId, siliconeSystemId, formulationCode: code,
+    revisionId,
+    draftRevisionId,
+    siliconeSystemId,
+    formulationCode: code,
     green: { id: greenId, code: greenCode, lot: `LG-${sfx}-01`, expiredLot: `LG-${sfx}-00` },
     red: { id: redId, code: redCode, lot: `LR-${sfx}-01` }
   };

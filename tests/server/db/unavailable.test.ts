@@ -11,7 +11,9 @@ const err = (message: string, props: Record<string, unknown>) => Object.assign(n
 describe('isDbUnavailable', () => {
   it('counts connection failures of the database driver and of the pool', () => {
     expect(isDbUnavailable(err('connect ECONNREFUSED 127.0.0.1:33306', { code: 'ECONNREFUSED', fatal: true }))).toBe(true);
-    expect(isDbUnavailable(err('Connection lost: The server closed the connection.', { code: 'PROTOCOL_CONNECTION_LOST', fatal: true }))).toBe(true);
+    expect(
+      isDbUnavailable(err('Connection lost: The server closed the connection.', { code: 'PROTOCOL_CONNECTION_LOST', fatal: true }))
+    ).toBe(true);
     expect(isDbUnavailable(err('read ECONNRESET', { code: 'ECONNRESET', fatal: true }))).toBe(true);
     expect(isDbUnavailable(err('connect ETIMEDOUT', { code: 'ETIMEDOUT', fatal: true }))).toBe(true);
     expect(isDbUnavailable(err('Too many connections', { code: 'ER_CON_COUNT_ERROR' }))).toBe(true);

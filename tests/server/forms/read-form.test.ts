@@ -22,7 +22,13 @@ async function refusal(request: Request): Promise<unknown> {
 
 describe('readForm', () => {
   it('gives the fields of a well-formed urlencoded or multipart body', async () => {
-    const url = await readForm(new Request('http://local/form', { method: 'POST', headers: { 'content-type': 'application/x-www-form-urlencoded' }, body: 'name=Amber%20lot&days=30' }));
+    const url = await readForm(
+      new Request('http://local/form', {
+        method: 'POST',
+        headers: { 'content-type': 'application/x-www-form-urlencoded' },
+        body: 'name=Amber%20lot&days=30'
+      })
+    );
     expect(url.get('name')).toBe('Amber lot');
     const fd = new FormData();
     fd.set('file', new File(['380,0.1\n381,0.2\n'], 'spd.csv', { type: 'text/csv' }));
@@ -31,7 +37,10 @@ describe('readForm', () => {
   });
 
   it.each([
-    ['cut off before its closing boundary', broken('--XYZ\r\nContent-Disposition: form-data; name="file"; filename="a.csv"\r\n\r\n380,1\r\n')],
+    [
+      'cut off before its closing boundary',
+      broken('--XYZ\r\nContent-Disposition: form-data; name="file"; filename="a.csv"\r\n\r\n380,1\r\n')
+    ],
     ['without a boundary', broken('--XYZ\r\n\r\n', 'multipart/form-data')],
     ['with a boundary the body does not use', broken('--OTHER\r\nContent-Disposition: form-data; name="a"\r\n\r\nb\r\n--OTHER--\r\n')],
     ['plain text sent as multipart', broken('not a form at all')],
@@ -52,7 +61,8 @@ describe('every form body goes through readForm', () => {
       for (const name of readdirSync(dir)) {
         const path = join(dir, name);
         if (statSync(path).isDirectory()) walk(path);
-        else if (/\.(ts|svelte)$/.test(name) && /\.formData\(\)/.test(readFileSync(path, 'utf8')) && !allowed.has(relative(root, path))) offenders.push(relative(root, path));
+        else if (/\.(ts|svelte)$/.test(name) && /\.formData\(\)/.test(readFileSync(path, 'utf8')) && !allowed.has(relative(root, path)))
+          offenders.push(relative(root, path));
       }
     };
     walk(root);

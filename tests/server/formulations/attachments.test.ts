@@ -23,7 +23,9 @@ describe('revision attachments', () => {
     expect((await listAttachments(d.revisionId)).map((a) => a.label)).toEqual(['Trial build spectra']);
     expect((await attachmentFile(d.revisionId, id))!.body.equals(report.body)).toBe(true);
     await expect(addAttachment(c.jonah, d.revisionId, report, 'not mine')).rejects.toBeInstanceOf(PermissionError);
-    await expect(addAttachment(c.rhea, d.revisionId, { name: 'run.exe', body: Buffer.from('MZ') }, '')).rejects.toBeInstanceOf(ValidationError);
+    await expect(addAttachment(c.rhea, d.revisionId, { name: 'run.exe', body: Buffer.from('MZ') }, '')).rejects.toBeInstanceOf(
+      ValidationError
+    );
     await removeAttachment(c.rhea, d.revisionId, id);
     expect(await listAttachments(d.revisionId)).toEqual([]);
   });
@@ -37,7 +39,9 @@ describe('revision attachments', () => {
     await expect(removeAttachment(c.rhea, d.revisionId, id)).rejects.toBeInstanceOf(ConflictError);
     await expect(db()('revision_attachments').where({ id }).delete()).rejects.toThrow(/locked/);
     const fileId = (await db()('revision_attachments').where({ id }).first())!.stored_file_id;
-    await expect(db()('revision_attachments').insert({ revision_id: d.revisionId, stored_file_id: fileId, label: 'sneaked in' })).rejects.toThrow(/locked/);
+    await expect(
+      db()('revision_attachments').insert({ revision_id: d.revisionId, stored_file_id: fileId, label: 'sneaked in' })
+    ).rejects.toThrow(/locked/);
     expect((await listAttachments(d.revisionId)).map((a) => a.id)).toEqual([id]);
   });
 });

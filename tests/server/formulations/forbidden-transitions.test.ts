@@ -19,12 +19,18 @@ const sig = { password: DEMO_PASSWORD, comment: '' };
 
 function run(command: RevisionCommand, user: User, id: number, version: number) {
   switch (command) {
-    case 'edit': return updateDraft(user, id, version, content);
-    case 'submit': return submit(user, id, version);
-    case 'review': return sign(user, id, 'reviewed', sig, version);
-    case 'approve': return sign(user, id, 'approved', sig, version);
-    case 'return': return returnRevision(user, id, { password: DEMO_PASSWORD, reason: 'matrix probe' }, version);
-    case 'withdraw': return withdraw(user, id, 'matrix probe', version);
+    case 'edit':
+      return updateDraft(user, id, version, content);
+    case 'submit':
+      return submit(user, id, version);
+    case 'review':
+      return sign(user, id, 'reviewed', sig, version);
+    case 'approve':
+      return sign(user, id, 'approved', sig, version);
+    case 'return':
+      return returnRevision(user, id, { password: DEMO_PASSWORD, reason: 'matrix probe' }, version);
+    case 'withdraw':
+      return withdraw(user, id, 'matrix probe', version);
   }
 }
 
@@ -61,13 +67,21 @@ describe('forbidden transitions through the services, per person and state', () 
   const commands: RevisionCommand[] = ['edit', 'submit', 'review', 'approve', 'return', 'withdraw'];
   for (const person of people) {
     it(`refuses every command the rules do not give the ${person}, leaving the revision unchanged`, async () => {
-      const user = { 'author (formulator)': c.rhea, 'other formulator': c.jonah, technician: c.tomas, 'quality reviewer': c.ines, administrator: c.admin }[person];
+      const user = {
+        'author (formulator)': c.rhea,
+        'other formulator': c.jonah,
+        technician: c.tomas,
+        'quality reviewer': c.ines,
+        administrator: c.admin
+      }[person];
       let refused = 0;
       for (const state of REVISION_STATES) {
         for (const command of commands.filter((x) => !(ALLOWED[person][state] ?? []).includes(x))) {
           const before = (await db()('formulation_revisions').where({ id: ids[state] }).first())!;
           const attempt = run(command, user, ids[state], before.version);
-          await expect(attempt, `${command} on ${state}`).rejects.toSatisfy((e) => e instanceof PermissionError || e instanceof ConflictError);
+          await expect(attempt, `${command} on ${state}`).rejects.toSatisfy(
+            (e) => e instanceof PermissionError || e instanceof ConflictError
+          );
           expect(await db()('formulation_revisions').where({ id: ids[state] }).first(), `${command} on ${state}`).toEqual(before);
           refused++;
         }

@@ -30,7 +30,9 @@ describe('immutability of submitted and approved revisions', () => {
   it('the service refuses to edit a submitted or approved revision (409) and the row is unchanged', async () => {
     for (const id of [submittedId, approvedId]) {
       const before = (await db()('formulation_revisions').where({ id }).first())!;
-      await expect(updateDraft(c.rhea, id, before.version, await warmWhite({ notes: 'sneaky change' }))).rejects.toBeInstanceOf(ConflictError);
+      await expect(updateDraft(c.rhea, id, before.version, await warmWhite({ notes: 'sneaky change' }))).rejects.toBeInstanceOf(
+        ConflictError
+      );
       expect(await db()('formulation_revisions').where({ id }).first()).toEqual(before);
     }
   });
@@ -38,23 +40,43 @@ describe('immutability of submitted and approved revisions', () => {
   it('the database refuses a direct UPDATE of content, prediction or hash once the state is not draft', async () => {
     for (const id of [submittedId, approvedId]) {
       const before = await db()('formulation_revisions').where({ id }).first();
-      await expect(db()('formulation_revisions').where({ id }).update({ content_json: '{}' })).rejects.toThrow(/locked once it leaves draft/);
+      await expect(db()('formulation_revisions').where({ id }).update({ content_json: '{}' })).rejects.toThrow(
+        /locked once it leaves draft/
+      );
       await expect(db()('formulation_revisions').where({ id }).update({ predicted_json: '{}' })).rejects.toThrow(/locked/);
-      await expect(db()('formulation_revisions').where({ id }).update({ content_sha256: '0'.repeat(64) })).rejects.toThrow(/locked/);
+      await expect(
+        db()('formulation_revisions')
+          .where({ id })
+          .update({ content_sha256: '0'.repeat(64) })
+      ).rejects.toThrow(/locked/);
       await expect(db()('formulation_revisions').where({ id }).delete()).rejects.toThrow(/cannot be deleted/);
       expect(await db()('formulation_revisions').where({ id }).first()).toEqual(before);
     }
   });
 
   it('the database refuses state changes outside the state machine (e.g. approved → draft, submitted → superseded)', async () => {
-    await expect(db()('formulation_revisions').where({ id: approvedId }).update({ state: 'draft' })).rejects.toThrow(/transition not allowed/);
-    await expect(db()('formulation_revisions').where({ id: submittedId }).update({ state: 'superseded' })).rejects.toThrow(/transition not allowed/);
+    await expect(db()('formulation_revisions').where({ id: approvedId }).update({ state: 'draft' })).rejects.toThrow(
+      /transition not allowed/
+    );
+    await expect(db()('formulation_revisions').where({ id: submittedId }).update({ state: 'superseded' })).rejects.toThrow(
+      /transition not allowed/
+    );
   });
 
   it('e-signatures and audit rows are append-only', async () => {
-    await expect(db()('revision_signatures').where({ revision_id: approvedId }).update({ meaning: 'reviewed' })).rejects.toThrow(/append-only/);
+    await expect(db()('revision_signatures').where({ revision_id: approvedId }).update({ meaning: 'reviewed' })).rejects.toThrow(
+      /append-only/
+    );
     await expect(db()('revision_signatures').where({ revision_id: approvedId }).delete()).rejects.toThrow(/append-only/);
-    await expect(db()('audit_events').where({ entity_type: 'formulation_revision', entity_id: String(approvedId) }).update({ action: 'x' })).rejects.toThrow(/append-only/);
-    await expect(db()('audit_events').where({ entity_type: 'formulation_revision', entity_id: String(approvedId) }).delete()).rejects.toThrow(/append-only/);
+    await expect(
+      db()('audit_events')
+        .where({ entity_type: 'formulation_revision', entity_id: String(approvedId) })
+        .update({ action: 'x' })
+    ).rejects.toThrow(/append-only/);
+    await expect(
+      db()('audit_events')
+        .where({ entity_type: 'formulation_revision', entity_id: String(approvedId) })
+        .delete()
+    ).rejects.toThrow(/append-only/);
   });
 });

@@ -13,10 +13,20 @@ import { INJECTED, dropLeftoverFaults, failureOf, snapshot, withFailingWrite, ty
 
 const TABLES = ['formulations', 'formulation_revisions', 'audit_events'] as const;
 const NEW_FORMULATION_FAULTS: Fault[] = [
-  { label: "the formulation's audit event", table: 'audit_events', event: 'INSERT', when: "NEW.entity_type = 'formulation' AND NEW.action = 'create'" },
+  {
+    label: "the formulation's audit event",
+    table: 'audit_events',
+    event: 'INSERT',
+    when: "NEW.entity_type = 'formulation' AND NEW.action = 'create'"
+  },
   { label: 'the first draft revision', table: 'formulation_revisions', event: 'INSERT' },
   { label: "the formulation's updated_at", table: 'formulations', event: 'UPDATE' },
-  { label: "the draft's audit event", table: 'audit_events', event: 'INSERT', when: "NEW.entity_type = 'formulation_revision' AND NEW.action = 'create'" }
+  {
+    label: "the draft's audit event",
+    table: 'audit_events',
+    event: 'INSERT',
+    when: "NEW.entity_type = 'formulation_revision' AND NEW.action = 'create'"
+  }
 ];
 
 let c: Cast;
@@ -35,7 +45,9 @@ describe('formulation drafts: a failure after the first insert leaves no partial
     const code = uniqueCode('RB');
     const content = await warmWhite();
     const before = await snapshot(TABLES);
-    const err = await withFailingWrite(fault, () => failureOf(createFormulationWithDraft(c.rhea, { code, name: `Rollback ${code}`, content })));
+    const err = await withFailingWrite(fault, () =>
+      failureOf(createFormulationWithDraft(c.rhea, { code, name: `Rollback ${code}`, content }))
+    );
     expect(err.message).toContain(INJECTED);
     expect(await snapshot(TABLES)).toEqual(before);
     // The code was not taken by a half-written formulation: the same request now goes through.
@@ -48,7 +60,12 @@ describe('formulation drafts: a failure after the first insert leaves no partial
     const first = await createFormulationWithDraft(c.rhea, { code, name: `Rollback ${code}`, content: await warmWhite() });
     const content = await warmWhite({ notes: 'second draft' });
     const before = await snapshot(TABLES);
-    const fault: Fault = { label: 'draft audit', table: 'audit_events', event: 'INSERT', when: "NEW.entity_type = 'formulation_revision' AND NEW.action = 'create'" };
+    const fault: Fault = {
+      label: 'draft audit',
+      table: 'audit_events',
+      event: 'INSERT',
+      when: "NEW.entity_type = 'formulation_revision' AND NEW.action = 'create'"
+    };
     const err = await withFailingWrite(fault, () => failureOf(createRevision(c.rhea, first.formulationId, content, first.revisionId)));
     expect(err.message).toContain(INJECTED);
     expect(await snapshot(TABLES)).toEqual(before);

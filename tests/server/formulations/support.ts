@@ -24,7 +24,13 @@ export async function cast(): Promise<Cast> {
     if (!u) throw new Error(`demo user ${handle} missing: run the demo seed`);
     return (await users.get(u.id))!;
   };
-  return { rhea: await get('rhea.okafor'), jonah: await get('jonah.pell'), ines: await get('ines.halloran'), tomas: await get('tomas.brand'), admin: await get('admin') };
+  return {
+    rhea: await get('rhea.okafor'),
+    jonah: await get('jonah.pell'),
+    ines: await get('ines.halloran'),
+    tomas: await get('tomas.brand'),
+    admin: await get('admin')
+  };
 }
 
 let materialIds: Map<string, number> | undefined;
@@ -43,7 +49,15 @@ export async function warmWhite(overrides: Partial<RevisionContent> = {}): Promi
     ],
     pumpLeakFraction: 0.07,
     loading: { pathLengthMm: 0.3, basis: 'wtPctOfSlurry' },
-    silicone: { siliconeSystemId: null, name: 'Test 1:1 encapsulant', ratioA: 1, ratioB: 1, potLifeMin: 240, cure: '1 h at 80 °C, 2 h at 150 °C', densityGPerCm3: 1.1 },
+    silicone: {
+      siliconeSystemId: null,
+      name: 'Test 1:1 encapsulant',
+      ratioA: 1,
+      ratioB: 1,
+      potLifeMin: 240,
+      cure: '1 h at 80 °C, 2 h at 150 °C',
+      densityGPerCm3: 1.1
+    },
     target: { kind: 'cctDuv', cct: 3000, duv: 0 },
     tolerance: { kind: 'sdcm', steps: 3 },
     floors: { raMin: 90, r9Min: 50 },
@@ -54,12 +68,16 @@ export async function warmWhite(overrides: Partial<RevisionContent> = {}): Promi
 
 /** A formulation code no earlier run used. */
 export function uniqueCode(prefix = 'T'): string {
-  return `${prefix}-${Date.now().toString(36).toUpperCase()}${Math.floor(Math.random() * 1296).toString(36).toUpperCase()}`;
+  return `${prefix}-${Date.now().toString(36).toUpperCase()}${Math.floor(Math.random() * 1296)
+    .toString(36)
+    .toUpperCase()}`;
 }
 
 export const recipients = (mails: CaughtMail[]) => mails.flatMap((m) => m.to.map((t) => t.address)).sort();
 
 /** Audit rows of one revision, oldest first. */
 export async function auditOf(entityType: string, entityId: number) {
-  return db()('audit_events').where({ entity_type: entityType, entity_id: String(entityId) }).orderBy('id');
+  return db()('audit_events')
+    .where({ entity_type: entityType, entity_id: String(entityId) })
+    .orderBy('id');
 }

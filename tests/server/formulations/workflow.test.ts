@@ -58,7 +58,13 @@ describe('formulation revisions: life cycle through the services', () => {
     const approved = await sign(c.ines, d.revisionId, 'approved', sig);
     expect(approved).toMatchObject({ state: 'approved', decidedBy: c.ines.id, supersedesRevisionId: null });
     const [signature] = await listSignatures(d.revisionId);
-    expect(signature).toMatchObject({ signerId: c.ines.id, signerName: c.ines.name, meaning: 'approved', comment: sig.comment, contentSha256: approved.contentSha256 });
+    expect(signature).toMatchObject({
+      signerId: c.ines.id,
+      signerName: c.ines.name,
+      meaning: 'approved',
+      comment: sig.comment,
+      contentSha256: approved.contentSha256
+    });
     expect(Math.abs(signature.signedAt.getTime() - Date.now())).toBeLessThan(60_000);
     expect(recipients(await caughtMail(`Approved: ${d.code} rev 1`))).toEqual([c.rhea.email]);
 
@@ -97,7 +103,9 @@ describe('formulation revisions: life cycle through the services', () => {
   it('refuses self-approval, even by an administrator who wrote the draft', async () => {
     const d = await submitted(c.admin);
     await expect(sign(c.admin, d.revisionId, 'approved', { password: DEMO_PASSWORD, comment: '' })).rejects.toBeInstanceOf(PermissionError);
-    await expect(returnRevision(c.admin, d.revisionId, { password: DEMO_PASSWORD, reason: 'own work' })).rejects.toBeInstanceOf(PermissionError);
+    await expect(returnRevision(c.admin, d.revisionId, { password: DEMO_PASSWORD, reason: 'own work' })).rejects.toBeInstanceOf(
+      PermissionError
+    );
     expect((await rowOf(d.revisionId)).state).toBe('submitted');
     expect(await listSignatures(d.revisionId)).toEqual([]);
   });
@@ -105,10 +113,15 @@ describe('formulation revisions: life cycle through the services', () => {
   it('refuses a wrong password: nothing is signed, the state stays, the refusal is audited', async () => {
     const d = await submitted(c.rhea);
     const before = await rowOf(d.revisionId);
-    await expect(sign(c.ines, d.revisionId, 'approved', { password: 'not-my-password', comment: '' })).rejects.toBeInstanceOf(SignatureError);
+    await expect(sign(c.ines, d.revisionId, 'approved', { password: 'not-my-password', comment: '' })).rejects.toBeInstanceOf(
+      SignatureError
+    );
     expect(await rowOf(d.revisionId)).toEqual(before);
     expect(await listSignatures(d.revisionId)).toEqual([]);
-    expect((await auditOf('formulation_revision', d.revisionId)).at(-1)).toMatchObject({ action: 'e-signature-refused', actor_id: c.ines.id });
+    expect((await auditOf('formulation_revision', d.revisionId)).at(-1)).toMatchObject({
+      action: 'e-signature-refused',
+      actor_id: c.ines.id
+    });
   });
 
   it('refuses a stale draft edit with the current version and saves nothing', async () => {
@@ -135,7 +148,9 @@ describe('formulation revisions: life cycle through the services', () => {
     const count = async () => Number((await db()('formulations').count({ n: '*' }))[0].n);
     const before = await count();
     const bad = await warmWhite({ pumpLeakFraction: 0.2 });
-    await expect(createFormulationWithDraft(c.rhea, { name: 'bad', content: bad })).rejects.toThrow(/add up to 1 \(they add up to 1\.1300\)/);
+    await expect(createFormulationWithDraft(c.rhea, { name: 'bad', content: bad })).rejects.toThrow(
+      /add up to 1 \(they add up to 1\.1300\)/
+    );
     const good = await warmWhite();
     const wrongPump = { ...good, pump: { ...good.pump, materialId: good.phosphors[0].materialId } };
     await expect(createFormulationWithDraft(c.rhea, { name: 'bad', content: wrongPump })).rejects.toBeInstanceOf(ValidationError);
@@ -155,10 +170,24 @@ describe('formulation revisions: life cycle through the services', () => {
   it('creates a correction draft from a batch, based on the revision the batch used', async () => {
     const d = await submitted(c.rhea);
     await sign(c.ines, d.revisionId, 'approved', sig);
-    const corr = await createCorrectionDraft(c.ines, d.revisionId, await warmWhite({ notes: 'trim after batch' }), 4242, async () => undefined);
+    const corr = await createCorrectionDraft(
+      c.ines,
+      d.revisionId,
+      await warmWhite({ notes: 'trim after batch' }),
+      4242,
+      async () => undefined
+    );
     const rev = (await getRevision(corr.revisionId))!;
-    expect(rev).toMatchObject({ revisionNo: 2, state: 'draft', basedOnRevisionId: d.revisionId, sourceBatchId: 4242, createdBy: c.ines.id });
-    await expect(createCorrectionDraft(c.tomas, d.revisionId, await warmWhite(), 4242, async () => undefined)).rejects.toBeInstanceOf(PermissionError);
+    expect(rev).toMatchObject({
+      revisionNo: 2,
+      state: 'draft',
+      basedOnRevisionId: d.revisionId,
+      sourceBatchId: 4242,
+      createdBy: c.ines.id
+    });
+    await expect(createCorrectionDraft(c.tomas, d.revisionId, await warmWhite(), 4242, async () => undefined)).rejects.toBeInstanceOf(
+      PermissionError
+    );
   });
 
   it('refuses approving an older revision once a newer one is approved', async () => {

@@ -16,7 +16,13 @@ describe('actionFailure', () => {
   it('turns a domain error into its status, message, issues and conflict flag', () => {
     const stale = actionFailure(conflict('Someone changed this revision.'), { action: 'save', values: { name: 'W30' } });
     expect(stale.status).toBe(409);
-    expect(stale.data).toEqual({ action: 'save', values: { name: 'W30' }, error: 'Someone changed this revision.', issues: [], conflict: true });
+    expect(stale.data).toEqual({
+      action: 'save',
+      values: { name: 'W30' },
+      error: 'Someone changed this revision.',
+      issues: [],
+      conflict: true
+    });
     const bad = actionFailure(invalid('Fix the marked fields.', [{ path: 'pump', message: 'choose a pump' }]), { values: {} });
     expect(bad.status).toBe(400);
     expect(bad.data).toMatchObject({ issues: [{ path: 'pump', message: 'choose a pump' }], conflict: false });
@@ -46,6 +52,9 @@ describe('tryAction', () => {
 
 describe('withoutSecrets', () => {
   it('keeps everything that is not a secret', () => {
-    expect(withoutSecrets({ name: 'a', newPassword: 'b', clientSecret: 'c', nested: { passwordConfirm: 'd', days: '3' } })).toEqual({ name: 'a', nested: { days: '3' } });
+    expect(withoutSecrets({ name: 'a', newPassword: 'b', clientSecret: 'c', nested: { passwordConfirm: 'd', days: '3' } })).toEqual({
+      name: 'a',
+      nested: { days: '3' }
+    });
   });
 });

@@ -36,9 +36,15 @@ describe('apiHandler', () => {
     expect(withIssues).toMatchObject({ status: 400, body: { error: 'Fix the fields.', issues: [{ path: 'name', message: 'required' }] } });
   });
 
-  it('answers the features\' own refusals without knowing their classes', async () => {
-    expect(await answer(new SpectrumInputError('values must be finite'))).toMatchObject({ status: 422, body: { error: 'Spectrum rejected: values must be finite' } });
-    expect(await answer(new BlendInputError('ratios must sum to 1'))).toMatchObject({ status: 422, body: { error: 'Blend rejected: ratios must sum to 1' } });
+  it("answers the features' own refusals without knowing their classes", async () => {
+    expect(await answer(new SpectrumInputError('values must be finite'))).toMatchObject({
+      status: 422,
+      body: { error: 'Spectrum rejected: values must be finite' }
+    });
+    expect(await answer(new BlendInputError('ratios must sum to 1'))).toMatchObject({
+      status: 422,
+      body: { error: 'Blend rejected: ratios must sum to 1' }
+    });
     expect((await answer(new ConflictError('stale', { version: 2, state: 'draft' }))).status).toBe(409);
     expect((await answer(new PermissionError('not yours'))).status).toBe(403);
     expect((await answer(new AccountError('taken'))).status).toBe(409);
@@ -53,8 +59,13 @@ describe('apiHandler', () => {
   });
 
   it('answers SvelteKit errors (sign-in, role) with their status in the same body shape', async () => {
-    expect(await answer(captured(() => error(401, 'Sign-in required.')))).toMatchObject({ status: 401, body: { error: 'Sign-in required.' } });
-    const forbidden = await answer(captured(() => error(403, { message: 'Forbidden', reason: 'This needs one of the roles: quality, admin.' })));
+    expect(await answer(captured(() => error(401, 'Sign-in required.')))).toMatchObject({
+      status: 401,
+      body: { error: 'Sign-in required.' }
+    });
+    const forbidden = await answer(
+      captured(() => error(403, { message: 'Forbidden', reason: 'This needs one of the roles: quality, admin.' }))
+    );
     expect(forbidden).toMatchObject({ status: 403, body: { error: 'Forbidden: This needs one of the roles: quality, admin.' } });
     expect(Object.keys(forbidden.body)).toEqual(['error']);
   });

@@ -38,10 +38,12 @@ describe('parseId', () => {
   });
 
   it('never returns NaN, zero or a negative number for any text', () => {
-    fc.assert(fc.property(fc.string(), (s) => {
-      const id = parseId(s);
-      return id === null || (Number.isSafeInteger(id) && id > 0);
-    }));
+    fc.assert(
+      fc.property(fc.string(), (s) => {
+        const id = parseId(s);
+        return id === null || (Number.isSafeInteger(id) && id > 0);
+      })
+    );
   });
 });
 

@@ -4,7 +4,19 @@
  * error body `{ error, issues? }`.
  */
 import { describe, expect, it } from 'vitest';
-import { DomainError, ERROR_KINDS, conflict, forbidden, invalid, lineIssue, notFound, tooLarge, unavailable, unprocessable, unsupportedType } from '../../../src/lib/errors/domain-error';
+import {
+  DomainError,
+  ERROR_KINDS,
+  conflict,
+  forbidden,
+  invalid,
+  lineIssue,
+  notFound,
+  tooLarge,
+  unavailable,
+  unprocessable,
+  unsupportedType
+} from '../../../src/lib/errors/domain-error';
 import { errorBody, refusalOf, statusOf } from '../../../src/lib/server/http/status';
 
 const cases = [
@@ -13,8 +25,18 @@ const cases = [
   { name: 'no such record', error: notFound('gone'), expected: 404, source: 'RFC 9110 §15.5.5 404 Not Found' },
   { name: 'stale version or locked state', error: conflict('moved on'), expected: 409, source: 'RFC 9110 §15.5.10 409 Conflict' },
   { name: 'body or file too large', error: tooLarge('big'), expected: 413, source: 'RFC 9110 §15.5.14 413 Content Too Large' },
-  { name: 'media type not accepted', error: unsupportedType('pdf only'), expected: 415, source: 'RFC 9110 §15.5.16 415 Unsupported Media Type' },
-  { name: 'well-formed but unusable', error: unprocessable('cannot'), expected: 422, source: 'RFC 9110 §15.5.21 422 Unprocessable Content' },
+  {
+    name: 'media type not accepted',
+    error: unsupportedType('pdf only'),
+    expected: 415,
+    source: 'RFC 9110 §15.5.16 415 Unsupported Media Type'
+  },
+  {
+    name: 'well-formed but unusable',
+    error: unprocessable('cannot'),
+    expected: 422,
+    source: 'RFC 9110 §15.5.21 422 Unprocessable Content'
+  },
   { name: 'a service is down', error: unavailable('later'), expected: 503, source: 'RFC 9110 §15.6.4 503 Service Unavailable' }
 ];
 
@@ -39,9 +61,14 @@ describe('the error body { error, issues? }', () => {
     const err = unprocessable('bad.csv was not saved.', [lineIssue(3, 'Line 3: not a number'), lineIssue(null, 'too few points')]);
     expect(refusalOf(err).body).toEqual({
       error: 'bad.csv was not saved.',
-      issues: [{ path: 'line 3', line: 3, message: 'Line 3: not a number' }, { path: '(file)', line: null, message: 'too few points' }]
+      issues: [
+        { path: 'line 3', line: 3, message: 'Line 3: not a number' },
+        { path: '(file)', line: null, message: 'too few points' }
+      ]
     });
-    expect(refusalOf(invalid('Fix the form.', [{ path: 'name', message: 'required' }])).body.issues).toEqual([{ path: 'name', message: 'required' }]);
+    expect(refusalOf(invalid('Fix the form.', [{ path: 'name', message: 'required' }])).body.issues).toEqual([
+      { path: 'name', message: 'required' }
+    ]);
   });
 
   it('puts a subclass title before the message', () => {

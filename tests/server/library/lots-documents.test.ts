@@ -25,19 +25,38 @@ describe('lots and documents of a material', () => {
   });
 
   it('adds a lot with its certificate of analysis, stored and downloadable', async () => {
-    const lotId = await lots.add(rhea, id, { lotNumber: 'LLM-7731', supplier: null, receivedOn: '2026-03-02', expiresOn: '2028-03-02', notes: null }, { name: 'CoA LLM-7731.pdf', body: pdf });
+    const lotId = await lots.add(
+      rhea,
+      id,
+      { lotNumber: 'LLM-7731', supplier: null, receivedOn: '2026-03-02', expiresOn: '2028-03-02', notes: null },
+      { name: 'CoA LLM-7731.pdf', body: pdf }
+    );
     const [lot] = await lots.list(id);
-    expect(lot).toMatchObject({ id: lotId, lotNumber: 'LLM-7731', supplier: 'Larkspur Luminescent Materials', receivedOn: '2026-03-02', certificateName: 'CoA LLM-7731.pdf' });
+    expect(lot).toMatchObject({
+      id: lotId,
+      lotNumber: 'LLM-7731',
+      supplier: 'Larkspur Luminescent Materials',
+      receivedOn: '2026-03-02',
+      certificateName: 'CoA LLM-7731.pdf'
+    });
     expect((await getFile(lot.certificateFileId!))?.body.equals(pdf)).toBe(true);
     expect(await attachments.fileOfMaterial(id, lot.certificateFileId!)).not.toBeNull();
     expect(await attachments.fileOfMaterial(id + 100000, lot.certificateFileId!)).toBeNull();
   });
 
   it('refuses a duplicate lot number and a certificate that is not a PDF, saving nothing', async () => {
-    await expect(lots.add(rhea, id, { lotNumber: 'LLM-7731', supplier: null, receivedOn: null, expiresOn: null, notes: null })).rejects.toMatchObject({ status: 409 });
+    await expect(
+      lots.add(rhea, id, { lotNumber: 'LLM-7731', supplier: null, receivedOn: null, expiresOn: null, notes: null })
+    ).rejects.toMatchObject({ status: 409 });
     const files = await db()('stored_files').count({ n: '*' }).first();
-    await expect(lots.add(rhea, id, { lotNumber: 'LLM-7732', supplier: null, receivedOn: null, expiresOn: null, notes: null }, { name: 'coa.pdf', body: Buffer.from('not a pdf') }))
-      .rejects.toMatchObject({ status: 415, message: expect.stringMatching(/not a PDF/) });
+    await expect(
+      lots.add(
+        rhea,
+        id,
+        { lotNumber: 'LLM-7732', supplier: null, receivedOn: null, expiresOn: null, notes: null },
+        { name: 'coa.pdf', body: Buffer.from('not a pdf') }
+      )
+    ).rejects.toMatchObject({ status: 415, message: expect.stringMatching(/not a PDF/) });
     expect(await db()('material_lots').where({ material_id: id, lot_number: 'LLM-7732' }).first()).toBeUndefined();
     expect((await db()('stored_files').count({ n: '*' }).first())?.n).toBe(files?.n);
   });

@@ -11,14 +11,28 @@ import * as editing from '../../../src/lib/server/library/editing';
 import { uploadSpectrum } from '../../../src/lib/server/library/spectrum-upload';
 import { s3 } from '../../../src/lib/server/storage/client';
 import { demoUser, gaussianCsv, phosphorFields, removeTestMaterials } from './support';
-import { INJECTED, dropLeftoverFaults, expectObjectsGone, failureWithPuts, keysContaining, snapshot, withFailingWrite, type Fault } from '../../support/faults';
+import {
+  INJECTED,
+  dropLeftoverFaults,
+  expectObjectsGone,
+  failureWithPuts,
+  keysContaining,
+  snapshot,
+  withFailingWrite,
+  type Fault
+} from '../../support/faults';
 import type { User } from '../../../src/lib/server/accounts/users';
 
 const TABLES = ['materials', 'material_spectra', 'stored_files', 'audit_events'] as const;
 const FAULTS: Fault[] = [
   { label: 'its stored_files row', table: 'stored_files', event: 'INSERT' },
   { label: 'its material_spectra row', table: 'material_spectra', event: 'INSERT' },
-  { label: "the material's pointer, peak and version", table: 'materials', event: 'UPDATE', when: 'NOT (NEW.emission_spectrum_id <=> OLD.emission_spectrum_id)' },
+  {
+    label: "the material's pointer, peak and version",
+    table: 'materials',
+    event: 'UPDATE',
+    when: 'NOT (NEW.emission_spectrum_id <=> OLD.emission_spectrum_id)'
+  },
   { label: 'its audit event', table: 'audit_events', event: 'INSERT', when: "NEW.action = 'emission-spectrum-upload'" }
 ];
 
@@ -43,7 +57,10 @@ describe('spectrum upload: a failure after the first write leaves no rows and no
     const name = `rollback-${run}-${fault.table}.csv`;
     const before = await snapshot(TABLES);
     const { error, keys } = await withFailingWrite(fault, () =>
-      failureWithPuts(() => uploadSpectrum(rhea, id, 'emission', { name, contentType: 'text/csv', body: Buffer.from(gaussianCsv(560, 45)) }, 1)));
+      failureWithPuts(() =>
+        uploadSpectrum(rhea, id, 'emission', { name, contentType: 'text/csv', body: Buffer.from(gaussianCsv(560, 45)) }, 1)
+      )
+    );
     expect(error.message).toContain(INJECTED);
     // The object really went to storage before the failing write (one put), so clean-up is what is tested.
     expect(keys).toHaveLength(1);
@@ -51,7 +68,9 @@ describe('spectrum upload: a failure after the first write leaves no rows and no
     expect(await db()('stored_files').where({ original_name: name }).count({ n: '*' }).first()).toEqual({ n: 0 });
     const waited = await expectObjectsGone(keys);
     expect(await keysContaining('spectrum-source/', name)).toEqual([]);
-    console.log(`spectrum upload, failure at ${fault.table} ${fault.event.toLowerCase()}: tables unchanged, object gone ${waited} ms after the error`);
+    console.log(
+      `spectrum upload, failure at ${fault.table} ${fault.event.toLowerCase()}: tables unchanged, object gone ${waited} ms after the error`
+    );
   });
 
   it('object storage refusing the file: nothing saved', async () => {
@@ -63,7 +82,9 @@ describe('spectrum upload: a failure after the first write leaves no rows and no
       return (send as (...a: unknown[]) => unknown)(command, ...rest);
     }) as typeof send);
     try {
-      await expect(uploadSpectrum(rhea, id, 'emission', { name, contentType: 'text/csv', body: Buffer.from(gaussianCsv(560, 45)) }, 1)).rejects.toThrow('object storage unavailable (test)');
+      await expect(
+        uploadSpectrum(rhea, id, 'emission', { name, contentType: 'text/csv', body: Buffer.from(gaussianCsv(560, 45)) }, 1)
+      ).rejects.toThrow('object storage unavailable (test)');
     } finally {
       spy.mockRestore();
     }
@@ -71,7 +92,13 @@ describe('spectrum upload: a failure after the first write leaves no rows and no
   });
 
   it('after the failures the same upload with the same version goes through', async () => {
-    const r = await uploadSpectrum(rhea, id, 'emission', { name: `rollback-${run}-ok.csv`, contentType: 'text/csv', body: Buffer.from(gaussianCsv(560, 45)) }, 1);
+    const r = await uploadSpectrum(
+      rhea,
+      id,
+      'emission',
+      { name: `rollback-${run}-ok.csv`, contentType: 'text/csv', body: Buffer.from(gaussianCsv(560, 45)) },
+      1
+    );
     expect(r.version).toBe(2);
     expect(await db()('material_spectra').where({ material_id: id }).count({ n: '*' }).first()).toEqual({ n: 1 });
     expect(await keysContaining('spectrum-source/', `rollback-${run}-ok.csv`)).toHaveLength(1);

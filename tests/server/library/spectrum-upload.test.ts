@@ -38,7 +38,9 @@ describe('spectrum upload: a valid file is stored, a bad file saves nothing', ()
     const stored = await getFile(spectrum.source_file_id!);
     expect(stored?.body.toString('utf8')).toBe(text);
     expect(stored?.row).toMatchObject({ purpose: 'spectrum-source', entityType: 'material', entityId: String(id) });
-    const ev = (await db()('audit_events').where({ entity_type: 'material', entity_id: String(id), action: 'emission-spectrum-upload' }).first())!;
+    const ev = (await db()('audit_events')
+      .where({ entity_type: 'material', entity_id: String(id), action: 'emission-spectrum-upload' })
+      .first())!;
     expect(JSON.parse(ev.after_json!)).toMatchObject({ file: 'band.csv', points: 81 });
   });
 
@@ -77,7 +79,10 @@ describe('spectrum upload: a valid file is stored, a bad file saves nothing', ()
   it('refuses a file above 2 MB and saves nothing', async () => {
     const before = await counts(id);
     const big = `${gaussianCsv()}\n${'# padding\n'.repeat(220_000)}`;
-    await expect(uploadSpectrum(rhea, id, 'emission', file(big), before.version)).rejects.toMatchObject({ status: 413, message: expect.stringMatching(/limit is 2\.0 MB/) });
+    await expect(uploadSpectrum(rhea, id, 'emission', file(big), before.version)).rejects.toMatchObject({
+      status: 413,
+      message: expect.stringMatching(/limit is 2\.0 MB/)
+    });
     expect(await counts(id)).toEqual(before);
   });
 
@@ -85,7 +90,10 @@ describe('spectrum upload: a valid file is stored, a bad file saves nothing', ()
     const before = await counts(id);
     await expect(uploadSpectrum(rhea, id, 'emission', file(gaussianCsv(560)), before.version - 1)).rejects.toMatchObject({ status: 409 });
     expect(await counts(id)).toEqual(before);
-    const orphans = await db()('stored_files').where({ entity_type: 'material', entity_id: String(id) }).count({ n: '*' }).first();
+    const orphans = await db()('stored_files')
+      .where({ entity_type: 'material', entity_id: String(id) })
+      .count({ n: '*' })
+      .first();
     expect(Number(orphans?.n)).toBe(before.files);
   });
 });

@@ -50,7 +50,16 @@ export async function counts(materialId: number) {
 }
 
 export const phosphorFields = (code: string) => ({
-  code, name: `${code} test garnet`, family: 'garnet, Ce-activated', supplier: 'Larkspur Luminescent Materials',
-  densityGCm3: 4.6, iqe: 0.9, absorptionPerWtPctMm: 0.3, absorptionReferenceNm: 450, costPerKg: 150, d50Um: 15,
-  notes: null, safetyNote: null
+  code,
+  name: `${code} test garnet`,
+  family: 'garnet, Ce-activated',
+  supplier: 'Larkspur Luminescent Materials',
+  densityGCm3: 4.6,
+  iqe: 0.9,
+  absorptionPerWtPctMm: 0.3,
+  absorptionReferenceNm: 450,
+  costPerKg: 150,
+  d50Um: 15,
+  notes: null,
+  safetyNote: null
 });

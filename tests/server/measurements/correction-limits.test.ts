@@ -30,7 +30,10 @@ afterAll(closeDb);
 /** Synthetic parts of the revision with the pump leak scaled (a gross blue offset: far too little phosphor on the parts). */
 async function bluePartsCsv(revisionId: number, pumpScale: number, prefix: string): Promise<string> {
   const rev = (await getRevision(revisionId))!;
-  const components = await loadBlendComponents(rev.content.pump.materialId, rev.content.phosphors.map((p) => p.materialId));
+  const components = await loadBlendComponents(
+    rev.content.pump.materialId,
+    rev.content.phosphors.map((p) => p.materialId)
+  );
   const fractions = [rev.content.pumpLeakFraction * pumpScale, ...rev.content.phosphors.map((p) => p.opticalFraction)];
   return syntheticPartsCsv(components, fractions, { parts: 6, prefix: `${prefix}-`, scatter: 0.005 });
 }
@@ -48,10 +51,15 @@ describe('a gross offset that would run a phosphor to 0 wt % is refused', () => 
   it('the service answers 422 with the reason and leaves the database unchanged', async () => {
     expect((await batchResults(b.batchId))!.summary.meanOffset!.steps).toBeGreaterThan(20);
     const before = await snapshot(TABLES);
-    const err = await makeCorrectionDraft(quality, b.batchId, 0.8, 'http://local').then(() => null, (e: unknown) => e);
+    const err = await makeCorrectionDraft(quality, b.batchId, 0.8, 'http://local').then(
+      () => null,
+      (e: unknown) => e
+    );
     expect(err).toBeInstanceOf(DomainError);
     expect((err as DomainError).status).toBe(422);
-    expect((err as DomainError).message).toMatch(/^No correction draft was made: the target cannot be reached without taking .+ to zero or below/);
+    expect((err as DomainError).message).toMatch(
+      /^No correction draft was made: the target cannot be reached without taking .+ to zero or below/
+    );
     expect(await snapshot(TABLES)).toEqual(before);
     expect(await db()('batch_corrections').where({ batch_id: b.batchId }).count({ n: '*' }).first()).toEqual({ n: 0 });
     expect(await caughtMail(`from batch ${b.batchNumber}`, 1, 1500)).toEqual([]);
@@ -59,7 +67,11 @@ describe('a gross offset that would run a phosphor to 0 wt % is refused', () => 
 
   it('the API answers 422 with the same reason', async () => {
     const before = await snapshot(TABLES);
-    const event = { ...jsonEvent({ stepFraction: 0.8 }, ['quality']), params: { batchId: String(b.batchId) }, url: new URL('http://local/') };
+    const event = {
+      ...jsonEvent({ stepFraction: 0.8 }, ['quality']),
+      params: { batchId: String(b.batchId) },
+      url: new URL('http://local/')
+    };
     event.locals.user = { ...event.locals.user!, id: quality.id, email: quality.email, name: quality.name };
     const { status, body } = await call(correctionPost, event);
     expect(status).toBe(422);
@@ -85,8 +97,10 @@ describe('a capped trim records the cap and the colour point to expect', () => {
     const share = Math.round(out.cap.appliedShare * 100);
     const draft = (await getRevision(out.revisionId))!;
     const p = out.predicted;
-    expect(draft.content.notes).toContain(`Trim capped at ${share} % of the full correction (by ${100 - share} %: 80 % was asked for, ` +
-      'and no phosphor may change by more than ×2 in one trim)');
+    expect(draft.content.notes).toContain(
+      `Trim capped at ${share} % of the full correction (by ${100 - share} %: 80 % was asked for, ` +
+        'and no phosphor may change by more than ×2 in one trim)'
+    );
     expect(draft.content.notes).toContain(`expect x ${p.x.toFixed(4)}, y ${p.y.toFixed(4)} (${Math.round(p.cct)} K, Duv `);
     expect(draft.content.notes).toContain(`${out.predictedSteps.toFixed(1)} steps from target.`);
     const row = await db()('batch_corrections').where({ batch_id: b.batchId }).first();
@@ -95,7 +109,10 @@ describe('a capped trim records the cap and the colour point to expect', () => {
     // The colour to expect is the model of the recipe handed over plus the bias measured on this batch
     // (the correction's own definition), checked here from the draft's wt % as saved.
     const base = (await getRevision(b.revisionId))!;
-    const components = await loadBlendComponents(base.content.pump.materialId, base.content.phosphors.map((q) => q.materialId));
+    const components = await loadBlendComponents(
+      base.content.pump.materialId,
+      base.content.phosphors.map((q) => q.materialId)
+    );
     const { basis: _basis, ...loading } = base.content.loading!;
     const at = (wt: number[]) => mix(components, { kind: 'loading', concentrationsWtPct: wt, loading }).evaluation;
     const was = at(base.content.phosphors.map((q) => q.wtPct!));

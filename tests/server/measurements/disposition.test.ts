@@ -17,7 +17,14 @@ let quality: User;
 let admin: User;
 let tech: User;
 let b: { batchId: number; batchNumber: string; revisionId: number };
-const sign = (over: object = {}) => ({ decision: 'release' as const, meaning: 'Release approval: the batch meets its revision', comment: 'All parts inside the 3000 K bin.', password: DEMO_PASSWORD, version: 0, ...over });
+const sign = (over: object = {}) => ({
+  decision: 'release' as const,
+  meaning: 'Release approval: the batch meets its revision',
+  comment: 'All parts inside the 3000 K bin.',
+  password: DEMO_PASSWORD,
+  version: 0,
+  ...over
+});
 const version = async (id: number) => (await getBatch(id))!.batch.version;
 
 beforeAll(async () => {
@@ -28,7 +35,12 @@ beforeAll(async () => {
 afterAll(closeDb);
 
 async function refusal(p: Promise<unknown>): Promise<DomainError> {
-  try { await p; } catch (err) { if (err instanceof DomainError) return err; throw err; }
+  try {
+    await p;
+  } catch (err) {
+    if (err instanceof DomainError) return err;
+    throw err;
+  }
   throw new Error('expected a refusal');
 }
 
@@ -45,7 +57,9 @@ describe('releasing a batch with an e-signature', () => {
     expect(e.message).toMatch(/password is not correct, so nothing was signed/);
     expect((await getBatch(b.batchId))!.batch.state).toBe('complete');
     expect(await db()('batch_dispositions').where({ batch_id: b.batchId })).toHaveLength(0);
-    expect(await db()('audit_events').where({ entity_type: 'batch', entity_id: String(b.batchId), action: 'e-signature-refused' })).toHaveLength(1);
+    expect(
+      await db()('audit_events').where({ entity_type: 'batch', entity_id: String(b.batchId), action: 'e-signature-refused' })
+    ).toHaveLength(1);
   });
 
   it('refuses someone who worked on the batch', async () => {
@@ -96,9 +110,18 @@ describe('releasing a batch with an e-signature', () => {
   });
 
   it('a decided batch cannot be signed again, and its signature row cannot be changed', async () => {
-    const e = await refusal(disposeBatch(quality, b.batchId, sign({ decision: 'reject', meaning: 'Rejection for rework', version: await version(b.batchId) }), 'http://local'));
+    const e = await refusal(
+      disposeBatch(
+        quality,
+        b.batchId,
+        sign({ decision: 'reject', meaning: 'Rejection for rework', version: await version(b.batchId) }),
+        'http://local'
+      )
+    );
     expect(e.status).toBe(409);
-    await expect(db()('batch_dispositions').where({ batch_id: b.batchId }).update({ comment: 'edited' })).rejects.toThrow(/cannot be changed/);
+    await expect(db()('batch_dispositions').where({ batch_id: b.batchId }).update({ comment: 'edited' })).rejects.toThrow(
+      /cannot be changed/
+    );
     await expect(db()('batch_dispositions').where({ batch_id: b.batchId }).delete()).rejects.toThrow(/append-only/);
   });
 });
@@ -109,7 +132,12 @@ describe('rejecting a batch', () => {
     const noParts = await refusal(disposeBatch(quality, r.batchId, sign({ version: await version(r.batchId) }), 'http://local'));
     expect(noParts.status).toBe(409);
     expect(noParts.message).toMatch(/no measured parts/);
-    const out = await disposeBatch(quality, r.batchId, sign({ decision: 'reject', meaning: 'Rejection for rework', comment: 'Slurry contaminated.', version: await version(r.batchId) }), 'http://local');
+    const out = await disposeBatch(
+      quality,
+      r.batchId,
+      sign({ decision: 'reject', meaning: 'Rejection for rework', comment: 'Slurry contaminated.', version: await version(r.batchId) }),
+      'http://local'
+    );
     expect(out.decision).toBe('rejected');
     expect((await getBatch(r.batchId))!.batch.state).toBe('rejected');
   });

@@ -18,15 +18,20 @@ import { demoUser } from '../batches/support';
 export { DEMO_PASSWORD, demoUser } from '../batches/support';
 
 export async function approvedRevisionId(code = 'KH-W30-90'): Promise<number> {
-  const row = await db()('formulation_revisions as r').join('formulations as f', 'f.id', 'r.formulation_id')
-    .where({ 'f.code': code, 'r.state': 'approved' }).first('r.id');
+  const row = await db()('formulation_revisions as r')
+    .join('formulations as f', 'f.id', 'r.formulation_id')
+    .where({ 'f.code': code, 'r.state': 'approved' })
+    .first('r.id');
   if (!row) throw new Error(`no approved revision of ${code}: run the tests in a seeded sandbox`);
   return row.id;
 }
 
 async function currentLot(materialId: number): Promise<string> {
-  const lot = await db()('material_lots').where({ material_id: materialId })
-    .where((w) => w.whereNull('expires_on').orWhere('expires_on', '>', new Date())).orderBy('id', 'desc').first('lot_number');
+  const lot = await db()('material_lots')
+    .where({ material_id: materialId })
+    .where((w) => w.whereNull('expires_on').orWhere('expires_on', '>', new Date()))
+    .orderBy('id', 'desc')
+    .first('lot_number');
   if (!lot) throw new Error(`material ${materialId} has no current lot`);
   return lot.lot_number;
 }
@@ -35,10 +40,17 @@ async function currentLot(materialId: number): Promise<string> {
 export async function completedBatch(code = 'KH-W30-90'): Promise<{ batchId: number; batchNumber: string; revisionId: number }> {
   const tech = await demoUser('technician');
   const revisionId = await approvedRevisionId(code);
-  const { id, batchNumber } = await createBatch(tech, createBatchSchema.parse({
-    revisionId, sizing: { kind: 'mass', batchMassG: 10 }, loading: { mode: 'perPhosphor', basis: 'wtPctOfSlurry' },
-    additives: [], balance: { resolutionG: 0.001, minWeightG: 0.05, ref: 'BAL-Q1' }, plantLimitMin: 120
-  }));
+  const { id, batchNumber } = await createBatch(
+    tech,
+    createBatchSchema.parse({
+      revisionId,
+      sizing: { kind: 'mass', batchMassG: 10 },
+      loading: { mode: 'perPhosphor', basis: 'wtPctOfSlurry' },
+      additives: [],
+      balance: { resolutionG: 0.001, minWeightG: 0.05, ref: 'BAL-Q1' },
+      plantLimitMin: 120
+    })
+  );
   for (const line of (await getBatch(id))!.lines) {
     const lotNumber = line.materialId ? await currentLot(line.materialId) : 'BS-LX11-2611';
     await recordLine(tech, id, line.seq, { actualG: line.targetG, lotNumber, version: line.version });

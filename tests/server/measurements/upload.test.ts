@@ -20,14 +20,21 @@ beforeAll(async () => {
 afterAll(closeDb);
 
 async function refusal(p: Promise<unknown>): Promise<DomainError> {
-  try { await p; } catch (err) { if (err instanceof DomainError) return err; throw err; }
+  try {
+    await p;
+  } catch (err) {
+    if (err instanceof DomainError) return err;
+    throw err;
+  }
   throw new Error('expected a refusal');
 }
 
 describe('uploading the measured spectra of a batch', () => {
   it('measures every part of a multi-column file, keeps the raw file and reports progress', async () => {
     const phases: string[] = [];
-    const res = await uploadMeasurements(quality, batch.batchId, csvFile(csv), (p) => phases.push(p.phase === 'measuring' ? `m${p.done}` : p.phase));
+    const res = await uploadMeasurements(quality, batch.batchId, csvFile(csv), (p) =>
+      phases.push(p.phase === 'measuring' ? `m${p.done}` : p.phase)
+    );
     expect(res.parts).toBe(12);
     expect(phases[0]).toBe('parsing');
     expect(phases).toContain('m12');
@@ -42,7 +49,11 @@ describe('uploading the measured spectra of a batch', () => {
     // Built at the revision's own ratios with ±1 % scatter: all in the 3000 K bin of the target.
     expect(view.summary.bins).toEqual([{ nominalCct: 3000, count: 12 }]);
     expect(view.prediction).not.toBeNull();
-    const audit = await db()('audit_events').where({ entity_type: 'batch', entity_id: String(batch.batchId), action: 'measurements-upload' });
+    const audit = await db()('audit_events').where({
+      entity_type: 'batch',
+      entity_id: String(batch.batchId),
+      action: 'measurements-upload'
+    });
     expect(audit).toHaveLength(1);
   });
 
@@ -61,7 +72,8 @@ describe('uploading the measured spectra of a batch', () => {
   it('refuses a part the core cannot measure, naming the part and column, and saves nothing', async () => {
     const before = await countRows('part_measurements');
     // Z-2 has power only beyond 830 nm: the parser accepts the file, the core's working range (360–830 nm) holds nothing.
-    const text = 'nm,Z-1,Z-2\n' + Array.from({ length: 53 }, (_, i) => `${380 + 10 * i},${1 + (i % 3)},${380 + 10 * i > 830 ? 1 : 0}`).join('\n');
+    const text =
+      'nm,Z-1,Z-2\n' + Array.from({ length: 53 }, (_, i) => `${380 + 10 * i},${1 + (i % 3)},${380 + 10 * i > 830 ? 1 : 0}`).join('\n');
     const e = await refusal(uploadMeasurements(quality, batch.batchId, csvFile(text, 'dark.csv')));
     expect(e.status).toBe(422);
     expect(e.issues.map((i) => i.message)).toEqual(['Part Z-2 (column 3): spectrum has no power inside 360–830 nm']);

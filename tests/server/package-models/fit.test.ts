@@ -22,18 +22,33 @@ const codeOf = (name: string) => name.split(' ')[0];
 const basis = prepareBasis({ pump: BLUE_PUMP, phosphors: PHOSPHORS.map(demoPhosphor) }).loading!;
 const truth = { absorptionPerWtPctMm: basis.absorptionPerWtPctMm.map((a) => a * 1.1), pumpEscape: 1.3, iqeScale: 0.92 };
 const builds = [
-  { c: [8, 2], L: 0.25 }, { c: [12, 3], L: 0.25 }, { c: [6, 3], L: 0.4 }, { c: [10, 1.5], L: 0.4 }
+  { c: [8, 2], L: 0.25 },
+  { c: [12, 3], L: 0.25 },
+  { c: [6, 3], L: 0.4 },
+  { c: [10, 1.5], L: 0.4 }
 ].map(({ c, L }, i) => {
   const o = packageObservables(packageSpd(basis, truth, c, L));
   return { label: `B${i + 1}`, concentrationsWtPct: c, pathLengthMm: L, x: o.xy[0], y: o.xy[1], outputWPerPumpW: o.wPerPumpW };
 });
 
 function post(body: unknown, user: User) {
-  const request = new Request('http://local/api/v1/package-models', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
+  const request = new Request('http://local/api/v1/package-models', {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify(body)
+  });
   return createModel({ request, locals: { user } as App.Locals, params: {} });
 }
 const body = (extra: Record<string, unknown> = {}) => ({
-  name: NAME, packageType: 'test cavity', pathLengthMm: 0.3, pumpId, phosphorIds, fitIqeScale: true, bootstrap: { resamples: 8, seed: 3 }, builds, ...extra
+  name: NAME,
+  packageType: 'test cavity',
+  pathLengthMm: 0.3,
+  pumpId,
+  phosphorIds,
+  fitIqeScale: true,
+  bootstrap: { resamples: 8, seed: 3 },
+  builds,
+  ...extra
 });
 const rows = async () => ({
   models: Number(((await db()('package_models').where({ name: NAME }).count({ n: '*' }).first()) as { n: number }).n),
@@ -44,7 +59,12 @@ describe('package models: create by fit through the API, versions, refusals that
   beforeAll(async () => {
     rhea = await demoUser('formulator');
     tomas = await demoUser('technician');
-    const mats: { id: number; code: string }[] = await db()('materials').whereIn('code', [BLUE_PUMP, ...PHOSPHORS.map(demoPhosphor)].map((s) => codeOf(s.name))).select('id', 'code');
+    const mats: { id: number; code: string }[] = await db()('materials')
+      .whereIn(
+        'code',
+        [BLUE_PUMP, ...PHOSPHORS.map(demoPhosphor)].map((s) => codeOf(s.name))
+      )
+      .select('id', 'code');
     pumpId = mats.find((m) => m.code === codeOf(BLUE_PUMP.name))!.id;
     phosphorIds = PHOSPHORS.map((p) => mats.find((m) => m.code === codeOf(demoPhosphor(p).name))!.id);
   });
@@ -66,9 +86,15 @@ describe('package models: create by fit through the API, versions, refusals that
     const second = await (await post(body(), rhea)).json();
     expect(second.version).toBe(m.version + 1);
     expect(await rows()).toEqual({ models: before.models + 2, audit: before.audit + 2 });
-    const got = await getModel({ request: new Request('http://local/x'), locals: { user: tomas } as App.Locals, params: { id: String(m.id) } });
+    const got = await getModel({
+      request: new Request('http://local/x'),
+      locals: { user: tomas } as App.Locals,
+      params: { id: String(m.id) }
+    });
     expect((await got.json()).id).toBe(m.id);
-    const list = await (await listModels({ request: new Request('http://local/x'), locals: { user: tomas } as App.Locals, params: {} })).json();
+    const list = await (
+      await listModels({ request: new Request('http://local/x'), locals: { user: tomas } as App.Locals, params: {} })
+    ).json();
     expect(list.items.some((i: { id: number }) => i.id === second.id)).toBe(true);
   }, 120_000);
 
@@ -80,7 +106,12 @@ describe('package models: create by fit through the API, versions, refusals that
 
   const refusals: [string, Record<string, unknown>, number, RegExp][] = [
     ['one build only', { builds: builds.slice(0, 1) }, 400, /at least two builds/],
-    ['wt % count not matching the phosphors', { builds: builds.map((b) => ({ ...b, concentrationsWtPct: [5] })) }, 400, /give 2 wt % values/],
+    [
+      'wt % count not matching the phosphors',
+      { builds: builds.map((b) => ({ ...b, concentrationsWtPct: [5] })) },
+      400,
+      /give 2 wt % values/
+    ],
     ['no colour on a build', { builds: builds.map(({ x: _x, ...b }) => b) }, 400, /measured x and y/],
     ['IQE scale without any measured output', { builds: builds.map(({ outputWPerPumpW: _o, ...b }) => b) }, 422, /needs a measured output/],
     ['a single loading for the escape', { builds: [builds[0], { ...builds[0], label: 'again' }] }, 422, /two or more loadings/],
@@ -115,11 +146,24 @@ describe('package models: create by fit through the API, versions, refusals that
 describe('builds CSV: line-named errors', () => {
   it('reads a header with phosphor codes and optional columns', () => {
     const r = parseBuildsCsv('# two builds\nlabel;YG-555;RD-625;x;y;path_mm\nA;8;2;0,4001;0,3902;0.25\nB;12;3;0.4302;0.4003;0.4');
-    expect(r).toMatchObject({ ok: true, value: { phosphorCodes: ['YG-555', 'RD-625'], builds: [{ label: 'A', x: 0.4001, pathLengthMm: 0.25 }, { label: 'B', concentrationsWtPct: [12, 3] }] } });
+    expect(r).toMatchObject({
+      ok: true,
+      value: {
+        phosphorCodes: ['YG-555', 'RD-625'],
+        builds: [
+          { label: 'A', x: 0.4001, pathLengthMm: 0.25 },
+          { label: 'B', concentrationsWtPct: [12, 3] }
+        ]
+      }
+    });
   });
   it('names the line of each problem', () => {
     const r = parseBuildsCsv('label,YG-555,x,y\nA,8,0.40\nB,abc,0.41,0.39');
     expect(r.ok).toBe(false);
-    if (!r.ok) expect(r.errors).toEqual([{ line: 2, message: 'Expected 4 values, found 3.' }, { line: 3, message: 'YG-555 wt % "abc" is not a number.' }]);
+    if (!r.ok)
+      expect(r.errors).toEqual([
+        { line: 2, message: 'Expected 4 values, found 3.' },
+        { line: 3, message: 'YG-555 wt % "abc" is not a number.' }
+      ]);
   });
 });

@@ -12,7 +12,10 @@ import { pdfInfo, pdfToText } from './pdf-text';
 const oneLine = (t: string) => t.replace(/\s+/g, ' ');
 
 describe('weigh-out ticket PDF', () => {
-  it.each([['A4', /A4/], ['LETTER', /letter/]] as const)('on %s: Plex embedded, every line with target and range, write-in columns', async (size, paper) => {
+  it.each([
+    ['A4', /A4/],
+    ['LETTER', /letter/]
+  ] as const)('on %s: Plex embedded, every line with target and range, write-in columns', async (size, paper) => {
     const pdf = await buildBatchTicket(sampleDoc(), size);
     const info = pdfInfo(pdf);
     expect(info.size).toMatch(paper);
@@ -32,7 +35,12 @@ describe('weigh-out ticket PDF', () => {
     for (const h of ['Supplier lot', 'Target g', 'Allowed range g', 'Actual g', 'Initials', 'Time']) expect(flat).toContain(h);
     // Each line's row: target, then its range (values from the fixture, worked in tests/lib/batches/weighout/compute.test.ts).
     const rows = text.split('\n');
-    for (const [code, target, range] of [['PART A', '8.227', '8.145 – 8.309'], ['GL-530', '0.700', '0.697 – 0.703'], ['RD-625', '0.250', '0.249 – 0.251'], ['PART B', '0.823', '0.815 – 0.830']]) {
+    for (const [code, target, range] of [
+      ['PART A', '8.227', '8.145 – 8.309'],
+      ['GL-530', '0.700', '0.697 – 0.703'],
+      ['RD-625', '0.250', '0.249 – 0.251'],
+      ['PART B', '0.823', '0.815 – 0.830']
+    ]) {
       const row = rows.find((r) => r.includes(code) && r.includes(target));
       expect(row, code).toBeDefined();
       expect(row).toContain(range);
@@ -68,7 +76,12 @@ describe('weigh-out ticket PDF', () => {
 describe('batch record PDF', () => {
   const done = sampleDoc({
     state: 'complete',
-    process: { mixedAt: new Date('2026-12-02T09:40:00Z'), expiresAt: new Date('2026-12-02T11:40:00Z'), completedAt: new Date('2026-12-02T09:55:00Z'), completedBy: 'Tomas Brand' }
+    process: {
+      mixedAt: new Date('2026-12-02T09:40:00Z'),
+      expiresAt: new Date('2026-12-02T11:40:00Z'),
+      completedAt: new Date('2026-12-02T09:55:00Z'),
+      completedBy: 'Tomas Brand'
+    }
   });
   done.lines = done.lines.map((l, i) => ({
     ...l,
@@ -78,7 +91,14 @@ describe('batch record PDF', () => {
       status: i === 2 ? 'above' : 'in',
       weighedBy: 'Tomas Brand',
       weighedAt: new Date(`2026-12-02T09:${30 + i}:00Z`),
-      override: i === 2 ? { by: 'Ines Halloran', at: new Date('2026-12-02T09:50:00Z'), reason: 'Within the colour window; 1.2 % high on a minor red line.' } : null
+      override:
+        i === 2
+          ? {
+              by: 'Ines Halloran',
+              at: new Date('2026-12-02T09:50:00Z'),
+              reason: 'Within the colour window; 1.2 % high on a minor red line.'
+            }
+          : null
     }
   }));
 
@@ -91,7 +111,9 @@ describe('batch record PDF', () => {
     expect(flat).toContain('TPW-RD-2410-11');
     expect(rows.find((r) => r.includes('RD-625'))).toMatch(/0\.250\s+0\.249 – 0\.251\s+0\.2530\s+ABOVE/);
     expect(flat).toContain('accepted by quality');
-    expect(flat).toMatch(/Line 3 RD-625: 0\.2530 g is above range 0\.249 – 0\.251 g \(target 0\.250 g\)\. Accepted by Ines Halloran on 2026-12-02 09:50 UTC\. Reason: Within the colour window/);
+    expect(flat).toMatch(
+      /Line 3 RD-625: 0\.2530 g is above range 0\.249 – 0\.251 g \(target 0\.250 g\)\. Accepted by Ines Halloran on 2026-12-02 09:50 UTC\. Reason: Within the colour window/
+    );
     expect(flat).toContain('2026-12-02 09:40 UTC'); // mixed
     expect(flat).toContain('2026-12-02 11:40 UTC'); // use before
     expect(flat).toMatch(/2026-12-02 09:55 UTC by Tomas Brand/);
@@ -100,10 +122,21 @@ describe('batch record PDF', () => {
   });
 
   it('adds the optional measurement summary section', async () => {
-    const flat = oneLine(pdfToText(await buildBatchRecord(done, {
-      size: 'LETTER',
-      measurementSummary: { title: 'Measured colour of finished parts', rows: [{ label: 'Parts measured', value: '24' }, { label: 'Mean CCT', value: '3012 K' }], note: 'Sphere, 25 °C.' }
-    })));
+    const flat = oneLine(
+      pdfToText(
+        await buildBatchRecord(done, {
+          size: 'LETTER',
+          measurementSummary: {
+            title: 'Measured colour of finished parts',
+            rows: [
+              { label: 'Parts measured', value: '24' },
+              { label: 'Mean CCT', value: '3012 K' }
+            ],
+            note: 'Sphere, 25 °C.'
+          }
+        })
+      )
+    );
     expect(flat).toContain('Measured colour of finished parts');
     expect(flat).toMatch(/Parts measured .*Mean CCT/);
     expect(flat).toContain('3012 K');

@@ -17,8 +17,15 @@ let keptId = 0;
 let keptKey = '';
 let missingId = 0;
 
-const exists = async (Key: string) => s3().send(new HeadObjectCommand({ Bucket: bucket(), Key })).then(() => true, () => false);
-const sweep = (olderThanMs: number, remove = false) => sweepStorage(db(), s3(), bucket(), { olderThanMs, remove, deleteObject: deleteStoredObject });
+const exists = async (Key: string) =>
+  s3()
+    .send(new HeadObjectCommand({ Bucket: bucket(), Key }))
+    .then(
+      () => true,
+      () => false
+    );
+const sweep = (olderThanMs: number, remove = false) =>
+  sweepStorage(db(), s3(), bucket(), { olderThanMs, remove, deleteObject: deleteStoredObject });
 
 beforeAll(async () => {
   await ensureBucket();
@@ -27,7 +34,14 @@ beforeAll(async () => {
   keptId = await putFile({ body: Buffer.from('380,0.2\n'), originalName: 'kept.csv', contentType: 'text/csv', purpose: 'measurement' });
   keptKey = (await db()('stored_files').where({ id: keptId }).first('storage_key'))!.storage_key;
   // A row whose object is gone (a lost file).
-  [missingId] = await db()('stored_files').insert({ storage_key: missingKey, original_name: 'lost.csv', content_type: 'text/csv', bytes: 9, sha256: '0'.repeat(64), purpose: 'measurement' });
+  [missingId] = await db()('stored_files').insert({
+    storage_key: missingKey,
+    original_name: 'lost.csv',
+    content_type: 'text/csv',
+    bytes: 9,
+    sha256: '0'.repeat(64),
+    purpose: 'measurement'
+  });
 });
 afterAll(async () => {
   await db()('stored_files').where({ id: missingId }).delete();

@@ -14,7 +14,10 @@ export const BATCHES_ROUTES: RouteTable = {
   '/api/v1/batches/preview': { sample: '/api/v1/batches/preview', methods: { POST: ALL } },
   '/api/v1/batches/[id]': { sample: '/api/v1/batches/999999', methods: { GET: ALL } },
   '/api/v1/batches/[id]/lines/[seq]': { sample: '/api/v1/batches/999999/lines/1', methods: { POST: mayWeigh.roles } },
-  '/api/v1/batches/[id]/lines/[seq]/override': { sample: '/api/v1/batches/999999/lines/1/override', methods: { POST: mayAcceptDeviation.roles } },
+  '/api/v1/batches/[id]/lines/[seq]/override': {
+    sample: '/api/v1/batches/999999/lines/1/override',
+    methods: { POST: mayAcceptDeviation.roles }
+  },
   '/api/v1/batches/[id]/mix': { sample: '/api/v1/batches/999999/mix', methods: { POST: mayWeigh.roles } },
   '/api/v1/batches/[id]/scale': { sample: '/api/v1/batches/999999/scale', methods: { POST: mayWeigh.roles } },
   '/api/v1/batches/[id]/complete': { sample: '/api/v1/batches/999999/complete', methods: { POST: mayWeigh.roles } },

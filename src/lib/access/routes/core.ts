@@ -8,7 +8,11 @@ export const CORE_ROUTES: RouteTable = {
   '/signout': { sample: '/signout', methods: { POST: 'signedIn' } },
   '/invite/[token]': { sample: '/invite/nonexistent-token', methods: { GET: 'public', POST: 'public' } },
   '/(app)/profile': { sample: '/profile', methods: { GET: 'signedIn', POST: 'signedIn' }, nav: { label: 'Profile & tokens', order: 90 } },
-  '/(app)/admin/users': { sample: '/admin/users', methods: { GET: mayAdminister.roles, POST: mayAdminister.roles }, nav: { label: 'People', order: 80 } },
+  '/(app)/admin/users': {
+    sample: '/admin/users',
+    methods: { GET: mayAdminister.roles, POST: mayAdminister.roles },
+    nav: { label: 'People', order: 80 }
+  },
   '/api/health': { sample: '/api/health', methods: { GET: 'public' } },
   '/api/v1/me': { sample: '/api/v1/me', methods: { GET: ALL } },
   '/api/v1/evaluate': { sample: '/api/v1/evaluate', methods: { POST: ALL } },

@@ -12,8 +12,14 @@ export const FORMULATIONS_ROUTES: RouteTable = {
   '/(app)/formulations/revisions': { sample: '/formulations/revisions', methods: { GET: ALL } },
   '/(app)/formulations/compare': { sample: '/formulations/compare', methods: { GET: ALL } },
   '/(app)/formulations/[id]': { sample: '/formulations/1', methods: { GET: ALL } },
-  '/(app)/formulations/[id]/revisions/[revisionId]': { sample: '/formulations/999999/revisions/999999', methods: { GET: ALL, POST: ACTORS } },
-  '/(app)/formulations/[id]/revisions/[revisionId]/attachments/[attachmentId]': { sample: '/formulations/999999/revisions/999999/attachments/999999', methods: { GET: ALL } },
+  '/(app)/formulations/[id]/revisions/[revisionId]': {
+    sample: '/formulations/999999/revisions/999999',
+    methods: { GET: ALL, POST: ACTORS }
+  },
+  '/(app)/formulations/[id]/revisions/[revisionId]/attachments/[attachmentId]': {
+    sample: '/formulations/999999/revisions/999999/attachments/999999',
+    methods: { GET: ALL }
+  },
   '/(app)/audit': { sample: '/audit', methods: { GET: mayReadAudit.roles }, nav: { label: 'Audit trail', order: 75 } },
   '/(app)/audit/export': { sample: '/audit/export', methods: { GET: mayReadAudit.roles } },
   '/api/v1/formulations': { sample: '/api/v1/formulations', methods: { GET: ALL, POST: AUTHORS } },

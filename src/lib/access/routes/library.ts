@@ -10,7 +10,10 @@ export const LIBRARY_ROUTES: RouteTable = {
   '/(app)/library/[id]/spectrum': { sample: '/library/1/spectrum', methods: { GET: mayEditLibrary.roles, POST: mayEditLibrary.roles } },
   '/(app)/library/[id]/files/[fileId]': { sample: '/library/1/files/999999', methods: { GET: ALL } },
   '/api/v1/phosphors': { sample: '/api/v1/phosphors', methods: { GET: ALL, POST: mayEditLibrary.roles } },
-  '/api/v1/phosphors/[id]': { sample: '/api/v1/phosphors/999999', methods: { GET: ALL, PUT: mayEditLibrary.roles, DELETE: mayEditLibrary.roles } },
+  '/api/v1/phosphors/[id]': {
+    sample: '/api/v1/phosphors/999999',
+    methods: { GET: ALL, PUT: mayEditLibrary.roles, DELETE: mayEditLibrary.roles }
+  },
   '/api/v1/phosphors/[id]/spectrum': { sample: '/api/v1/phosphors/999999/spectrum', methods: { POST: mayEditLibrary.roles } },
   '/api/v1/pumps': { sample: '/api/v1/pumps', methods: { GET: ALL, POST: mayEditLibrary.roles } },
   '/api/v1/pumps/[id]': { sample: '/api/v1/pumps/999999', methods: { GET: ALL, PUT: mayEditLibrary.roles, DELETE: mayEditLibrary.roles } },

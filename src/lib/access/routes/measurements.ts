@@ -12,6 +12,12 @@ export const MEASUREMENTS_ROUTES: RouteTable = {
   '/api/v1/measurements/[batchId]': { sample: `/api/v1/measurements/${B}`, methods: { GET: ALL, POST: mayJudgeBatches.roles } },
   '/api/v1/measurements/[batchId]/acceptance': { sample: `/api/v1/measurements/${B}/acceptance`, methods: { PUT: mayJudgeBatches.roles } },
   '/api/v1/measurements/[batchId]/correction': { sample: `/api/v1/measurements/${B}/correction`, methods: { POST: mayJudgeBatches.roles } },
-  '/api/v1/measurements/[batchId]/disposition': { sample: `/api/v1/measurements/${B}/disposition`, methods: { POST: mayJudgeBatches.roles } },
-  '/api/v1/measurements/[batchId]/uploads/[uploadId]/withdraw': { sample: `/api/v1/measurements/${B}/uploads/${B}/withdraw`, methods: { POST: mayJudgeBatches.roles } }
+  '/api/v1/measurements/[batchId]/disposition': {
+    sample: `/api/v1/measurements/${B}/disposition`,
+    methods: { POST: mayJudgeBatches.roles }
+  },
+  '/api/v1/measurements/[batchId]/uploads/[uploadId]/withdraw': {
+    sample: `/api/v1/measurements/${B}/uploads/${B}/withdraw`,
+    methods: { POST: mayJudgeBatches.roles }
+  }
 };

@@ -16,9 +16,7 @@ export function largestRemainder(shares: readonly Rat[], total: bigint): bigint[
   if (shares.some((s) => s.n < 0n)) throw new RangeError('shares must not be negative');
   const out = shares.map((s) => s.floor());
   let left = total - out.reduce((a, v) => a + v, 0n);
-  const order = shares
-    .map((s, i) => ({ i, rem: s.frac(), s }))
-    .sort((a, b) => b.rem.cmp(a.rem) || b.s.cmp(a.s) || a.i - b.i);
+  const order = shares.map((s, i) => ({ i, rem: s.frac(), s })).sort((a, b) => b.rem.cmp(a.rem) || b.s.cmp(a.s) || a.i - b.i);
   for (const { i } of order) {
     if (left === 0n) break;
     out[i] += 1n;

@@ -58,10 +58,22 @@ export interface WeighoutPlan {
   notes: string[];
 }
 
-export interface WeighoutIssue { path: string; message: string }
+export interface WeighoutIssue {
+  path: string;
+  message: string;
+}
 export type WeighoutResult = { ok: true; plan: WeighoutPlan } | { ok: false; errors: WeighoutIssue[] };
 
-interface Draft { role: LineRole; materialId: number | null; code: string; name: string; basisPct: Rat | null; ideal: Rat; tolerance: ToleranceSpec; path: string }
+interface Draft {
+  role: LineRole;
+  materialId: number | null;
+  code: string;
+  name: string;
+  basisPct: Rat | null;
+  ideal: Rat;
+  tolerance: ToleranceSpec;
+  path: string;
+}
 
 const pctOf = (base: Rat, pct: Rat) => base.mul(pct).div(Rat.HUNDRED);
 const show = (r: Rat) => Number(r.toFixed(4));
@@ -107,9 +119,15 @@ export function computeWeighout(input: WeighoutInput): WeighoutResult {
   const addedTotal = additivePcts.reduce((a, v) => a.add(v), phosphorTotal);
   const basis = input.loading.basis;
   if (basis === 'wtPctOfSlurry' && phosphorTotal.gte(Rat.HUNDRED)) {
-    errors.push({ path: 'loading', message: `phosphor loading ${phosphorTotal.toDecimal(4)} wt % of the slurry is impossible: it must be below 100 %` });
+    errors.push({
+      path: 'loading',
+      message: `phosphor loading ${phosphorTotal.toDecimal(4)} wt % of the slurry is impossible: it must be below 100 %`
+    });
   } else if (basis === 'wtPctOfSlurry' && addedTotal.gte(Rat.HUNDRED)) {
-    errors.push({ path: 'additives', message: `phosphors + additives come to ${addedTotal.toDecimal(4)} wt % of the slurry, leaving no silicone: the sum must be below 100 %` });
+    errors.push({
+      path: 'additives',
+      message: `phosphors + additives come to ${addedTotal.toDecimal(4)} wt % of the slurry, leaving no silicone: the sum must be below 100 %`
+    });
   }
   if (errors.length) return { ok: false, errors };
 
@@ -120,13 +138,52 @@ export function computeWeighout(input: WeighoutInput): WeighoutResult {
   const b = Rat.fromNumber(input.silicone.ratioB);
   const sil = input.silicone;
   const drafts: Draft[] = [
-    { role: 'siliconeA', materialId: null, code: 'PART A', name: sil.name, basisPct: null, ideal: S.mul(a).div(a.add(b)), tolerance: sil.toleranceA, path: 'silicone.toleranceA' },
-    ...input.phosphors.map((p, i): Draft => ({ role: 'phosphor', materialId: p.materialId, code: p.code, name: p.name, basisPct: phosphorPcts[i], ideal: onBasis(phosphorPcts[i]), tolerance: p.tolerance, path: `phosphors.${i}` })),
-    ...input.additives.map((x, i): Draft => ({ role: 'additive', materialId: null, code: x.code, name: x.name, basisPct: additivePcts[i], ideal: onBasis(additivePcts[i]), tolerance: x.tolerance, path: `additives.${i}` })),
-    { role: 'siliconeB', materialId: null, code: 'PART B', name: sil.name, basisPct: null, ideal: S.mul(b).div(a.add(b)), tolerance: sil.toleranceB, path: 'silicone.toleranceB' }
+    {
+      role: 'siliconeA',
+      materialId: null,
+      code: 'PART A',
+      name: sil.name,
+      basisPct: null,
+      ideal: S.mul(a).div(a.add(b)),
+      tolerance: sil.toleranceA,
+      path: 'silicone.toleranceA'
+    },
+    ...input.phosphors.map((p, i): Draft => ({
+      role: 'phosphor',
+      materialId: p.materialId,
+      code: p.code,
+      name: p.name,
+      basisPct: phosphorPcts[i],
+      ideal: onBasis(phosphorPcts[i]),
+      tolerance: p.tolerance,
+      path: `phosphors.${i}`
+    })),
+    ...input.additives.map((x, i): Draft => ({
+      role: 'additive',
+      materialId: null,
+      code: x.code,
+      name: x.name,
+      basisPct: additivePcts[i],
+      ideal: onBasis(additivePcts[i]),
+      tolerance: x.tolerance,
+      path: `additives.${i}`
+    })),
+    {
+      role: 'siliconeB',
+      materialId: null,
+      code: 'PART B',
+      name: sil.name,
+      basisPct: null,
+      ideal: S.mul(b).div(a.add(b)),
+      tolerance: sil.toleranceB,
+      path: 'silicone.toleranceB'
+    }
   ];
 
-  const steps = largestRemainder(drafts.map((d) => d.ideal.div(res)), size.steps);
+  const steps = largestRemainder(
+    drafts.map((d) => d.ideal.div(res)),
+    size.steps
+  );
   const minWeight = Rat.fromNumber(input.balance.minWeightG);
   let smallestBatch = Rat.ZERO;
   const lines: PlannedLine[] = drafts.map((d, i) => {
@@ -135,13 +192,19 @@ export function computeWeighout(input: WeighoutInput): WeighoutResult {
     const high = d.ideal.add(tol).div(res).floor();
     const target = new Rat(steps[i]).mul(res);
     if (tol.lt(res)) {
-      errors.push({ path: `${d.path}.tolerance`, message: `${d.code}: tolerance ±${tol.toDecimal(places + 2)} g is finer than the balance resolution ${res.toDecimal()} g; use a finer balance or a wider tolerance` });
+      errors.push({
+        path: `${d.path}.tolerance`,
+        message: `${d.code}: tolerance ±${tol.toDecimal(places + 2)} g is finer than the balance resolution ${res.toDecimal()} g; use a finer balance or a wider tolerance`
+      });
     }
     if (steps[i] === 0n || target.lt(minWeight)) {
       // Smallest batch where this line reaches the minimum weight: M · min / ideal.
       const need = d.ideal.isZero() ? null : M.mul(minWeight.gt(res) ? minWeight : res).div(d.ideal);
       if (need && need.gt(smallestBatch)) smallestBatch = need;
-      errors.push({ path: d.path, message: `${d.code}: target ${target.toFixed(places)} g is below the balance's minimum weight ${minWeight.toDecimal()} g` });
+      errors.push({
+        path: d.path,
+        message: `${d.code}: target ${target.toFixed(places)} g is below the balance's minimum weight ${minWeight.toDecimal()} g`
+      });
     }
     return {
       seq: i + 1,
@@ -162,7 +225,10 @@ export function computeWeighout(input: WeighoutInput): WeighoutResult {
     };
   });
   if (smallestBatch.gt(Rat.ZERO)) {
-    errors.push({ path: 'sizing', message: `a batch of at least ${g(smallestBatch.div(res).ceil())} g keeps every line at or above the minimum weight` });
+    errors.push({
+      path: 'sizing',
+      message: `a batch of at least ${g(smallestBatch.div(res).ceil())} g keeps every line at or above the minimum weight`
+    });
   }
   if (errors.length) return { ok: false, errors };
 

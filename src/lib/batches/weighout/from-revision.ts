@@ -71,23 +71,46 @@ export function weighoutInputFromRevision(content: RevisionContent, req: Weighou
     // A typed loading equal to the revision's printed one is the revision's: weigh its exact value.
     const exactOf = (v: number, i: number) => (fromRevision?.[i] && printPct(fromRevision[i]) === v ? fromRevision[i] : v);
     const given = req.loading.pcts?.map(exactOf) ?? fromRevision;
-    if (!given) return { ok: false, errors: [{ path: 'loading.pcts', message: 'the revision has no per-phosphor loading from the loading model: enter a loading for every phosphor' }] };
+    if (!given)
+      return {
+        ok: false,
+        errors: [
+          {
+            path: 'loading.pcts',
+            message: 'the revision has no per-phosphor loading from the loading model: enter a loading for every phosphor'
+          }
+        ]
+      };
     if (given.length !== n) return { ok: false, errors: [{ path: 'loading.pcts', message: `give one loading per phosphor (${n})` }] };
     pcts = given;
   } else {
-    if (!fromRevision) return { ok: false, errors: [{ path: 'loading', message: 'the revision has no per-phosphor split from the loading model: enter per-phosphor loadings instead of a total' }] };
+    if (!fromRevision)
+      return {
+        ok: false,
+        errors: [
+          {
+            path: 'loading',
+            message: 'the revision has no per-phosphor split from the loading model: enter per-phosphor loadings instead of a total'
+          }
+        ]
+      };
     pcts = fromRevision;
     totalPct = req.loading.totalPct;
   }
   const tolerances = req.phosphorTolerances ?? [];
-  if (tolerances.length > n) return { ok: false, errors: [{ path: 'phosphorTolerances', message: `at most one tolerance per phosphor (${n})` }] };
+  if (tolerances.length > n)
+    return { ok: false, errors: [{ path: 'phosphorTolerances', message: `at most one tolerance per phosphor (${n})` }] };
   return {
     ok: true,
     input: {
       sizing: req.sizing,
       loading: { basis: req.loading.basis, totalPct },
       phosphors: lines.map((p, i) => ({
-        materialId: p.materialId, code: p.code, name: p.name, ...loadingFields(pcts[i]), tolerance: tolerances[i] ?? DEFAULT_TOLERANCE.phosphor
+        materialId: p.materialId,
+        code: p.code,
+        name: p.name,
+        ...loadingFields(pcts[i]),
+        tolerance: tolerances[i] ?? DEFAULT_TOLERANCE.phosphor
       })),
       additives: req.additives ?? [],
       silicone: {

@@ -6,6 +6,12 @@ export { checkActual, parseReadingG, type ActualCheck, type ActualStatus } from 
 export { slurryExpiry, slurryAge, type SlurryLimit, type SlurryAge } from './potlife';
 export { scaleToMass, scaleByFactor } from './scale';
 export * from './schema';
-export { weighoutInputFromRevision, revisionLoadings, revisionLoadingsExact, DEFAULT_TOLERANCE, type FromRevisionResult } from './from-revision';
+export {
+  weighoutInputFromRevision,
+  revisionLoadings,
+  revisionLoadingsExact,
+  DEFAULT_TOLERANCE,
+  type FromRevisionResult
+} from './from-revision';
 export { describeTarget, type BatchTarget } from './target';
 export { PAPER_SIZES, type PaperSize } from './paper';

@@ -67,11 +67,19 @@ export class Rat {
   }
 
   /** Exact text "n/d" (or "n" for an integer) that parseFraction reads back unchanged. */
-  toFraction(): string { return this.d === 1n ? this.n.toString() : `${this.n}/${this.d}`; }
+  toFraction(): string {
+    return this.d === 1n ? this.n.toString() : `${this.n}/${this.d}`;
+  }
 
-  add(o: Rat): Rat { return new Rat(this.n * o.d + o.n * this.d, this.d * o.d); }
-  sub(o: Rat): Rat { return new Rat(this.n * o.d - o.n * this.d, this.d * o.d); }
-  mul(o: Rat): Rat { return new Rat(this.n * o.n, this.d * o.d); }
+  add(o: Rat): Rat {
+    return new Rat(this.n * o.d + o.n * this.d, this.d * o.d);
+  }
+  sub(o: Rat): Rat {
+    return new Rat(this.n * o.d - o.n * this.d, this.d * o.d);
+  }
+  mul(o: Rat): Rat {
+    return new Rat(this.n * o.n, this.d * o.d);
+  }
   div(o: Rat): Rat {
     if (o.n === 0n) throw new RangeError('division by zero');
     return new Rat(this.n * o.d, this.d * o.n);
@@ -82,13 +90,27 @@ export class Rat {
     const r = o.n * this.d;
     return l < r ? -1 : l > r ? 1 : 0;
   }
-  lt(o: Rat): boolean { return this.cmp(o) < 0; }
-  lte(o: Rat): boolean { return this.cmp(o) <= 0; }
-  gt(o: Rat): boolean { return this.cmp(o) > 0; }
-  gte(o: Rat): boolean { return this.cmp(o) >= 0; }
-  eq(o: Rat): boolean { return this.cmp(o) === 0; }
-  isZero(): boolean { return this.n === 0n; }
-  isInteger(): boolean { return this.d === 1n; }
+  lt(o: Rat): boolean {
+    return this.cmp(o) < 0;
+  }
+  lte(o: Rat): boolean {
+    return this.cmp(o) <= 0;
+  }
+  gt(o: Rat): boolean {
+    return this.cmp(o) > 0;
+  }
+  gte(o: Rat): boolean {
+    return this.cmp(o) >= 0;
+  }
+  eq(o: Rat): boolean {
+    return this.cmp(o) === 0;
+  }
+  isZero(): boolean {
+    return this.n === 0n;
+  }
+  isInteger(): boolean {
+    return this.d === 1n;
+  }
 
   /** Largest integer ≤ this. */
   floor(): bigint {
@@ -101,10 +123,14 @@ export class Rat {
     return this.n > 0n && q * this.d !== this.n ? q + 1n : q;
   }
   /** this − floor(this), in [0, 1). */
-  frac(): Rat { return this.sub(new Rat(this.floor())); }
+  frac(): Rat {
+    return this.sub(new Rat(this.floor()));
+  }
 
   /** For display only (never fed back into the arithmetic). */
-  toNumber(): number { return Number(this.n) / Number(this.d); }
+  toNumber(): number {
+    return Number(this.n) / Number(this.d);
+  }
 
   /**
    * Decimal string rounded half-up to `places` digits (trailing zeros kept), e.g. 1/3 → "0.333".
@@ -125,8 +151,14 @@ export class Rat {
     let d = this.d;
     let twos = 0;
     let fives = 0;
-    while (d % 2n === 0n) { d /= 2n; twos++; }
-    while (d % 5n === 0n) { d /= 5n; fives++; }
+    while (d % 2n === 0n) {
+      d /= 2n;
+      twos++;
+    }
+    while (d % 5n === 0n) {
+      d /= 5n;
+      fives++;
+    }
     return d === 1n ? Math.max(twos, fives) : null;
   }
 

@@ -13,21 +13,29 @@ export const LOADING_BASIS_LABELS: Record<LoadingBasis, string> = {
 
 const pos = (what: string) => z.number(`${what} must be a number`).finite().gt(0, `${what} must be greater than 0`);
 
-export const toleranceSpecSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('pct'), value: pos('tolerance').max(50, 'a tolerance above ±50 % is not a tolerance') }),
-  z.object({ kind: z.literal('g'), value: pos('tolerance').max(10_000, 'tolerance must be at most 10 kg') })
-], 'tolerance must be { kind: "pct" | "g", value }');
+export const toleranceSpecSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({ kind: z.literal('pct'), value: pos('tolerance').max(50, 'a tolerance above ±50 % is not a tolerance') }),
+    z.object({ kind: z.literal('g'), value: pos('tolerance').max(10_000, 'tolerance must be at most 10 kg') })
+  ],
+  'tolerance must be { kind: "pct" | "g", value }'
+);
 export type ToleranceSpec = z.infer<typeof toleranceSpecSchema>;
 
-export const sizingSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('mass'), batchMassG: pos('batch size').max(100_000, 'batch size must be at most 100 kg') }),
-  z.object({
-    kind: z.literal('parts'),
-    partCount: z.number().int('part count must be a whole number').min(1, 'part count must be at least 1').max(10_000_000),
-    dispenseMassG: pos('dispense mass per part').max(1000),
-    yieldLossPct: z.number().min(0, 'yield-loss allowance must be ≥ 0 %').lt(90, 'yield-loss allowance must be below 90 %')
-  })
-], 'sizing must be { kind: "mass", batchMassG } or { kind: "parts", partCount, dispenseMassG, yieldLossPct }');
+export const sizingSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({ kind: z.literal('mass'), batchMassG: pos('batch size').max(100_000, 'batch size must be at most 100 kg') }),
+    z.object({
+      kind: z.literal('parts'),
+      partCount: z.number().int('part count must be a whole number').min(1, 'part count must be at least 1').max(10_000_000),
+      dispenseMassG: pos('dispense mass per part').max(1000),
+      yieldLossPct: z.number().min(0, 'yield-loss allowance must be ≥ 0 %').lt(90, 'yield-loss allowance must be below 90 %')
+    })
+  ],
+  'sizing must be { kind: "mass", batchMassG } or { kind: "parts", partCount, dispenseMassG, yieldLossPct }'
+);
 export type Sizing = z.infer<typeof sizingSchema>;
 
 export const weighoutPhosphorSchema = z.object({
@@ -40,7 +48,10 @@ export const weighoutPhosphorSchema = z.object({
    * The same loading as an exact fraction "n/d" when `pct` is only its rounded print (a revision's
    * wt % converted to phr); the masses are computed from this, `pct` is shown.
    */
-  pctExact: z.string().regex(/^\d{1,80}(\/\d{1,80})?$/, 'exact loading must be a fraction n/d').optional(),
+  pctExact: z
+    .string()
+    .regex(/^\d{1,80}(\/\d{1,80})?$/, 'exact loading must be a fraction n/d')
+    .optional(),
   tolerance: toleranceSpecSchema
 });
 

@@ -21,7 +21,10 @@ export function batchSteps(sizing: Sizing, resolution: Rat, places: number): Siz
       return {
         steps: 0n,
         note: null,
-        error: { path: 'sizing.batchMassG', message: `batch size ${sizing.batchMassG} g is not a whole number of balance steps (${resolution.toDecimal()} g); enter it to ${places} decimal place${places === 1 ? '' : 's'}` }
+        error: {
+          path: 'sizing.batchMassG',
+          message: `batch size ${sizing.batchMassG} g is not a whole number of balance steps (${resolution.toDecimal()} g); enter it to ${places} decimal place${places === 1 ? '' : 's'}`
+        }
       };
     }
     return { steps: exact.n, note: null, error: null };

@@ -20,10 +20,15 @@ function signed(v: number, places: number): string {
 
 export function describeTarget(target: RevisionContent['target'], tolerance: RevisionContent['tolerance']): BatchTarget {
   const t = resolveTarget(target);
-  const description = target.kind === 'ansiBin'
-    ? `ANSI ${target.nominalCct} K bin centre (${Math.round(t.cct)} K, Duv ${signed(t.duv, 4)})`
-    : `${Math.round(t.cct)} K, Duv ${signed(t.duv, 4)}`;
-  const tol = tolerance.kind === 'sdcm' ? `${tolerance.steps}-step MacAdam ellipse (SDCM)`
-    : tolerance.kind === 'deltaUvPrime' ? `Δu'v' ≤ ${tolerance.value}` : `Δuv ≤ ${tolerance.value}`;
+  const description =
+    target.kind === 'ansiBin'
+      ? `ANSI ${target.nominalCct} K bin centre (${Math.round(t.cct)} K, Duv ${signed(t.duv, 4)})`
+      : `${Math.round(t.cct)} K, Duv ${signed(t.duv, 4)}`;
+  const tol =
+    tolerance.kind === 'sdcm'
+      ? `${tolerance.steps}-step MacAdam ellipse (SDCM)`
+      : tolerance.kind === 'deltaUvPrime'
+        ? `Δu'v' ≤ ${tolerance.value}`
+        : `Δuv ≤ ${tolerance.value}`;
   return { description, x: t.x, y: t.y, ansiBin: findAnsiBin(t.x, t.y)?.nominalCct ?? null, tolerance: tol };
 }

@@ -79,7 +79,11 @@ export function bootstrapBuilds(
     used: fits.length,
     failed,
     absorptionPerWtPctMm: Array.from({ length: n }, (_, i) => spread(fits.map((f) => f.parameters.absorptionPerWtPctMm[i]))),
-    pumpEscape: full.fitted.escape ? spread(fits.map((f) => f.parameters.pumpEscape)) : { sd: 0, low: full.parameters.pumpEscape, high: full.parameters.pumpEscape },
-    iqeScale: full.fitted.iqeScale ? spread(fits.map((f) => f.parameters.iqeScale)) : { sd: 0, low: full.parameters.iqeScale, high: full.parameters.iqeScale }
+    pumpEscape: full.fitted.escape
+      ? spread(fits.map((f) => f.parameters.pumpEscape))
+      : { sd: 0, low: full.parameters.pumpEscape, high: full.parameters.pumpEscape },
+    iqeScale: full.fitted.iqeScale
+      ? spread(fits.map((f) => f.parameters.iqeScale))
+      : { sd: 0, low: full.parameters.iqeScale, high: full.parameters.iqeScale }
   };
 }

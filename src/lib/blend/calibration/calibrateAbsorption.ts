@@ -73,15 +73,17 @@ export function calibrateAbsorption(
       cascade,
       opts.cascadePathFactor ?? 1
     );
-  const residualWith = (cascade: boolean) => (theta: number[]): number[] => {
-    const model = modelWith(cascade);
-    const r: number[] = [];
-    builds.forEach((b, k) => {
-      const s = normaliseToUnitPower(model(theta, b).spd, 'model');
-      for (let l = FIT_START; l <= FIT_END; l += FIT_STEP) r.push(s[l] - measured[k][l]);
-    });
-    return r;
-  };
+  const residualWith =
+    (cascade: boolean) =>
+    (theta: number[]): number[] => {
+      const model = modelWith(cascade);
+      const r: number[] = [];
+      builds.forEach((b, k) => {
+        const s = normaliseToUnitPower(model(theta, b).spd, 'model');
+        for (let l = FIT_START; l <= FIT_END; l += FIT_STEP) r.push(s[l] - measured[k][l]);
+      });
+      return r;
+    };
   const cascade = opts.cascade ?? false;
   const model = modelWith(cascade);
   // Robust start: scan a common factor on α (0.01–100×) and keep the best, then LM with

@@ -14,11 +14,7 @@ export interface MeasuredBuild {
   spd: Spd;
 }
 
-export function calibrateFromBuilds(
-  components: BlendComponents,
-  builds: MeasuredBuild[],
-  loading: LoadingParams
-): CalibrationReport {
+export function calibrateFromBuilds(components: BlendComponents, builds: MeasuredBuild[], loading: LoadingParams): CalibrationReport {
   const withStart: BlendComponents = {
     ...components,
     phosphors: components.phosphors.map((p) => ({ ...p, absorptionPerWtPctMm: p.absorptionPerWtPctMm ?? 0.1 }))

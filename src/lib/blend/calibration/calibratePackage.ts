@@ -77,7 +77,8 @@ export function calibratePackage(basis: LoadingBasis, builds: PackageBuild[], op
     pumpEscape: fitEscape ? Math.exp(Math.min(t[n], MAX_LN)) : start.pumpEscape,
     iqeScale: fitIqe ? Math.exp(Math.min(t[n + (fitEscape ? 1 : 0)], MAX_LN)) : start.iqeScale
   });
-  const outputs = (p: PackageParameters) => builds.map((b, k) => packageObservables(packageSpd(basis, p, b.concentrationsWtPct, paths[k], opts)));
+  const outputs = (p: PackageParameters) =>
+    builds.map((b, k) => packageObservables(packageSpd(basis, p, b.concentrationsWtPct, paths[k], opts)));
   const residuals = (t: number[]) => {
     const p = toParams(t);
     return outputs(p).flatMap((o, k) => comparators[k].residuals(o));
@@ -86,9 +87,16 @@ export function calibratePackage(basis: LoadingBasis, builds: PackageBuild[], op
   if (fitEscape) theta.push(Math.log(start.pumpEscape));
   if (fitIqe) theta.push(Math.log(start.iqeScale));
   const count = residuals(theta).length;
-  if (count <= theta.length) throw new BlendInputError(`calibration has ${theta.length} parameters but only ${count} measured values; add builds`);
+  if (count <= theta.length)
+    throw new BlendInputError(`calibration has ${theta.length} parameters but only ${count} measured values; add builds`);
   if (!opts.warmStart) theta = scanCommonFactor(theta, n, residuals);
-  const lm = levenbergMarquardt(residuals, theta, { maxIterations: 100, tolerance: 1e-10, maxStep: 1, gradientTolerance: 1e-7, stepTolerance: 1e-9 });
+  const lm = levenbergMarquardt(residuals, theta, {
+    maxIterations: 100,
+    tolerance: 1e-10,
+    maxStep: 1,
+    gradientTolerance: 1e-7,
+    stepTolerance: 1e-9
+  });
   const parameters = toParams(lm.params);
   const se = lm.standardErrors;
   const final = outputs(parameters);
@@ -100,8 +108,12 @@ export function calibratePackage(basis: LoadingBasis, builds: PackageBuild[], op
       iqeScale: fitIqe ? parameters.iqeScale * se[n + (fitEscape ? 1 : 0)] : 0
     },
     builds: builds.map((b, k) => {
-      const out = b.outputWPerPumpW !== undefined ? final[k].wPerPumpW / b.outputWPerPumpW - 1
-        : b.outputLmPerPumpW !== undefined ? final[k].lmPerPumpW / b.outputLmPerPumpW - 1 : null;
+      const out =
+        b.outputWPerPumpW !== undefined
+          ? final[k].wPerPumpW / b.outputWPerPumpW - 1
+          : b.outputLmPerPumpW !== undefined
+            ? final[k].lmPerPumpW / b.outputLmPerPumpW - 1
+            : null;
       return { label: b.label, measuredXy: b.measuredXy, fittedXy: final[k].xy, steps: comparators[k].steps(final[k]), outputError: out };
     }),
     converged: lm.converged,

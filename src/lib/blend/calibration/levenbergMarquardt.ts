@@ -90,7 +90,12 @@ function gradientCosine(jtj: number[][], jtr: number[], cost: number): number {
 function solveStep(jtj: number[][], jtr: number[], mu: number): number[] | null {
   const A = jtj.map((row, a) => row.map((v, b) => (a === b ? v + mu * Math.max(v, 1e-12) : v)));
   try {
-    const raw = (lusolve(A, jtr.map((v) => -v)) as number[][]).map((row) => row[0]);
+    const raw = (
+      lusolve(
+        A,
+        jtr.map((v) => -v)
+      ) as number[][]
+    ).map((row) => row[0]);
     return raw.every(Number.isFinite) ? raw : null;
   } catch {
     return null;

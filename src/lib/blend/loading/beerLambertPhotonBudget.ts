@@ -79,12 +79,7 @@ export function beerLambertPhotonBudget(
 }
 
 /** The photon budget for given optical depths τᵢ (≥ 0) at the pump reference. */
-export function photonBudgetForDepths(
-  basis: LoadingBasis,
-  opticalDepths: number[],
-  cascade = false,
-  cascadePathFactor = 1
-): LoadingResult {
+export function photonBudgetForDepths(basis: LoadingBasis, opticalDepths: number[], cascade = false, cascadePathFactor = 1): LoadingResult {
   const n = basis.emission.length;
   const aL = opticalDepths.map((t) => Math.max(0, t));
   const absorbed = new Float64Array(n);

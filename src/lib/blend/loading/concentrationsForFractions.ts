@@ -39,11 +39,7 @@ export interface ConcentrationSolution {
 /** A mix the loading model cannot turn into a recipe that can be weighed (API → 422). */
 export class LoadingRefusedError extends BlendInputError {}
 
-export function concentrationsForFractions(
-  basis: LoadingBasis,
-  wantedFractions: number[],
-  opts: LoadingOptions
-): ConcentrationSolution {
+export function concentrationsForFractions(basis: LoadingBasis, wantedFractions: number[], opts: LoadingOptions): ConcentrationSolution {
   const n = basis.emission.length;
   if (wantedFractions.length !== n + 1) throw new BlendInputError('fractions: pump + one per phosphor expected');
   const total = wantedFractions.reduce((a, b) => a + Math.max(0, b), 0);

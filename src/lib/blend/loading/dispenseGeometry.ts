@@ -65,8 +65,7 @@ export function effectiveWtPct(concentrationsWtPct: number[], spec: GeometrySpec
 }
 
 export type WtPctFromEffective =
-  | { ok: true; concentrationsWtPct: number[]; totalWtPct: number }
-  | { ok: false; reason: string; totalWtPct: number };
+  { ok: true; concentrationsWtPct: number[]; totalWtPct: number } | { ok: false; reason: string; totalWtPct: number };
 
 /**
  * Inverse of `effectiveWtPct`. fixedMass: c = g. fixedVolume: phosphor mass per volume

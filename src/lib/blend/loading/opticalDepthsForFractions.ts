@@ -42,12 +42,7 @@ export interface DepthSolution {
 
 const logit = (w: number) => Math.log(w / (1 - w));
 
-export function opticalDepthsForFractions(
-  basis: LoadingBasis,
-  wanted: number[],
-  cascade = false,
-  cascadePathFactor = 1
-): DepthSolution {
+export function opticalDepthsForFractions(basis: LoadingBasis, wanted: number[], cascade = false, cascadePathFactor = 1): DepthSolution {
   const n = basis.emission.length;
   let evaluations = 0;
   const run = (tau: number[]) => (evaluations++, budgetFractionsForDepths(basis, tau, cascade, cascadePathFactor));
@@ -114,7 +109,10 @@ export function opticalDepthsForFractions(
   let jac: number[][] | null = null;
   for (let it = 0; it < 50 && norm(r) > RESIDUAL_TOL; it++) {
     jac ??= jacobianAt(u, r);
-    const step = solveSmallSystem(jac, r.map((v) => -v));
+    const step = solveSmallSystem(
+      jac,
+      r.map((v) => -v)
+    );
     if (!step) break;
     const big = Math.max(...step.map(Math.abs));
     let scale = big > 3 ? 3 / big : 1;

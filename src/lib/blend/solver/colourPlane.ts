@@ -36,11 +36,7 @@ function solve3(a: number[][], b: number[]): number[] | null {
 
 export function constraintMatrix(xyz: [number, number, number][], target: [number, number]): number[][] {
   const [xt, yt] = target;
-  return [
-    xyz.map(([X, Y, Z]) => X - xt * (X + Y + Z)),
-    xyz.map(([X, Y, Z]) => Y - yt * (X + Y + Z)),
-    xyz.map(() => 1)
-  ];
+  return [xyz.map(([X, Y, Z]) => X - xt * (X + Y + Z)), xyz.map(([X, Y, Z]) => Y - yt * (X + Y + Z)), xyz.map(() => 1)];
 }
 
 export function colourPlane(xyz: [number, number, number][], target: [number, number]): ColourPlane {
@@ -74,7 +70,5 @@ export function ratiosAt(plane: ColourPlane, z: number[]): number[] {
 }
 
 export function coordinatesOf(plane: ColourPlane, w: number[]): number[] {
-  return Array.from({ length: plane.dimension }, (_, j) =>
-    w.reduce((s, wi, i) => s + plane.basis[i][j] * (wi - plane.w0[i]), 0)
-  );
+  return Array.from({ length: plane.dimension }, (_, j) => w.reduce((s, wi, i) => s + plane.basis[i][j] * (wi - plane.w0[i]), 0));
 }

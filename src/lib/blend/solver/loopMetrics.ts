@@ -20,10 +20,7 @@ export interface LoopPoint {
 
 export type LoopEvaluator = (fractions: number[]) => LoopPoint;
 
-export function loopMetricsOf(
-  ev: PartialSpectrumEvaluation,
-  cost: number | null
-): { metrics: LoopMetrics; criValid: boolean } {
+export function loopMetricsOf(ev: PartialSpectrumEvaluation, cost: number | null): { metrics: LoopMetrics; criValid: boolean } {
   return {
     metrics: {
       ra: ev.cri?.ra ?? NaN,

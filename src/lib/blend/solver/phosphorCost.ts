@@ -34,12 +34,7 @@ export function costBasisFor(basis: Basis, loading: LoadingParams | undefined): 
 }
 
 /** Cost per 1,000 lm, or null when a price is missing or the mix cannot be weighed (never priced on unconverged wt %). */
-export function phosphorCostPer1000Lm(
-  basis: Basis,
-  fractions: number[],
-  ler: number,
-  loading: LoadingParams | undefined
-): number | null {
+export function phosphorCostPer1000Lm(basis: Basis, fractions: number[], ler: number, loading: LoadingParams | undefined): number | null {
   if (basis.costPerKg.some((c) => c === null) || !(ler > 0)) return null;
   const price = basis.costPerKg as number[];
   if (costBasisFor(basis, loading) === 'loadingModel' && loading && basis.loading) {

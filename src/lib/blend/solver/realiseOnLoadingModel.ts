@@ -24,8 +24,7 @@ const XY_TOL = 1e-7;
 const FD_STEP = 1e-6;
 
 export type Realisation =
-  | { ok: true; concentrationsWtPct: number[]; opticalDepths: number[]; result: LoadingResult }
-  | { ok: false; reason: string };
+  { ok: true; concentrationsWtPct: number[]; opticalDepths: number[]; result: LoadingResult } | { ok: false; reason: string };
 
 const xyOf = (spd: Float64Array): [number, number] => {
   const [X, Y, Z] = tristimulus(spd);

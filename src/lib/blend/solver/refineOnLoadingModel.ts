@@ -46,7 +46,10 @@ export interface Refinement {
 export function refineOnLoadingModel(ctx: CandidateContext, best: SolveCandidate, wanted: number, starts: number): Refinement {
   const loading = ctx.loading as LoadingParams;
   const eff = effectiveBasisAt(ctx.basis, loadingResultOf(ctx.basis, loading, best.concentrationsWtPct as number[]));
-  const plane = colourPlane(eff.components.map((c) => c.xyz), ctx.solvedAt ?? [ctx.target.x, ctx.target.y]);
+  const plane = colourPlane(
+    eff.components.map((c) => c.xyz),
+    ctx.solvedAt ?? [ctx.target.x, ctx.target.y]
+  );
   const loop = makeLoopEvaluator(eff, ctx.floors, ctx.objective, loading);
   const search = searchPolytope(plane, loop.evaluate, { floors: ctx.floors, objective: ctx.objective, starts });
   const merit = (p: LoopPoint) => meritOf(p, ctx.floors, ctx.objective);

@@ -65,14 +65,25 @@ export function samplePolytope(plane: ColourPlane): number[][] {
   const count = SAMPLES_BY_DIMENSION[d] ?? 90;
   const out: number[][] = V.map((v) => v.slice());
   if (V.length === 1) return out;
-  out.push(combination(V, V.map(() => 1)));
+  out.push(
+    combination(
+      V,
+      V.map(() => 1)
+    )
+  );
   if (plane.dimension === 1 || V.length === 2) {
     const [a, b] = [V[0], V[V.length - 1]];
     for (let i = 1; i < count - 1; i++) out.push(combination([a, b], [1 - i / (count - 1), i / (count - 1)]));
     return out;
   }
   const rnd = mulberry32(0x9e3779b9);
-  while (out.length < count) out.push(combination(V, V.map(() => -Math.log(1 - rnd()))));
+  while (out.length < count)
+    out.push(
+      combination(
+        V,
+        V.map(() => -Math.log(1 - rnd()))
+      )
+    );
   return out;
 }
 

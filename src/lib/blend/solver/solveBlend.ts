@@ -77,11 +77,15 @@ export function solveBlend(problem: SolveProblem): SolveResult {
   const [sx, sy] = near.distance > 0 ? uvPrimeToXy(...near.point) : [target.x, target.y];
   const gapError = colourDistance(sx, sy, target);
   const outOfGamut = near.distance > 0 && !withinTolerance(gapError, tolerance);
-  const plane = colourPlane(basis.components.map((c) => c.xyz), [sx, sy]);
+  const plane = colourPlane(
+    basis.components.map((c) => c.xyz),
+    [sx, sy]
+  );
   const loop = makeLoopEvaluator(basis, floors, problem.objective, problem.loading);
-  const search = near.distance > 0
-    ? { samples: plane.vertices.map((w) => loop.evaluate(w)), optima: [] as LoopPoint[] }
-    : searchPolytope(plane, loop.evaluate, { floors, objective: problem.objective, starts: maxCandidates + 2 });
+  const search =
+    near.distance > 0
+      ? { samples: plane.vertices.map((w) => loop.evaluate(w)), optima: [] as LoopPoint[] }
+      : searchPolytope(plane, loop.evaluate, { floors, objective: problem.objective, starts: maxCandidates + 2 });
   const merit = (p: LoopPoint) => meritOf(p, floors, problem.objective);
   const pool = [...search.optima.sort((a, b) => merit(a) - merit(b)), ...search.samples.sort((a, b) => merit(a) - merit(b))];
   const model = spectrumModelOf(basis, problem.loading);
@@ -95,7 +99,13 @@ export function solveBlend(problem: SolveProblem): SolveResult {
   }
   picked.sort((a, b) => merit(a) - merit(b));
   const ctx: CandidateContext = {
-    basis, target, tolerance, floors, objective: problem.objective, loading: problem.loading, solvedAt: [sx, sy]
+    basis,
+    target,
+    tolerance,
+    floors,
+    objective: problem.objective,
+    loading: problem.loading,
+    solvedAt: [sx, sy]
   };
   let candidates = picked.map((p) => buildCandidate(ctx, p.fractions));
   if (problem.loading && basis.loading && candidates.length > 0 && candidates.every((c) => c.concentrationsWtPct === null)) {

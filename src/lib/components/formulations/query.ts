@@ -9,7 +9,8 @@ export function hrefWith(url: URL, changes: Record<string, string | number | nul
   return s ? `${url.pathname}?${s}` : url.pathname;
 }
 
-export const utc = (d: Date | string | null | undefined): string => (d ? `${new Date(d).toISOString().slice(0, 16).replace('T', ' ')} UTC` : '—');
+export const utc = (d: Date | string | null | undefined): string =>
+  d ? `${new Date(d).toISOString().slice(0, 16).replace('T', ' ')} UTC` : '—';
 
 /** A number at fixed digits; values that round to zero print without a minus sign. */
 export const fixed = (v: number | null | undefined, digits: number): string => {

@@ -23,7 +23,14 @@ export async function invite(admin: User, email: string, roles: Role[], origin: 
   if (existing) throw new AccountError(`${email} already has an account.`);
   const { token, expiresAt } = await invites.create(email, roles, admin.id);
   const link = `${origin}/invite/${token}`;
-  await audit.record({ actorId: admin.id, actorEmail: admin.email, entityType: 'user', entityId: email, action: 'invite', after: { email, roles } });
+  await audit.record({
+    actorId: admin.id,
+    actorEmail: admin.email,
+    entityType: 'user',
+    entityId: email,
+    action: 'invite',
+    after: { email, roles }
+  });
   const mailed = await send(inviteMessage(email, admin.name, link, expiresAt, roles));
   return { link, mailed };
 }
@@ -33,12 +40,18 @@ export async function acceptInvite(token: string, name: string, password: string
   if (!open) throw new AccountError('This invitation link is invalid, already used or expired.');
   const passwordHash = await hashPassword(password);
   return db().transaction(async (trx) => {
-    const claimed = await trx('invites').where({ token_hash: sha256Hex(token) }).whereNull('used_at').update({ used_at: trx.fn.now() });
+    const claimed = await trx('invites')
+      .where({ token_hash: sha256Hex(token) })
+      .whereNull('used_at')
+      .update({ used_at: trx.fn.now() });
     if (claimed !== 1) throw new AccountError('This invitation link is invalid, already used or expired.');
     if (await trx('users').where({ email: open.email }).first('id')) throw new AccountError(`${open.email} already has an account.`);
     const [id] = await trx('users').insert({ email: open.email, name, password_hash: passwordHash });
     if (open.roles.length) await trx('user_roles').insert(open.roles.map((role) => ({ user_id: id, role })));
-    await audit.record({ actorId: id, actorEmail: open.email, entityType: 'user', entityId: id, action: 'invite-accepted', after: { roles: open.roles } }, trx);
+    await audit.record(
+      { actorId: id, actorEmail: open.email, entityType: 'user', entityId: id, action: 'invite-accepted', after: { roles: open.roles } },
+      trx
+    );
     return id;
   });
 }
@@ -48,7 +61,15 @@ export async function changeRoles(admin: User, userId: number, roles: Role[]): P
   if (!before) throw new AccountError('No such user.');
   if (userId === admin.id && !roles.includes('admin')) throw new AccountError('You cannot remove your own admin role.');
   await users.setRoles(userId, roles);
-  await audit.record({ actorId: admin.id, actorEmail: admin.email, entityType: 'user', entityId: userId, action: 'roles-changed', before: { roles: before.roles }, after: { roles } });
+  await audit.record({
+    actorId: admin.id,
+    actorEmail: admin.email,
+    entityType: 'user',
+    entityId: userId,
+    action: 'roles-changed',
+    before: { roles: before.roles },
+    after: { roles }
+  });
 }
 
 export async function setActive(admin: User, userId: number, active: boolean): Promise<void> {
@@ -56,5 +77,13 @@ export async function setActive(admin: User, userId: number, active: boolean): P
   if (!before) throw new AccountError('No such user.');
   if (userId === admin.id && !active) throw new AccountError('You cannot deactivate yourself.');
   await users.setActive(userId, active);
-  await audit.record({ actorId: admin.id, actorEmail: admin.email, entityType: 'user', entityId: userId, action: active ? 'reactivated' : 'deactivated', before: { active: before.active }, after: { active } });
+  await audit.record({
+    actorId: admin.id,
+    actorEmail: admin.email,
+    entityType: 'user',
+    entityId: userId,
+    action: active ? 'reactivated' : 'deactivated',
+    before: { active: before.active },
+    after: { active }
+  });
 }

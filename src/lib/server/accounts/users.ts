@@ -11,7 +11,14 @@ export interface User {
   createdAt: Date;
 }
 
-interface UserRow { id: number; email: string; name: string; active: number | boolean; created_at: Date; password_hash?: string }
+interface UserRow {
+  id: number;
+  email: string;
+  name: string;
+  active: number | boolean;
+  created_at: Date;
+  password_hash?: string;
+}
 
 async function rolesOf(ids: number[]): Promise<Map<number, Role[]>> {
   const map = new Map<number, Role[]>();
@@ -65,7 +72,9 @@ export async function setRoles(id: number, roles: Role[]): Promise<void> {
 }
 
 export async function setActive(id: number, active: boolean): Promise<void> {
-  await db()('users').where({ id }).update({ active, deactivated_at: active ? null : db().fn.now(), updated_at: db().fn.now() });
+  await db()('users')
+    .where({ id })
+    .update({ active, deactivated_at: active ? null : db().fn.now(), updated_at: db().fn.now() });
 }
 
 export async function byRole(role: Role): Promise<User[]> {

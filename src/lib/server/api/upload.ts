@@ -28,7 +28,9 @@ async function formFile(request: Request, kind: UploadKind): Promise<UploadedFil
   try {
     form = await request.formData();
   } catch {
-    throw invalid(`The multipart body could not be read (no boundary, truncated or not form data). Send the ${kind.what} file in the multipart field "file". Nothing was saved.`);
+    throw invalid(
+      `The multipart body could not be read (no boundary, truncated or not form data). Send the ${kind.what} file in the multipart field "file". Nothing was saved.`
+    );
   }
   const file = form.get('file');
   if (!(file instanceof File)) throw invalid(`Send the ${kind.what} file in the multipart field "file".`);
@@ -44,7 +46,11 @@ export async function readUploadedFile(request: Request, kind: UploadKind): Prom
   const type = request.headers.get('content-type') ?? '';
   if (/^multipart\/form-data/i.test(type)) return formFile(request, kind);
   if (/^text\/(csv|plain|tab-separated-values)\b/i.test(type)) {
-    return { name: request.headers.get('x-file-name')?.slice(0, 200) || kind.defaultName, contentType: type.split(';')[0], body: Buffer.from(await request.arrayBuffer()) };
+    return {
+      name: request.headers.get('x-file-name')?.slice(0, 200) || kind.defaultName,
+      contentType: type.split(';')[0],
+      body: Buffer.from(await request.arrayBuffer())
+    };
   }
   throw unsupportedType(`Send the ${kind.what} file as multipart/form-data (field "file") or as a text/csv or text/plain body.`);
 }

@@ -10,8 +10,10 @@ export const WINDOW_MINUTES = 15;
 
 export async function isThrottled(email: string): Promise<boolean> {
   const key = email.toLowerCase();
-  const lastSuccess = await db()('sign_in_attempts').where({ email: key, succeeded: 1 })
-    .max<{ at: Date | null }[]>('created_at as at').first();
+  const lastSuccess = await db()('sign_in_attempts')
+    .where({ email: key, succeeded: 1 })
+    .max<{ at: Date | null }[]>('created_at as at')
+    .first();
   const q = db()('sign_in_attempts')
     .where({ email: key, succeeded: 0 })
     .andWhere('created_at', '>', db().raw(`NOW(3) - INTERVAL ${WINDOW_MINUTES} MINUTE`));

@@ -7,7 +7,14 @@ import type { User } from '../accounts/users';
 export async function issueToken(user: User, name: string, days: number): Promise<{ id: number; token: string }> {
   return db().transaction(async (trx) => {
     const created = await tokens.create(user.id, name, days, trx);
-    const event = { actorId: user.id, actorEmail: user.email, entityType: 'api_token', entityId: created.id, action: 'create', after: { name, days } };
+    const event = {
+      actorId: user.id,
+      actorEmail: user.email,
+      entityType: 'api_token',
+      entityId: created.id,
+      action: 'create',
+      after: { name, days }
+    };
     await record(event, trx);
     return created;
   });

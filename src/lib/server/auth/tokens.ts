@@ -15,12 +15,28 @@ export function newSecret(): string {
   return TOKEN_PREFIX + randomBytes(30).toString('base64url');
 }
 
-export interface TokenInfo { id: number; name: string; prefix: string; expiresAt: Date; revokedAt: Date | null; lastUsedAt: Date | null; createdAt: Date }
+export interface TokenInfo {
+  id: number;
+  name: string;
+  prefix: string;
+  expiresAt: Date;
+  revokedAt: Date | null;
+  lastUsedAt: Date | null;
+  createdAt: Date;
+}
 
-export async function create(userId: number, name: string, days: number, k: Knex | Knex.Transaction = db()): Promise<{ id: number; token: string }> {
+export async function create(
+  userId: number,
+  name: string,
+  days: number,
+  k: Knex | Knex.Transaction = db()
+): Promise<{ id: number; token: string }> {
   const token = newSecret();
   const [id] = await k('api_tokens').insert({
-    user_id: userId, name, token_hash: sha256Hex(token), prefix: token.slice(0, 10),
+    user_id: userId,
+    name,
+    token_hash: sha256Hex(token),
+    prefix: token.slice(0, 10),
     expires_at: new Date(Date.now() + days * 86_400_000)
   });
   return { id, token };
@@ -28,7 +44,15 @@ export async function create(userId: number, name: string, days: number, k: Knex
 
 export async function listFor(userId: number): Promise<TokenInfo[]> {
   const rows = await db()('api_tokens').where({ user_id: userId }).orderBy('created_at', 'desc');
-  return rows.map((r) => ({ id: r.id, name: r.name, prefix: r.prefix, expiresAt: r.expires_at, revokedAt: r.revoked_at, lastUsedAt: r.last_used_at, createdAt: r.created_at }));
+  return rows.map((r) => ({
+    id: r.id,
+    name: r.name,
+    prefix: r.prefix,
+    expiresAt: r.expires_at,
+    revokedAt: r.revoked_at,
+    lastUsedAt: r.last_used_at,
+    createdAt: r.created_at
+  }));
 }
 
 export async function revoke(userId: number, id: number, k: Knex | Knex.Transaction = db()): Promise<boolean> {
@@ -36,7 +60,16 @@ export async function revoke(userId: number, id: number, k: Knex | Knex.Transact
   return n > 0;
 }
 
-interface TokenRow { token_id: number; last_used_at: Date | null; id: number; email: string; name: string; active: number | boolean; created_at: Date; roles: string | null }
+interface TokenRow {
+  token_id: number;
+  last_used_at: Date | null;
+  id: number;
+  email: string;
+  name: string;
+  active: number | boolean;
+  created_at: Date;
+  roles: string | null;
+}
 
 /** A request shares a lookup only if that lookup started at most this long before it. */
 export const SHARE_WINDOW_MS = 100;
@@ -54,11 +87,23 @@ function lookUp(hash: string): Promise<TokenRow | undefined> {
     row: db()('api_tokens as t')
       .join('users as u', 'u.id', 't.user_id')
       .leftJoin('user_roles as r', 'r.user_id', 'u.id')
-      .where('t.token_hash', hash).whereNull('t.revoked_at').andWhere('t.expires_at', '>', db().fn.now())
+      .where('t.token_hash', hash)
+      .whereNull('t.revoked_at')
+      .andWhere('t.expires_at', '>', db().fn.now())
       .groupBy('t.id')
-      .first('t.id as token_id', 't.last_used_at', 'u.id', 'u.email', 'u.name', 'u.active', 'u.created_at',
-        db().raw('GROUP_CONCAT(r.role ORDER BY r.role) AS roles'))
-      .finally(() => { if (inFlight.get(hash) === entry) inFlight.delete(hash); }) as Promise<TokenRow | undefined>
+      .first(
+        't.id as token_id',
+        't.last_used_at',
+        'u.id',
+        'u.email',
+        'u.name',
+        'u.active',
+        'u.created_at',
+        db().raw('GROUP_CONCAT(r.role ORDER BY r.role) AS roles')
+      )
+      .finally(() => {
+        if (inFlight.get(hash) === entry) inFlight.delete(hash);
+      }) as Promise<TokenRow | undefined>
   };
   inFlight.set(hash, entry);
   return entry.row;
@@ -79,5 +124,14 @@ export async function userForToken(token: string): Promise<User | null> {
     row.last_used_at = new Date();
     await db()('api_tokens').where({ id: row.token_id }).update({ last_used_at: db().fn.now() });
   }
-  return { id: row.id, email: row.email, name: row.name, active: true, roles: String(row.roles ?? '').split(',').filter(isRole), createdAt: row.created_at };
+  return {
+    id: row.id,
+    email: row.email,
+    name: row.name,
+    active: true,
+    roles: String(row.roles ?? '')
+      .split(',')
+      .filter(isRole),
+    createdAt: row.created_at
+  };
 }

@@ -8,7 +8,9 @@ export function batchJson(d: BatchDetail) {
   return {
     ...batch,
     weighoutInput: input,
-    revision: d.revision ? { id: d.revision.id, formulationCode: d.revision.formulationCode, revisionNo: d.revision.revisionNo, state: d.revision.state } : null,
+    revision: d.revision
+      ? { id: d.revision.id, formulationCode: d.revision.formulationCode, revisionNo: d.revision.revisionNo, state: d.revision.state }
+      : null,
     silicone: d.silicone,
     lines: d.lines
   };
@@ -16,7 +18,11 @@ export function batchJson(d: BatchDetail) {
 
 export const pdfResponse = (pdf: Buffer, fileName: string, disposition: 'attachment' | 'inline' = 'attachment') =>
   new Response(new Uint8Array(pdf), {
-    headers: { 'content-type': 'application/pdf', 'content-disposition': `${disposition}; filename="${fileName}"`, 'cache-control': 'no-store' }
+    headers: {
+      'content-type': 'application/pdf',
+      'content-disposition': `${disposition}; filename="${fileName}"`,
+      'cache-control': 'no-store'
+    }
   });
 
 export { json };

@@ -24,7 +24,8 @@ export async function completeBatch(user: User, batchId: number, version: number
     for (const l of detail.lines) {
       if (l.actualG === null) missing.push(`line ${l.seq} (${l.code}) has no reading`);
       else if (!l.lotNumber) missing.push(`line ${l.seq} (${l.code}) has no lot`);
-      else if (l.actualStatus !== 'in' && !l.overrideAt) missing.push(`line ${l.seq} (${l.code}) is out of range and needs a quality decision`);
+      else if (l.actualStatus !== 'in' && !l.overrideAt)
+        missing.push(`line ${l.seq} (${l.code}) is out of range and needs a quality decision`);
     }
     if (!detail.batch.mixedAt) missing.push('the time part B was mixed in is not noted');
     if (missing.length) throw conflict(`Batch ${row.batch_number} cannot be completed yet: ${missing.join('; ')}.`);
@@ -34,17 +35,44 @@ export async function completeBatch(user: User, batchId: number, version: number
     doc.state = 'complete';
     doc.process = { ...doc.process, completedAt, completedBy: user.name };
     const pdf = await buildBatchRecord(doc);
-    const recordFileId = await putFile({
-      body: pdf, originalName: `${row.batch_number}-batch-record.pdf`, contentType: 'application/pdf',
-      purpose: 'batch-record', entityType: 'batch', entityId: batchId, uploadedBy: user.id
-    }, trx);
-    await trx('batches').where({ id: batchId }).update({
-      state: 'complete', completed_at: completedAt, completed_by: user.id, record_file_id: recordFileId, version: row.version + 1, updated_at: completedAt
-    });
-    await record({
-      actorId: user.id, actorEmail: user.email, entityType: 'batch', entityId: batchId, action: 'complete',
-      before: { state: 'weighing' }, after: { state: 'complete', recordFileId, lateSlurry: detail.batch.slurryExpiresAt !== null && completedAt > detail.batch.slurryExpiresAt }
-    }, trx);
+    const recordFileId = await putFile(
+      {
+        body: pdf,
+        originalName: `${row.batch_number}-batch-record.pdf`,
+        contentType: 'application/pdf',
+        purpose: 'batch-record',
+        entityType: 'batch',
+        entityId: batchId,
+        uploadedBy: user.id
+      },
+      trx
+    );
+    await trx('batches')
+      .where({ id: batchId })
+      .update({
+        state: 'complete',
+        completed_at: completedAt,
+        completed_by: user.id,
+        record_file_id: recordFileId,
+        version: row.version + 1,
+        updated_at: completedAt
+      });
+    await record(
+      {
+        actorId: user.id,
+        actorEmail: user.email,
+        entityType: 'batch',
+        entityId: batchId,
+        action: 'complete',
+        before: { state: 'weighing' },
+        after: {
+          state: 'complete',
+          recordFileId,
+          lateSlurry: detail.batch.slurryExpiresAt !== null && completedAt > detail.batch.slurryExpiresAt
+        }
+      },
+      trx
+    );
     return { recordFileId };
   });
 }

@@ -13,18 +13,28 @@ import { conflict, impossible, invalid, notFound } from './errors';
 import { nextBatchNumber } from './number';
 import { lineRowsFor, planColumns } from './lines';
 
-export interface PreparedBatch { input: WeighoutInput; plan: WeighoutPlan }
+export interface PreparedBatch {
+  input: WeighoutInput;
+  plan: WeighoutPlan;
+}
 
 /** The plan a request would give, without saving (also used by the preview endpoint). */
-export async function prepareBatch(req: CreateBatchRequest): Promise<PreparedBatch & { revision: NonNullable<Awaited<ReturnType<typeof getRevision>>> }> {
+export async function prepareBatch(
+  req: CreateBatchRequest
+): Promise<PreparedBatch & { revision: NonNullable<Awaited<ReturnType<typeof getRevision>>> }> {
   const revision = await getRevision(req.revisionId);
   if (!revision) throw notFound(`Formulation revision ${req.revisionId}`);
   if (revision.state !== 'approved') {
-    throw conflict(`${revision.formulationCode} revision ${revision.revisionNo} is ${revision.state}: batches are made from the approved revision only.`);
+    throw conflict(
+      `${revision.formulationCode} revision ${revision.revisionNo} is ${revision.state}: batches are made from the approved revision only.`
+    );
   }
   const sysId = revision.content.silicone.siliconeSystemId;
   if (req.siliconeSystemId != null && req.siliconeSystemId !== sysId) {
-    throw invalid(`The approved revision specifies the silicone system "${revision.content.silicone.name}"; a different silicone needs a new revision.`, [{ path: 'siliconeSystemId', message: 'must be the revision\'s silicone system' }]);
+    throw invalid(
+      `The approved revision specifies the silicone system "${revision.content.silicone.name}"; a different silicone needs a new revision.`,
+      [{ path: 'siliconeSystemId', message: "must be the revision's silicone system" }]
+    );
   }
   const built = weighoutInputFromRevision(revision.content, req);
   if (!built.ok) throw invalid(built.errors.map((e) => e.message).join('; '), built.errors);
@@ -76,7 +86,17 @@ export async function createBatch(user: User, req: CreateBatchRequest): Promise<
           created_by: user.id
         });
         await trx('batch_lines').insert(lineRowsFor(id, plan.lines));
-        await record({ actorId: user.id, actorEmail: user.email, entityType: 'batch', entityId: id, action: 'create', after: { batchNumber, revisionId: revision.id, request: req, lines: plan.lines.map((l) => [l.code, l.targetG]) } }, trx);
+        await record(
+          {
+            actorId: user.id,
+            actorEmail: user.email,
+            entityType: 'batch',
+            entityId: id,
+            action: 'create',
+            after: { batchNumber, revisionId: revision.id, request: req, lines: plan.lines.map((l) => [l.code, l.targetG]) }
+          },
+          trx
+        );
         return { id, batchNumber };
       });
     } catch (err) {

@@ -37,23 +37,44 @@ export function toBatchDoc(d: BatchDetail): BatchDoc {
     },
     size: {
       batchMassG: b.batchMassG,
-      sizingNote: b.sizingKind === 'parts' ? `${b.partCount} parts × ${b.dispenseMassG} g with ${b.yieldLossPct} % yield-loss allowance, rounded up to the balance step` : null,
+      sizingNote:
+        b.sizingKind === 'parts'
+          ? `${b.partCount} parts × ${b.dispenseMassG} g with ${b.yieldLossPct} % yield-loss allowance, rounded up to the balance step`
+          : null,
       basisLabel: LOADING_BASIS_LABELS[b.loadingBasis],
       loadingSummary: loadingSummary(b)
     },
     balance: { resolutionG: b.resolutionG, minWeightG: b.minWeightG, balanceRef: b.balanceRef },
     silicone: {
-      name: b.siliconeName, ratio: `${b.ratioA}:${b.ratioB}`, potLifeMin: b.potLifeMin, plantLimitMin: b.plantLimitMin,
-      cure: d.silicone.cure, degasNotes: d.silicone.degasNotes, safetyNote: d.silicone.safetyNote
+      name: b.siliconeName,
+      ratio: `${b.ratioA}:${b.ratioB}`,
+      potLifeMin: b.potLifeMin,
+      plantLimitMin: b.plantLimitMin,
+      cure: d.silicone.cure,
+      degasNotes: d.silicone.degasNotes,
+      safetyNote: d.silicone.safetyNote
     },
     lines: d.lines.map((l) => ({
-      seq: l.seq, role: l.role, code: l.code, name: l.name,
+      seq: l.seq,
+      role: l.role,
+      code: l.code,
+      name: l.name,
       loadingLabel: l.basisPct === null ? null : `${l.basisPct.toFixed(4)} ${unit}`,
-      targetG: l.targetG, lowG: l.lowG, highG: l.highG, toleranceLabel: toleranceLabel(l.tolerance),
-      actual: l.actualG === null ? null : {
-        actualG: l.actualG, lotNumber: l.lotNumber, status: l.actualStatus, weighedBy: l.weighedByName, weighedAt: l.weighedAt,
-        override: l.overrideAt ? { by: l.overrideByName ?? '', at: l.overrideAt, reason: l.overrideReason ?? '' } : null
-      }
+      targetG: l.targetG,
+      lowG: l.lowG,
+      highG: l.highG,
+      toleranceLabel: toleranceLabel(l.tolerance),
+      actual:
+        l.actualG === null
+          ? null
+          : {
+              actualG: l.actualG,
+              lotNumber: l.lotNumber,
+              status: l.actualStatus,
+              weighedBy: l.weighedByName,
+              weighedAt: l.weighedAt,
+              override: l.overrideAt ? { by: l.overrideByName ?? '', at: l.overrideAt, reason: l.overrideReason ?? '' } : null
+            }
     })),
     process: { mixedAt: b.mixedAt, expiresAt: b.slurryExpiresAt, completedAt: b.completedAt, completedBy: b.completedByName },
     notes: b.notes
@@ -67,7 +88,10 @@ export async function batchTicketPdf(id: number, size: PaperSize = 'A4'): Promis
 }
 
 /** The batch record as it stands now (with the quality section when given). */
-export async function batchRecordPdf(id: number, opts: { size?: PaperSize; measurementSummary?: MeasurementSummary | null } = {}): Promise<{ pdf: Buffer; batchNumber: string }> {
+export async function batchRecordPdf(
+  id: number,
+  opts: { size?: PaperSize; measurementSummary?: MeasurementSummary | null } = {}
+): Promise<{ pdf: Buffer; batchNumber: string }> {
   const d = await getBatch(id);
   if (!d) throw notFound(`Batch ${id}`);
   return { pdf: await buildBatchRecord(toBatchDoc(d), opts), batchNumber: d.batch.batchNumber };

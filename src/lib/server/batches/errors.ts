@@ -4,4 +4,5 @@ import { notFound as notFoundError, unprocessable, type Issue } from '../../erro
 export { conflict, invalid } from '../../errors/domain-error';
 export const notFound = (what: string) => notFoundError(`${what} was not found.`);
 /** Well-formed input that describes an impossible batch (weigh-out refusals). */
-export const impossible = (issues: Issue[]) => unprocessable(`The batch cannot be weighed out: ${issues.map((i) => i.message).join('; ')}`, issues);
+export const impossible = (issues: Issue[]) =>
+  unprocessable(`The batch cannot be weighed out: ${issues.map((i) => i.message).join('; ')}`, issues);

@@ -14,14 +14,17 @@ export async function lockBatch(trx: Knex.Transaction, id: number): Promise<Lock
 }
 
 export async function lockLine(trx: Knex.Transaction, batchId: number, seq: number): Promise<LockedLine> {
-  const row = Number.isSafeInteger(seq) && seq > 0 ? await trx('batch_lines').where({ batch_id: batchId, seq }).forUpdate().first() : undefined;
+  const row =
+    Number.isSafeInteger(seq) && seq > 0 ? await trx('batch_lines').where({ batch_id: batchId, seq }).forUpdate().first() : undefined;
   if (!row) throw notFound(`Line ${seq} of this batch`);
   return row;
 }
 
 export function expectVersion(row: { version: number }, version: number, what: string): void {
   if (row.version !== version) {
-    throw conflict(`${what} was changed by someone else since you loaded it (version ${version}, now ${row.version}). Reload and check before trying again.`);
+    throw conflict(
+      `${what} was changed by someone else since you loaded it (version ${version}, now ${row.version}). Reload and check before trying again.`
+    );
   }
 }
 

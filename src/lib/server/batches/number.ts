@@ -8,7 +8,11 @@ export function batchNumberPrefix(now: Date): string {
 
 export async function nextBatchNumber(trx: Knex.Transaction, now = new Date()): Promise<string> {
   const prefix = batchNumberPrefix(now);
-  const last = await trx('batches').where('batch_number', 'like', `${prefix}%`).orderBy('batch_number', 'desc').forUpdate().first('batch_number');
+  const last = await trx('batches')
+    .where('batch_number', 'like', `${prefix}%`)
+    .orderBy('batch_number', 'desc')
+    .forUpdate()
+    .first('batch_number');
   const n = last ? Number(String(last.batch_number).slice(prefix.length)) + 1 : 1;
   return `${prefix}${String(n).padStart(3, '0')}`;
 }

@@ -74,9 +74,17 @@ export function placesOf(resolutionG: number | string): number {
 export function toSummary(r: Row): BatchSummary {
   const places = placesOf(r.resolution_g);
   return {
-    id: r.id, batchNumber: r.batch_number, state: r.state, revisionId: r.revision_id, formulationCode: r.formulation_code,
-    formulationName: r.formulation_name, revisionNo: r.revision_no, batchMassG: decimalText(r.batch_mass_g, places),
-    createdAt: r.created_at, createdByName: r.created_by_name ?? '', completedAt: r.completed_at ?? null
+    id: r.id,
+    batchNumber: r.batch_number,
+    state: r.state,
+    revisionId: r.revision_id,
+    formulationCode: r.formulation_code,
+    formulationName: r.formulation_name,
+    revisionNo: r.revision_no,
+    batchMassG: decimalText(r.batch_mass_g, places),
+    createdAt: r.created_at,
+    createdByName: r.created_by_name ?? '',
+    completedAt: r.completed_at ?? null
   };
 }
 
@@ -84,24 +92,64 @@ export function toBatch(r: Row): Batch {
   const places = placesOf(r.resolution_g);
   return {
     ...toSummary(r),
-    sizingKind: r.sizing_kind, partCount: num(r.part_count), dispenseMassG: num(r.dispense_mass_g), yieldLossPct: num(r.yield_loss_pct),
-    loadingBasis: r.loading_basis, totalLoadingPct: num(r.total_loading_pct), phosphorWtPct: Number(r.phosphor_wt_pct), phosphorPhr: Number(r.phosphor_phr),
-    siliconeSystemId: r.silicone_system_id, siliconeName: r.silicone_name, ratioA: Number(r.ratio_a), ratioB: Number(r.ratio_b),
-    potLifeMin: r.pot_life_min, plantLimitMin: r.plant_limit_min, resolutionG: decimalText(r.resolution_g, 0), places,
-    minWeightG: decimalText(r.min_weight_g, 0), balanceRef: r.balance_ref, input: JSON.parse(r.input_json), target: JSON.parse(r.target_json),
-    notes: r.notes, mixedAt: r.mixed_at, slurryExpiresAt: r.slurry_expires_at, mixedByName: r.mixed_by_name ?? null,
-    completedBy: r.completed_by, completedByName: r.completed_by_name ?? null, recordFileId: r.record_file_id, version: r.version,
-    createdBy: r.created_by, updatedAt: r.updated_at
+    sizingKind: r.sizing_kind,
+    partCount: num(r.part_count),
+    dispenseMassG: num(r.dispense_mass_g),
+    yieldLossPct: num(r.yield_loss_pct),
+    loadingBasis: r.loading_basis,
+    totalLoadingPct: num(r.total_loading_pct),
+    phosphorWtPct: Number(r.phosphor_wt_pct),
+    phosphorPhr: Number(r.phosphor_phr),
+    siliconeSystemId: r.silicone_system_id,
+    siliconeName: r.silicone_name,
+    ratioA: Number(r.ratio_a),
+    ratioB: Number(r.ratio_b),
+    potLifeMin: r.pot_life_min,
+    plantLimitMin: r.plant_limit_min,
+    resolutionG: decimalText(r.resolution_g, 0),
+    places,
+    minWeightG: decimalText(r.min_weight_g, 0),
+    balanceRef: r.balance_ref,
+    input: JSON.parse(r.input_json),
+    target: JSON.parse(r.target_json),
+    notes: r.notes,
+    mixedAt: r.mixed_at,
+    slurryExpiresAt: r.slurry_expires_at,
+    mixedByName: r.mixed_by_name ?? null,
+    completedBy: r.completed_by,
+    completedByName: r.completed_by_name ?? null,
+    recordFileId: r.record_file_id,
+    version: r.version,
+    createdBy: r.created_by,
+    updatedAt: r.updated_at
   };
 }
 
 export function toLine(r: LineRow, places: number): BatchLine {
   return {
-    id: r.id, seq: r.seq, role: r.role, materialId: r.material_id, code: r.code, name: r.name, basisPct: num(r.basis_pct),
-    idealG: decimalText(r.ideal_g, places), targetG: decimalText(r.target_g, places), lowG: decimalText(r.low_g, places), highG: decimalText(r.high_g, places),
+    id: r.id,
+    seq: r.seq,
+    role: r.role,
+    materialId: r.material_id,
+    code: r.code,
+    name: r.name,
+    basisPct: num(r.basis_pct),
+    idealG: decimalText(r.ideal_g, places),
+    targetG: decimalText(r.target_g, places),
+    lowG: decimalText(r.low_g, places),
+    highG: decimalText(r.high_g, places),
     tolerance: { kind: r.tolerance_kind, value: Number(r.tolerance_value) },
-    actualG: r.actual_g === null ? null : decimalText(r.actual_g, places), actualStatus: r.actual_status, lotId: r.lot_id, lotNumber: r.lot_number,
-    weighedBy: r.weighed_by, weighedByName: r.weighed_by_name ?? null, weighedAt: r.weighed_at, overrideBy: r.override_by,
-    overrideByName: r.override_by_name ?? null, overrideAt: r.override_at, overrideReason: r.override_reason, version: r.version
+    actualG: r.actual_g === null ? null : decimalText(r.actual_g, places),
+    actualStatus: r.actual_status,
+    lotId: r.lot_id,
+    lotNumber: r.lot_number,
+    weighedBy: r.weighed_by,
+    weighedByName: r.weighed_by_name ?? null,
+    weighedAt: r.weighed_at,
+    overrideBy: r.override_by,
+    overrideByName: r.override_by_name ?? null,
+    overrideAt: r.override_at,
+    overrideReason: r.override_reason,
+    version: r.version
   };
 }

@@ -32,11 +32,30 @@ export async function scaleBatch(user: User, batchId: number, input: ScaleInput)
     if (!result.ok) throw impossible(result.errors);
     await trx('batch_lines').where({ batch_id: batchId }).delete();
     await trx('batch_lines').insert(lineRowsFor(batchId, result.plan.lines));
-    await trx('batches').where({ id: batchId }).update({
-      ...planColumns(result.plan), sizing_kind: 'mass', part_count: null, dispense_mass_g: null, yield_loss_pct: null,
-      input_json: JSON.stringify(next), version: row.version + 1, updated_at: new Date()
-    });
-    await record({ actorId: user.id, actorEmail: user.email, entityType: 'batch', entityId: batchId, action: 'scale', before: { batchMassG: current }, after: { batchMassG: result.plan.batchMassG } }, trx);
+    await trx('batches')
+      .where({ id: batchId })
+      .update({
+        ...planColumns(result.plan),
+        sizing_kind: 'mass',
+        part_count: null,
+        dispense_mass_g: null,
+        yield_loss_pct: null,
+        input_json: JSON.stringify(next),
+        version: row.version + 1,
+        updated_at: new Date()
+      });
+    await record(
+      {
+        actorId: user.id,
+        actorEmail: user.email,
+        entityType: 'batch',
+        entityId: batchId,
+        action: 'scale',
+        before: { batchMassG: current },
+        after: { batchMassG: result.plan.batchMassG }
+      },
+      trx
+    );
     return { batchMassG: result.plan.batchMassG };
   });
 }

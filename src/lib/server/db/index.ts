@@ -30,6 +30,8 @@ export function isDbUnavailable(err: unknown): boolean {
   const code = e.code ?? '';
   const msg = err instanceof Error ? err.message : '';
   if (['ECONNRESET', 'EPIPE', 'ETIMEDOUT'].includes(code)) return e.fatal === true;
-  return ['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ER_CON_COUNT_ERROR'].includes(code)
-    || /Knex: Timeout acquiring a connection|Connection lost|connect ECONNREFUSED/i.test(msg);
+  return (
+    ['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ER_CON_COUNT_ERROR'].includes(code) ||
+    /Knex: Timeout acquiring a connection|Connection lost|connect ECONNREFUSED/i.test(msg)
+  );
 }

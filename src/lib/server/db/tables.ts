@@ -12,12 +12,14 @@ import type { Knex } from 'knex';
  */
 type Write<Row, Decimal extends keyof Row, Flag extends keyof Row, Day extends keyof Row> = {
   [K in keyof Row]?:
-    | Row[K] | Knex.Raw
-    | (K extends Decimal ? string : never) | (K extends Flag ? boolean : never) | (K extends Day ? string : never);
+    Row[K] | Knex.Raw | (K extends Decimal ? string : never) | (K extends Flag ? boolean : never) | (K extends Day ? string : never);
 };
 
-type Table<Row, Decimal extends keyof Row = never, Flag extends keyof Row = never, Day extends keyof Row = never> =
-  Knex.CompositeTableType<Row, Write<Row, Decimal, Flag, Day>, Write<Row, Decimal, Flag, Day>>;
+type Table<Row, Decimal extends keyof Row = never, Flag extends keyof Row = never, Day extends keyof Row = never> = Knex.CompositeTableType<
+  Row,
+  Write<Row, Decimal, Flag, Day>,
+  Write<Row, Decimal, Flag, Day>
+>;
 
 export interface ApiTokenRow {
   id: number;
@@ -373,16 +375,25 @@ declare module 'knex/types/tables' {
     batch_corrections: Table<BatchCorrectionRow, 'step_fraction'>;
     batch_dispositions: Table<BatchDispositionRow>;
     batch_lines: Table<BatchLineRow, 'basis_pct' | 'ideal_g' | 'target_g' | 'low_g' | 'high_g' | 'tolerance_value' | 'actual_g'>;
-    batches: Table<BatchRow,
-      'batch_mass_g' | 'dispense_mass_g' | 'yield_loss_pct' | 'total_loading_pct' | 'phosphor_wt_pct' |
-      'phosphor_phr' | 'ratio_a' | 'ratio_b' | 'resolution_g' | 'min_weight_g'>;
+    batches: Table<
+      BatchRow,
+      | 'batch_mass_g'
+      | 'dispense_mass_g'
+      | 'yield_loss_pct'
+      | 'total_loading_pct'
+      | 'phosphor_wt_pct'
+      | 'phosphor_phr'
+      | 'ratio_a'
+      | 'ratio_b'
+      | 'resolution_g'
+      | 'min_weight_g'
+    >;
     formulation_revisions: Table<FormulationRevisionRow>;
     formulations: Table<FormulationRow>;
     invites: Table<InviteRow>;
     material_lots: Table<MaterialLotRow, never, never, 'received_on' | 'expires_on'>;
     material_spectra: Table<MaterialSpectrumRow, 'min_nm' | 'max_nm'>;
-    materials: Table<MaterialRow,
-      'peak_nm' | 'fwhm_nm' | 'density_g_cm3' | 'iqe' | 'absorption_reference_nm' | 'cost_per_kg' | 'd50_um'>;
+    materials: Table<MaterialRow, 'peak_nm' | 'fwhm_nm' | 'density_g_cm3' | 'iqe' | 'absorption_reference_nm' | 'cost_per_kg' | 'd50_um'>;
     measurement_uploads: Table<MeasurementUploadRow>;
     part_measurements: Table<PartMeasurementRow>;
     revision_attachments: Table<RevisionAttachmentRow>;
@@ -394,4 +405,3 @@ declare module 'knex/types/tables' {
     users: Table<UserRow, never, 'active'>;
   }
 }
-

@@ -20,14 +20,24 @@ export interface FiledBlend {
 
 async function refOf(id: number, kind: materials.MaterialKind, slot: string): Promise<MaterialRef> {
   const m = await materials.get(id);
-  if (!m || m.kind !== kind) throw new ValidationError(`${slot}: material ${id} is not a ${kind} in the library`, [{ path: slot, message: `not a ${kind}` }]);
+  if (!m || m.kind !== kind)
+    throw new ValidationError(`${slot}: material ${id} is not a ${kind} in the library`, [{ path: slot, message: `not a ${kind}` }]);
   return { materialId: m.id, code: m.code, name: m.name };
 }
 
 async function siliconeOf(id: number): Promise<SiliconeSpec> {
   const s = (await listSiliconeSystems()).find((row) => row.id === id);
-  if (!s) throw new ValidationError('pick a silicone system from the list', [{ path: 'siliconeSystemId', message: 'unknown silicone system' }]);
-  return { siliconeSystemId: s.id, name: s.name, ratioA: s.ratioA, ratioB: s.ratioB, potLifeMin: s.potLifeMin, cure: s.cure, densityGPerCm3: s.densityGPerCm3 };
+  if (!s)
+    throw new ValidationError('pick a silicone system from the list', [{ path: 'siliconeSystemId', message: 'unknown silicone system' }]);
+  return {
+    siliconeSystemId: s.id,
+    name: s.name,
+    ratioA: s.ratioA,
+    ratioB: s.ratioB,
+    potLifeMin: s.potLifeMin,
+    cure: s.cure,
+    densityGPerCm3: s.densityGPerCm3
+  };
 }
 
 export async function fileBlend(caller: Caller, form: FilingForm): Promise<FiledBlend> {

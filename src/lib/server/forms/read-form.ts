@@ -5,7 +5,8 @@
  */
 import { error } from '@sveltejs/kit';
 
-export const UNREADABLE_FORM = 'The form could not be read (the upload was cut off, or the body is not form data). Nothing was saved; send it again.';
+export const UNREADABLE_FORM =
+  'The form could not be read (the upload was cut off, or the body is not form data). Nothing was saved; send it again.';
 
 export async function readForm(request: Request): Promise<FormData> {
   try {

@@ -12,7 +12,8 @@ export async function revisionFromPath(params: { id?: string; revisionId?: strin
   const formulationId = idParam(params.id, `Formulation ${params.id} does not exist.`);
   const revisionId = idParam(params.revisionId, `Revision ${params.revisionId} does not exist.`);
   const rev = await getRevision(revisionId);
-  if (!rev || rev.formulationId !== formulationId) throw new NotFoundError(`Revision ${revisionId} of formulation ${formulationId} does not exist.`);
+  if (!rev || rev.formulationId !== formulationId)
+    throw new NotFoundError(`Revision ${revisionId} of formulation ${formulationId} does not exist.`);
   return rev;
 }
 

@@ -10,7 +10,14 @@ import { NotFoundError, ValidationError } from './errors';
 import { enforce, type Caller } from './guard';
 
 export const MAX_ATTACHMENT_BYTES = 10 * 1024 * 1024;
-const TYPES: Record<string, string> = { pdf: 'application/pdf', png: 'image/png', jpg: 'image/jpeg', jpeg: 'image/jpeg', csv: 'text/csv', txt: 'text/plain' };
+const TYPES: Record<string, string> = {
+  pdf: 'application/pdf',
+  png: 'image/png',
+  jpg: 'image/jpeg',
+  jpeg: 'image/jpeg',
+  csv: 'text/csv',
+  txt: 'text/plain'
+};
 
 async function draftOf(caller: Caller, revisionId: number) {
   const rev = await db()('formulation_revisions').where({ id: revisionId }).first('id', 'state', 'created_by', 'version');
@@ -19,17 +26,49 @@ async function draftOf(caller: Caller, revisionId: number) {
   return rev;
 }
 
-export async function addAttachment(caller: Caller, revisionId: number, file: { name: string; body: Buffer }, label: string): Promise<number> {
+export async function addAttachment(
+  caller: Caller,
+  revisionId: number,
+  file: { name: string; body: Buffer },
+  label: string
+): Promise<number> {
   await draftOf(caller, revisionId);
   const ext = file.name.toLowerCase().split('.').pop() ?? '';
   if (!TYPES[ext]) throw new ValidationError(`file: ${file.name} is not one of ${Object.keys(TYPES).join(', ')}; nothing was saved`);
   if (file.body.length === 0) throw new ValidationError('file: the file is empty; nothing was saved');
-  if (file.body.length > MAX_ATTACHMENT_BYTES) throw new ValidationError(`file: larger than ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB; nothing was saved`);
+  if (file.body.length > MAX_ATTACHMENT_BYTES)
+    throw new ValidationError(`file: larger than ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB; nothing was saved`);
   const text = label.trim().slice(0, 200) || file.name;
   return db().transaction(async (trx) => {
-    const fileId = await putFile({ body: file.body, originalName: file.name, contentType: TYPES[ext], purpose: 'attachment', entityType: 'formulation_revision', entityId: revisionId, uploadedBy: caller.id }, trx);
-    const [id] = await trx('revision_attachments').insert({ revision_id: revisionId, stored_file_id: fileId, label: text, created_by: caller.id });
-    await record({ actorId: caller.id, actorEmail: caller.email, entityType: 'formulation_revision', entityId: revisionId, action: 'attachment-add', after: { attachmentId: id, fileId, name: file.name, label: text, bytes: file.body.length } }, trx);
+    const fileId = await putFile(
+      {
+        body: file.body,
+        originalName: file.name,
+        contentType: TYPES[ext],
+        purpose: 'attachment',
+        entityType: 'formulation_revision',
+        entityId: revisionId,
+        uploadedBy: caller.id
+      },
+      trx
+    );
+    const [id] = await trx('revision_attachments').insert({
+      revision_id: revisionId,
+      stored_file_id: fileId,
+      label: text,
+      created_by: caller.id
+    });
+    await record(
+      {
+        actorId: caller.id,
+        actorEmail: caller.email,
+        entityType: 'formulation_revision',
+        entityId: revisionId,
+        action: 'attachment-add',
+        after: { attachmentId: id, fileId, name: file.name, label: text, bytes: file.body.length }
+      },
+      trx
+    );
     return id;
   });
 }
@@ -41,7 +80,17 @@ export async function removeAttachment(caller: Caller, revisionId: number, attac
     if (!row) throw new NotFoundError('That attachment is not on this revision.');
     await trx('revision_attachments').where({ id: attachmentId }).delete();
     await deleteFile(row.stored_file_id, trx);
-    await record({ actorId: caller.id, actorEmail: caller.email, entityType: 'formulation_revision', entityId: revisionId, action: 'attachment-remove', before: { attachmentId, fileId: row.stored_file_id, label: row.label } }, trx);
+    await record(
+      {
+        actorId: caller.id,
+        actorEmail: caller.email,
+        entityType: 'formulation_revision',
+        entityId: revisionId,
+        action: 'attachment-remove',
+        before: { attachmentId, fileId: row.stored_file_id, label: row.label }
+      },
+      trx
+    );
   });
 }
 

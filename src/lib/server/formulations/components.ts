@@ -41,7 +41,8 @@ export async function loadRevisionComponents(knex: Knex, content: RevisionConten
   const rows: MaterialRow[] = await knex('materials').whereIn('id', [content.pump.materialId, ...phosphorIds]);
   const byId = new Map(rows.map((r) => [r.id, r]));
   const pumpRow = byId.get(content.pump.materialId);
-  if (!pumpRow || pumpRow.kind !== 'pump') throw new ValidationError(`pump: material ${content.pump.materialId} is not a pump in the library`);
+  if (!pumpRow || pumpRow.kind !== 'pump')
+    throw new ValidationError(`pump: material ${content.pump.materialId} is not a pump in the library`);
   const phosphorRows = phosphorIds.map((id, i) => {
     const row = byId.get(id);
     if (!row || row.kind !== 'phosphor') throw new ValidationError(`phosphors.${i}: material ${id} is not a phosphor in the library`);
@@ -73,7 +74,10 @@ export async function loadRevisionComponents(knex: Knex, content: RevisionConten
     phosphors: content.phosphors.map((p, i) => ({ ...p, code: phosphorRows[i].code, name: phosphorRows[i].name })),
     silicone: await refreshedSilicone(knex, content.silicone)
   };
-  return { components: { pump: { id: String(pumpRow.id), name: pumpRow.name, spectrum: emission(pumpRow) }, phosphors }, content: refreshed };
+  return {
+    components: { pump: { id: String(pumpRow.id), name: pumpRow.name, spectrum: emission(pumpRow) }, phosphors },
+    content: refreshed
+  };
 }
 
 async function refreshedSilicone(knex: Knex, s: RevisionContent['silicone']): Promise<RevisionContent['silicone']> {

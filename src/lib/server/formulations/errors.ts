@@ -10,7 +10,10 @@ export class ValidationError extends DomainError {
 
 /** The record moved on: a stale version, or content that is locked once submitted. */
 export class ConflictError extends DomainError {
-  constructor(message: string, readonly current?: { version: number; state: string }) {
+  constructor(
+    message: string,
+    readonly current?: { version: number; state: string }
+  ) {
     super('conflict', message);
   }
 }

@@ -25,7 +25,13 @@ export function revisionPath(r: { formulationId: number; id: number }): string {
 
 function notice(r: RevisionRecord): RevisionNotice {
   const origin = config().origin ?? 'http://127.0.0.1:5180';
-  return { code: r.formulationCode, name: r.formulationName, revisionNo: r.revisionNo, summary: summary(r), link: origin + revisionPath(r) };
+  return {
+    code: r.formulationCode,
+    name: r.formulationName,
+    revisionNo: r.revisionNo,
+    summary: summary(r),
+    link: origin + revisionPath(r)
+  };
 }
 
 async function emailsOf(role: 'quality' | 'technician', except: number[] = []): Promise<string[]> {
@@ -42,7 +48,9 @@ async function authorEmail(r: RevisionRecord): Promise<string[]> {
 }
 
 export async function notifyApproved(r: RevisionRecord, signer: string, signedAt: Date, comment: string | null): Promise<boolean> {
-  return send(revisionApprovedMessage(await authorEmail(r), notice(r), signer, signedAt.toISOString().slice(0, 19).replace('T', ' '), comment));
+  return send(
+    revisionApprovedMessage(await authorEmail(r), notice(r), signer, signedAt.toISOString().slice(0, 19).replace('T', ' '), comment)
+  );
 }
 
 export async function notifyReturned(r: RevisionRecord, signer: string, reason: string): Promise<boolean> {

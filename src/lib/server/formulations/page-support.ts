@@ -5,7 +5,11 @@ import { ValidationError } from './errors';
 import { listSiliconeSystems } from './silicone';
 
 export async function editorOptions() {
-  const [pumps, phosphors, silicones] = await Promise.all([listMaterialOptions('pump'), listMaterialOptions('phosphor'), listSiliconeSystems()]);
+  const [pumps, phosphors, silicones] = await Promise.all([
+    listMaterialOptions('pump'),
+    listMaterialOptions('phosphor'),
+    listSiliconeSystems()
+  ]);
   return { pumps, phosphors, silicones };
 }
 
@@ -16,6 +20,10 @@ export function contentFromForm(values: FormValues): unknown {
     ![0, 1, 2, 3, 4].some((i) => values[`ph${i}`]) && 'phosphors: choose at least one phosphor',
     !values.siliconeId && 'silicone: choose a silicone system'
   ].filter((m): m is string => Boolean(m));
-  if (missing.length) throw new ValidationError(missing.join('; '), missing.map((m) => ({ path: m.split(':')[0], message: m })));
+  if (missing.length)
+    throw new ValidationError(
+      missing.join('; '),
+      missing.map((m) => ({ path: m.split(':')[0], message: m }))
+    );
   return formValuesToRaw(values);
 }

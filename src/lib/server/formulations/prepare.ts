@@ -42,7 +42,8 @@ export async function prepareRevision(knex: Knex, raw: unknown): Promise<Prepare
   try {
     predicted = predictRevision(loaded.content, loaded.components);
   } catch (err) {
-    if (err instanceof BlendInputError || err instanceof SpectrumInputError) throw new ValidationError(`The spectral core cannot evaluate this blend: ${err.message}`);
+    if (err instanceof BlendInputError || err instanceof SpectrumInputError)
+      throw new ValidationError(`The spectral core cannot evaluate this blend: ${err.message}`);
     throw err;
   }
   return { content: loaded.content, predicted, coreVersion: PREDICTION_CORE_VERSION, sha256: contentSha256(loaded.content) };

@@ -27,7 +27,9 @@ export async function getRevision(id: number, k?: Knex | Knex.Transaction): Prom
 
 /** Whether the stored content still matches its recorded SHA-256 (checked over the stored text, as signed). */
 export async function storedContentVerified(id: number, k: Knex | Knex.Transaction = db()): Promise<boolean> {
-  const row: { content_json: string; content_sha256: string } | undefined = await k('formulation_revisions').where({ id }).first('content_json', 'content_sha256');
+  const row: { content_json: string; content_sha256: string } | undefined = await k('formulation_revisions')
+    .where({ id })
+    .first('content_json', 'content_sha256');
   return row !== undefined && storedContentSha256(row.content_json) === row.content_sha256;
 }
 
@@ -39,22 +41,52 @@ export async function currentApprovedRevision(formulationId: number, k?: Knex | 
 
 export async function getFormulation(id: number): Promise<FormulationRecord | null> {
   if (!Number.isSafeInteger(id) || id <= 0) return null;
-  const r = await db()('formulations as f').leftJoin('users as u', 'u.id', 'f.created_by').where('f.id', id).first('f.*', 'u.name as created_by_name');
+  const r = await db()('formulations as f')
+    .leftJoin('users as u', 'u.id', 'f.created_by')
+    .where('f.id', id)
+    .first('f.*', 'u.name as created_by_name');
   if (!r) return null;
-  return { id: r.id, code: r.code, name: r.name, description: r.description, version: r.version, createdBy: r.created_by, createdByName: r.created_by_name, createdAt: r.created_at, updatedAt: r.updated_at };
+  return {
+    id: r.id,
+    code: r.code,
+    name: r.name,
+    description: r.description,
+    version: r.version,
+    createdBy: r.created_by,
+    createdByName: r.created_by_name,
+    createdAt: r.created_at,
+    updatedAt: r.updated_at
+  };
 }
 
 export async function listSignatures(revisionId: number): Promise<SignatureRecord[]> {
   const rows = await db()('revision_signatures').where({ revision_id: revisionId }).orderBy('id');
   return rows.map((s) => ({
-    id: s.id, revisionId: s.revision_id, signerId: s.signer_id, signerName: s.signer_name, signerEmail: s.signer_email,
-    meaning: s.meaning, comment: s.comment, signedAt: s.signed_at, contentSha256: s.content_sha256
+    id: s.id,
+    revisionId: s.revision_id,
+    signerId: s.signer_id,
+    signerName: s.signer_name,
+    signerEmail: s.signer_email,
+    meaning: s.meaning,
+    comment: s.comment,
+    signedAt: s.signed_at,
+    contentSha256: s.content_sha256
   }));
 }
 
 export async function listAttachments(revisionId: number): Promise<AttachmentRecord[]> {
-  const rows = await db()('revision_attachments as a').join('stored_files as s', 's.id', 'a.stored_file_id')
-    .where('a.revision_id', revisionId).orderBy('a.id')
+  const rows = await db()('revision_attachments as a')
+    .join('stored_files as s', 's.id', 'a.stored_file_id')
+    .where('a.revision_id', revisionId)
+    .orderBy('a.id')
     .select('a.id', 'a.stored_file_id', 'a.label', 's.original_name', 's.content_type', 's.bytes', 'a.created_at');
-  return rows.map((a) => ({ id: a.id, storedFileId: a.stored_file_id, label: a.label, originalName: a.original_name, contentType: a.content_type, bytes: a.bytes, createdAt: a.created_at }));
+  return rows.map((a) => ({
+    id: a.id,
+    storedFileId: a.stored_file_id,
+    label: a.label,
+    originalName: a.original_name,
+    contentType: a.content_type,
+    bytes: a.bytes,
+    createdAt: a.created_at
+  }));
 }

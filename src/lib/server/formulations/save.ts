@@ -16,7 +16,12 @@ import { mayAuthorFormulations, mayDraftCorrection } from '../../access/policies
 export { ConflictError, ValidationError, NotFoundError, PermissionError } from './errors';
 
 export const formulationMetaSchema = z.object({
-  code: z.string().trim().toUpperCase().regex(/^[A-Z0-9][A-Z0-9-]{1,39}$/, 'code: 2–40 letters, digits or dashes, e.g. KH-W30-90').optional(),
+  code: z
+    .string()
+    .trim()
+    .toUpperCase()
+    .regex(/^[A-Z0-9][A-Z0-9-]{1,39}$/, 'code: 2–40 letters, digits or dashes, e.g. KH-W30-90')
+    .optional(),
   name: z.string().trim().min(1, 'name is required').max(200, 'name: at most 200 characters'),
   description: z.string().trim().max(5000, 'description: at most 5000 characters').default('')
 });
@@ -37,18 +42,25 @@ async function suggestCode(trx: Knex.Transaction, content: RevisionContent, cct:
   const taken = new Set((await trx('formulations').where('code', 'like', `${base}%`).pluck('code')) as string[]);
   if (!taken.has(base)) return base;
   for (let i = 1; i < 26 * 26; i++) {
-    const suffix = i < 26 ? String.fromCharCode(65 + i) : `${String.fromCharCode(65 + Math.floor(i / 26))}${String.fromCharCode(65 + (i % 26))}`;
+    const suffix =
+      i < 26 ? String.fromCharCode(65 + i) : `${String.fromCharCode(65 + Math.floor(i / 26))}${String.fromCharCode(65 + (i % 26))}`;
     if (!taken.has(`${base}-${suffix}`)) return `${base}-${suffix}`;
   }
   throw new ConflictError(`No free code left under ${base}; give a code.`);
 }
 
 async function insertDraft(
-  trx: Knex.Transaction, caller: Caller, formulationId: number, p: PreparedRevision,
+  trx: Knex.Transaction,
+  caller: Caller,
+  formulationId: number,
+  p: PreparedRevision,
   extra: { basedOnRevisionId?: number | null; sourceBatchId?: number | null } = {}
 ): Promise<{ revisionId: number; revisionNo: number }> {
   await trx('formulations').where({ id: formulationId }).forUpdate().first('id');
-  const max = await trx('formulation_revisions').where({ formulation_id: formulationId }).max<{ n: number | null }>('revision_no as n').first();
+  const max = await trx('formulation_revisions')
+    .where({ formulation_id: formulationId })
+    .max<{ n: number | null }>('revision_no as n')
+    .first();
   const revisionNo = Number(max?.n ?? 0) + 1;
   const [revisionId] = await trx('formulation_revisions').insert({
     formulation_id: formulationId,
@@ -63,10 +75,25 @@ async function insertDraft(
     source_batch_id: extra.sourceBatchId ?? null
   });
   await trx('formulations').where({ id: formulationId }).update({ updated_at: new Date() });
-  await record({
-    actorId: caller.id, actorEmail: caller.email, entityType: 'formulation_revision', entityId: revisionId, action: 'create',
-    after: { formulationId, revisionNo, state: 'draft', contentSha256: p.sha256, basedOnRevisionId: extra.basedOnRevisionId ?? null, sourceBatchId: extra.sourceBatchId ?? null, content: p.content }
-  }, trx);
+  await record(
+    {
+      actorId: caller.id,
+      actorEmail: caller.email,
+      entityType: 'formulation_revision',
+      entityId: revisionId,
+      action: 'create',
+      after: {
+        formulationId,
+        revisionNo,
+        state: 'draft',
+        contentSha256: p.sha256,
+        basedOnRevisionId: extra.basedOnRevisionId ?? null,
+        sourceBatchId: extra.sourceBatchId ?? null,
+        content: p.content
+      }
+    },
+    trx
+  );
   return { revisionId, revisionNo };
 }
 
@@ -74,7 +101,10 @@ function isDuplicate(err: unknown): boolean {
   return (err as { code?: string } | null)?.code === 'ER_DUP_ENTRY';
 }
 
-export async function createFormulationWithDraft(caller: Caller, input: NewFormulationInput): Promise<{ formulationId: number; revisionId: number; revisionNo: number; code: string }> {
+export async function createFormulationWithDraft(
+  caller: Caller,
+  input: NewFormulationInput
+): Promise<{ formulationId: number; revisionId: number; revisionNo: number; code: string }> {
   requireRoles(caller, AUTHORS, 'Creating a formulation');
   const meta = formulationMetaSchema.safeParse(input);
   if (!meta.success) {
@@ -87,9 +117,25 @@ export async function createFormulationWithDraft(caller: Caller, input: NewFormu
     try {
       return await db().transaction(async (trx) => {
         const code = meta.data.code ?? (await suggestCode(trx, prepared.content, prepared.predicted.target.cct));
-        if (await trx('formulations').where({ code }).first('id')) throw new ConflictError(`The code ${code} is already taken; choose another.`);
-        const [formulationId] = await trx('formulations').insert({ code, name: meta.data.name, description: meta.data.description || null, created_by: caller.id });
-        await record({ actorId: caller.id, actorEmail: caller.email, entityType: 'formulation', entityId: formulationId, action: 'create', after: { code, name: meta.data.name, description: meta.data.description } }, trx);
+        if (await trx('formulations').where({ code }).first('id'))
+          throw new ConflictError(`The code ${code} is already taken; choose another.`);
+        const [formulationId] = await trx('formulations').insert({
+          code,
+          name: meta.data.name,
+          description: meta.data.description || null,
+          created_by: caller.id
+        });
+        await record(
+          {
+            actorId: caller.id,
+            actorEmail: caller.email,
+            entityType: 'formulation',
+            entityId: formulationId,
+            action: 'create',
+            after: { code, name: meta.data.name, description: meta.data.description }
+          },
+          trx
+        );
         const draft = await insertDraft(trx, caller, formulationId, prepared);
         return { formulationId, code, ...draft };
       });
@@ -101,13 +147,19 @@ export async function createFormulationWithDraft(caller: Caller, input: NewFormu
   }
 }
 
-export async function createRevision(caller: Caller, formulationId: number, content: unknown, basedOnRevisionId?: number | null): Promise<{ revisionId: number; revisionNo: number }> {
+export async function createRevision(
+  caller: Caller,
+  formulationId: number,
+  content: unknown,
+  basedOnRevisionId?: number | null
+): Promise<{ revisionId: number; revisionNo: number }> {
   requireRoles(caller, AUTHORS, 'Starting a revision');
   const f = await db()('formulations').where({ id: formulationId }).first('id');
   if (!f) throw new NotFoundError(`Formulation ${formulationId} does not exist.`);
   if (basedOnRevisionId != null) {
     const base = await db()('formulation_revisions').where({ id: basedOnRevisionId }).first('formulation_id');
-    if (!base || base.formulation_id !== formulationId) throw new ValidationError(`basedOnRevisionId: revision ${basedOnRevisionId} does not belong to this formulation`);
+    if (!base || base.formulation_id !== formulationId)
+      throw new ValidationError(`basedOnRevisionId: revision ${basedOnRevisionId} does not belong to this formulation`);
   }
   const prepared = await prepareRevision(db(), content);
   return db().transaction((trx) => insertDraft(trx, caller, formulationId, prepared, { basedOnRevisionId }));
@@ -115,7 +167,10 @@ export async function createRevision(caller: Caller, formulationId: number, cont
 
 /** A draft made from a batch's results (quality's correction); based on the revision the batch was built from. */
 export async function createCorrectionDraft<T>(
-  caller: Caller, revisionId: number, content: unknown, sourceBatchId: number,
+  caller: Caller,
+  revisionId: number,
+  content: unknown,
+  sourceBatchId: number,
   /** Writes that belong with the draft (the batch's correction record): same transaction, so both or neither. */
   alongside: (trx: Knex.Transaction, draft: { revisionId: number; revisionNo: number }) => Promise<T>
 ): Promise<{ revisionId: number; revisionNo: number; alongside: T }> {
@@ -131,7 +186,12 @@ export async function createCorrectionDraft<T>(
 }
 
 /** Saves a draft's new content if `version` is still current; otherwise ConflictError and nothing changes. */
-export async function updateDraft(caller: Caller, revisionId: number, version: number, content: unknown): Promise<{ revisionId: number; version: number }> {
+export async function updateDraft(
+  caller: Caller,
+  revisionId: number,
+  version: number,
+  content: unknown
+): Promise<{ revisionId: number; version: number }> {
   const found = await db()('formulation_revisions').where({ id: revisionId }).first('state', 'created_by', 'version');
   if (!found) throw new NotFoundError(`Revision ${revisionId} does not exist.`);
   enforce('edit', caller, { state: found.state, createdBy: found.created_by, version: found.version });
@@ -142,21 +202,30 @@ export async function updateDraft(caller: Caller, revisionId: number, version: n
     if (!row) throw new NotFoundError(`Revision ${revisionId} does not exist.`);
     enforce('edit', caller, { state: row.state, createdBy: row.created_by, version: row.version });
     checkVersion(version, row.version, row.state);
-    const changed = await trx('formulation_revisions').where({ id: revisionId, version, state: 'draft' }).update({
-      content_json: JSON.stringify(prepared.content),
-      predicted_json: JSON.stringify(prepared.predicted),
-      core_version: prepared.coreVersion,
-      content_sha256: prepared.sha256,
-      version: version + 1,
-      updated_at: new Date()
-    });
+    const changed = await trx('formulation_revisions')
+      .where({ id: revisionId, version, state: 'draft' })
+      .update({
+        content_json: JSON.stringify(prepared.content),
+        predicted_json: JSON.stringify(prepared.predicted),
+        core_version: prepared.coreVersion,
+        content_sha256: prepared.sha256,
+        version: version + 1,
+        updated_at: new Date()
+      });
     if (changed !== 1) throw new ConflictError('The draft changed while saving; nothing was saved. Reload and try again.');
-    await record({
-      actorId: caller.id, actorEmail: caller.email, entityType: 'formulation_revision', entityId: revisionId, action: 'update-draft',
-      // The audit keeps the stored document as it was (its own version), not what the recipe reader makes of it.
-      before: { version: row.version, contentSha256: row.content_sha256, content: JSON.parse(row.content_json) },
-      after: { version: version + 1, contentSha256: prepared.sha256, content: prepared.content }
-    }, trx);
+    await record(
+      {
+        actorId: caller.id,
+        actorEmail: caller.email,
+        entityType: 'formulation_revision',
+        entityId: revisionId,
+        action: 'update-draft',
+        // The audit keeps the stored document as it was (its own version), not what the recipe reader makes of it.
+        before: { version: row.version, contentSha256: row.content_sha256, content: JSON.parse(row.content_json) },
+        after: { version: version + 1, contentSha256: prepared.sha256, content: prepared.content }
+      },
+      trx
+    );
     return { revisionId, version: version + 1 };
   });
 }

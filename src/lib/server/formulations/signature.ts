@@ -12,6 +12,13 @@ export async function verifySignaturePassword(caller: Caller, revisionId: number
   const account = await users.findWithHashByEmail(caller.email);
   const ok = await verifyPassword(password, account?.passwordHash || DUMMY_HASH);
   if (ok && account && account.id === caller.id && account.active) return;
-  await record({ actorId: caller.id, actorEmail: caller.email, entityType: 'formulation_revision', entityId: revisionId, action: 'e-signature-refused', after: { meaning, reason: 'password did not match' } });
+  await record({
+    actorId: caller.id,
+    actorEmail: caller.email,
+    entityType: 'formulation_revision',
+    entityId: revisionId,
+    action: 'e-signature-refused',
+    after: { meaning, reason: 'password did not match' }
+  });
   throw new SignatureError('The password is not correct, so nothing was signed. Re-enter your own password to sign.');
 }

@@ -18,9 +18,17 @@ export interface SiliconeSystem {
 export async function listSiliconeSystems(): Promise<SiliconeSystem[]> {
   const rows = await db()('silicone_systems').orderBy('name');
   return rows.map((r) => ({
-    id: r.id, name: r.name, supplier: r.supplier, ratioA: Number(r.ratio_a), ratioB: Number(r.ratio_b), potLifeMin: r.pot_life_min,
-    cure: r.cure, degasNotes: r.degas_notes, densityGPerCm3: r.density_g_cm3 === null ? null : Number(r.density_g_cm3),
-    refractiveIndex: r.refractive_index === null ? null : Number(r.refractive_index), safetyNote: r.safety_note
+    id: r.id,
+    name: r.name,
+    supplier: r.supplier,
+    ratioA: Number(r.ratio_a),
+    ratioB: Number(r.ratio_b),
+    potLifeMin: r.pot_life_min,
+    cure: r.cure,
+    degasNotes: r.degas_notes,
+    densityGPerCm3: r.density_g_cm3 === null ? null : Number(r.density_g_cm3),
+    refractiveIndex: r.refractive_index === null ? null : Number(r.refractive_index),
+    safetyNote: r.safety_note
   }));
 }
 

@@ -59,15 +59,25 @@ async function precheck(command: RevisionCommand, caller: Caller, revisionId: nu
 /** The stored hash must still match the stored content before anyone submits or signs it. */
 function checkIntegrity(row: Locked): void {
   if (storedContentSha256(row.content_json) !== row.content_sha256) {
-    throw new ConflictError(`Revision ${row.revision_no}: its content no longer matches its recorded SHA-256; it cannot be submitted or signed. Tell an administrator.`);
+    throw new ConflictError(
+      `Revision ${row.revision_no}: its content no longer matches its recorded SHA-256; it cannot be submitted or signed. Tell an administrator.`
+    );
   }
 }
 
 function audit(trx: Knex.Transaction, caller: Caller, row: Locked, action: string, after: Record<string, unknown>) {
-  return record({
-    actorId: caller.id, actorEmail: caller.email, entityType: 'formulation_revision', entityId: row.id, action,
-    before: { state: row.state, version: row.version }, after
-  }, trx);
+  return record(
+    {
+      actorId: caller.id,
+      actorEmail: caller.email,
+      entityType: 'formulation_revision',
+      entityId: row.id,
+      action,
+      before: { state: row.state, version: row.version },
+      after
+    },
+    trx
+  );
 }
 
 async function reload(revisionId: number) {
@@ -83,7 +93,9 @@ export async function submit(caller: Caller, revisionId: number, version?: numbe
     checkVersion(version, row.version, row.state);
     checkIntegrity(row);
     const now = new Date();
-    await trx('formulation_revisions').where({ id: row.id }).update({ state: 'submitted', submitted_at: now, submitted_by: caller.id, version: row.version + 1, updated_at: now });
+    await trx('formulation_revisions')
+      .where({ id: row.id })
+      .update({ state: 'submitted', submitted_at: now, submitted_by: caller.id, version: row.version + 1, updated_at: now });
     await audit(trx, caller, row, 'submit', { state: 'submitted', version: row.version + 1, contentSha256: row.content_sha256 });
   });
   const rev = await reload(revisionId);
@@ -97,21 +109,50 @@ export async function withdraw(caller: Caller, revisionId: number, reason: strin
     enforce('withdraw', caller, { state: row.state, createdBy: row.created_by, version: row.version });
     checkVersion(version, row.version, row.state);
     const now = new Date();
-    await trx('formulation_revisions').where({ id: row.id }).update({ state: 'withdrawn', withdraw_reason: reason, decided_at: now, decided_by: caller.id, version: row.version + 1, updated_at: now });
+    await trx('formulation_revisions')
+      .where({ id: row.id })
+      .update({
+        state: 'withdrawn',
+        withdraw_reason: reason,
+        decided_at: now,
+        decided_by: caller.id,
+        version: row.version + 1,
+        updated_at: now
+      });
     await audit(trx, caller, row, 'withdraw', { state: 'withdrawn', version: row.version + 1, reason });
   });
   return reload(revisionId);
 }
 
-async function insertSignature(trx: Knex.Transaction, caller: Caller, row: Locked, meaning: 'reviewed' | 'approved' | 'returned', comment: string, signedAt: Date): Promise<number> {
+async function insertSignature(
+  trx: Knex.Transaction,
+  caller: Caller,
+  row: Locked,
+  meaning: 'reviewed' | 'approved' | 'returned',
+  comment: string,
+  signedAt: Date
+): Promise<number> {
   const [id] = await trx('revision_signatures').insert({
-    revision_id: row.id, signer_id: caller.id, signer_name: caller.name, signer_email: caller.email,
-    meaning, comment: comment || null, signed_at: signedAt, content_sha256: row.content_sha256
+    revision_id: row.id,
+    signer_id: caller.id,
+    signer_name: caller.name,
+    signer_email: caller.email,
+    meaning,
+    comment: comment || null,
+    signed_at: signedAt,
+    content_sha256: row.content_sha256
   });
-  await record({
-    actorId: caller.id, actorEmail: caller.email, entityType: 'formulation_revision', entityId: row.id, action: 'e-signature',
-    after: { signatureId: id, meaning, signedAt: signedAt.toISOString(), contentSha256: row.content_sha256, comment: comment || null }
-  }, trx);
+  await record(
+    {
+      actorId: caller.id,
+      actorEmail: caller.email,
+      entityType: 'formulation_revision',
+      entityId: row.id,
+      action: 'e-signature',
+      after: { signatureId: id, meaning, signedAt: signedAt.toISOString(), contentSha256: row.content_sha256, comment: comment || null }
+    },
+    trx
+  );
   return id;
 }
 
@@ -129,19 +170,36 @@ export async function sign(caller: Caller, revisionId: number, meaning: 'reviewe
     checkIntegrity(row);
     await insertSignature(trx, caller, row, meaning, input.comment, signedAt);
     if (meaning === 'reviewed') return;
-    const current: Locked | undefined = await trx('formulation_revisions').where({ formulation_id: row.formulation_id, state: 'approved' }).forUpdate().first();
+    const current: Locked | undefined = await trx('formulation_revisions')
+      .where({ formulation_id: row.formulation_id, state: 'approved' })
+      .forUpdate()
+      .first();
     if (current && current.revision_no > row.revision_no) {
       throw new ConflictError(`Revision ${current.revision_no} is already approved and newer; an older revision cannot replace it.`);
     }
     if (current) {
-      await trx('formulation_revisions').where({ id: current.id }).update({ state: 'superseded', superseded_at: signedAt, version: current.version + 1, updated_at: signedAt });
+      await trx('formulation_revisions')
+        .where({ id: current.id })
+        .update({ state: 'superseded', superseded_at: signedAt, version: current.version + 1, updated_at: signedAt });
       await audit(trx, caller, current, 'supersede', { state: 'superseded', version: current.version + 1, supersededByRevisionId: row.id });
       superseded = current.revision_no;
     }
-    await trx('formulation_revisions').where({ id: row.id }).update({
-      state: 'approved', decided_at: signedAt, decided_by: caller.id, supersedes_revision_id: current?.id ?? null, version: row.version + 1, updated_at: signedAt
+    await trx('formulation_revisions')
+      .where({ id: row.id })
+      .update({
+        state: 'approved',
+        decided_at: signedAt,
+        decided_by: caller.id,
+        supersedes_revision_id: current?.id ?? null,
+        version: row.version + 1,
+        updated_at: signedAt
+      });
+    await audit(trx, caller, row, 'approve', {
+      state: 'approved',
+      version: row.version + 1,
+      supersedesRevisionId: current?.id ?? null,
+      contentSha256: row.content_sha256
     });
-    await audit(trx, caller, row, 'approve', { state: 'approved', version: row.version + 1, supersedesRevisionId: current?.id ?? null, contentSha256: row.content_sha256 });
   });
   const rev = await reload(revisionId);
   if (meaning === 'approved') {
@@ -160,9 +218,16 @@ export async function returnRevision(caller: Caller, revisionId: number, input: 
     enforce('return', caller, { state: row.state, createdBy: row.created_by, version: row.version });
     checkVersion(version, row.version, row.state);
     await insertSignature(trx, caller, row, 'returned', input.reason, signedAt);
-    await trx('formulation_revisions').where({ id: row.id }).update({
-      state: 'returned', return_reason: input.reason, decided_at: signedAt, decided_by: caller.id, version: row.version + 1, updated_at: signedAt
-    });
+    await trx('formulation_revisions')
+      .where({ id: row.id })
+      .update({
+        state: 'returned',
+        return_reason: input.reason,
+        decided_at: signedAt,
+        decided_by: caller.id,
+        version: row.version + 1,
+        updated_at: signedAt
+      });
     await audit(trx, caller, row, 'return', { state: 'returned', version: row.version + 1, reason: input.reason });
   });
   const rev = await reload(revisionId);

@@ -1,7 +1,10 @@
 /** Whether the database answers, and how fast (for the health endpoint). */
 import { db } from '../db/index';
 
-export interface DatabaseStatus { database: 'up' | 'down'; dbLatencyMs: number }
+export interface DatabaseStatus {
+  database: 'up' | 'down';
+  dbLatencyMs: number;
+}
 
 export async function databaseStatus(): Promise<DatabaseStatus> {
   const t0 = performance.now();

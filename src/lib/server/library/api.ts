@@ -38,46 +38,51 @@ async function materialOfKind(id: number, kind: MaterialKind) {
 
 export function collection(kind: MaterialKind) {
   return {
-    GET: (event: Event) => apiHandler(async () => {
-      requireUser(event.locals, mayRead);
-      const { q, sort, dir, archived } = readQuery(event.url.searchParams, listQuerySchema);
-      const list = await records.list({ kind, search: q, sort, dir, includeArchived: archived === '1' || archived === 'true' });
-      return finiteJson({ items: list.map((m) => detail.toApi(m)) });
-    }),
-    POST: (event: Event) => apiHandler(async () => {
-      const user = requireUser(event.locals, mayEditLibrary);
-      const body = await readJson(event, materialFieldsSchema);
-      const id = await editing.create(user, kind, body);
-      const created = await detail.load(id);
-      return finiteJson(detail.toApi(created!.material, created!), { status: 201, headers: { location: `/api/v1/${kind}s/${id}` } });
-    })
+    GET: (event: Event) =>
+      apiHandler(async () => {
+        requireUser(event.locals, mayRead);
+        const { q, sort, dir, archived } = readQuery(event.url.searchParams, listQuerySchema);
+        const list = await records.list({ kind, search: q, sort, dir, includeArchived: archived === '1' || archived === 'true' });
+        return finiteJson({ items: list.map((m) => detail.toApi(m)) });
+      }),
+    POST: (event: Event) =>
+      apiHandler(async () => {
+        const user = requireUser(event.locals, mayEditLibrary);
+        const body = await readJson(event, materialFieldsSchema);
+        const id = await editing.create(user, kind, body);
+        const created = await detail.load(id);
+        return finiteJson(detail.toApi(created!.material, created!), { status: 201, headers: { location: `/api/v1/${kind}s/${id}` } });
+      })
   };
 }
 
 export function item(kind: MaterialKind) {
   return {
-    GET: (event: Event) => apiHandler(async () => {
-      requireUser(event.locals, mayRead);
-      const d = await detail.load(idOf(event));
-      if (!d || d.material.kind !== kind) throw notFound(event.params.id);
-      return finiteJson(detail.toApi(d.material, d));
-    }),
-    PUT: (event: Event) => apiHandler(async () => {
-      const user = requireUser(event.locals, mayEditLibrary);
-      const id = idOf(event);
-      await materialOfKind(id, kind);
-      const { version, ...fields } = await readJson(event, materialUpdateApiSchema);
-      await editing.update(user, id, version, fields);
-      const d = await detail.load(id);
-      return finiteJson(detail.toApi(d!.material, d!));
-    }),
-    DELETE: (event: Event) => apiHandler(async () => {
-      const user = requireUser(event.locals, mayEditLibrary);
-      const id = idOf(event);
-      await materialOfKind(id, kind);
-      await editing.remove(user, id);
-      return new Response(null, { status: 204 });
-    })
+    GET: (event: Event) =>
+      apiHandler(async () => {
+        requireUser(event.locals, mayRead);
+        const d = await detail.load(idOf(event));
+        if (!d || d.material.kind !== kind) throw notFound(event.params.id);
+        return finiteJson(detail.toApi(d.material, d));
+      }),
+    PUT: (event: Event) =>
+      apiHandler(async () => {
+        const user = requireUser(event.locals, mayEditLibrary);
+        const id = idOf(event);
+        await materialOfKind(id, kind);
+        const { version, ...fields } = await readJson(event, materialUpdateApiSchema);
+        await editing.update(user, id, version, fields);
+        const d = await detail.load(id);
+        return finiteJson(detail.toApi(d!.material, d!));
+      }),
+    DELETE: (event: Event) =>
+      apiHandler(async () => {
+        const user = requireUser(event.locals, mayEditLibrary);
+        const id = idOf(event);
+        await materialOfKind(id, kind);
+        await editing.remove(user, id);
+        return new Response(null, { status: 204 });
+      })
   };
 }
 
@@ -91,18 +96,29 @@ const uploadQuerySchema = z.object({
 
 export function spectrumUpload(kind: MaterialKind) {
   return {
-    POST: (event: Event) => apiHandler(async () => {
-      const user = requireUser(event.locals, mayEditLibrary);
-      const id = idOf(event);
-      await materialOfKind(id, kind);
-      const q = readQuery(event.url.searchParams, uploadQuerySchema);
-      const file = await readUploadedFile(event.request, SPECTRUM_UPLOAD);
-      if (q.dryRun === '1' || q.dryRun === 'true') {
-        const p = previewSpectrumFile(file);
-        return finiteJson({ saved: false, points: p.spd.wavelengths.length, metrics: p.summary, warnings: p.warnings, spectrum: p.spd });
-      }
-      const r = await uploadSpectrum(user, id, q.kind, file, q.version);
-      return finiteJson({ saved: true, spectrumId: r.spectrumId, version: r.version, points: r.preview.spd.wavelengths.length, metrics: r.preview.summary, warnings: r.preview.warnings }, { status: 201 });
-    })
+    POST: (event: Event) =>
+      apiHandler(async () => {
+        const user = requireUser(event.locals, mayEditLibrary);
+        const id = idOf(event);
+        await materialOfKind(id, kind);
+        const q = readQuery(event.url.searchParams, uploadQuerySchema);
+        const file = await readUploadedFile(event.request, SPECTRUM_UPLOAD);
+        if (q.dryRun === '1' || q.dryRun === 'true') {
+          const p = previewSpectrumFile(file);
+          return finiteJson({ saved: false, points: p.spd.wavelengths.length, metrics: p.summary, warnings: p.warnings, spectrum: p.spd });
+        }
+        const r = await uploadSpectrum(user, id, q.kind, file, q.version);
+        return finiteJson(
+          {
+            saved: true,
+            spectrumId: r.spectrumId,
+            version: r.version,
+            points: r.preview.spd.wavelengths.length,
+            metrics: r.preview.summary,
+            warnings: r.preview.warnings
+          },
+          { status: 201 }
+        );
+      })
   };
 }

@@ -25,14 +25,22 @@ export async function listMaterialOptions(kind: MaterialKind): Promise<MaterialO
     .orderByRaw('peak_nm IS NULL, peak_nm')
     .orderBy('code')
     .select('id', 'code', 'name', 'family', 'peak_nm');
-  return rows.map((r) => ({ id: r.id, code: r.code, name: r.name, family: r.family, peakNm: r.peak_nm == null ? null : Number(r.peak_nm) }));
+  return rows.map((r) => ({
+    id: r.id,
+    code: r.code,
+    name: r.name,
+    family: r.family,
+    peakNm: r.peak_nm == null ? null : Number(r.peak_nm)
+  }));
 }
 
 export async function loadBlendComponents(pumpId: number, phosphorIds: number[]): Promise<{ pump: PumpSpec; phosphors: PhosphorSpec[] }> {
   const ids = [pumpId, ...phosphorIds];
   const rows = await db()('materials').whereIn('id', ids).select('*');
   const byId = new Map(rows.map((r) => [Number(r.id), records.toMaterial(r)]));
-  const spectrumIds = [...byId.values()].flatMap((m) => [m.emissionSpectrumId, m.excitationSpectrumId]).filter((x): x is number => x !== null);
+  const spectrumIds = [...byId.values()]
+    .flatMap((m) => [m.emissionSpectrumId, m.excitationSpectrumId])
+    .filter((x): x is number => x !== null);
   const spds = await spectra.getMany(spectrumIds);
   const spdOf = (id: number | null) => (id === null ? undefined : spds.get(id));
   const need = (id: number, kind: MaterialKind) => {

@@ -22,7 +22,11 @@ function isDuplicate(err: unknown): boolean {
 
 function checkKind(kind: MaterialKind, fields: Partial<MaterialFieldsInput>) {
   const issues = kindIssues(kind, fields);
-  if (issues.length) throw invalid(issues.map((i) => i.message).join(' '), issues.map((i) => ({ ...i, line: null })));
+  if (issues.length)
+    throw invalid(
+      issues.map((i) => i.message).join(' '),
+      issues.map((i) => ({ ...i, line: null }))
+    );
 }
 
 export async function create(actor: User, kind: MaterialKind, fields: MaterialFieldsInput): Promise<number> {
@@ -40,7 +44,12 @@ export async function create(actor: User, kind: MaterialKind, fields: MaterialFi
 }
 
 /** Locks the row, checks it exists, is editable and still at `version`. */
-export async function lockForEdit(trx: Knex.Transaction, id: number, version: number | undefined, what = 'edited'): Promise<records.Material> {
+export async function lockForEdit(
+  trx: Knex.Transaction,
+  id: number,
+  version: number | undefined,
+  what = 'edited'
+): Promise<records.Material> {
   const current = await records.get(id, trx);
   if (!current) throw notFound(id);
   if (version !== undefined && current.version !== version) throw staleVersion(current.version, version);
@@ -63,9 +72,14 @@ export async function update(actor: User, id: number, version: number, fields: P
       checkKind(current.kind, merged);
       const diff = changed(beforeFields, merged);
       if (diff.keys.length === 0) return current.version;
-      const n = await trx('materials').where({ id, version }).update({ ...records.fieldsToColumns(fields), version: version + 1, updated_by: actor.id, updated_at: trx.fn.now(3) });
+      const n = await trx('materials')
+        .where({ id, version })
+        .update({ ...records.fieldsToColumns(fields), version: version + 1, updated_by: actor.id, updated_at: trx.fn.now(3) });
       if (n !== 1) throw staleVersion(current.version + 1, version);
-      await audit.record({ ...actorOf(actor), entityType: 'material', entityId: id, action: 'update', before: diff.before, after: diff.after }, trx);
+      await audit.record(
+        { ...actorOf(actor), entityType: 'material', entityId: id, action: 'update', before: diff.before, after: diff.after },
+        trx
+      );
       return version + 1;
     });
   } catch (err) {
@@ -80,7 +94,9 @@ export async function setArchived(actor: User, id: number, version: number, arch
     if (!current) throw notFound(id);
     if (current.version !== version) throw staleVersion(current.version, version);
     if (Boolean(current.archivedAt) === archived) return current.version;
-    await trx('materials').where({ id, version }).update({ archived_at: archived ? trx.fn.now(3) : null, version: version + 1, updated_by: actor.id, updated_at: trx.fn.now(3) });
+    await trx('materials')
+      .where({ id, version })
+      .update({ archived_at: archived ? trx.fn.now(3) : null, version: version + 1, updated_by: actor.id, updated_at: trx.fn.now(3) });
     await audit.record({ ...actorOf(actor), entityType: 'material', entityId: id, action: archived ? 'archive' : 'restore' }, trx);
     return version + 1;
   });
@@ -97,15 +113,34 @@ export async function remove(actor: User, id: number): Promise<void> {
       if (refusal) throw conflict(refusal);
       const lotIds = (await trx('material_lots').where({ material_id: id }).select('id')).map((r) => String(r.id));
       const files = await trx('stored_files')
-        .where((w) => w.where({ entity_type: 'material', entity_id: String(id) }).orWhere((o) => o.where('entity_type', 'material-lot').whereIn('entity_id', lotIds)))
+        .where((w) =>
+          w
+            .where({ entity_type: 'material', entity_id: String(id) })
+            .orWhere((o) => o.where('entity_type', 'material-lot').whereIn('entity_id', lotIds))
+        )
         .select('id', 'storage_key');
       await trx('materials').where({ id }).update({ emission_spectrum_id: null, excitation_spectrum_id: null });
       await trx('material_spectra').where({ material_id: id }).delete();
       await trx('material_lots').where({ material_id: id }).delete();
       await trx('materials').where({ id }).delete();
-      if (files.length) await trx('stored_files').whereIn('id', files.map((f) => f.id)).delete();
+      if (files.length)
+        await trx('stored_files')
+          .whereIn(
+            'id',
+            files.map((f) => f.id)
+          )
+          .delete();
       keys.push(...files.map((f) => f.storage_key as string));
-      await audit.record({ ...actorOf(actor), entityType: 'material', entityId: id, action: 'delete', before: { kind: current.kind, ...records.editableSnapshot(current) } }, trx);
+      await audit.record(
+        {
+          ...actorOf(actor),
+          entityType: 'material',
+          entityId: id,
+          action: 'delete',
+          before: { kind: current.kind, ...records.editableSnapshot(current) }
+        },
+        trx
+      );
     });
   } catch (err) {
     if ((err as { code?: string })?.code === 'ER_ROW_IS_REFERENCED_2') {

@@ -4,4 +4,6 @@ import { conflict, notFound as notFoundError } from '../../errors/domain-error';
 export const notFound = (id: number | string) => notFoundError(`Material ${id} was not found.`);
 
 export const staleVersion = (current: number, sent: number) =>
-  conflict(`This material was changed by someone else since you opened it (you edited version ${sent}, it is now at version ${current}). Nothing was saved: reload it, then make your change again.`);
+  conflict(
+    `This material was changed by someone else since you opened it (you edited version ${sent}, it is now at version ${current}). Nothing was saved: reload it, then make your change again.`
+  );

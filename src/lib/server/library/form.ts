@@ -12,7 +12,9 @@ export function formValues(fd: FormData, keys: readonly string[]): FormValues {
 
 export const MATERIAL_FORM_KEYS = Object.keys(EDITABLE_COLUMNS);
 
-export function readMaterialForm(fd: FormData): { ok: true; data: MaterialFieldsInput; values: FormValues } | { ok: false; values: FormValues; errors: FieldErrors } {
+export function readMaterialForm(
+  fd: FormData
+): { ok: true; data: MaterialFieldsInput; values: FormValues } | { ok: false; values: FormValues; errors: FieldErrors } {
   const values = formValues(fd, MATERIAL_FORM_KEYS);
   const parsed = materialFieldsSchema.safeParse(values);
   if (!parsed.success) return { ok: false, values, errors: z.flattenError(parsed.error).fieldErrors };
@@ -27,7 +29,7 @@ export function readVersion(fd: FormData): number | null {
 /** The uploaded file of a form field, or null when none was chosen. */
 export async function formFile(fd: FormData, key: string): Promise<{ name: string; contentType: string; body: Buffer } | null> {
   const f = fd.get(key);
-  if (!(f instanceof File) || f.size === 0 && !f.name) return null;
+  if (!(f instanceof File) || (f.size === 0 && !f.name)) return null;
   return { name: f.name || 'upload', contentType: f.type || 'application/octet-stream', body: Buffer.from(await f.arrayBuffer()) };
 }
 

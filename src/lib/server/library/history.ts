@@ -5,20 +5,33 @@ import type { HistoryEntry } from '../../library/types';
 export type { HistoryEntry } from '../../library/types';
 
 const ACTION_LABELS: Record<string, string> = {
-  create: 'Created', update: 'Edited', archive: 'Archived', restore: 'Restored', delete: 'Deleted',
-  'emission-spectrum-upload': 'Emission spectrum uploaded', 'excitation-spectrum-upload': 'Excitation spectrum uploaded',
-  'lot-add': 'Lot added', 'lot-remove': 'Lot removed', 'attachment-add': 'Document added', 'attachment-remove': 'Document removed'
+  create: 'Created',
+  update: 'Edited',
+  archive: 'Archived',
+  restore: 'Restored',
+  delete: 'Deleted',
+  'emission-spectrum-upload': 'Emission spectrum uploaded',
+  'excitation-spectrum-upload': 'Excitation spectrum uploaded',
+  'lot-add': 'Lot added',
+  'lot-remove': 'Lot removed',
+  'attachment-add': 'Document added',
+  'attachment-remove': 'Document removed'
 };
 
-const show = (v: unknown) => (v === null || v === undefined || v === '' ? '—' : typeof v === 'string' ? (v.length > 60 ? `${v.slice(0, 60)}…` : v) : JSON.stringify(v));
+const show = (v: unknown) =>
+  v === null || v === undefined || v === '' ? '—' : typeof v === 'string' ? (v.length > 60 ? `${v.slice(0, 60)}…` : v) : JSON.stringify(v);
 
 function describe(action: string, before: Record<string, unknown> | null, after: Record<string, unknown> | null): string[] {
   if (action === 'update' && after) return Object.keys(after).map((k) => `${k}: ${show(before?.[k])} → ${show(after[k])}`);
   if (action.endsWith('spectrum-upload') && after) {
-    const shape = after.peakNm !== undefined ? `; peak ${show(before?.peakNm)} → ${show(after.peakNm)} nm, FWHM ${show(before?.fwhmNm)} → ${show(after.fwhmNm)} nm` : '';
+    const shape =
+      after.peakNm !== undefined
+        ? `; peak ${show(before?.peakNm)} → ${show(after.peakNm)} nm, FWHM ${show(before?.fwhmNm)} → ${show(after.fwhmNm)} nm`
+        : '';
     return [`${show(after.file)}, ${show(after.points)} points${shape}`];
   }
-  if (action === 'lot-add' && after) return [`lot ${show(after.lotNumber)}${after.certificate ? ` with certificate ${show(after.certificate)}` : ''}`];
+  if (action === 'lot-add' && after)
+    return [`lot ${show(after.lotNumber)}${after.certificate ? ` with certificate ${show(after.certificate)}` : ''}`];
   if (action === 'lot-remove' && before) return [`lot ${show(before.lotNumber)}`];
   if (action.startsWith('attachment') && (after ?? before)) return [show((after ?? before)!.name)];
   return [];
@@ -38,10 +51,13 @@ export async function forMaterial(materialId: number, limit = 100): Promise<Hist
   const rows: Record<string, unknown>[] = await db()('audit_events as a')
     .leftJoin('users as u', 'u.id', 'a.actor_id')
     .where({ 'a.entity_type': 'material', 'a.entity_id': String(materialId) })
-    .orderBy('a.id', 'desc').limit(limit)
+    .orderBy('a.id', 'desc')
+    .limit(limit)
     .select('a.id', 'a.at', 'a.action', 'a.before_json', 'a.after_json', 'a.actor_email', 'u.name as actor_name');
   return rows.map((r) => ({
-    id: Number(r.id), at: r.at as Date, actor: String(r.actor_name ?? r.actor_email ?? 'system'),
+    id: Number(r.id),
+    at: r.at as Date,
+    actor: String(r.actor_name ?? r.actor_email ?? 'system'),
     action: ACTION_LABELS[String(r.action)] ?? String(r.action),
     changes: describe(String(r.action), parse(r.before_json), parse(r.after_json))
   }));

@@ -37,9 +37,18 @@ export interface Material {
 
 /** Editable fields ↔ columns (one place, used by create, update and audit snapshots). */
 export const EDITABLE_COLUMNS = {
-  code: 'code', name: 'name', family: 'family', supplier: 'supplier', densityGCm3: 'density_g_cm3', iqe: 'iqe',
-  absorptionPerWtPctMm: 'absorption_per_wt_pct_mm', absorptionReferenceNm: 'absorption_reference_nm',
-  costPerKg: 'cost_per_kg', d50Um: 'd50_um', notes: 'notes', safetyNote: 'safety_note'
+  code: 'code',
+  name: 'name',
+  family: 'family',
+  supplier: 'supplier',
+  densityGCm3: 'density_g_cm3',
+  iqe: 'iqe',
+  absorptionPerWtPctMm: 'absorption_per_wt_pct_mm',
+  absorptionReferenceNm: 'absorption_reference_nm',
+  costPerKg: 'cost_per_kg',
+  d50Um: 'd50_um',
+  notes: 'notes',
+  safetyNote: 'safety_note'
 } as const;
 export type EditableField = keyof typeof EDITABLE_COLUMNS;
 export type MaterialFields = { [K in EditableField]: Material[K] };
@@ -49,16 +58,32 @@ const num = (v: unknown): number | null => (v === null || v === undefined ? null
 
 export function toMaterial(r: Row | MaterialRow): Material {
   return {
-    id: Number(r.id), kind: r.kind as MaterialKind, code: String(r.code), name: String(r.name),
-    family: (r.family as string) ?? null, supplier: (r.supplier as string) ?? null,
-    peakNm: num(r.peak_nm), fwhmNm: num(r.fwhm_nm), densityGCm3: num(r.density_g_cm3), iqe: num(r.iqe),
-    absorptionPerWtPctMm: num(r.absorption_per_wt_pct_mm), absorptionReferenceNm: num(r.absorption_reference_nm),
-    costPerKg: num(r.cost_per_kg), d50Um: num(r.d50_um), notes: (r.notes as string) ?? null,
-    safetyNote: (r.safety_note as string) ?? null, emissionSpectrumId: num(r.emission_spectrum_id),
-    excitationSpectrumId: num(r.excitation_spectrum_id), archivedAt: (r.archived_at as Date) ?? null,
-    version: Number(r.version), createdBy: num(r.created_by), updatedBy: num(r.updated_by),
-    createdByName: ((r as Row).created_by_name as string) ?? null, updatedByName: ((r as Row).updated_by_name as string) ?? null,
-    createdAt: r.created_at as Date, updatedAt: r.updated_at as Date
+    id: Number(r.id),
+    kind: r.kind as MaterialKind,
+    code: String(r.code),
+    name: String(r.name),
+    family: (r.family as string) ?? null,
+    supplier: (r.supplier as string) ?? null,
+    peakNm: num(r.peak_nm),
+    fwhmNm: num(r.fwhm_nm),
+    densityGCm3: num(r.density_g_cm3),
+    iqe: num(r.iqe),
+    absorptionPerWtPctMm: num(r.absorption_per_wt_pct_mm),
+    absorptionReferenceNm: num(r.absorption_reference_nm),
+    costPerKg: num(r.cost_per_kg),
+    d50Um: num(r.d50_um),
+    notes: (r.notes as string) ?? null,
+    safetyNote: (r.safety_note as string) ?? null,
+    emissionSpectrumId: num(r.emission_spectrum_id),
+    excitationSpectrumId: num(r.excitation_spectrum_id),
+    archivedAt: (r.archived_at as Date) ?? null,
+    version: Number(r.version),
+    createdBy: num(r.created_by),
+    updatedBy: num(r.updated_by),
+    createdByName: ((r as Row).created_by_name as string) ?? null,
+    updatedByName: ((r as Row).updated_by_name as string) ?? null,
+    createdAt: r.created_at as Date,
+    updatedAt: r.updated_at as Date
   };
 }
 
@@ -82,7 +107,9 @@ function baseQuery(q: Knex | Knex.Transaction) {
 }
 
 export async function get(id: number, trx?: Knex.Transaction): Promise<Material | null> {
-  const q = baseQuery(trx ?? db()).where('m.id', id).first();
+  const q = baseQuery(trx ?? db())
+    .where('m.id', id)
+    .first();
   if (trx) q.forUpdate();
   const row = await q;
   return row ? toMaterial(row) : null;
@@ -96,8 +123,15 @@ export async function getByCode(code: string): Promise<Material | null> {
 export const SORT_KEYS = ['code', 'name', 'family', 'supplier', 'peakNm', 'fwhmNm', 'iqe', 'costPerKg', 'updatedAt'] as const;
 export type SortKey = (typeof SORT_KEYS)[number];
 const SORT_COLUMNS: Record<SortKey, string> = {
-  code: 'm.code', name: 'm.name', family: 'm.family', supplier: 'm.supplier', peakNm: 'm.peak_nm', fwhmNm: 'm.fwhm_nm',
-  iqe: 'm.iqe', costPerKg: 'm.cost_per_kg', updatedAt: 'm.updated_at'
+  code: 'm.code',
+  name: 'm.name',
+  family: 'm.family',
+  supplier: 'm.supplier',
+  peakNm: 'm.peak_nm',
+  fwhmNm: 'm.fwhm_nm',
+  iqe: 'm.iqe',
+  costPerKg: 'm.cost_per_kg',
+  updatedAt: 'm.updated_at'
 };
 
 export interface ListQuery {
@@ -116,7 +150,9 @@ export async function list(query: ListQuery = {}): Promise<Material[]> {
   const term = query.search?.trim();
   if (term) {
     const like = `%${term.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-    q.where((w) => w.whereILike('m.code', like).orWhereILike('m.name', like).orWhereILike('m.family', like).orWhereILike('m.supplier', like));
+    q.where((w) =>
+      w.whereILike('m.code', like).orWhereILike('m.name', like).orWhereILike('m.family', like).orWhereILike('m.supplier', like)
+    );
   }
   const dir = query.dir === 'desc' ? 'desc' : 'asc';
   q.orderByRaw(`${SORT_COLUMNS[query.sort ?? 'code']} IS NULL, ${SORT_COLUMNS[query.sort ?? 'code']} ${dir}`).orderBy('m.id', 'asc');

@@ -6,37 +6,53 @@ import type { SpectrumKind, StoredSpectrum } from '../../library/types';
 
 export { SPECTRUM_KINDS, type SpectrumKind, type StoredSpectrum } from '../../library/types';
 
-
 type Row = Record<string, unknown>;
 
 function toSpectrum(r: Row, withData: boolean): StoredSpectrum {
   return {
-    id: Number(r.id), materialId: Number(r.material_id), kind: r.kind as SpectrumKind,
+    id: Number(r.id),
+    materialId: Number(r.material_id),
+    kind: r.kind as SpectrumKind,
     wavelengths: withData ? JSON.parse(String(r.wavelengths_json)) : [],
     values: withData ? JSON.parse(String(r.values_json)) : [],
-    points: Number(r.points), minNm: Number(r.min_nm), maxNm: Number(r.max_nm),
+    points: Number(r.points),
+    minNm: Number(r.min_nm),
+    maxNm: Number(r.max_nm),
     sourceFileId: r.source_file_id == null ? null : Number(r.source_file_id),
-    sourceFileName: (r.original_name as string) ?? null, origin: String(r.origin),
-    createdBy: r.created_by == null ? null : Number(r.created_by), createdByName: (r.user_name as string) ?? null,
+    sourceFileName: (r.original_name as string) ?? null,
+    origin: String(r.origin),
+    createdBy: r.created_by == null ? null : Number(r.created_by),
+    createdByName: (r.user_name as string) ?? null,
     createdAt: r.created_at as Date
   };
 }
 
 const base = (q: Knex | Knex.Transaction) =>
-  q('material_spectra as s')
-    .leftJoin('stored_files as f', 'f.id', 's.source_file_id')
-    .leftJoin('users as u', 'u.id', 's.created_by');
+  q('material_spectra as s').leftJoin('stored_files as f', 'f.id', 's.source_file_id').leftJoin('users as u', 'u.id', 's.created_by');
 
 export async function insert(
-  input: { materialId: number; kind: SpectrumKind; spd: Spd; sourceFileId: number | null; origin: 'upload' | 'api' | 'generated'; createdBy: number | null },
+  input: {
+    materialId: number;
+    kind: SpectrumKind;
+    spd: Spd;
+    sourceFileId: number | null;
+    origin: 'upload' | 'api' | 'generated';
+    createdBy: number | null;
+  },
   trx: Knex.Transaction
 ): Promise<number> {
   const { wavelengths, values } = input.spd;
   const [id] = await trx('material_spectra').insert({
-    material_id: input.materialId, kind: input.kind,
-    wavelengths_json: JSON.stringify(wavelengths), values_json: JSON.stringify(values),
-    points: wavelengths.length, min_nm: wavelengths[0], max_nm: wavelengths[wavelengths.length - 1],
-    source_file_id: input.sourceFileId, origin: input.origin, created_by: input.createdBy
+    material_id: input.materialId,
+    kind: input.kind,
+    wavelengths_json: JSON.stringify(wavelengths),
+    values_json: JSON.stringify(values),
+    points: wavelengths.length,
+    min_nm: wavelengths[0],
+    max_nm: wavelengths[wavelengths.length - 1],
+    source_file_id: input.sourceFileId,
+    origin: input.origin,
+    created_by: input.createdBy
   });
   return id;
 }
@@ -57,7 +73,21 @@ export async function getMany(ids: number[]): Promise<Map<number, StoredSpectrum
 export async function history(materialId: number): Promise<StoredSpectrum[]> {
   const rows: Row[] = await base(db())
     .where('s.material_id', materialId)
-    .orderBy('s.created_at', 'desc').orderBy('s.id', 'desc')
-    .select('s.id', 's.material_id', 's.kind', 's.points', 's.min_nm', 's.max_nm', 's.source_file_id', 's.origin', 's.created_by', 's.created_at', 'f.original_name', 'u.name as user_name');
+    .orderBy('s.created_at', 'desc')
+    .orderBy('s.id', 'desc')
+    .select(
+      's.id',
+      's.material_id',
+      's.kind',
+      's.points',
+      's.min_nm',
+      's.max_nm',
+      's.source_file_id',
+      's.origin',
+      's.created_by',
+      's.created_at',
+      'f.original_name',
+      'u.name as user_name'
+    );
   return rows.map((r) => toSpectrum(r, false));
 }

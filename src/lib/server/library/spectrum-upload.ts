@@ -42,37 +42,81 @@ export function previewSpectrumFile(file: SpectrumFileInput): SpectrumPreview {
   const parsed = parseSpectrumFile(decodeText(file.body));
   if (!parsed.ok) {
     const n = parsed.errors.length;
-    throw unprocessable(`${file.name} was not saved: ${n === 1 ? 'one problem' : `${n} problems`} in the file. ${parsed.errors[0].message}`, parsed.errors.map((e) => lineIssue(e.line, e.message)));
+    throw unprocessable(
+      `${file.name} was not saved: ${n === 1 ? 'one problem' : `${n} problems`} in the file. ${parsed.errors[0].message}`,
+      parsed.errors.map((e) => lineIssue(e.line, e.message))
+    );
   }
   const spd = { wavelengths: parsed.wavelengths, values: parsed.columns[0].values };
   try {
     return { spd, summary: summariseSpectrum(spd), warnings: parsed.warnings, fileName: file.name };
   } catch (err) {
-    if (err instanceof SpectrumInputError) throw unprocessable(`${file.name} was not saved: ${err.message}.`, [lineIssue(null, err.message)]);
+    if (err instanceof SpectrumInputError)
+      throw unprocessable(`${file.name} was not saved: ${err.message}.`, [lineIssue(null, err.message)]);
     throw err;
   }
 }
 
 /** Stores a checked spectrum file as the material's current emission or excitation spectrum. Returns the new version. */
-export async function uploadSpectrum(actor: User, materialId: number, kind: SpectrumKind, file: SpectrumFileInput, version?: number): Promise<{ spectrumId: number; version: number; preview: SpectrumPreview }> {
+export async function uploadSpectrum(
+  actor: User,
+  materialId: number,
+  kind: SpectrumKind,
+  file: SpectrumFileInput,
+  version?: number
+): Promise<{ spectrumId: number; version: number; preview: SpectrumPreview }> {
   const material = await records.get(materialId);
   if (!material) throw notFound(materialId);
   if (kind === 'excitation' && material.kind === 'pump') throw invalid('A pump has an emission spectrum only.');
   const preview = previewSpectrumFile(file);
   return db().transaction(async (trx) => {
     const current = await lockForEdit(trx, materialId, version, 'given a new spectrum');
-    const fileId = await putFile({ body: file.body, originalName: file.name, contentType: file.contentType || 'text/plain', purpose: 'spectrum-source', entityType: 'material', entityId: materialId, uploadedBy: actor.id }, trx);
-    const spectrumId = await spectra.insert({ materialId, kind, spd: preview.spd, sourceFileId: fileId, origin: 'upload', createdBy: actor.id }, trx);
+    const fileId = await putFile(
+      {
+        body: file.body,
+        originalName: file.name,
+        contentType: file.contentType || 'text/plain',
+        purpose: 'spectrum-source',
+        entityType: 'material',
+        entityId: materialId,
+        uploadedBy: actor.id
+      },
+      trx
+    );
+    const spectrumId = await spectra.insert(
+      { materialId, kind, spd: preview.spd, sourceFileId: fileId, origin: 'upload', createdBy: actor.id },
+      trx
+    );
     const shape = kind === 'emission' ? { peak_nm: round2(preview.summary.peakNm), fwhm_nm: round2(preview.summary.fwhmNm) } : {};
-    await trx('materials').where({ id: materialId, version: current.version }).update({
-      [kind === 'emission' ? 'emission_spectrum_id' : 'excitation_spectrum_id']: spectrumId,
-      ...shape, version: current.version + 1, updated_by: actor.id, updated_at: trx.fn.now(3)
-    });
-    await audit.record({
-      actorId: actor.id, actorEmail: actor.email, entityType: 'material', entityId: materialId, action: `${kind}-spectrum-upload`,
-      before: kind === 'emission' ? { peakNm: current.peakNm, fwhmNm: current.fwhmNm, spectrumId: current.emissionSpectrumId } : { spectrumId: current.excitationSpectrumId },
-      after: { spectrumId, file: file.name, points: preview.spd.wavelengths.length, ...(kind === 'emission' ? { peakNm: shape.peak_nm, fwhmNm: shape.fwhm_nm } : {}) }
-    }, trx);
+    await trx('materials')
+      .where({ id: materialId, version: current.version })
+      .update({
+        [kind === 'emission' ? 'emission_spectrum_id' : 'excitation_spectrum_id']: spectrumId,
+        ...shape,
+        version: current.version + 1,
+        updated_by: actor.id,
+        updated_at: trx.fn.now(3)
+      });
+    await audit.record(
+      {
+        actorId: actor.id,
+        actorEmail: actor.email,
+        entityType: 'material',
+        entityId: materialId,
+        action: `${kind}-spectrum-upload`,
+        before:
+          kind === 'emission'
+            ? { peakNm: current.peakNm, fwhmNm: current.fwhmNm, spectrumId: current.emissionSpectrumId }
+            : { spectrumId: current.excitationSpectrumId },
+        after: {
+          spectrumId,
+          file: file.name,
+          points: preview.spd.wavelengths.length,
+          ...(kind === 'emission' ? { peakNm: shape.peak_nm, fwhmNm: shape.fwhm_nm } : {})
+        }
+      },
+      trx
+    );
     return { spectrumId, version: current.version + 1, preview };
   });
 }

@@ -20,10 +20,16 @@ export async function revisionsUsing(materialId: number, trx?: Knex.Transaction)
   const pattern = `"materialId"[[:space:]]*:[[:space:]]*${Math.trunc(materialId)}([^0-9.]|$)`;
   const withFormulations = await q.schema.hasTable('formulations');
   const query = q('formulation_revisions as r').whereRaw('r.content_json REGEXP ?', [pattern]).orderBy('r.id', 'desc').limit(50);
-  if (withFormulations) query.leftJoin('formulations as f', 'f.id', 'r.formulation_id').select('r.id', 'r.revision_no', 'r.state', 'f.code');
+  if (withFormulations)
+    query.leftJoin('formulations as f', 'f.id', 'r.formulation_id').select('r.id', 'r.revision_no', 'r.state', 'f.code');
   else query.select('r.id', 'r.revision_no', 'r.state');
   const rows: { id: number; revision_no?: number; state: string; code?: string }[] = await query;
-  return rows.map((r) => ({ revisionId: r.id, formulationCode: r.code ?? null, revisionNo: r.revision_no ?? null, state: String(r.state) }));
+  return rows.map((r) => ({
+    revisionId: r.id,
+    formulationCode: r.code ?? null,
+    revisionNo: r.revision_no ?? null,
+    state: String(r.state)
+  }));
 }
 
 export function describeUse(u: RevisionUse): string {
@@ -36,6 +42,8 @@ export function deletionRefusal(code: string, uses: RevisionUse[]): string | nul
   if (uses.length === 0) return null;
   const approved = uses.filter((u) => u.state === 'approved');
   const listed = (approved.length ? approved : uses).slice(0, 5).map(describeUse).join(', ');
-  const what = approved.length ? `approved formulation${approved.length > 1 ? 's' : ''}` : `formulation revision${uses.length > 1 ? 's' : ''}`;
+  const what = approved.length
+    ? `approved formulation${approved.length > 1 ? 's' : ''}`
+    : `formulation revision${uses.length > 1 ? 's' : ''}`;
   return `${code} cannot be deleted: it is used by ${what} ${listed}${uses.length > 5 ? ' and others' : ''}. Archive it instead — archived materials leave the pick lists but keep existing records intact.`;
 }

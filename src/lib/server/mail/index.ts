@@ -21,7 +21,13 @@ function transporter(): Transporter {
 export async function send(message: Message): Promise<boolean> {
   if (message.to.length === 0) return true;
   try {
-    await transporter().sendMail({ from: config().mail.from, to: message.to.join(', '), subject: message.subject, text: message.text, html: message.html });
+    await transporter().sendMail({
+      from: config().mail.from,
+      to: message.to.join(', '),
+      subject: message.subject,
+      text: message.text,
+      html: message.html
+    });
     return true;
   } catch (err) {
     console.error('[phosforge] mail not sent:', message.subject, '→', message.to.join(', '), (err as Error).message);

@@ -24,5 +24,8 @@ export function ndjsonStream(run: (write: (line: Record<string, unknown>) => voi
       controller.close();
     }
   });
-  return new Response(stream, { status: 200, headers: { 'content-type': 'application/x-ndjson; charset=utf-8', 'cache-control': 'no-cache', 'x-accel-buffering': 'no' } });
+  return new Response(stream, {
+    status: 200,
+    headers: { 'content-type': 'application/x-ndjson; charset=utf-8', 'cache-control': 'no-cache', 'x-accel-buffering': 'no' }
+  });
 }

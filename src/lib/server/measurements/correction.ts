@@ -31,7 +31,12 @@ export interface CorrectionOutcome {
   measuredMean: { x: number; y: number };
 }
 
-export async function makeCorrectionDraft(caller: Caller, batchId: number, stepFraction: number, origin: string): Promise<CorrectionOutcome> {
+export async function makeCorrectionDraft(
+  caller: Caller,
+  batchId: number,
+  stepFraction: number,
+  origin: string
+): Promise<CorrectionOutcome> {
   requireQuality(caller, 'A correction draft');
   const ctx = await loadContext(batchId);
   if (!ctx) throw notFound(`Batch ${batchId}`);
@@ -43,7 +48,8 @@ export async function makeCorrectionDraft(caller: Caller, batchId: number, stepF
   const ids = materialIdsOf(content);
   const components = await loadBlendComponents(ids.pump, ids.phosphors);
   const offset = judged.summary.meanOffset!;
-  const note = `Correction from batch ${b.batchNumber} (${judged.summary.parts} parts): measured mean x ${mean.x.toFixed(4)}, y ${mean.y.toFixed(4)}, ` +
+  const note =
+    `Correction from batch ${b.batchNumber} (${judged.summary.parts} parts): measured mean x ${mean.x.toFixed(4)}, y ${mean.y.toFixed(4)}, ` +
     `${offset.steps.toFixed(1)} steps from target.`;
   let corrected;
   try {
@@ -58,25 +64,69 @@ export async function makeCorrectionDraft(caller: Caller, batchId: number, stepF
   // The draft, the batch's correction record and its audit event are written together or not at all.
   const draft = await createCorrectionDraft(caller, ctx.revision.id, corrected.content, batchId, async (trx, d) => {
     const [id] = await trx('batch_corrections').insert({
-      batch_id: batchId, revision_id: d.revisionId, step_fraction: stepFraction, measured_x: mean.x, measured_y: mean.y,
-      parts_count: judged.summary.parts, predicted_x: r.predicted.x, predicted_y: r.predicted.y, predicted_cct_k: r.predicted.cct,
-      predicted_duv: r.predicted.duv, created_by: caller.id,
-      detail_json: JSON.stringify({ recipeKind: r.recipe.kind, multipliers: r.multipliers, bias: r.bias, errorBefore: r.errorBefore, errorAfter: r.errorAfter, converged: r.converged, cap: r.cap })
+      batch_id: batchId,
+      revision_id: d.revisionId,
+      step_fraction: stepFraction,
+      measured_x: mean.x,
+      measured_y: mean.y,
+      parts_count: judged.summary.parts,
+      predicted_x: r.predicted.x,
+      predicted_y: r.predicted.y,
+      predicted_cct_k: r.predicted.cct,
+      predicted_duv: r.predicted.duv,
+      created_by: caller.id,
+      detail_json: JSON.stringify({
+        recipeKind: r.recipe.kind,
+        multipliers: r.multipliers,
+        bias: r.bias,
+        errorBefore: r.errorBefore,
+        errorAfter: r.errorAfter,
+        converged: r.converged,
+        cap: r.cap
+      })
     });
-    await record({
-      actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: 'correction-draft',
-      after: { correctionId: id, revisionId: d.revisionId, revisionNo: d.revisionNo, stepFraction, measuredMean: mean, predicted: r.predicted }
-    }, trx);
+    await record(
+      {
+        actorId: caller.id,
+        actorEmail: caller.email,
+        entityType: 'batch',
+        entityId: batchId,
+        action: 'correction-draft',
+        after: {
+          correctionId: id,
+          revisionId: d.revisionId,
+          revisionNo: d.revisionNo,
+          stepFraction,
+          measuredMean: mean,
+          predicted: r.predicted
+        }
+      },
+      trx
+    );
     return id as number;
   });
   const correctionId = draft.alongside;
   const author = await users.get(ctx.revision.createdBy);
   if (author?.active) {
-    await send(correctionDraftMessage({
-      to: [author.email], batchNumber: b.batchNumber, formulation: `${b.formulationCode} ${b.formulationName}`, draftRevisionNo: draft.revisionNo,
-      requestedBy: caller.name, offsetText: `${offset.steps.toFixed(1)} steps (Δx ${offset.dx.toFixed(4)}, Δy ${offset.dy.toFixed(4)})`,
-      link: `${origin}/formulations/${ctx.revision.formulationId}/revisions/${draft.revisionId}`
-    }));
+    await send(
+      correctionDraftMessage({
+        to: [author.email],
+        batchNumber: b.batchNumber,
+        formulation: `${b.formulationCode} ${b.formulationName}`,
+        draftRevisionNo: draft.revisionNo,
+        requestedBy: caller.name,
+        offsetText: `${offset.steps.toFixed(1)} steps (Δx ${offset.dx.toFixed(4)}, Δy ${offset.dy.toFixed(4)})`,
+        link: `${origin}/formulations/${ctx.revision.formulationId}/revisions/${draft.revisionId}`
+      })
+    );
   }
-  return { correctionId, revisionId: draft.revisionId, revisionNo: draft.revisionNo, predicted: r.predicted, predictedSteps: r.errorAfter.steps, cap: r.cap, measuredMean: { x: mean.x, y: mean.y } };
+  return {
+    correctionId,
+    revisionId: draft.revisionId,
+    revisionNo: draft.revisionNo,
+    predicted: r.predicted,
+    predictedSteps: r.errorAfter.steps,
+    cap: r.cap,
+    measuredMean: { x: mean.x, y: mean.y }
+  };
 }

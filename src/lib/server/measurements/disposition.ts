@@ -37,7 +37,8 @@ export async function dispositionRefusal(caller: Caller, ctx: BatchQualityContex
   if (!canActOnMeasurements(caller)) return 'Release and rejection are signed by quality.';
   if (b.state === 'released' || b.state === 'rejected') return `Batch ${b.batchNumber} is ${b.state}.`;
   if (b.state !== 'complete') return `Batch ${b.batchNumber} is ${b.state}: it can be released or rejected once the weigh-out is complete.`;
-  if ((await batchAuthors(ctx)).has(caller.id)) return `You worked on batch ${b.batchNumber} (or wrote its revision): someone else in quality must sign it off.`;
+  if ((await batchAuthors(ctx)).has(caller.id))
+    return `You worked on batch ${b.batchNumber} (or wrote its revision): someone else in quality must sign it off.`;
   return null;
 }
 
@@ -45,8 +46,17 @@ async function verifySigner(caller: Caller, batchId: number, decision: string, p
   const account = await users.findWithHashByEmail(caller.email);
   const ok = await verifyPassword(password, account?.passwordHash || DUMMY_HASH);
   if (ok && account && account.id === caller.id && account.active) return;
-  await record({ actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: 'e-signature-refused', after: { decision, reason: 'password did not match' } });
-  throw forbidden('The password is not correct, so nothing was signed. Re-enter your own password to sign.', [{ path: 'password', message: 'password: not correct' }]);
+  await record({
+    actorId: caller.id,
+    actorEmail: caller.email,
+    entityType: 'batch',
+    entityId: batchId,
+    action: 'e-signature-refused',
+    after: { decision, reason: 'password did not match' }
+  });
+  throw forbidden('The password is not correct, so nothing was signed. Re-enter your own password to sign.', [
+    { path: 'password', message: 'password: not correct' }
+  ]);
 }
 
 export interface DispositionOutcome {
@@ -70,45 +80,118 @@ export async function disposeBatch(caller: Caller, batchId: number, input: Dispo
     expectVersion(row, input.version, `Batch ${row.batch_number}`);
     expectState(row, ['complete'], decision === 'released' ? 'be released' : 'be rejected');
     const { judged } = await computeResults(ctx);
-    if (decision === 'released' && judged.summary.parts === 0) throw conflict(`Batch ${row.batch_number} has no measured parts: upload measurements before releasing it.`);
-    const files = await trx('measurement_uploads as m').join('stored_files as f', 'f.id', 'm.stored_file_id')
-      .where('m.batch_id', batchId).whereNull('m.withdrawn_at').orderBy('m.id').select('m.id as upload_id', 'm.original_name', 'f.sha256');
+    if (decision === 'released' && judged.summary.parts === 0)
+      throw conflict(`Batch ${row.batch_number} has no measured parts: upload measurements before releasing it.`);
+    const files = await trx('measurement_uploads as m')
+      .join('stored_files as f', 'f.id', 'm.stored_file_id')
+      .where('m.batch_id', batchId)
+      .whereNull('m.withdrawn_at')
+      .orderBy('m.id')
+      .select('m.id as upload_id', 'm.original_name', 'f.sha256');
     const signedAt = new Date();
     const b = ctx.detail.batch;
     const signed = signedJsonAndHash({
-      batch: { id: b.id, batchNumber: b.batchNumber, revisionId: b.revisionId, formulationCode: b.formulationCode, revisionNo: b.revisionNo },
-      decision, meaning: input.meaning, comment: input.comment, signer: { id: caller.id, name: caller.name, email: caller.email }, signedAt,
-      files: files.map((f) => ({ uploadId: f.upload_id, name: f.original_name, sha256: f.sha256 })), judged
+      batch: {
+        id: b.id,
+        batchNumber: b.batchNumber,
+        revisionId: b.revisionId,
+        formulationCode: b.formulationCode,
+        revisionNo: b.revisionNo
+      },
+      decision,
+      meaning: input.meaning,
+      comment: input.comment,
+      signer: { id: caller.id, name: caller.name, email: caller.email },
+      signedAt,
+      files: files.map((f) => ({ uploadId: f.upload_id, name: f.original_name, sha256: f.sha256 })),
+      judged
     });
     const [dispositionId] = await trx('batch_dispositions').insert({
-      batch_id: batchId, decision, signer_id: caller.id, signer_name: caller.name, signer_email: caller.email, meaning: input.meaning,
-      comment: input.comment, signed_at: signedAt, content_sha256: signed.sha256, signed_json: signed.json
+      batch_id: batchId,
+      decision,
+      signer_id: caller.id,
+      signer_name: caller.name,
+      signer_email: caller.email,
+      meaning: input.meaning,
+      comment: input.comment,
+      signed_at: signedAt,
+      content_sha256: signed.sha256,
+      signed_json: signed.json
     });
     const detail = (await getBatch(batchId, trx))!;
     const doc = toBatchDoc(detail);
     doc.state = decision;
     const summary = recordMeasurementSummary(judged.summary, judged.acceptance, judged.target.label, null, {
-      decision, signerName: caller.name, meaning: input.meaning, comment: input.comment,
-      signedAtText: `${signedAt.toISOString().slice(0, 19).replace('T', ' ')} UTC`, contentSha256: signed.sha256
+      decision,
+      signerName: caller.name,
+      meaning: input.meaning,
+      comment: input.comment,
+      signedAtText: `${signedAt.toISOString().slice(0, 19).replace('T', ' ')} UTC`,
+      contentSha256: signed.sha256
     });
     const pdf = await buildBatchRecord(doc, { measurementSummary: summary });
-    const recordFileId = await putFile({
-      body: pdf, originalName: `${row.batch_number}-batch-record-${decision}.pdf`, contentType: 'application/pdf',
-      purpose: 'batch-record', entityType: 'batch', entityId: batchId, uploadedBy: caller.id
-    }, trx);
+    const recordFileId = await putFile(
+      {
+        body: pdf,
+        originalName: `${row.batch_number}-batch-record-${decision}.pdf`,
+        contentType: 'application/pdf',
+        purpose: 'batch-record',
+        entityType: 'batch',
+        entityId: batchId,
+        uploadedBy: caller.id
+      },
+      trx
+    );
     await trx('batch_dispositions').where({ id: dispositionId }).update({ record_file_id: recordFileId });
-    await trx('batches').where({ id: batchId, version: row.version }).update({ state: decision, record_file_id: recordFileId, version: row.version + 1, updated_at: signedAt });
-    await record({
-      actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: decision === 'released' ? 'release' : 'reject',
-      before: { state: row.state, version: row.version, recordFileId: row.record_file_id },
-      after: { state: decision, version: row.version + 1, dispositionId, meaning: input.meaning, comment: input.comment, contentSha256: signed.sha256, recordFileId, parts: judged.summary.parts, passed: judged.summary.passed }
-    }, trx);
-    await record({
-      actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: 'e-signature',
-      after: { dispositionId, meaning: input.meaning, signedAt: signedAt.toISOString(), contentSha256: signed.sha256 }
-    }, trx);
-    return { decision, signedAt, contentSha256: signed.sha256, recordFileId, yieldText: `${judged.summary.passed} of ${judged.summary.parts} pass` } as const;
+    await trx('batches')
+      .where({ id: batchId, version: row.version })
+      .update({ state: decision, record_file_id: recordFileId, version: row.version + 1, updated_at: signedAt });
+    await record(
+      {
+        actorId: caller.id,
+        actorEmail: caller.email,
+        entityType: 'batch',
+        entityId: batchId,
+        action: decision === 'released' ? 'release' : 'reject',
+        before: { state: row.state, version: row.version, recordFileId: row.record_file_id },
+        after: {
+          state: decision,
+          version: row.version + 1,
+          dispositionId,
+          meaning: input.meaning,
+          comment: input.comment,
+          contentSha256: signed.sha256,
+          recordFileId,
+          parts: judged.summary.parts,
+          passed: judged.summary.passed
+        }
+      },
+      trx
+    );
+    await record(
+      {
+        actorId: caller.id,
+        actorEmail: caller.email,
+        entityType: 'batch',
+        entityId: batchId,
+        action: 'e-signature',
+        after: { dispositionId, meaning: input.meaning, signedAt: signedAt.toISOString(), contentSha256: signed.sha256 }
+      },
+      trx
+    );
+    return {
+      decision,
+      signedAt,
+      contentSha256: signed.sha256,
+      recordFileId,
+      yieldText: `${judged.summary.passed} of ${judged.summary.parts} pass`
+    } as const;
   });
   await notifyDisposition(ctx, caller, { ...outcome, meaning: input.meaning, comment: input.comment }, origin);
-  return { decision: outcome.decision, signedAt: outcome.signedAt, contentSha256: outcome.contentSha256, recordFileId: outcome.recordFileId };
+  return {
+    decision: outcome.decision,
+    signedAt: outcome.signedAt,
+    contentSha256: outcome.contentSha256,
+    recordFileId: outcome.recordFileId
+  };
 }

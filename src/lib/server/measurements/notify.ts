@@ -8,9 +8,15 @@ import type { BatchQualityContext } from './results';
 
 export async function dispositionRecipients(ctx: BatchQualityContext): Promise<string[]> {
   const row = await db()('batches').where({ id: ctx.detail.batch.id }).first('created_by', 'mixed_by', 'completed_by');
-  const technicianIds = new Set([row?.created_by, row?.mixed_by, row?.completed_by, ...ctx.detail.lines.map((l) => l.weighedBy)].filter((v): v is number => typeof v === 'number'));
+  const technicianIds = new Set(
+    [row?.created_by, row?.mixed_by, row?.completed_by, ...ctx.detail.lines.map((l) => l.weighedBy)].filter(
+      (v): v is number => typeof v === 'number'
+    )
+  );
   const people = await Promise.all([ctx.revision.createdBy, ...technicianIds].map((id) => users.get(id)));
-  const emails = people.filter((u) => u?.active && (u.id === ctx.revision.createdBy || u.roles.includes('technician'))).map((u) => u!.email);
+  const emails = people
+    .filter((u) => u?.active && (u.id === ctx.revision.createdBy || u.roles.includes('technician')))
+    .map((u) => u!.email);
   return [...new Set(emails)];
 }
 
@@ -21,9 +27,18 @@ export async function notifyDisposition(
   origin: string
 ): Promise<boolean> {
   const b = ctx.detail.batch;
-  return send(batchDispositionMessage({
-    to: await dispositionRecipients(ctx), batchNumber: b.batchNumber, formulation: `${b.formulationCode} ${b.formulationName} revision ${b.revisionNo}`,
-    decision: d.decision, signerName: signer.name, signedAtUtc: d.signedAt, meaning: d.meaning, comment: d.comment, yieldText: d.yieldText,
-    link: `${origin}/measurements/${b.id}`
-  }));
+  return send(
+    batchDispositionMessage({
+      to: await dispositionRecipients(ctx),
+      batchNumber: b.batchNumber,
+      formulation: `${b.formulationCode} ${b.formulationName} revision ${b.revisionNo}`,
+      decision: d.decision,
+      signerName: signer.name,
+      signedAtUtc: d.signedAt,
+      meaning: d.meaning,
+      comment: d.comment,
+      yieldText: d.yieldText,
+      link: `${origin}/measurements/${b.id}`
+    })
+  );
 }

@@ -18,9 +18,15 @@ export async function listUploads(batchId: number, k: Q = db()): Promise<UploadV
     .orderBy('m.id')
     .select('m.*', 'u.name as uploaded_by_name', 'w.name as withdrawn_by_name');
   return rows.map((r) => ({
-    id: r.id, originalName: r.original_name, partsCount: r.parts_count, storedFileId: r.stored_file_id,
-    uploadedByName: r.uploaded_by_name ?? '—', createdAt: iso(r.created_at)!, withdrawnAt: iso(r.withdrawn_at),
-    withdrawnByName: r.withdrawn_by_name ?? null, withdrawReason: r.withdraw_reason ?? null
+    id: r.id,
+    originalName: r.original_name,
+    partsCount: r.parts_count,
+    storedFileId: r.stored_file_id,
+    uploadedByName: r.uploaded_by_name ?? '—',
+    createdAt: iso(r.created_at)!,
+    withdrawnAt: iso(r.withdrawn_at),
+    withdrawnByName: r.withdrawn_by_name ?? null,
+    withdrawReason: r.withdraw_reason ?? null
   }));
 }
 
@@ -35,7 +41,8 @@ export async function activeParts(batchId: number, k: Q = db()): Promise<StoredP
     .join('measurement_uploads as m', 'm.id', 'p.upload_id')
     .where('p.batch_id', batchId)
     .whereNull('m.withdrawn_at')
-    .orderBy('p.upload_id').orderBy('p.column_no')
+    .orderBy('p.upload_id')
+    .orderBy('p.column_no')
     .select('p.id', 'p.upload_id', 'p.part_label', 'p.metrics_json');
   return rows.map((r) => ({ id: r.id, uploadId: r.upload_id, label: r.part_label, metrics: JSON.parse(r.metrics_json) as PartMetrics }));
 }
@@ -43,7 +50,9 @@ export async function activeParts(batchId: number, k: Q = db()): Promise<StoredP
 export async function activeLabels(batchId: number, k: Q = db()): Promise<Set<string>> {
   const rows: { part_label: string }[] = await k('part_measurements as p')
     .join('measurement_uploads as m', 'm.id', 'p.upload_id')
-    .where('p.batch_id', batchId).whereNull('m.withdrawn_at').select('p.part_label');
+    .where('p.batch_id', batchId)
+    .whereNull('m.withdrawn_at')
+    .select('p.part_label');
   return new Set(rows.map((r) => r.part_label));
 }
 
@@ -56,20 +65,33 @@ export interface AcceptanceRow {
 
 export async function getAcceptance(batchId: number, k: Q = db()): Promise<AcceptanceRow | null> {
   const r = await k('batch_acceptance').where({ batch_id: batchId }).first();
-  return r ? { mode: r.mode, steps: r.steps === null ? null : Number(r.steps), requireTargetBin: Boolean(r.require_target_bin), version: r.version } : null;
+  return r
+    ? {
+        mode: r.mode,
+        steps: r.steps === null ? null : Number(r.steps),
+        requireTargetBin: Boolean(r.require_target_bin),
+        version: r.version
+      }
+    : null;
 }
 
 export async function listCorrections(batchId: number, k: Q = db()): Promise<CorrectionView[]> {
   const rows = await k('batch_corrections as c')
     .leftJoin('formulation_revisions as r', 'r.id', 'c.revision_id')
     .leftJoin('users as u', 'u.id', 'c.created_by')
-    .where('c.batch_id', batchId).orderBy('c.id')
+    .where('c.batch_id', batchId)
+    .orderBy('c.id')
     .select('c.*', 'r.revision_no', 'r.state as revision_state', 'u.name as created_by_name');
   return rows.map((r) => ({
-    id: r.id, revisionId: r.revision_id, revisionNo: r.revision_no, revisionState: r.revision_state ?? null,
-    stepFraction: Number(r.step_fraction), measuredMean: { x: r.measured_x, y: r.measured_y },
+    id: r.id,
+    revisionId: r.revision_id,
+    revisionNo: r.revision_no,
+    revisionState: r.revision_state ?? null,
+    stepFraction: Number(r.step_fraction),
+    measuredMean: { x: r.measured_x, y: r.measured_y },
     predicted: { x: r.predicted_x, y: r.predicted_y, cct: r.predicted_cct_k, duv: r.predicted_duv },
-    createdByName: r.created_by_name ?? '—', createdAt: iso(r.created_at)!
+    createdByName: r.created_by_name ?? '—',
+    createdAt: iso(r.created_at)!
   }));
 }
 
@@ -77,7 +99,13 @@ export async function getDisposition(batchId: number, k: Q = db()): Promise<Disp
   const r = await k('batch_dispositions').where({ batch_id: batchId }).first();
   if (!r) return null;
   return {
-    decision: r.decision, signerName: r.signer_name, signerEmail: r.signer_email, meaning: r.meaning, comment: r.comment,
-    signedAt: iso(r.signed_at)!, contentSha256: r.content_sha256, recordFileId: r.record_file_id ?? null
+    decision: r.decision,
+    signerName: r.signer_name,
+    signerEmail: r.signer_email,
+    meaning: r.meaning,
+    comment: r.comment,
+    signedAt: iso(r.signed_at)!,
+    contentSha256: r.content_sha256,
+    recordFileId: r.record_file_id ?? null
   };
 }

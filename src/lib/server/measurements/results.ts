@@ -6,8 +6,15 @@
 import { getBatch, type BatchDetail } from '../batches/read';
 import type { RevisionRecord } from '../formulations/read';
 import {
-  batchAcceptance, chromaticityPlotModel, describeAcceptance, describeTolerance, judgeBatch, predictedVsMeasured,
-  type JudgedBatch, type PlotMarker, type PredictionCheck
+  batchAcceptance,
+  chromaticityPlotModel,
+  describeAcceptance,
+  describeTolerance,
+  judgeBatch,
+  predictedVsMeasured,
+  type JudgedBatch,
+  type PlotMarker,
+  type PredictionCheck
 } from '../../measurements/index';
 import type { BatchResultsView } from '../../measurements/view';
 import { conflict } from './errors';
@@ -40,7 +47,11 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
   const { detail, revision } = ctx;
   const b = detail.batch;
   const [choice, parts, uploads, corrections, disposition] = await Promise.all([
-    records.getAcceptance(b.id), records.activeParts(b.id), records.listUploads(b.id), records.listCorrections(b.id), records.getDisposition(b.id)
+    records.getAcceptance(b.id),
+    records.activeParts(b.id),
+    records.listUploads(b.id),
+    records.listCorrections(b.id),
+    records.getDisposition(b.id)
   ]);
   const acceptance = batchAcceptance(revision.content, choice);
   const judged = judgeBatch(parts, revision.content.target, acceptance);
@@ -51,21 +62,44 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
   if (mean) markers.push({ kind: 'mean', label: 'Measured mean', x: mean.x, y: mean.y });
   if (predicted) markers.push({ kind: 'predicted', label: `Predicted (revision ${revision.revisionNo})`, x: predicted.x, y: predicted.y });
   const last = corrections.at(-1);
-  if (last) markers.push({ kind: 'corrected', label: `Predicted after correction (revision ${last.revisionNo})`, x: last.predicted.x, y: last.predicted.y });
+  if (last)
+    markers.push({
+      kind: 'corrected',
+      label: `Predicted after correction (revision ${last.revisionNo})`,
+      x: last.predicted.x,
+      y: last.predicted.y
+    });
   const t = judged.target;
   const view: BatchResultsView = {
     batch: {
-      id: b.id, batchNumber: b.batchNumber, state: b.state, version: b.version, revisionId: revision.id, formulationId: revision.formulationId,
-      formulationCode: b.formulationCode, formulationName: b.formulationName, revisionNo: b.revisionNo
+      id: b.id,
+      batchNumber: b.batchNumber,
+      state: b.state,
+      version: b.version,
+      revisionId: revision.id,
+      formulationId: revision.formulationId,
+      formulationCode: b.formulationCode,
+      formulationName: b.formulationName,
+      revisionNo: b.revisionNo
     },
     target: { label: t.label, x: t.x, y: t.y, cct: t.cct, duv: t.duv, ansiBin: t.ansiBin?.nominalCct ?? null },
     floors: revision.content.floors,
     acceptance: {
-      mode: choice?.mode ?? 'revision', steps: choice?.steps ?? null, requireTargetBin: acceptance.requireTargetBin,
-      label: describeAcceptance(acceptance), revisionTolerance: describeTolerance(revision.content.tolerance), version: choice?.version ?? 0
+      mode: choice?.mode ?? 'revision',
+      steps: choice?.steps ?? null,
+      requireTargetBin: acceptance.requireTargetBin,
+      label: describeAcceptance(acceptance),
+      revisionTolerance: describeTolerance(revision.content.tolerance),
+      version: choice?.version ?? 0
     },
     uploads,
-    parts: judged.parts.map((p, i) => ({ id: parts[i].id, uploadId: parts[i].uploadId, label: p.label, metrics: p.metrics, verdict: p.verdict })),
+    parts: judged.parts.map((p, i) => ({
+      id: parts[i].id,
+      uploadId: parts[i].uploadId,
+      label: p.label,
+      metrics: p.metrics,
+      verdict: p.verdict
+    })),
     summary: judged.summary,
     prediction,
     plot: chromaticityPlotModel(judged, markers),

@@ -38,8 +38,14 @@ export function dispositionDocument(f: DispositionFacts): Record<string, unknown
     files: f.files,
     summary: { parts: s.parts, passed: s.passed, meanX: r6(s.meanPoint?.x ?? null), meanY: r6(s.meanPoint?.y ?? null) },
     parts: f.judged.parts.map((p) => ({
-      label: p.label, x: r6(p.metrics.x), y: r6(p.metrics.y), cct: r6(p.metrics.cct), duv: r6(p.metrics.duv),
-      ra: r6(p.metrics.ra), r9: r6(p.metrics.r9), pass: p.verdict.pass
+      label: p.label,
+      x: r6(p.metrics.x),
+      y: r6(p.metrics.y),
+      cct: r6(p.metrics.cct),
+      duv: r6(p.metrics.duv),
+      ra: r6(p.metrics.ra),
+      r9: r6(p.metrics.r9),
+      pass: p.verdict.pass
     }))
   };
 }

@@ -27,9 +27,7 @@ export interface MeasurementFile {
   body: Buffer;
 }
 
-export type UploadProgress =
-  | { phase: 'parsing' | 'saving' }
-  | { phase: 'measuring'; done: number; total: number };
+export type UploadProgress = { phase: 'parsing' | 'saving' } | { phase: 'measuring'; done: number; total: number };
 
 export interface UploadResult {
   uploadId: number;
@@ -47,21 +45,36 @@ function stateRefusal(batchNumber: string, state: string): DomainError {
 }
 
 /** Checks the file and measures its parts; saves nothing. Throws a domain error naming lines or parts. */
-export async function measureFile(file: MeasurementFile, onProgress?: (p: UploadProgress) => void): Promise<{ parts: MeasuredPart[]; wavelengths: number[]; values: number[][]; warnings: string[] }> {
+export async function measureFile(
+  file: MeasurementFile,
+  onProgress?: (p: UploadProgress) => void
+): Promise<{ parts: MeasuredPart[]; wavelengths: number[]; values: number[][]; warnings: string[] }> {
   if (file.body.length === 0) throw unprocessable(`${file.name || 'The file'} is empty. Nothing was saved.`);
   if (file.body.length > MAX_MEASUREMENT_FILE_BYTES) {
-    throw tooLarge(`The file is ${formatBytes(file.body.length)}; the limit is ${formatBytes(MAX_MEASUREMENT_FILE_BYTES)}. Nothing was saved.`);
+    throw tooLarge(
+      `The file is ${formatBytes(file.body.length)}; the limit is ${formatBytes(MAX_MEASUREMENT_FILE_BYTES)}. Nothing was saved.`
+    );
   }
   onProgress?.({ phase: 'parsing' });
   const parsed = parseSpectrumFile(decodeText(file.body), { multiColumn: true, maxBytes: MAX_MEASUREMENT_FILE_BYTES });
   if (!parsed.ok) {
     const n = parsed.errors.length;
-    throw unprocessable(`${file.name} was not saved: ${n === 1 ? 'one problem' : `${n} problems`} in the file. ${parsed.errors[0].message}`, parsed.errors.map((e) => lineIssue(e.line, e.message)));
+    throw unprocessable(
+      `${file.name} was not saved: ${n === 1 ? 'one problem' : `${n} problems`} in the file. ${parsed.errors[0].message}`,
+      parsed.errors.map((e) => lineIssue(e.line, e.message))
+    );
   }
   const measured = await measurePartsPaced(parsed, pause, (done, total) => onProgress?.({ phase: 'measuring', done, total }));
   if (!measured.ok) {
-    const issues = measured.errors.map((e) => ({ path: `part ${e.part}`, line: null, message: `Part ${e.part} (column ${e.column}): ${e.message}` }));
-    throw unprocessable(`${file.name} was not saved: ${issues.length === 1 ? 'one part' : `${issues.length} parts`} cannot be measured. ${issues[0].message}`, issues);
+    const issues = measured.errors.map((e) => ({
+      path: `part ${e.part}`,
+      line: null,
+      message: `Part ${e.part} (column ${e.column}): ${e.message}`
+    }));
+    throw unprocessable(
+      `${file.name} was not saved: ${issues.length === 1 ? 'one part' : `${issues.length} parts`} cannot be measured. ${issues[0].message}`,
+      issues
+    );
   }
   return { parts: measured.parts, wavelengths: parsed.wavelengths, values: parsed.columns.map((c) => c.values), warnings: parsed.warnings };
 }
@@ -69,20 +82,50 @@ export async function measureFile(file: MeasurementFile, onProgress?: (p: Upload
 type Measured = Awaited<ReturnType<typeof measureFile>>;
 
 /** Writes a checked file: the raw file to object storage, the upload and its parts (inside `trx`). */
-export async function insertMeasurements(trx: Knex.Transaction, batchId: number, file: MeasurementFile, m: Measured, uploadedBy: number): Promise<{ uploadId: number; storedFileId: number }> {
-  const storedFileId = await putFile({
-    body: file.body, originalName: file.name, contentType: file.contentType || 'text/plain', purpose: 'measurement',
-    entityType: 'batch', entityId: batchId, uploadedBy
-  }, trx);
+export async function insertMeasurements(
+  trx: Knex.Transaction,
+  batchId: number,
+  file: MeasurementFile,
+  m: Measured,
+  uploadedBy: number
+): Promise<{ uploadId: number; storedFileId: number }> {
+  const storedFileId = await putFile(
+    {
+      body: file.body,
+      originalName: file.name,
+      contentType: file.contentType || 'text/plain',
+      purpose: 'measurement',
+      entityType: 'batch',
+      entityId: batchId,
+      uploadedBy
+    },
+    trx
+  );
   const [uploadId] = await trx('measurement_uploads').insert({
-    batch_id: batchId, stored_file_id: storedFileId, original_name: file.name.slice(0, 255) || 'measurements', parts_count: m.parts.length,
-    wavelengths_json: JSON.stringify(m.wavelengths), warnings_json: JSON.stringify(m.warnings), core_version: QUALITY_CORE_VERSION, uploaded_by: uploadedBy
+    batch_id: batchId,
+    stored_file_id: storedFileId,
+    original_name: file.name.slice(0, 255) || 'measurements',
+    parts_count: m.parts.length,
+    wavelengths_json: JSON.stringify(m.wavelengths),
+    warnings_json: JSON.stringify(m.warnings),
+    core_version: QUALITY_CORE_VERSION,
+    uploaded_by: uploadedBy
   });
   const rows = m.parts.map((p, i) => ({
-    upload_id: uploadId, batch_id: batchId, part_label: p.label.slice(0, 80), column_no: i + 2,
-    values_json: JSON.stringify(m.values[i]), metrics_json: JSON.stringify(p.metrics),
-    x: p.metrics.x, y: p.metrics.y, cct_k: p.metrics.cct, duv: p.metrics.duv, ra: p.metrics.ra, r9: p.metrics.r9,
-    ler_lm_per_w: p.metrics.ler, ansi_bin: findAnsiBin(p.metrics.x, p.metrics.y)?.nominalCct ?? null
+    upload_id: uploadId,
+    batch_id: batchId,
+    part_label: p.label.slice(0, 80),
+    column_no: i + 2,
+    values_json: JSON.stringify(m.values[i]),
+    metrics_json: JSON.stringify(p.metrics),
+    x: p.metrics.x,
+    y: p.metrics.y,
+    cct_k: p.metrics.cct,
+    duv: p.metrics.duv,
+    ra: p.metrics.ra,
+    r9: p.metrics.r9,
+    ler_lm_per_w: p.metrics.ler,
+    ansi_bin: findAnsiBin(p.metrics.x, p.metrics.y)?.nominalCct ?? null
   }));
   for (let i = 0; i < rows.length; i += CHUNK) await trx('part_measurements').insert(rows.slice(i, i + CHUNK));
   return { uploadId, storedFileId };
@@ -96,7 +139,12 @@ export async function precheckUpload(caller: Caller, batchId: number): Promise<v
   if (!OPEN_STATES.includes(batch.state)) throw stateRefusal(batch.batch_number, batch.state);
 }
 
-export async function uploadMeasurements(caller: Caller, batchId: number, file: MeasurementFile, onProgress?: (p: UploadProgress) => void): Promise<UploadResult> {
+export async function uploadMeasurements(
+  caller: Caller,
+  batchId: number,
+  file: MeasurementFile,
+  onProgress?: (p: UploadProgress) => void
+): Promise<UploadResult> {
   await precheckUpload(caller, batchId);
   const m = await measureFile(file, onProgress);
   onProgress?.({ phase: 'saving' });
@@ -107,13 +155,22 @@ export async function uploadMeasurements(caller: Caller, batchId: number, file: 
     const repeated = m.parts.filter((p) => existing.has(p.label)).map((p) => p.label);
     if (repeated.length) {
       const list = repeated.slice(0, 10).join(', ') + (repeated.length > 10 ? ` and ${repeated.length - 10} more` : '');
-      throw conflict(`${file.name} was not saved: ${repeated.length === 1 ? 'part' : 'parts'} ${list} already measured for batch ${locked.batch_number}. Withdraw the earlier upload first to measure again.`);
+      throw conflict(
+        `${file.name} was not saved: ${repeated.length === 1 ? 'part' : 'parts'} ${list} already measured for batch ${locked.batch_number}. Withdraw the earlier upload first to measure again.`
+      );
     }
     const { uploadId, storedFileId } = await insertMeasurements(trx, batchId, file, m, caller.id);
-    await record({
-      actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: 'measurements-upload',
-      after: { uploadId, storedFileId, file: file.name, parts: m.parts.length, coreVersion: QUALITY_CORE_VERSION }
-    }, trx);
+    await record(
+      {
+        actorId: caller.id,
+        actorEmail: caller.email,
+        entityType: 'batch',
+        entityId: batchId,
+        action: 'measurements-upload',
+        after: { uploadId, storedFileId, file: file.name, parts: m.parts.length, coreVersion: QUALITY_CORE_VERSION }
+      },
+      trx
+    );
     return { uploadId, parts: m.parts.length, warnings: m.warnings };
   });
 }
@@ -128,10 +185,20 @@ export async function withdrawUpload(caller: Caller, batchId: number, uploadId: 
     if (!up) throw notFound(`Upload ${uploadId} of batch ${locked.batch_number}`);
     if (up.withdrawn_at) throw conflict(`${up.original_name} was already withdrawn.`);
     const now = new Date();
-    await trx('measurement_uploads').where({ id: uploadId }).update({ withdrawn_at: now, withdrawn_by: caller.id, withdraw_reason: reason });
-    await record({
-      actorId: caller.id, actorEmail: caller.email, entityType: 'batch', entityId: batchId, action: 'measurements-withdraw',
-      before: { uploadId, parts: up.parts_count }, after: { withdrawnAt: now.toISOString(), reason }
-    }, trx);
+    await trx('measurement_uploads')
+      .where({ id: uploadId })
+      .update({ withdrawn_at: now, withdrawn_by: caller.id, withdraw_reason: reason });
+    await record(
+      {
+        actorId: caller.id,
+        actorEmail: caller.email,
+        entityType: 'batch',
+        entityId: batchId,
+        action: 'measurements-withdraw',
+        before: { uploadId, parts: up.parts_count },
+        after: { withdrawnAt: now.toISOString(), reason }
+      },
+      trx
+    );
   });
 }

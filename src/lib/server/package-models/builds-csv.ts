@@ -16,7 +16,12 @@ export interface LineError {
   message: string;
 }
 
-const OPTIONAL = { path_mm: 'pathLengthMm', dispense_mg: 'dispenseMassMg', w_per_pump_w: 'outputWPerPumpW', lm_per_pump_w: 'outputLmPerPumpW' } as const;
+const OPTIONAL = {
+  path_mm: 'pathLengthMm',
+  dispense_mg: 'dispenseMassMg',
+  w_per_pump_w: 'outputWPerPumpW',
+  lm_per_pump_w: 'outputLmPerPumpW'
+} as const;
 const KNOWN = new Set(['label', 'x', 'y', ...Object.keys(OPTIONAL)]);
 
 function splitLine(line: string): string[] {
@@ -25,14 +30,19 @@ function splitLine(line: string): string[] {
 }
 
 export function parseBuildsCsv(text: string): { ok: true; value: BuildsCsv } | { ok: false; errors: LineError[] } {
-  const lines = text.split(/\r?\n/).map((l, i) => ({ n: i + 1, text: l.trim() })).filter((l) => l.text !== '' && !l.text.startsWith('#'));
+  const lines = text
+    .split(/\r?\n/)
+    .map((l, i) => ({ n: i + 1, text: l.trim() }))
+    .filter((l) => l.text !== '' && !l.text.startsWith('#'));
   if (lines.length === 0) return { ok: false, errors: [{ line: 1, message: 'No builds: paste a header line and one line per build.' }] };
   const header = splitLine(lines[0].text).map((h) => h.toLowerCase());
   const raw = splitLine(lines[0].text);
   const errors: LineError[] = [];
-  for (const need of ['label', 'x', 'y']) if (!header.includes(need)) errors.push({ line: lines[0].n, message: `The header needs a "${need}" column.` });
+  for (const need of ['label', 'x', 'y'])
+    if (!header.includes(need)) errors.push({ line: lines[0].n, message: `The header needs a "${need}" column.` });
   const phosphorCols = header.map((h, i) => (KNOWN.has(h) ? -1 : i)).filter((i) => i >= 0);
-  if (phosphorCols.length === 0) errors.push({ line: lines[0].n, message: 'The header needs one column per phosphor, headed by its library code (wt %).' });
+  if (phosphorCols.length === 0)
+    errors.push({ line: lines[0].n, message: 'The header needs one column per phosphor, headed by its library code (wt %).' });
   if (new Set(header).size !== header.length) errors.push({ line: lines[0].n, message: 'A column is named twice in the header.' });
   if (errors.length) return { ok: false, errors };
   const builds: BuildInput[] = [];

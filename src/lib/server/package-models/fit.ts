@@ -48,17 +48,27 @@ export async function runFit(input: PackageFitInput): Promise<PackageModelFit> {
     throw unprocessable('The fit supports the fixed-mass geometry (a set slurry mass per package) only; choose fixedMass.');
   }
   const spec = await components(input);
-  const start = { ...spec, phosphors: spec.phosphors.map((p) => ({ ...p, absorptionPerWtPctMm: p.absorptionPerWtPctMm ?? DEFAULT_START_ALPHA })) };
+  const start = {
+    ...spec,
+    phosphors: spec.phosphors.map((p) => ({ ...p, absorptionPerWtPctMm: p.absorptionPerWtPctMm ?? DEFAULT_START_ALPHA }))
+  };
   const basis = prepareBasis(start).loading!;
-  const fit = fitPackageModel(basis, input.builds.map(toPackageBuild), {
-    pathLengthMm: input.pathLengthMm,
-    ...(input.dispenseMassMg !== undefined ? { dispenseMassMg: input.dispenseMassMg } : {}),
-    cascade: input.cascade,
-    fitEscape: input.fitEscape,
-    fitIqeScale: input.fitIqeScale
-  }, input.bootstrap.resamples > 0 ? input.bootstrap : false);
+  const fit = fitPackageModel(
+    basis,
+    input.builds.map(toPackageBuild),
+    {
+      pathLengthMm: input.pathLengthMm,
+      ...(input.dispenseMassMg !== undefined ? { dispenseMassMg: input.dispenseMassMg } : {}),
+      cascade: input.cascade,
+      fitEscape: input.fitEscape,
+      fitIqeScale: input.fitIqeScale
+    },
+    input.bootstrap.resamples > 0 ? input.bootstrap : false
+  );
   if (!fit.converged) {
-    throw unprocessable(`The fit did not converge (${fit.reason} after ${fit.iterations} iterations). Nothing was saved: check the builds, or fit fewer parameters.`);
+    throw unprocessable(
+      `The fit did not converge (${fit.reason} after ${fit.iterations} iterations). Nothing was saved: check the builds, or fit fewer parameters.`
+    );
   }
   return fit;
 }
@@ -73,7 +83,9 @@ export async function createByFit(actor: User, input: PackageFitInput): Promise<
   } catch (err) {
     const code = (err as { code?: string })?.code;
     if (code === 'ER_DUP_ENTRY' || code === 'ER_LOCK_DEADLOCK') {
-      throw conflict(`Another fit of ${input.name} was saved at the same moment. Nothing was saved: run the fit again to save the next version.`);
+      throw conflict(
+        `Another fit of ${input.name} was saved at the same moment. Nothing was saved: run the fit again to save the next version.`
+      );
     }
     throw err;
   }

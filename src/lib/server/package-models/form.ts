@@ -6,7 +6,18 @@ import { db } from '../db/index';
 import { parseBuildsCsv } from './builds-csv';
 import { packageFitSchema, type PackageFitInput } from './schema';
 
-export const FORM_FIELDS = ['name', 'packageType', 'pathLengthMm', 'dispenseMassMg', 'pumpId', 'builds', 'fitEscape', 'fitIqeScale', 'cascade', 'resamples'] as const;
+export const FORM_FIELDS = [
+  'name',
+  'packageType',
+  'pathLengthMm',
+  'dispenseMassMg',
+  'pumpId',
+  'builds',
+  'fitEscape',
+  'fitIqeScale',
+  'cascade',
+  'resamples'
+] as const;
 export type FitFormValues = Record<(typeof FORM_FIELDS)[number], string>;
 
 export type FitForm = { ok: true; data: PackageFitInput; values: FitFormValues } | { ok: false; values: FitFormValues; errors: string[] };
@@ -18,9 +29,13 @@ export async function readFitForm(form: FormData): Promise<FitForm> {
   const csv = parseBuildsCsv(values.builds);
   if (!csv.ok) return { ok: false, values, errors: csv.errors.map((e) => `Builds, line ${e.line}: ${e.message}`) };
   const codes = csv.value.phosphorCodes;
-  const rows: { id: number; code: string }[] = await db()('materials').where({ kind: 'phosphor' }).whereIn('code', codes).select('id', 'code');
+  const rows: { id: number; code: string }[] = await db()('materials')
+    .where({ kind: 'phosphor' })
+    .whereIn('code', codes)
+    .select('id', 'code');
   const missing = codes.filter((c) => !rows.some((r) => r.code.toLowerCase() === c.toLowerCase()));
-  if (missing.length) return { ok: false, values, errors: [`Builds, line 1: no phosphor with the code ${missing.join(', ')} in the library.`] };
+  if (missing.length)
+    return { ok: false, values, errors: [`Builds, line 1: no phosphor with the code ${missing.join(', ')} in the library.`] };
   const body = {
     name: values.name,
     packageType: values.packageType,
@@ -36,7 +51,15 @@ export async function readFitForm(form: FormData): Promise<FitForm> {
   };
   const parsed = packageFitSchema.safeParse(body);
   if (!parsed.success) {
-    return { ok: false, values, errors: parsed.error.issues.map((i) => (i.path[0] === 'builds' && typeof i.path[1] === 'number' ? `Build ${csv.value.builds[i.path[1]]?.label ?? i.path[1]}: ${i.message}` : i.message)) };
+    return {
+      ok: false,
+      values,
+      errors: parsed.error.issues.map((i) =>
+        i.path[0] === 'builds' && typeof i.path[1] === 'number'
+          ? `Build ${csv.value.builds[i.path[1]]?.label ?? i.path[1]}: ${i.message}`
+          : i.message
+      )
+    };
   }
   return { ok: true, data: parsed.data, values };
 }

@@ -39,9 +39,24 @@ export interface PackageModel extends PackageModelSummary {
 }
 
 type Row = Record<string, unknown>;
-const SUMMARY = ['pm.id', 'pm.name', 'pm.version', 'pm.package_type', 'pm.dispense_geometry', 'pm.path_length_mm', 'pm.dispense_mass_mg',
-  'pm.pump_material_id', 'm.code as pump_code', 'pm.phosphors_json', 'pm.cascade', 'pm.rms_steps', 'pm.max_steps', 'pm.created_by',
-  'u.name as created_by_name', 'pm.created_at'];
+const SUMMARY = [
+  'pm.id',
+  'pm.name',
+  'pm.version',
+  'pm.package_type',
+  'pm.dispense_geometry',
+  'pm.path_length_mm',
+  'pm.dispense_mass_mg',
+  'pm.pump_material_id',
+  'm.code as pump_code',
+  'pm.phosphors_json',
+  'pm.cascade',
+  'pm.rms_steps',
+  'pm.max_steps',
+  'pm.created_by',
+  'u.name as created_by_name',
+  'pm.created_at'
+];
 
 function toSummary(r: Row): PackageModelSummary {
   return {
@@ -74,7 +89,9 @@ export async function list(): Promise<PackageModelSummary[]> {
 }
 
 export async function get(id: number, k: Knex | Knex.Transaction = db()): Promise<PackageModel | null> {
-  const r: Row | undefined = await base(k).where('pm.id', id).first([...SUMMARY, 'pm.parameters_json', 'pm.fit_json', 'pm.builds_json']);
+  const r: Row | undefined = await base(k)
+    .where('pm.id', id)
+    .first([...SUMMARY, 'pm.parameters_json', 'pm.fit_json', 'pm.builds_json']);
   if (!r) return null;
   return {
     ...toSummary(r),

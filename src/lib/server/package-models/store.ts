@@ -16,15 +16,32 @@ export async function storeModel(
   const stored: records.StoredParameters = { parameters, uncertainty, fitted };
   const version = await records.nextVersion(trx, input.name);
   const [id] = await trx('package_models').insert({
-    name: input.name, version, package_type: input.packageType, dispense_geometry: input.dispenseGeometry,
-    path_length_mm: input.pathLengthMm, dispense_mass_mg: input.dispenseMassMg ?? null, pump_material_id: input.pumpId,
-    phosphors_json: JSON.stringify(phosphors), cascade: input.cascade, parameters_json: JSON.stringify(stored),
-    fit_json: JSON.stringify(report), builds_json: JSON.stringify(input.builds), rms_steps: fit.rmsSteps, max_steps: fit.maxSteps,
+    name: input.name,
+    version,
+    package_type: input.packageType,
+    dispense_geometry: input.dispenseGeometry,
+    path_length_mm: input.pathLengthMm,
+    dispense_mass_mg: input.dispenseMassMg ?? null,
+    pump_material_id: input.pumpId,
+    phosphors_json: JSON.stringify(phosphors),
+    cascade: input.cascade,
+    parameters_json: JSON.stringify(stored),
+    fit_json: JSON.stringify(report),
+    builds_json: JSON.stringify(input.builds),
+    rms_steps: fit.rmsSteps,
+    max_steps: fit.maxSteps,
     created_by: actor.id
   });
-  await audit.record({
-    actorId: actor.id, actorEmail: actor.email, entityType: 'package-model', entityId: id, action: 'create-by-fit',
-    after: { name: input.name, version, parameters, uncertainty, rmsSteps: fit.rmsSteps, builds: input.builds.length }
-  }, trx);
+  await audit.record(
+    {
+      actorId: actor.id,
+      actorEmail: actor.email,
+      entityType: 'package-model',
+      entityId: id,
+      action: 'create-by-fit',
+      after: { name: input.name, version, parameters, uncertainty, rmsSteps: fit.rmsSteps, builds: input.builds.length }
+    },
+    trx
+  );
   return { id, version };
 }

@@ -36,7 +36,15 @@ export interface BatchDoc {
   target: { description: string; xy: string | null; bin: string | null; tolerance: string | null };
   size: { batchMassG: string; sizingNote: string | null; basisLabel: string; loadingSummary: string };
   balance: { resolutionG: string; minWeightG: string; balanceRef: string | null };
-  silicone: { name: string; ratio: string; potLifeMin: number; plantLimitMin: number | null; cure: string; degasNotes: string | null; safetyNote: string | null };
+  silicone: {
+    name: string;
+    ratio: string;
+    potLifeMin: number;
+    plantLimitMin: number | null;
+    cure: string;
+    degasNotes: string | null;
+    safetyNote: string | null;
+  };
   lines: BatchDocLine[];
   process: { mixedAt: Date | null; expiresAt: Date | null; completedAt: Date | null; completedBy: string | null };
   notes: string | null;
@@ -65,16 +73,20 @@ export function headerFields(s: Sheet, d: BatchDoc): void {
     ['Loading basis', d.size.basisLabel],
     ['Phosphor loading', d.size.loadingSummary],
     ['Silicone system (A:B by weight)', `${d.silicone.name} — ${d.silicone.ratio}`],
-    ['Balance', `d = ${d.balance.resolutionG} g, minimum weight ${d.balance.minWeightG} g${d.balance.balanceRef ? `, ${d.balance.balanceRef}` : ''}`],
+    [
+      'Balance',
+      `d = ${d.balance.resolutionG} g, minimum weight ${d.balance.minWeightG} g${d.balance.balanceRef ? `, ${d.balance.balanceRef}` : ''}`
+    ],
     ['Planned', `${stamp(d, d.createdAt)} by ${d.createdBy}`]
   ]);
   if (d.size.sizingNote) s.paragraph(`Sizing: ${d.size.sizingNote}`, { size: 8, color: '#58657d' });
 }
 
 export function processNotes(d: BatchDoc): string[] {
-  const limit = d.silicone.plantLimitMin !== null && d.silicone.plantLimitMin < d.silicone.potLifeMin
-    ? `plant slurry-age limit ${d.silicone.plantLimitMin} min (pot life ${d.silicone.potLifeMin} min)`
-    : `pot life ${d.silicone.potLifeMin} min`;
+  const limit =
+    d.silicone.plantLimitMin !== null && d.silicone.plantLimitMin < d.silicone.potLifeMin
+      ? `plant slurry-age limit ${d.silicone.plantLimitMin} min (pot life ${d.silicone.potLifeMin} min)`
+      : `pot life ${d.silicone.potLifeMin} min`;
   return [
     `Weighing order: part A, then the phosphors and additives into part A, part B last. Tare the container before every line; record the balance reading as shown.`,
     `Mixing: the slurry's clock starts when part B is mixed in; note the time. Use within ${limit} of that time.`,

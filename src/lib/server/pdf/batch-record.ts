@@ -17,7 +17,11 @@ export interface BatchRecordOptions {
 }
 
 export async function buildBatchRecord(d: BatchDoc, opts: BatchRecordOptions = {}): Promise<Buffer> {
-  const doc = newDocument(opts.size ?? 'A4', { title: `Batch record ${d.batchNumber}`, subject: `${d.formulation.code} revision ${d.formulation.revisionNo}`, author: d.process.completedBy ?? d.createdBy });
+  const doc = newDocument(opts.size ?? 'A4', {
+    title: `Batch record ${d.batchNumber}`,
+    subject: `${d.formulation.code} revision ${d.formulation.revisionNo}`,
+    author: d.process.completedBy ?? d.createdBy
+  });
   const sheet = new Sheet(doc, (s) => {
     s.put(`Batch record ${d.batchNumber} (continued)`, s.left, s.y, s.width, { size: 9, bold: true, color: MUTED });
     s.y += 16;
@@ -57,18 +61,30 @@ export async function buildBatchRecord(d: BatchDoc, opts: BatchRecordOptions = {
   if (flagged.length === 0) sheet.paragraph('None: every reading was inside its allowed range.', { size: 9 });
   for (const l of flagged) {
     const a = l.actual!;
-    const decision = a.override ? `Accepted by ${a.override.by} on ${stamp(d, a.override.at)}. Reason: ${a.override.reason}` : 'No quality decision recorded.';
-    sheet.paragraph(`Line ${l.seq} ${l.code}: ${a.actualG} g is ${STATUS_TEXT[a.status!].toLowerCase()} ${l.lowG} – ${l.highG} g (target ${l.targetG} g). ${decision}`, { size: 9 });
+    const decision = a.override
+      ? `Accepted by ${a.override.by} on ${stamp(d, a.override.at)}. Reason: ${a.override.reason}`
+      : 'No quality decision recorded.';
+    sheet.paragraph(
+      `Line ${l.seq} ${l.code}: ${a.actualG} g is ${STATUS_TEXT[a.status!].toLowerCase()} ${l.lowG} – ${l.highG} g (target ${l.targetG} g). ${decision}`,
+      { size: 9 }
+    );
   }
 
   sheet.heading('Slurry and completion');
   sheet.fields([
     ['Part B mixed in at', stamp(d, d.process.mixedAt)],
     ['Use slurry before', stamp(d, d.process.expiresAt)],
-    ['Weigh-out completed', d.process.completedAt ? `${stamp(d, d.process.completedAt)} by ${d.process.completedBy ?? '—'}` : 'not completed']
+    [
+      'Weigh-out completed',
+      d.process.completedAt ? `${stamp(d, d.process.completedAt)} by ${d.process.completedBy ?? '—'}` : 'not completed'
+    ]
   ]);
   if (d.process.completedAt && d.process.expiresAt && d.process.completedAt > d.process.expiresAt) {
-    sheet.paragraph('Completed after the slurry-age limit: the slurry must not be used without a quality decision.', { size: 9, bold: true, color: '#b42318' });
+    sheet.paragraph('Completed after the slurry-age limit: the slurry must not be used without a quality decision.', {
+      size: 9,
+      bold: true,
+      color: '#b42318'
+    });
   }
   if (d.notes) sheet.paragraph(`Notes: ${d.notes}`, { size: 9 });
 
@@ -80,7 +96,10 @@ export async function buildBatchRecord(d: BatchDoc, opts: BatchRecordOptions = {
   }
 
   sheet.heading('Signatures', 132);
-  sheet.signatures(['Prepared by', 'Checked by', 'Quality disposition'], [d.process.completedBy ? `Completed in Phosforge by ${d.process.completedBy}` : null]);
+  sheet.signatures(
+    ['Prepared by', 'Checked by', 'Quality disposition'],
+    [d.process.completedBy ? `Completed in Phosforge by ${d.process.completedBy}` : null]
+  );
   sheet.boxed(WEIGHOUT_CAUTION_TITLE, WEIGHOUT_CAUTIONS, '#9c4309');
   sheet.footers(`${d.batchNumber} · ${d.formulation.code} rev. ${d.formulation.revisionNo} · batch record`);
   return renderToBuffer(doc);

@@ -10,7 +10,11 @@ import { WEIGHOUT_CAUTIONS, WEIGHOUT_CAUTION_TITLE } from './cautions';
 import { MUTED, Sheet } from './sheet';
 
 export async function buildBatchTicket(d: BatchDoc, size: PaperSize = 'A4'): Promise<Buffer> {
-  const doc = newDocument(size, { title: `Weigh-out ticket ${d.batchNumber}`, subject: `${d.formulation.code} revision ${d.formulation.revisionNo}`, author: d.createdBy });
+  const doc = newDocument(size, {
+    title: `Weigh-out ticket ${d.batchNumber}`,
+    subject: `${d.formulation.code} revision ${d.formulation.revisionNo}`,
+    author: d.createdBy
+  });
   const [bar, qr] = await Promise.all([code128Png(d.batchNumber), qrPng(d.batchNumber)]);
   const sheet = new Sheet(doc, (s) => {
     s.put(`Weigh-out ticket ${d.batchNumber} (continued)`, s.left, s.y, s.width, { size: 9, bold: true, color: MUTED });
@@ -21,7 +25,10 @@ export async function buildBatchTicket(d: BatchDoc, size: PaperSize = 'A4'): Pro
   sheet.put('Phosforge', sheet.left, top, 200, { size: 8, color: MUTED });
   sheet.put('Weigh-out ticket', sheet.left, top + 10, 250, { size: 18, bold: true });
   sheet.put(d.batchNumber, sheet.left, top + 34, 250, { size: 13, bold: true });
-  sheet.put(`${d.formulation.code} · revision ${d.formulation.revisionNo} · printed ${stamp(d, new Date())}`, sheet.left, top + 52, 260, { size: 8, color: MUTED });
+  sheet.put(`${d.formulation.code} · revision ${d.formulation.revisionNo} · printed ${stamp(d, new Date())}`, sheet.left, top + 52, 260, {
+    size: 8,
+    color: MUTED
+  });
   const qrSize = 64;
   const barW = 170;
   const qrX = sheet.left + sheet.width - qrSize;
@@ -58,11 +65,18 @@ export async function buildBatchTicket(d: BatchDoc, size: PaperSize = 'A4'): Pro
     ]),
     28
   );
-  sheet.paragraph(`Total of the targets: ${d.size.batchMassG} g. A reading outside its allowed range must not be corrected silently: record it and ask quality for a decision.`, { size: 8, color: MUTED });
+  sheet.paragraph(
+    `Total of the targets: ${d.size.batchMassG} g. A reading outside its allowed range must not be corrected silently: record it and ask quality for a decision.`,
+    { size: 8, color: MUTED }
+  );
 
   sheet.heading('Mixing, degassing and pot life');
   for (const n of processNotes(d)) sheet.paragraph(n, { size: 8.5, gap: 3 });
-  sheet.fields([['Part B mixed in at', '______________'], ['Use slurry before', '______________'], ['Mixer programme / degas', '______________']]);
+  sheet.fields([
+    ['Part B mixed in at', '______________'],
+    ['Use slurry before', '______________'],
+    ['Mixer programme / degas', '______________']
+  ]);
   if (d.notes) sheet.paragraph(`Notes: ${d.notes}`, { size: 8.5 });
 
   sheet.heading('Signatures', 88);

@@ -31,7 +31,15 @@ export function renderToBuffer(doc: PDFKit.PDFDocument): Promise<Buffer> {
 /** "2026-12-02 14:05 UTC" (or the plant's time zone when given). */
 export function formatStamp(d: Date | null, timeZone = 'UTC'): string {
   if (!d) return '—';
-  const parts = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).formatToParts(d);
+  const parts = new Intl.DateTimeFormat('en-CA', {
+    timeZone,
+    year: 'numeric',
+    month: '2-digit',
+    day: '2-digit',
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23'
+  }).formatToParts(d);
   const p = (t: string) => parts.find((x) => x.type === t)?.value ?? '';
   return `${p('year')}-${p('month')}-${p('day')} ${p('hour')}:${p('minute')} ${timeZone === 'UTC' ? 'UTC' : timeZone}`;
 }

@@ -25,7 +25,13 @@ export function registerPlex(doc: PDFKit.PDFDocument): void {
 }
 
 const REPLACEMENTS: [RegExp, string][] = [
-  [/→/g, '->'], [/←/g, '<-'], [/≥/g, '>='], [/≤/g, '<='], [/≈/g, '~'], [/Δ/g, 'delta '], [/≠/g, '!=']
+  [/→/g, '->'],
+  [/←/g, '<-'],
+  [/≥/g, '>='],
+  [/≤/g, '<='],
+  [/≈/g, '~'],
+  [/Δ/g, 'delta '],
+  [/≠/g, '!=']
 ];
 
 /** Text limited to the glyphs of the embedded latin subset. */

@@ -12,17 +12,31 @@ const LINE_GAP = 1;
 /** Word widths per point of font size, kept across documents (fontkit shaping is the slow part). */
 const WORD_WIDTHS = new Map<string, number>();
 
-export interface Column { header: string; width: number; align?: 'left' | 'right' | 'center'; box?: boolean }
+export interface Column {
+  header: string;
+  width: number;
+  align?: 'left' | 'right' | 'center';
+  box?: boolean;
+}
 
 export class Sheet {
   y: number;
-  constructor(readonly doc: PDFKit.PDFDocument, private readonly onNewPage: (s: Sheet) => void = () => {}) {
+  constructor(
+    readonly doc: PDFKit.PDFDocument,
+    private readonly onNewPage: (s: Sheet) => void = () => {}
+  ) {
     this.y = doc.page.margins.top;
   }
 
-  get left(): number { return this.doc.page.margins.left; }
-  get width(): number { return this.doc.page.width - this.doc.page.margins.left - this.doc.page.margins.right; }
-  get bottom(): number { return this.doc.page.height - this.doc.page.margins.bottom; }
+  get left(): number {
+    return this.doc.page.margins.left;
+  }
+  get width(): number {
+    return this.doc.page.width - this.doc.page.margins.left - this.doc.page.margins.right;
+  }
+  get bottom(): number {
+    return this.doc.page.height - this.doc.page.margins.bottom;
+  }
 
   newPage(): void {
     this.doc.addPage();
@@ -59,8 +73,15 @@ export class Sheet {
       lines++;
       for (const word of para.split(' ')) {
         const w = measure(word);
-        if (used > 0 && used + space + w > width) { lines++; used = 0; }
-        if (w > width) { lines += Math.ceil(w / width) - 1; used = w % width; continue; }
+        if (used > 0 && used + space + w > width) {
+          lines++;
+          used = 0;
+        }
+        if (w > width) {
+          lines += Math.ceil(w / width) - 1;
+          used = w % width;
+          continue;
+        }
         used += (used > 0 ? space : 0) + w;
       }
     }
@@ -68,9 +89,18 @@ export class Sheet {
   }
 
   /** Writes text at (x, y) without moving the cursor; returns its height. */
-  put(text: string, x: number, y: number, width: number, o: { size?: number; bold?: boolean; color?: string; align?: 'left' | 'right' | 'center' } = {}): number {
+  put(
+    text: string,
+    x: number,
+    y: number,
+    width: number,
+    o: { size?: number; bold?: boolean; color?: string; align?: 'left' | 'right' | 'center' } = {}
+  ): number {
     const size = o.size ?? 9;
-    this.doc.font(o.bold ? FONT.semibold : FONT.regular).fontSize(size).fillColor(o.color ?? INK)
+    this.doc
+      .font(o.bold ? FONT.semibold : FONT.regular)
+      .fontSize(size)
+      .fillColor(o.color ?? INK)
       .text(pdfSafe(text), x, y, { width, align: o.align ?? 'left', lineGap: LINE_GAP });
     return this.height(text, width, size, o.bold);
   }
@@ -88,7 +118,12 @@ export class Sheet {
     this.y += 6;
     this.put(text, this.left, this.y, this.width, { size: 11, bold: true });
     this.y += 16;
-    this.doc.moveTo(this.left, this.y - 2).lineTo(this.left + this.width, this.y - 2).lineWidth(0.5).strokeColor(RULE).stroke();
+    this.doc
+      .moveTo(this.left, this.y - 2)
+      .lineTo(this.left + this.width, this.y - 2)
+      .lineWidth(0.5)
+      .strokeColor(RULE)
+      .stroke();
     this.y += 3;
   }
 
@@ -117,24 +152,39 @@ export class Sheet {
       this.ensure(h + minRowHeight);
       let x = this.left;
       this.doc.rect(this.left, this.y, this.width, h).fillColor('#e9ecf1').fill();
-      columns.forEach((c, i) => { this.put(c.header, x + 3, this.y + 3, widths[i] - 6, { size: 7.5, bold: true, align: c.align }); x += widths[i]; });
+      columns.forEach((c, i) => {
+        this.put(c.header, x + 3, this.y + 3, widths[i] - 6, { size: 7.5, bold: true, align: c.align });
+        x += widths[i];
+      });
       this.y += h;
     };
     header();
     for (const row of rows) {
       const h = Math.max(minRowHeight, ...row.map((cell, i) => this.height(cell, widths[i] - 6, 8.5) + 8));
-      if (this.y + h > this.bottom) { this.newPage(); header(); }
+      if (this.y + h > this.bottom) {
+        this.newPage();
+        header();
+      }
       let x = this.left;
       row.forEach((cell, i) => {
         const c = columns[i];
         if (c.box && cell === '') {
-          this.doc.rect(x + 3, this.y + 3, widths[i] - 6, h - 6).lineWidth(0.75).strokeColor(INK).stroke();
+          this.doc
+            .rect(x + 3, this.y + 3, widths[i] - 6, h - 6)
+            .lineWidth(0.75)
+            .strokeColor(INK)
+            .stroke();
         } else {
           this.put(cell, x + 3, this.y + 4, widths[i] - 6, { size: 8.5, align: c.align });
         }
         x += widths[i];
       });
-      this.doc.moveTo(this.left, this.y + h).lineTo(this.left + this.width, this.y + h).lineWidth(0.4).strokeColor(RULE).stroke();
+      this.doc
+        .moveTo(this.left, this.y + h)
+        .lineTo(this.left + this.width, this.y + h)
+        .lineWidth(0.4)
+        .strokeColor(RULE)
+        .stroke();
       this.y += h;
     }
     this.y += 6;
@@ -165,8 +215,16 @@ export class Sheet {
       const sigW = this.width * 0.5;
       const dateX = sigX + sigW + 15;
       const dateW = this.left + this.width - dateX;
-      for (const [x, w, label] of [[sigX, sigW, 'Name and signature'], [dateX, dateW, 'Date and time']] as const) {
-        this.doc.moveTo(x, y + 22).lineTo(x + w, y + 22).lineWidth(0.75).strokeColor(INK).stroke();
+      for (const [x, w, label] of [
+        [sigX, sigW, 'Name and signature'],
+        [dateX, dateW, 'Date and time']
+      ] as const) {
+        this.doc
+          .moveTo(x, y + 22)
+          .lineTo(x + w, y + 22)
+          .lineWidth(0.75)
+          .strokeColor(INK)
+          .stroke();
         this.put(label, x, y + 25, w, { size: 7, color: MUTED });
       }
       const done = filled[i];
@@ -184,7 +242,11 @@ export class Sheet {
       this.doc.page.margins.bottom = 0;
       const y = this.doc.page.height - 32;
       this.put(left, this.left, y, this.width * 0.7, { size: 7.5, color: MUTED });
-      this.put(`Page ${i - range.start + 1} of ${range.count}`, this.left + this.width * 0.7, y, this.width * 0.3, { size: 7.5, color: MUTED, align: 'right' });
+      this.put(`Page ${i - range.start + 1} of ${range.count}`, this.left + this.width * 0.7, y, this.width * 0.3, {
+        size: 7.5,
+        color: MUTED,
+        align: 'right'
+      });
       this.doc.page.margins.bottom = bottomMargin;
     }
   }

@@ -16,7 +16,10 @@ import { SpectrumInputError } from '../../spectral/errors';
 
 const workerFile = (): string => resolve(config().solveWorkerFile);
 
-interface Slot { worker: Worker; busy: Set<number> }
+interface Slot {
+  worker: Worker;
+  busy: Set<number>;
+}
 type Pending = { resolve: (r: SolveResult) => void; reject: (e: Error) => void };
 
 let slots: Slot[] | null = null;
@@ -43,7 +46,10 @@ function startSlot(): Slot {
   });
   worker.on('error', (err) => {
     // A crashed worker fails the requests it held and is replaced by a fresh one.
-    for (const id of slot.busy) { pending.get(id)?.reject(err); pending.delete(id); }
+    for (const id of slot.busy) {
+      pending.get(id)?.reject(err);
+      pending.delete(id);
+    }
     if (slots) slots = slots.map((s) => (s === slot ? startSlot() : s));
   });
   return slot;

@@ -1,7 +1,11 @@
 /** Every object of a bucket (optionally under a prefix), page by page (ListObjectsV2, 1,000 keys a page). */
 import { ListObjectsV2Command, type S3Client } from '@aws-sdk/client-s3';
 
-export interface ListedObject { key: string; bytes: number; lastModified: Date }
+export interface ListedObject {
+  key: string;
+  bytes: number;
+  lastModified: Date;
+}
 
 export async function listObjects(s3: S3Client, bucket: string, prefix?: string): Promise<ListedObject[]> {
   const out: ListedObject[] = [];

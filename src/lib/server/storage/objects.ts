@@ -13,7 +13,15 @@ import type { StoredFileRow } from '../../storage/types';
 
 export type { StoredFileRow } from '../../storage/types';
 
-export const FILE_PURPOSES = ['spectrum-source', 'safety-data-sheet', 'certificate', 'ticket', 'batch-record', 'measurement', 'attachment'] as const;
+export const FILE_PURPOSES = [
+  'spectrum-source',
+  'safety-data-sheet',
+  'certificate',
+  'ticket',
+  'batch-record',
+  'measurement',
+  'attachment'
+] as const;
 export type FilePurpose = (typeof FILE_PURPOSES)[number];
 
 export interface PutFileInput {
@@ -27,14 +35,31 @@ export interface PutFileInput {
 }
 
 interface DbRow {
-  id: number; storage_key: string; original_name: string; content_type: string; bytes: number; sha256: string;
-  purpose: string; entity_type: string | null; entity_id: string | null; uploaded_by: number | null; created_at: Date;
+  id: number;
+  storage_key: string;
+  original_name: string;
+  content_type: string;
+  bytes: number;
+  sha256: string;
+  purpose: string;
+  entity_type: string | null;
+  entity_id: string | null;
+  uploaded_by: number | null;
+  created_at: Date;
 }
 
 export function toStoredFile(r: DbRow): StoredFileRow {
   return {
-    id: r.id, storageKey: r.storage_key, originalName: r.original_name, contentType: r.content_type, bytes: r.bytes,
-    sha256: r.sha256, purpose: r.purpose, entityType: r.entity_type, entityId: r.entity_id, uploadedBy: r.uploaded_by,
+    id: r.id,
+    storageKey: r.storage_key,
+    originalName: r.original_name,
+    contentType: r.content_type,
+    bytes: r.bytes,
+    sha256: r.sha256,
+    purpose: r.purpose,
+    entityType: r.entity_type,
+    entityId: r.entity_id,
+    uploadedBy: r.uploaded_by,
     createdAt: r.created_at
   };
 }
@@ -42,7 +67,11 @@ export function toStoredFile(r: DbRow): StoredFileRow {
 /** A file name safe for keys and Content-Disposition: letters, digits, dot, dash, underscore. */
 export function safeFileName(name: string): string {
   const base = name.split(/[\\/]/).pop() ?? 'file';
-  const cleaned = base.normalize('NFKD').replace(/[^\w.-]+/g, '_').replace(/^[._]+/, '').slice(-120);
+  const cleaned = base
+    .normalize('NFKD')
+    .replace(/[^\w.-]+/g, '_')
+    .replace(/^[._]+/, '')
+    .slice(-120);
   return cleaned || 'file';
 }
 
@@ -100,7 +129,11 @@ export async function deleteFile(id: number, trx?: Knex.Transaction): Promise<bo
   const row: DbRow | undefined = await q('stored_files').where({ id }).first();
   if (!row) return false;
   await q('stored_files').where({ id }).delete();
-  if (trx) trx.executionPromise.then(() => deleteStoredObject(row.storage_key), () => undefined);
+  if (trx)
+    trx.executionPromise.then(
+      () => deleteStoredObject(row.storage_key),
+      () => undefined
+    );
   else await deleteStoredObject(row.storage_key);
   return true;
 }

@@ -14,13 +14,7 @@
 import { cctDuvToXy } from '../cct/inverse';
 import { uvToCctOhno2014 } from '../cct/ohno2014';
 import { xyToUv, xyToUvPrime, type Pair } from '../colorimetry/chromaticity';
-import {
-  ANSI_C78377_2017_TABLE1,
-  ANSI_FLEX_CCT_TOL,
-  ANSI_FLEX_DUV,
-  ANSI_FLEX_RANGE,
-  type AnsiTable1Row
-} from '../data/ansi-c78377-2017';
+import { ANSI_C78377_2017_TABLE1, ANSI_FLEX_CCT_TOL, ANSI_FLEX_DUV, ANSI_FLEX_RANGE, type AnsiTable1Row } from '../data/ansi-c78377-2017';
 
 export interface AnsiQuadrangle {
   nominalCct: number;
@@ -57,12 +51,7 @@ function quadrangle(nominalCct: number, targetCct: number, targetDuv: number, lo
     cctMin: lo,
     cctMax: hi,
     centre: cctDuvToXy(targetCct, targetDuv),
-    corners: [
-      cctDuvToXy(lo, dLo + tol),
-      cctDuvToXy(hi, dHi + tol),
-      cctDuvToXy(hi, dHi - tol),
-      cctDuvToXy(lo, dLo - tol)
-    ]
+    corners: [cctDuvToXy(lo, dLo + tol), cctDuvToXy(hi, dHi + tol), cctDuvToXy(hi, dHi - tol), cctDuvToXy(lo, dLo - tol)]
   };
 }
 

@@ -58,7 +58,14 @@ export function ellipseForCct(cctK: number, mode: 'nearest' | 'interpolate' = 'i
 }
 
 /** Steps of (x, y) from a target (xt, yt) using the ellipse shape for the target CCT. */
-export function sdcmFromTarget(x: number, y: number, xt: number, yt: number, cctK: number, mode: 'nearest' | 'interpolate' = 'interpolate'): number {
+export function sdcmFromTarget(
+  x: number,
+  y: number,
+  xt: number,
+  yt: number,
+  cctK: number,
+  mode: 'nearest' | 'interpolate' = 'interpolate'
+): number {
   const e = ellipseForCct(cctK, mode);
   return sdcmSteps(x, y, { ...e, x: xt, y: yt, steps: 1 });
 }

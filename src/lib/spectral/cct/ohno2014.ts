@@ -69,8 +69,7 @@ export function uvToCctOhno2014(u: number, v: number): CctDuv {
   const X = (t2 - t1) * (t0 - t2) * (t1 - t0);
   const a = (t0 * (d2 - d1) + t1 * (d0 - d2) + t2 * (d1 - d0)) / X;
   const b = -(t0 * t0 * (d2 - d1) + t1 * t1 * (d0 - d2) + t2 * t2 * (d1 - d0)) / X;
-  const c =
-    -(d0 * (t2 - t1) * t1 * t2 + d1 * (t0 - t2) * t0 * t2 + d2 * (t1 - t0) * t0 * t1) / X;
+  const c = -(d0 * (t2 - t1) * t1 * t2 + d1 * (t0 - t2) * t0 * t2 + d2 * (t1 - t0) * t0 * t1) / X;
   const cct = -b / (2 * a);
   const duv = sign * (a * cct * cct + b * cct + c);
   return { cct, duv };

@@ -40,10 +40,7 @@ export function daylightCoefficients(cctK: number): DaylightCoefficients {
 }
 
 /** Relative SPD of CIE daylight at CCT T (K) on the working grid (S0 + M1 S1 + M2 S2). */
-export function daylightSpd(
-  cctK: number,
-  out: Float64Array = new Float64Array(GRID_LENGTH)
-): Float64Array {
+export function daylightSpd(cctK: number, out: Float64Array = new Float64Array(GRID_LENGTH)): Float64Array {
   const { m1, m2 } = daylightCoefficients(cctK);
   for (let i = 0; i < GRID_LENGTH; i++) {
     out[i] = DAYLIGHT_S0[i] + m1 * DAYLIGHT_S1[i] + m2 * DAYLIGHT_S2[i];

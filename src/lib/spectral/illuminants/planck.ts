@@ -30,10 +30,7 @@ for (let i = 0; i < GRID_LENGTH; i++) {
  * Planckian SPD on the working grid, scaled by 1e-13 to keep numbers near 1 (relative).
  * Writes into `out` when given (hot paths reuse a buffer).
  */
-export function planckSpd(
-  temperatureK: number,
-  out: Float64Array = new Float64Array(GRID_LENGTH)
-): Float64Array {
+export function planckSpd(temperatureK: number, out: Float64Array = new Float64Array(GRID_LENGTH)): Float64Array {
   const invT = 1 / temperatureK;
   for (let i = 0; i < GRID_LENGTH; i++) {
     out[i] = (PLANCK_C1 * 1e-13 * LAMBDA_M5[i]) / Math.expm1(C2_OVER_LAMBDA[i] * invT);

@@ -32,13 +32,7 @@ export function makeKnotTable(series: readonly (readonly number[])[], startNm: n
  * Knot weights for the three CMF channels: out[3k + c]. Also returns Σ S c̄ over the knot span
  * (the white) in `white` (length 3).
  */
-export function knotWeights(
-  spd: Float64Array,
-  cmf: CmfGrid,
-  table: KnotTable,
-  out: Float64Array,
-  white: Float64Array
-): void {
+export function knotWeights(spd: Float64Array, cmf: CmfGrid, table: KnotTable, out: Float64Array, white: Float64Array): void {
   const { knots, startNm, stepNm } = table;
   out.fill(0, 0, 3 * knots);
   white[0] = 0;

@@ -25,17 +25,22 @@ function invert3(m: number[]): number[] {
   const C = d * h - e * g;
   const det = a * A + b * B + c * C;
   return [
-    A / det, -(b * i - c * h) / det, (b * f - c * e) / det,
-    B / det, (a * i - c * g) / det, -(a * f - c * d) / det,
-    C / det, -(a * h - b * g) / det, (a * e - b * d) / det
+    A / det,
+    -(b * i - c * h) / det,
+    (b * f - c * e) / det,
+    B / det,
+    (a * i - c * g) / det,
+    -(a * f - c * d) / det,
+    C / det,
+    -(a * h - b * g) / det,
+    (a * e - b * d) / det
   ];
 }
 
 function mul3(a: number[], b: number[]): number[] {
   const out = new Array<number>(9);
   for (let r = 0; r < 3; r++)
-    for (let c = 0; c < 3; c++)
-      out[3 * r + c] = a[3 * r] * b[c] + a[3 * r + 1] * b[3 + c] + a[3 * r + 2] * b[6 + c];
+    for (let c = 0; c < 3; c++) out[3 * r + c] = a[3 * r] * b[c] + a[3 * r + 1] * b[3 + c] + a[3 * r + 2] * b[6 + c];
   return out;
 }
 

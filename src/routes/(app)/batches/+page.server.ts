@@ -16,5 +16,11 @@ export const load: PageServerLoad = async ({ locals, url }) => {
     if (id) redirect(303, `/batches/${id}`);
   }
   const { items, total } = await listBatches(filter);
-  return { items, total, filter: { state: filter.state ?? '', q: filter.q ?? '', offset: filter.offset, limit: filter.limit }, invalid: !parsed.success, canPlan: mayPlanBatch(user) };
+  return {
+    items,
+    total,
+    filter: { state: filter.state ?? '', q: filter.q ?? '', offset: filter.offset, limit: filter.limit },
+    invalid: !parsed.success,
+    canPlan: mayPlanBatch(user)
+  };
 };

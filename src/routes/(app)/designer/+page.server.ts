@@ -18,7 +18,15 @@ async function openedRevision(param: string | null) {
   if (id === null) return null;
   const rev = await getRevision(id);
   if (!rev) return null;
-  return { id: rev.id, formulationId: rev.formulationId, code: rev.formulationCode, name: rev.formulationName, revisionNo: rev.revisionNo, state: rev.state, content: rev.content };
+  return {
+    id: rev.id,
+    formulationId: rev.formulationId,
+    code: rev.formulationCode,
+    name: rev.formulationName,
+    revisionNo: rev.revisionNo,
+    state: rev.state,
+    content: rev.content
+  };
 }
 
 export const load: PageServerLoad = async ({ locals, url }) => {
@@ -33,7 +41,14 @@ export const load: PageServerLoad = async ({ locals, url }) => {
   return {
     pumps,
     phosphors,
-    silicones: silicones.map((s) => ({ id: s.id, name: s.name, ratioA: s.ratioA, ratioB: s.ratioB, potLifeMin: s.potLifeMin, safetyNote: s.safetyNote })),
+    silicones: silicones.map((s) => ({
+      id: s.id,
+      name: s.name,
+      ratioA: s.ratioA,
+      ratioB: s.ratioB,
+      potLifeMin: s.potLifeMin,
+      safetyNote: s.safetyNote
+    })),
     formulations: formulations.rows.map((f) => ({ id: f.id, code: f.code, name: f.name })),
     opened
   };

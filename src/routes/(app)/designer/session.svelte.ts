@@ -69,7 +69,9 @@ export class DesignerSession {
   constructor(pumps: MaterialChoice[], phosphors: MaterialChoice[], opened: RevisionContent | null, openedAim: AimState | null) {
     // A revision may name materials that have since left the active library: keep them choosable.
     const known = (list: MaterialChoice[], ref: { materialId: number; code: string; name: string }) =>
-      list.some((m) => m.id === ref.materialId) ? list : [...list, { id: ref.materialId, code: ref.code, name: `${ref.name} (archived)`, family: null, peakNm: null }];
+      list.some((m) => m.id === ref.materialId)
+        ? list
+        : [...list, { id: ref.materialId, code: ref.code, name: `${ref.name} (archived)`, family: null, peakNm: null }];
     this.pumps = opened ? known(pumps, opened.pump) : pumps;
     this.phosphorOptions = opened ? phosphorLines(opened).reduce(known, phosphors) : phosphors;
     if (opened) {
@@ -109,10 +111,21 @@ export class DesignerSession {
   }
   sharesKey = $derived(`${this.wantedKey}|${this.pathLengthMm}|${roundedShares(this.shares, 4).join(',')}`);
   currentWtPct = $derived(this.wtPct && this.wtPct.key === this.sharesKey ? this.wtPct : null);
-  snapshot = $derived(JSON.stringify({ p: this.pumpId, ph: this.phosphorIds, s: roundedShares(this.shares, 4), a: this.aim, o: this.objective, l: this.pathLengthMm }));
+  snapshot = $derived(
+    JSON.stringify({
+      p: this.pumpId,
+      ph: this.phosphorIds,
+      s: roundedShares(this.shares, 4),
+      a: this.aim,
+      o: this.objective,
+      l: this.pathLengthMm
+    })
+  );
   dirty = $derived(this.snapshot !== this.savedSnapshot);
   candidatesUsable = $derived(this.solvedKey === this.loadedKey && this.ready);
-  comparedCandidates = $derived(this.solveResult && this.candidatesUsable ? this.solveResult.candidates.filter((c) => this.compared.includes(c.rank)) : []);
+  comparedCandidates = $derived(
+    this.solveResult && this.candidatesUsable ? this.solveResult.candidates.filter((c) => this.compared.includes(c.rank)) : []
+  );
 
   /** SPD of a proposal on the grid, from the loaded basis (the proposal's own component set). */
   candidateSpectrum(c: SolveCandidate): { wavelengths: number[]; values: number[] } | null {
@@ -219,15 +232,18 @@ export class DesignerSession {
     this.solveElapsedMs = 0;
     const tick = setInterval(() => (this.solveElapsedMs = performance.now() - this.solveStartedAt), 100);
     const key = this.loadedKey;
-    const outcome = await requestSolve({
-      components: this.components,
-      target: aim.target,
-      tolerance: aim.tolerance,
-      floors: aim.floors,
-      objective: this.objective,
-      maxCandidates: 5,
-      ...(this.pathLengthMm ? { loading: { pathLengthMm: this.pathLengthMm } } : {})
-    }, abort.signal);
+    const outcome = await requestSolve(
+      {
+        components: this.components,
+        target: aim.target,
+        tolerance: aim.tolerance,
+        floors: aim.floors,
+        objective: this.objective,
+        maxCandidates: 5,
+        ...(this.pathLengthMm ? { loading: { pathLengthMm: this.pathLengthMm } } : {})
+      },
+      abort.signal
+    );
     clearInterval(tick);
     if (this.#abort !== abort) return;
     this.solveElapsedMs = performance.now() - this.solveStartedAt;

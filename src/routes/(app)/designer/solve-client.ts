@@ -16,6 +16,10 @@ export async function requestSolve(problem: SolveProblemInput, signal: AbortSign
     return { ok: true, result: body as SolveResult };
   } catch (err) {
     const aborted = err instanceof DOMException && err.name === 'AbortError';
-    return { ok: false, error: aborted ? 'Search stopped.' : 'The solver could not be reached. Check the connection and try again.', aborted };
+    return {
+      ok: false,
+      error: aborted ? 'Search stopped.' : 'The solver could not be reached. Check the connection and try again.',
+      aborted
+    };
   }
 }

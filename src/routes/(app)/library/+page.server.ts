@@ -15,13 +15,29 @@ const querySchema = z.object({
 export const load: PageServerLoad = async ({ locals, url }) => {
   const user = requireUser(locals, mayRead);
   const query = querySchema.parse(Object.fromEntries(url.searchParams));
-  const materials = await records.list({ kind: query.kind, search: query.q, sort: query.sort, dir: query.dir, includeArchived: query.archived === '1' });
+  const materials = await records.list({
+    kind: query.kind,
+    search: query.q,
+    sort: query.sort,
+    dir: query.dir,
+    includeArchived: query.archived === '1'
+  });
   return {
     query,
     canEdit: mayEditLibrary(user),
     materials: materials.map((m) => ({
-      id: m.id, kind: m.kind, code: m.code, name: m.name, family: m.family, supplier: m.supplier, peakNm: m.peakNm,
-      fwhmNm: m.fwhmNm, iqe: m.iqe, costPerKg: m.costPerKg, updatedAt: m.updatedAt, archived: m.archivedAt !== null
+      id: m.id,
+      kind: m.kind,
+      code: m.code,
+      name: m.name,
+      family: m.family,
+      supplier: m.supplier,
+      peakNm: m.peakNm,
+      fwhmNm: m.fwhmNm,
+      iqe: m.iqe,
+      costPerKg: m.costPerKg,
+      updatedAt: m.updatedAt,
+      archived: m.archivedAt !== null
     }))
   };
 };

@@ -22,7 +22,11 @@ export const actions: Actions = {
     const user = requireUser(locals);
     const form = Object.fromEntries(await readForm(request));
     const parsed = createSchema.safeParse(form);
-    if (!parsed.success) return actionFailure(400, { values: { name: String(form.name ?? ''), days: String(form.days ?? '') }, errors: z.flattenError(parsed.error).fieldErrors });
+    if (!parsed.success)
+      return actionFailure(400, {
+        values: { name: String(form.name ?? ''), days: String(form.days ?? '') },
+        errors: z.flattenError(parsed.error).fieldErrors
+      });
     const { token } = await issueToken(user, parsed.data.name, parsed.data.days);
     return { created: { name: parsed.data.name, token } };
   },

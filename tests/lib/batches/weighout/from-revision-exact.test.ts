@@ -12,7 +12,10 @@ import type { CreateBatchRequest } from '../../../../src/lib/batches/schema';
 
 type Frac = { n: bigint; d: bigint };
 const gcd = (a: bigint, b: bigint): bigint => (b === 0n ? (a < 0n ? -a : a) : gcd(b, a % b));
-const frac = (n: bigint, d: bigint): Frac => { const g = gcd(n, d) || 1n; return { n: n / g, d: d / g }; };
+const frac = (n: bigint, d: bigint): Frac => {
+  const g = gcd(n, d) || 1n;
+  return { n: n / g, d: d / g };
+};
 const add = (a: Frac, b: Frac) => frac(a.n * b.d + b.n * a.d, a.d * b.d);
 const sub = (a: Frac, b: Frac) => frac(a.n * b.d - b.n * a.d, a.d * b.d);
 const mul = (a: Frac, b: Frac) => frac(a.n * b.n, a.d * b.d);
@@ -25,18 +28,18 @@ function dec(v: number | string): Frac {
 }
 const HUNDRED = frac(100n, 1n);
 /** |a − b| ≤ c */
-const within = (a: Frac, b: Frac, c: Frac) => { const x = sub(a, b); const ax = x.n < 0n ? frac(-x.n, x.d) : x; return ax.n * c.d <= c.n * ax.d; };
+const within = (a: Frac, b: Frac, c: Frac) => {
+  const x = sub(a, b);
+  const ax = x.n < 0n ? frac(-x.n, x.d) : x;
+  return ax.n * c.d <= c.n * ax.d;
+};
 
 function exactMasses(wt: number[], ratio: [number, number], massG: Frac): Frac[] {
   const w = wt.map(dec);
   const sumW = w.reduce(add, frac(0n, 1n));
   const silicone = div(mul(massG, sub(HUNDRED, sumW)), HUNDRED);
   const [a, b] = ratio.map(dec);
-  return [
-    div(mul(silicone, a), add(a, b)),
-    ...w.map((x) => div(mul(massG, x), HUNDRED)),
-    div(mul(silicone, b), add(a, b))
-  ];
+  return [div(mul(silicone, a), add(a, b)), ...w.map((x) => div(mul(massG, x), HUNDRED)), div(mul(silicone, b), add(a, b))];
 }
 
 function revision(wt: number[], ratio: [number, number]): RevisionContent {
@@ -45,7 +48,15 @@ function revision(wt: number[], ratio: [number, number]): RevisionContent {
     phosphors: wt.map((w, i) => ({ materialId: 10 + i, code: `PH-${i}`, name: `phosphor ${i}`, opticalFraction: 0.1, wtPct: w })),
     pumpLeakFraction: 0.1,
     loading: { pathLengthMm: 0.3, basis: 'wtPctOfSlurry' },
-    silicone: { siliconeSystemId: null, name: 'Test encapsulant', ratioA: ratio[0], ratioB: ratio[1], potLifeMin: 240, cure: '', densityGPerCm3: 1.1 },
+    silicone: {
+      siliconeSystemId: null,
+      name: 'Test encapsulant',
+      ratioA: ratio[0],
+      ratioB: ratio[1],
+      potLifeMin: 240,
+      cure: '',
+      densityGPerCm3: 1.1
+    },
     target: { kind: 'cctDuv', cct: 3000, duv: 0 },
     tolerance: { kind: 'sdcm', steps: 3 },
     floors: { raMin: 80, r9Min: 0 },
@@ -80,7 +91,7 @@ function expectExact(p: WeighoutPlan, exact: Frac[], massG: Frac, res: Frac) {
   expect(sum).toEqual(massG);
 }
 
-describe('revision → weigh-out on the phr basis weighs the revision\'s exact masses (regression)', () => {
+describe("revision → weigh-out on the phr basis weighs the revision's exact masses (regression)", () => {
   // 15.14 / 2.65 wt %, 50 kg at 1 mg: the phr printed to 4 decimals (18.4163, 3.2235) used to be weighed,
   // which put the lines 14 to 19 balance steps off the revision's masses (worked out with plain fractions from the
   // definitions above).
@@ -113,7 +124,8 @@ describe('revision → weigh-out property: exact masses within one balance step 
   // Balance steps 0.1 mg – 1 g and mix ratios 1:1 and 10:1 are common practice for two-part silicones.
   const resolutions = [0.0001, 0.001, 0.01, 0.1, 1];
   const cases = fc.record({
-    wt: fc.array(fc.integer({ min: 1, max: 1_200_000 }), { minLength: 1, maxLength: 5 })
+    wt: fc
+      .array(fc.integer({ min: 1, max: 1_200_000 }), { minLength: 1, maxLength: 5 })
       .map((xs) => xs.map((x) => x / 100_000))
       .filter((xs) => xs.reduce((a, x) => a + x, 0) <= 60),
     ratio: fc.constantFrom<[number, number]>([1, 1], [10, 1]),
@@ -124,24 +136,27 @@ describe('revision → weigh-out property: exact masses within one balance step 
 
   it('every line within one step of the exact mass; lines sum to the batch', () => {
     let planned = 0;
-    fc.assert(fc.property(cases, ({ wt, ratio, resIndex, massFraction, basis }) => {
-      const res = resolutions[resIndex];
-      const places = Math.max(0, -Math.round(Math.log10(res)));
-      // 2 g – 50 kg, a whole number of balance steps.
-      const minSteps = Math.ceil(2 / res);
-      const steps = minSteps + Math.floor(massFraction * (Math.round(50_000 / res) - minSteps));
-      const massText = (BigInt(steps) * 10n ** BigInt(4 - places)).toString().padStart(5, '0');
-      const massG = Number(`${massText.slice(0, -4)}.${massText.slice(-4)}`);
-      const p = plan(revision(wt, ratio), request(basis, massG, res, wt.length));
-      const exact = exactMasses(wt, ratio, dec(massG));
-      if ('errors' in p) {
-        // Only a line lighter than one balance step may refuse the plan (minimum weight).
-        expect(exact.some((m) => m.n * dec(res).d < dec(res).n * m.d)).toBe(true);
-        return;
-      }
-      planned++;
-      expectExact(p, exact, dec(massG), dec(res));
-    }), { numRuns: 400 });
+    fc.assert(
+      fc.property(cases, ({ wt, ratio, resIndex, massFraction, basis }) => {
+        const res = resolutions[resIndex];
+        const places = Math.max(0, -Math.round(Math.log10(res)));
+        // 2 g – 50 kg, a whole number of balance steps.
+        const minSteps = Math.ceil(2 / res);
+        const steps = minSteps + Math.floor(massFraction * (Math.round(50_000 / res) - minSteps));
+        const massText = (BigInt(steps) * 10n ** BigInt(4 - places)).toString().padStart(5, '0');
+        const massG = Number(`${massText.slice(0, -4)}.${massText.slice(-4)}`);
+        const p = plan(revision(wt, ratio), request(basis, massG, res, wt.length));
+        const exact = exactMasses(wt, ratio, dec(massG));
+        if ('errors' in p) {
+          // Only a line lighter than one balance step may refuse the plan (minimum weight).
+          expect(exact.some((m) => m.n * dec(res).d < dec(res).n * m.d)).toBe(true);
+          return;
+        }
+        planned++;
+        expectExact(p, exact, dec(massG), dec(res));
+      }),
+      { numRuns: 400 }
+    );
     expect(planned).toBeGreaterThan(200);
   });
 });

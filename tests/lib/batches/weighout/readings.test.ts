@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { checkActual, largestRemainder, parseReadingG, Rat, scaleByFactor, slurryAge, slurryExpiry } from '../../../../src/lib/batches/weighout';
+import {
+  checkActual,
+  largestRemainder,
+  parseReadingG,
+  Rat,
+  scaleByFactor,
+  slurryAge,
+  slurryExpiry
+} from '../../../../src/lib/batches/weighout';
 import { input } from './fixtures';
 
 describe('exact decimals', () => {
@@ -26,7 +34,13 @@ describe('largest-remainder apportionment (Hamilton; Balinski & Young 2001)', ()
 describe('balance readings against the allowed range', () => {
   const line = { targetG: '2.400', lowG: '2.388', highG: '2.412' };
   it.each([
-    ['2.3879', 'below'], ['2.388', 'in'], ['2.400', 'in'], ['2.412', 'in'], ['2.4121', 'above'], ['2,395', 'in'], ['2.45 g', 'above']
+    ['2.3879', 'below'],
+    ['2.388', 'in'],
+    ['2.400', 'in'],
+    ['2.412', 'in'],
+    ['2.4121', 'above'],
+    ['2,395', 'in'],
+    ['2.45 g', 'above']
   ])('%s g is %s', (text, status) => {
     expect(checkActual(parseReadingG(text)!, line).status).toBe(status);
   });

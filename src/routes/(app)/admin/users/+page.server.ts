@@ -38,12 +38,18 @@ export const actions: Actions = {
     const fd = await readForm(request);
     const parsed = rolesSchema.safeParse({ userId: fd.get('userId'), roles: fd.getAll('roles').map(String) });
     if (!parsed.success) return actionFailure(400, { error: z.flattenError(parsed.error).fieldErrors.roles?.[0] ?? 'Invalid roles' });
-    return guarded(async () => { await accounts.changeRoles(admin, parsed.data.userId, parsed.data.roles); return { saved: parsed.data.userId }; });
+    return guarded(async () => {
+      await accounts.changeRoles(admin, parsed.data.userId, parsed.data.roles);
+      return { saved: parsed.data.userId };
+    });
   },
   setActive: async ({ locals, request }) => {
     const admin = requireUser(locals, mayAdminister);
     const parsed = activeSchema.safeParse(Object.fromEntries(await readForm(request)));
     if (!parsed.success) return actionFailure(400, { error: 'Invalid request' });
-    return guarded(async () => { await accounts.setActive(admin, parsed.data.userId, parsed.data.active === 'true'); return { saved: parsed.data.userId }; });
+    return guarded(async () => {
+      await accounts.setActive(admin, parsed.data.userId, parsed.data.active === 'true');
+      return { saved: parsed.data.userId };
+    });
   }
 };

@@ -69,10 +69,19 @@ export const actions: Actions = {
   mix: async ({ locals, params, request }) => {
     const user = requireUser(locals, mayWeigh);
     const v = await formValues(request);
-    const parsed = z.object({ version: z.coerce.number().int().positive(), minutesAgo: z.coerce.number().int().min(0, 'minutes ago must be ≥ 0').max(600).default(0) })
+    const parsed = z
+      .object({
+        version: z.coerce.number().int().positive(),
+        minutesAgo: z.coerce.number().int().min(0, 'minutes ago must be ≥ 0').max(600).default(0)
+      })
       .safeParse({ version: v.version, minutesAgo: v.minutesAgo || undefined });
     if (!parsed.success) return invalidForm('mix', v, parsed.error);
-    return run('mix', v, () => markMixed(user, idParam(params.id, 'Batch not found'), { version: parsed.data.version, mixedAt: new Date(Date.now() - parsed.data.minutesAgo * 60_000) }));
+    return run('mix', v, () =>
+      markMixed(user, idParam(params.id, 'Batch not found'), {
+        version: parsed.data.version,
+        mixedAt: new Date(Date.now() - parsed.data.minutesAgo * 60_000)
+      })
+    );
   },
   complete: async ({ locals, params, request }) => {
     const user = requireUser(locals, mayWeigh);
@@ -84,7 +93,11 @@ export const actions: Actions = {
   scale: async ({ locals, params, request }) => {
     const user = requireUser(locals, mayWeigh);
     const v = await formValues(request);
-    const parsed = z.object({ version: z.coerce.number().int().positive(), batchMassG: z.coerce.number('enter the new batch size in g').finite().gt(0, 'the batch size must be > 0 g').max(100_000) })
+    const parsed = z
+      .object({
+        version: z.coerce.number().int().positive(),
+        batchMassG: z.coerce.number('enter the new batch size in g').finite().gt(0, 'the batch size must be > 0 g').max(100_000)
+      })
       .safeParse({ version: v.version, batchMassG: (v.batchMassG ?? '').replace(',', '.') });
     if (!parsed.success) return invalidForm('scale', v, parsed.error);
     return run('scale', v, () => scaleBatch(user, idParam(params.id, 'Batch not found'), parsed.data));

@@ -22,7 +22,15 @@ export const load: PageServerLoad = async ({ locals, url }) => {
   const usable = revision && revision.state === 'approved' ? revision : null;
   return {
     revisions,
-    revision: usable ? { id: usable.id, formulationCode: usable.formulationCode, formulationName: usable.formulationName, revisionNo: usable.revisionNo, content: usable.content } : null,
+    revision: usable
+      ? {
+          id: usable.id,
+          formulationCode: usable.formulationCode,
+          formulationName: usable.formulationName,
+          revisionNo: usable.revisionNo,
+          content: usable.content
+        }
+      : null,
     defaults: usable ? defaultFields(usable.id, usable.content.phosphors.length, revisionLoadings(usable.content, 'wtPctOfSlurry')) : null,
     revisionLoadingsPhr: usable ? revisionLoadings(usable.content, 'phr') : null
   };

@@ -19,7 +19,9 @@ export const load: PageServerLoad = async ({ locals, url }) => {
   const choices = (await listRevisions(revisionListSchema.parse({ sort: 'code', dir: 'asc', pageSize: 100 }))).rows;
   const both = revA && revB;
   return {
-    a: revA, b: revB, choices,
+    a: revA,
+    b: revB,
+    choices,
     notFound: (a !== null && !revA) || (b !== null && !revB),
     ratios: both ? compareRatios(revA.content, revB.content) : [],
     metrics: both ? compareMetrics(revA.predicted, revB.predicted) : [],

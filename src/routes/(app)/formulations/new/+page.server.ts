@@ -19,7 +19,12 @@ export const actions: Actions = {
     const values = formDataToValues(await readForm(request));
     let created;
     try {
-      created = await createFormulationWithDraft(user, { code: values.code || undefined, name: values.name ?? '', description: values.description ?? '', content: contentFromForm(values) });
+      created = await createFormulationWithDraft(user, {
+        code: values.code || undefined,
+        name: values.name ?? '',
+        description: values.description ?? '',
+        content: contentFromForm(values)
+      });
     } catch (err) {
       return actionFailure(err, { action: 'create', values });
     }

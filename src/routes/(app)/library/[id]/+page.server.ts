@@ -17,7 +17,8 @@ export const load: PageServerLoad = async ({ locals, params }) => {
   const user = requireUser(locals, mayRead);
   const d = await detail.loadPage(idParam(params.id, 'No such material.'));
   if (!d) error(404, 'No such material.');
-  const spd = (s: typeof d.emission) => (s ? { wavelengths: s.wavelengths, values: s.values, sourceFileId: s.sourceFileId, sourceFileName: s.sourceFileName } : null);
+  const spd = (s: typeof d.emission) =>
+    s ? { wavelengths: s.wavelengths, values: s.values, sourceFileId: s.sourceFileId, sourceFileName: s.sourceFileName } : null;
   return {
     ...d,
     emission: spd(d.emission),
@@ -43,9 +44,17 @@ export const actions: Actions = {
     const fd = await readForm(request);
     const values = formValues(fd, LOT_KEYS);
     const parsed = lotSchema.safeParse(values);
-    if (!parsed.success) return actionFailure(400, { action: 'addLot', lotValues: values, lotErrors: z.flattenError(parsed.error).fieldErrors, error: 'The lot was not added: please correct the marked fields.' });
+    if (!parsed.success)
+      return actionFailure(400, {
+        action: 'addLot',
+        lotValues: values,
+        lotErrors: z.flattenError(parsed.error).fieldErrors,
+        error: 'The lot was not added: please correct the marked fields.'
+      });
     const certificate = await formFile(fd, 'certificate');
-    const r = await tryAction({ action: 'addLot', lotValues: values }, () => lots.add(user, idParam(params.id, 'No such material.'), parsed.data, certificate ?? undefined));
+    const r = await tryAction({ action: 'addLot', lotValues: values }, () =>
+      lots.add(user, idParam(params.id, 'No such material.'), parsed.data, certificate ?? undefined)
+    );
     return typeof r === 'number' ? { action: 'addLot', done: `Lot ${parsed.data.lotNumber} added.` } : r;
   },
   removeLot: async ({ locals, request, params }) => {
@@ -62,14 +71,18 @@ export const actions: Actions = {
     if (!purpose.success) return actionFailure(400, { action: 'addDocument', error: purpose.error.issues[0].message });
     const file = await formFile(fd, 'document');
     if (!file) return actionFailure(400, { action: 'addDocument', error: 'Choose a PDF file first.' });
-    const r = await tryAction({ action: 'addDocument' }, () => attachments.add(user, idParam(params.id, 'No such material.'), purpose.data, file));
+    const r = await tryAction({ action: 'addDocument' }, () =>
+      attachments.add(user, idParam(params.id, 'No such material.'), purpose.data, file)
+    );
     return typeof r === 'number' ? { action: 'addDocument', done: `${file.name} added.` } : r;
   },
   removeDocument: async ({ locals, request, params }) => {
     const user = requireUser(locals, mayEditLibrary);
     const fileId = idSchema.safeParse((await readForm(request)).get('fileId'));
     if (!fileId.success) return actionFailure(400, { action: 'removeDocument', error: 'Unknown document.' });
-    const r = await tryAction({ action: 'removeDocument' }, () => attachments.remove(user, idParam(params.id, 'No such material.'), fileId.data));
+    const r = await tryAction({ action: 'removeDocument' }, () =>
+      attachments.remove(user, idParam(params.id, 'No such material.'), fileId.data)
+    );
     return r ?? { action: 'removeDocument', done: 'Document removed.' };
   }
 };
@@ -79,5 +92,7 @@ async function toggleArchive(locals: App.Locals, request: Request, rawId: string
   const version = readVersion(await readForm(request));
   if (version === null) return actionFailure(400, { action: 'archive', error: 'The form lost its version number; reload the page.' });
   const r = await tryAction({ action: 'archive' }, () => editing.setArchived(user, idParam(rawId, 'No such material.'), version, archived));
-  return typeof r === 'number' ? { action: 'archive', done: archived ? 'Archived: it no longer appears in pick lists.' : 'Restored to the active library.' } : r;
+  return typeof r === 'number'
+    ? { action: 'archive', done: archived ? 'Archived: it no longer appears in pick lists.' : 'Restored to the active library.' }
+    : r;
 }

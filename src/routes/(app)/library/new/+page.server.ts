@@ -19,7 +19,12 @@ export const actions: Actions = {
     const user = requireUser(locals, mayEditLibrary);
     const kind = kindOf(url);
     const form = readMaterialForm(await readForm(request));
-    if (!form.ok) return actionFailure(400, { values: form.values, errors: form.errors, error: 'Please correct the marked fields. Nothing was saved.' });
+    if (!form.ok)
+      return actionFailure(400, {
+        values: form.values,
+        errors: form.errors,
+        error: 'Please correct the marked fields. Nothing was saved.'
+      });
     const id = await tryAction({ values: form.values, errors: {} }, () => editing.create(user, kind, form.data));
     if (typeof id !== 'number') return id;
     redirect(303, `/library/${id}/spectrum?created=1`);

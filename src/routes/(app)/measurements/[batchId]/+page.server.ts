@@ -28,18 +28,31 @@ export const actions: Actions = {
   upload: async ({ locals, params, request }) => {
     const user = requireUser(locals, mayJudgeBatches);
     const file = (await readForm(request)).get('file');
-    if (!(file instanceof File) || file.size === 0) return actionFailure(400, { uploadError: 'Choose a measurement file first.', uploadIssues: [] });
+    if (!(file instanceof File) || file.size === 0)
+      return actionFailure(400, { uploadError: 'Choose a measurement file first.', uploadIssues: [] });
     try {
-      const res = await uploadMeasurements(user, batchId(params.batchId), { name: file.name, contentType: file.type, body: Buffer.from(await file.arrayBuffer()) });
+      const res = await uploadMeasurements(user, batchId(params.batchId), {
+        name: file.name,
+        contentType: file.type,
+        body: Buffer.from(await file.arrayBuffer())
+      });
       return { uploaded: { parts: res.parts, warnings: res.warnings } };
     } catch (err) {
-      return actionFailure(err, (r) => ({ uploadError: r.error, uploadIssues: r.issues.map((i) => ({ line: i.line ?? null, message: i.message })) }));
+      return actionFailure(err, (r) => ({
+        uploadError: r.error,
+        uploadIssues: r.issues.map((i) => ({ line: i.line ?? null, message: i.message }))
+      }));
     }
   },
   setAcceptance: async ({ locals, params, request }) => {
     const user = requireUser(locals, mayJudgeBatches);
     const fd = await readForm(request);
-    const parsed = acceptanceSchema.safeParse({ mode: fd.get('mode'), steps: fd.get('steps') ?? undefined, requireTargetBin: fd.get('requireTargetBin') ?? 'false', version: fd.get('version') });
+    const parsed = acceptanceSchema.safeParse({
+      mode: fd.get('mode'),
+      steps: fd.get('steps') ?? undefined,
+      requireTargetBin: fd.get('requireTargetBin') ?? 'false',
+      version: fd.get('version')
+    });
     if (!parsed.success) return actionFailure(400, { acceptanceErrors: z.flattenError(parsed.error).fieldErrors });
     try {
       await setAcceptance(user, batchId(params.batchId), parsed.data);
@@ -51,7 +64,8 @@ export const actions: Actions = {
   withdrawUpload: async ({ locals, params, request }) => {
     const user = requireUser(locals, mayJudgeBatches);
     const parsed = withdrawUploadSchema.safeParse(Object.fromEntries(await readForm(request)));
-    if (!parsed.success) return actionFailure(400, { withdrawError: z.flattenError(parsed.error).fieldErrors.reason?.[0] ?? 'Give a reason and the upload.' });
+    if (!parsed.success)
+      return actionFailure(400, { withdrawError: z.flattenError(parsed.error).fieldErrors.reason?.[0] ?? 'Give a reason and the upload.' });
     try {
       await withdrawUpload(user, batchId(params.batchId), parsed.data.uploadId, parsed.data.reason);
       return { withdrawn: parsed.data.uploadId };
@@ -72,7 +86,13 @@ export const actions: Actions = {
   dispose: async ({ locals, params, request, url }) => {
     const user = requireUser(locals, mayJudgeBatches);
     const fd = await readForm(request);
-    const raw = { decision: String(fd.get('decision') ?? ''), meaning: String(fd.get('meaning') ?? ''), comment: String(fd.get('comment') ?? ''), password: String(fd.get('password') ?? ''), version: fd.get('version') };
+    const raw = {
+      decision: String(fd.get('decision') ?? ''),
+      meaning: String(fd.get('meaning') ?? ''),
+      comment: String(fd.get('comment') ?? ''),
+      password: String(fd.get('password') ?? ''),
+      version: fd.get('version')
+    };
     const values = { decision: raw.decision, meaning: raw.meaning, comment: raw.comment };
     const parsed = dispositionSchema.safeParse(raw);
     if (!parsed.success) return actionFailure(400, { disposition: { values, errors: z.flattenError(parsed.error).fieldErrors } });

@@ -18,7 +18,8 @@ type StreamLine =
   | { type: 'error'; error: string; issues?: { line: number | null; message: string }[] };
 
 function apply(line: StreamLine, set: (s: UploadState) => void): void {
-  if (line.type === 'progress') set(line.phase === 'measuring' ? { phase: 'measuring', done: line.done, total: line.total } : { phase: line.phase });
+  if (line.type === 'progress')
+    set(line.phase === 'measuring' ? { phase: 'measuring', done: line.done, total: line.total } : { phase: line.phase });
   else if (line.type === 'done') set({ phase: 'done', parts: line.result.parts, warnings: line.result.warnings });
   else set({ phase: 'error', message: line.error, issues: line.issues ?? [] });
 }

@@ -13,7 +13,10 @@ export const load: PageServerLoad = async ({ locals, params }) => {
   requireUser(locals, mayEditLibrary);
   const m = await records.get(idParam(params.id, 'No such material.'));
   if (!m) error(404, 'No such material.');
-  return { material: { id: m.id, kind: m.kind, code: m.code, version: m.version, archived: m.archivedAt !== null, safetyNote: m.safetyNote }, values: valuesOf(m) };
+  return {
+    material: { id: m.id, kind: m.kind, code: m.code, version: m.version, archived: m.archivedAt !== null, safetyNote: m.safetyNote },
+    values: valuesOf(m)
+  };
 };
 
 export const actions: Actions = {
@@ -22,8 +25,14 @@ export const actions: Actions = {
     const fd = await readForm(request);
     const form = readMaterialForm(fd);
     const version = readVersion(fd);
-    if (!form.ok) return actionFailure(400, { values: form.values, errors: form.errors, error: 'Please correct the marked fields. Nothing was saved.' });
-    if (version === null) return actionFailure(400, { values: form.values, errors: {}, error: 'The form lost its version number; reload the page.' });
+    if (!form.ok)
+      return actionFailure(400, {
+        values: form.values,
+        errors: form.errors,
+        error: 'Please correct the marked fields. Nothing was saved.'
+      });
+    if (version === null)
+      return actionFailure(400, { values: form.values, errors: {}, error: 'The form lost its version number; reload the page.' });
     const id = idParam(params.id, 'No such material.');
     const saved = await tryAction({ values: form.values, errors: {} }, () => editing.update(user, id, version, form.data));
     if (typeof saved !== 'number') return saved;

@@ -17,7 +17,15 @@ export const load: PageServerLoad = async ({ locals, params }) => {
   const m = d.material;
   const current = (s: typeof d.emission) => (s ? { wavelengths: s.wavelengths, values: s.values } : null);
   return {
-    material: { id: m.id, code: m.code, name: m.name, kind: m.kind, version: m.version, archived: m.archivedAt !== null, safetyNote: m.safetyNote },
+    material: {
+      id: m.id,
+      code: m.code,
+      name: m.name,
+      kind: m.kind,
+      version: m.version,
+      archived: m.archivedAt !== null,
+      safetyNote: m.safetyNote
+    },
     current: { emission: current(d.emission), excitation: current(d.excitation) }
   };
 };

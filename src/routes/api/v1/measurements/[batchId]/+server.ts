@@ -29,5 +29,7 @@ export const POST: RequestHandler = (event) =>
     if (!(event.request.headers.get('accept') ?? '').includes('application/x-ndjson')) {
       return json(await uploadMeasurements(user, batchId, file), { status: 201 });
     }
-    return ndjsonStream(async (write) => ({ ...(await uploadMeasurements(user, batchId, file, (p) => write({ type: 'progress', ...p }))) }));
+    return ndjsonStream(async (write) => ({
+      ...(await uploadMeasurements(user, batchId, file, (p) => write({ type: 'progress', ...p })))
+    }));
   });

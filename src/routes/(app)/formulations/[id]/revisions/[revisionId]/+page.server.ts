@@ -2,7 +2,13 @@ import { error, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
 import { eventsFor } from '$lib/server/audit/search';
-import { currentApprovedRevision, getRevision, listAttachments, listSignatures, storedContentVerified } from '$lib/server/formulations/read';
+import {
+  currentApprovedRevision,
+  getRevision,
+  listAttachments,
+  listSignatures,
+  storedContentVerified
+} from '$lib/server/formulations/read';
 import { contentFromForm, editorOptions } from '$lib/server/formulations/page-support';
 import { mayActOnRevisions, mayAuthorFormulations, maySignRevisions } from '$lib/access/policies';
 import { invalid } from '$lib/errors/domain-error';
@@ -20,17 +26,20 @@ import { readForm } from '$lib/server/forms/read-form';
 /** Actions without form fields of their own keep no input on refusal. */
 const NO_VALUES: FormValues = {};
 const version = z.coerce.number().int().positive('version missing: reload the page');
-const signSchema = z.object({
-  meaning: z.enum(['reviewed', 'approved', 'returned'], 'choose what your signature means'),
-  password: z.string().min(1, 're-enter your password to sign'),
-  comment: z.string().trim().max(2000).default(''),
-  version
-}).refine((s) => s.meaning !== 'returned' || s.comment.length >= 3, { message: 'say why the revision is returned', path: ['comment'] });
+const signSchema = z
+  .object({
+    meaning: z.enum(['reviewed', 'approved', 'returned'], 'choose what your signature means'),
+    password: z.string().min(1, 're-enter your password to sign'),
+    comment: z.string().trim().max(2000).default(''),
+    version
+  })
+  .refine((s) => s.meaning !== 'returned' || s.comment.length >= 3, { message: 'say why the revision is returned', path: ['comment'] });
 const withdrawSchema = z.object({ reason: z.string().trim().min(3, 'say why the revision is withdrawn').max(2000), version });
 
 async function revisionOf(params: { id: string; revisionId: string }) {
   const rev = await getRevision(idParam(params.revisionId, 'No such revision of this formulation.'));
-  if (!rev || rev.formulationId !== idParam(params.id, 'No such revision of this formulation.')) error(404, 'No such revision of this formulation.');
+  if (!rev || rev.formulationId !== idParam(params.id, 'No such revision of this formulation.'))
+    error(404, 'No such revision of this formulation.');
   return rev;
 }
 
@@ -39,7 +48,10 @@ export const load: PageServerLoad = async ({ locals, params }) => {
   const rev = await revisionOf(params);
   const commands = allowedCommands(user, rev);
   const [signatures, attachments, history, current, silicone, hashVerified] = await Promise.all([
-    listSignatures(rev.id), listAttachments(rev.id), eventsFor('formulation_revision', rev.id), currentApprovedRevision(rev.formulationId),
+    listSignatures(rev.id),
+    listAttachments(rev.id),
+    eventsFor('formulation_revision', rev.id),
+    currentApprovedRevision(rev.formulationId),
     rev.content.silicone.siliconeSystemId ? siliconeHandling(rev.content.silicone.siliconeSystemId) : null,
     storedContentVerified(rev.id)
   ]);
@@ -104,7 +116,15 @@ export const actions: Actions = {
     try {
       if (s.meaning === 'returned') await returnRevision(user, rev.id, { password: s.password, reason: s.comment }, s.version);
       else await sign(user, rev.id, s.meaning, { password: s.password, comment: s.comment }, s.version);
-      return { action: 'sign', done: s.meaning === 'approved' ? 'Signed and approved: this is now the current revision.' : s.meaning === 'returned' ? 'Signed and returned to the author.' : 'Review signature recorded.' };
+      return {
+        action: 'sign',
+        done:
+          s.meaning === 'approved'
+            ? 'Signed and approved: this is now the current revision.'
+            : s.meaning === 'returned'
+              ? 'Signed and returned to the author.'
+              : 'Review signature recorded.'
+      };
     } catch (err) {
       return actionFailure(err, { action: 'sign', values });
     }

@@ -9,7 +9,10 @@ import type { RequestHandler } from './$types';
 /** Download of a material's stored file (data sheet, certificate, original spectrum export). */
 export const GET: RequestHandler = async ({ locals, params }) => {
   requireUser(locals, mayRead);
-  const row = await fileOfMaterial(idParam(params.id, 'No such file on this material.'), idParam(params.fileId, 'No such file on this material.'));
+  const row = await fileOfMaterial(
+    idParam(params.id, 'No such file on this material.'),
+    idParam(params.fileId, 'No such file on this material.')
+  );
   if (!row) error(404, 'No such file on this material.');
   const file = await getFile(row.id);
   if (!file) error(404, 'No such file.');

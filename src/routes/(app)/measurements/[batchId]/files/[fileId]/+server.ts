@@ -7,7 +7,10 @@ import type { RequestHandler } from './$types';
 /** A stored file of the batch: a raw measurement export or a batch record PDF. */
 export const GET: RequestHandler = async ({ locals, params }) => {
   requireUser(locals);
-  const file = await batchFile(idParam(params.batchId, 'No such file for this batch.'), idParam(params.fileId, 'No such file for this batch.'));
+  const file = await batchFile(
+    idParam(params.batchId, 'No such file for this batch.'),
+    idParam(params.fileId, 'No such file for this batch.')
+  );
   if (!file) error(404, 'No such file for this batch.');
   return new Response(new Uint8Array(file.body), {
     headers: {
