@@ -38,7 +38,8 @@ describe('round trip: stored text → parseRecipe → stored text', () => {
       const { contentVersion: _v, ...untagged } = { ...content, phosphors, pumpLeakFraction: leak };
       const stored = JSON.stringify(tagged ? { contentVersion: 1, ...untagged } : untagged);
       const read = parseRecipe(stored);
-      expect(read.contentVersion).toBe(1);
+      expect(read.contentVersion).toBe(2);
+      expect(read.packageModelRef).toBeNull();
       expect(phosphorLines(read)).toEqual(JSON.parse(stored).phosphors);
       expect(fractionsWithLeak(read)).toEqual([JSON.parse(stored).pumpLeakFraction, ...JSON.parse(stored).phosphors.map((p: { opticalFraction: number }) => p.opticalFraction)]);
       expect(parseRecipe(JSON.stringify(read))).toEqual(read);
