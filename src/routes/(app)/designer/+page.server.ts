@@ -11,6 +11,7 @@ import { actionFailure } from '$lib/server/http/action-failure';
 import { parseId } from '$lib/server/http/id-param';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
+import { packageModelChoices } from '$lib/server/package-models/choices';
 
 /** A revision opened in the designer (`?from=<revision id>`) to start the next revision from it. */
 async function openedRevision(param: string | null) {
@@ -23,19 +24,21 @@ async function openedRevision(param: string | null) {
 
 export const load: PageServerLoad = async ({ locals, url }) => {
   requireUser(locals, mayDesign);
-  const [pumps, phosphors, silicones, formulations, opened] = await Promise.all([
+  const [pumps, phosphors, silicones, formulations, opened, packageModels] = await Promise.all([
     listMaterialOptions('pump'),
     listMaterialOptions('phosphor'),
     listSiliconeSystems(),
     listFormulations(formulationListSchema.parse({ pageSize: 100, sort: 'code' })),
-    openedRevision(url.searchParams.get('from'))
+    openedRevision(url.searchParams.get('from')),
+    packageModelChoices()
   ]);
   return {
     pumps,
     phosphors,
     silicones: silicones.map((s) => ({ id: s.id, name: s.name, ratioA: s.ratioA, ratioB: s.ratioB, potLifeMin: s.potLifeMin, safetyNote: s.safetyNote })),
     formulations: formulations.rows.map((f) => ({ id: f.id, code: f.code, name: f.name })),
-    opened
+    opened,
+    packageModels
   };
 };
 
