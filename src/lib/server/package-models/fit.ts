@@ -44,16 +44,20 @@ async function components(input: PackageFitInput) {
 
 /** The fit alone (no database write); throws an unprocessable domain error (422) when it is refused or does not converge. */
 export async function runFit(input: PackageFitInput): Promise<PackageModelFit> {
-  if (input.dispenseGeometry !== 'fixedMass') {
-    throw unprocessable('The fit supports the fixed-mass geometry (a set slurry mass per package) only; choose fixedMass.');
-  }
   const spec = await components(input);
+  if (input.dispenseGeometry === 'fixedVolume') {
+    const missing = spec.phosphors.filter((p) => !(p.densityGPerCm3 && p.densityGPerCm3 > 0)).map((p) => p.name);
+    if (missing.length) {
+      throw unprocessable(`A cavity filled to a fixed volume needs each phosphor's density; the library has none for ${missing.join(', ')}. Add it, or choose fixedMass.`);
+    }
+  }
   const start = { ...spec, phosphors: spec.phosphors.map((p) => ({ ...p, absorptionPerWtPctMm: p.absorptionPerWtPctMm ?? DEFAULT_START_ALPHA })) };
   const basis = prepareBasis(start).loading!;
   const fit = fitPackageModel(basis, input.builds.map(toPackageBuild), {
     pathLengthMm: input.pathLengthMm,
     ...(input.dispenseMassMg !== undefined ? { dispenseMassMg: input.dispenseMassMg } : {}),
     cascade: input.cascade,
+    geometry: input.dispenseGeometry,
     fitEscape: input.fitEscape,
     fitIqeScale: input.fitIqeScale
   }, input.bootstrap.resamples > 0 ? input.bootstrap : false);
