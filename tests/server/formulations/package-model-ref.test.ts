@@ -47,7 +47,8 @@ describe('revisions citing a package model', () => {
       const err = await createFormulationWithDraft(c.rhea, { code: uniqueCode('PM'), name: what, content }).catch((e: unknown) => e);
       expect(err, what).toBeInstanceOf(DomainError);
       expect(statusOf(err as DomainError)).toBe(422);
-      expect((err as DomainError).message).toMatch(new RegExp(`packageModelRef: package model ${ref.id} version ${ref.version} does not exist`));
+      const named = new RegExp(`packageModelRef: package model ${ref.id} version ${ref.version} does not exist`);
+      expect((err as DomainError).message).toMatch(named);
       expect({ f: await count('formulations'), r: await count('formulation_revisions') }).toEqual(before);
     }
   });

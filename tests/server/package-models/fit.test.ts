@@ -87,7 +87,8 @@ describe('package models: create by fit through the API, versions, refusals that
     expect(m.dispenseGeometry).toBe('fixedVolume');
     expect(m.parameters.parameters.pumpEscape).toBeCloseTo(1.3, 2);
     expect(m.parameters.parameters.iqeScale).toBeCloseTo(0.92, 2);
-    m.parameters.parameters.absorptionPerWtPctMm.forEach((a: number, i: number) => expect(a / truth.absorptionPerWtPctMm[i]).toBeCloseTo(1, 2));
+    const alpha: number[] = m.parameters.parameters.absorptionPerWtPctMm;
+    alpha.forEach((a, i) => expect(a / truth.absorptionPerWtPctMm[i]).toBeCloseTo(1, 2));
     expect(m.maxSteps).toBeLessThan(0.5);
   }, 120_000);
 

@@ -67,7 +67,8 @@ export function packageSpd(
   );
   if (params.pumpEscape === 1) return full.spd;
   // τᵢ = αᵢ·gᵢ·L with gᵢ the effective loading of the dispense geometry, as in the forward model.
-  const aL = opticalDepthsOf({ ...basis, absorptionPerWtPctMm: alpha }, concentrationsWtPct.map((c) => Math.max(0, c)), pathLengthMm, geometry);
+  const loading = concentrationsWtPct.map((c) => Math.max(0, c));
+  const aL = opticalDepthsOf({ ...basis, absorptionPerWtPctMm: alpha }, loading, pathLengthMm, geometry);
   const out = Float64Array.from(full.spd);
   for (let l = 0; l < GRID_LENGTH; l++) {
     const p = basis.pump[l];

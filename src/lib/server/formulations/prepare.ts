@@ -44,7 +44,9 @@ async function checkPackageModelRef(knex: Knex, content: RevisionContent): Promi
   if (!ref || (await citedPackageModel(ref, knex))) return;
   const message = `package model ${ref.id} version ${ref.version} does not exist; choose a package model from the library`;
   // Well-formed content citing something that is not there: 422, as the package-model API refuses a fit it cannot make.
-  throw new DomainError('unprocessable', `Invalid revision content: packageModelRef: ${message}`, { issues: [{ path: 'packageModelRef', message }] });
+  throw new DomainError('unprocessable', `Invalid revision content: packageModelRef: ${message}`, {
+    issues: [{ path: 'packageModelRef', message }]
+  });
 }
 
 export async function prepareRevision(knex: Knex, raw: unknown): Promise<PreparedRevision> {

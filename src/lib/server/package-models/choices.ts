@@ -25,7 +25,10 @@ function toChoice(r: Row): PackageModelChoice {
   };
 }
 
-const COLUMNS = ['id', 'name', 'version', 'package_type', 'pump_material_id', 'path_length_mm', 'dispense_geometry', 'cascade', 'phosphors_json', 'parameters_json'];
+const COLUMNS = [
+  'id', 'name', 'version', 'package_type', 'pump_material_id', 'path_length_mm',
+  'dispense_geometry', 'cascade', 'phosphors_json', 'parameters_json'
+];
 
 /** Every version of every package model, by name, newest version first. */
 export async function packageModelChoices(k: Knex | Knex.Transaction = db()): Promise<PackageModelChoice[]> {
@@ -34,7 +37,9 @@ export async function packageModelChoices(k: Knex | Knex.Transaction = db()): Pr
 }
 
 /** The cited model's name, or null when no package model has that id and version. */
-export async function citedPackageModel(ref: PackageModelRef, k: Knex | Knex.Transaction = db()): Promise<{ name: string; version: number } | null> {
+export async function citedPackageModel(
+  ref: PackageModelRef, k: Knex | Knex.Transaction = db()
+): Promise<{ name: string; version: number } | null> {
   const row = await k('package_models').where({ id: ref.id, version: ref.version }).first('name', 'version');
   return row ? { name: String(row.name), version: Number(row.version) } : null;
 }

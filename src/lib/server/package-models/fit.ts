@@ -48,7 +48,10 @@ export async function runFit(input: PackageFitInput): Promise<PackageModelFit> {
   if (input.dispenseGeometry === 'fixedVolume') {
     const missing = spec.phosphors.filter((p) => !(p.densityGPerCm3 && p.densityGPerCm3 > 0)).map((p) => p.name);
     if (missing.length) {
-      throw unprocessable(`A cavity filled to a fixed volume needs each phosphor's density; the library has none for ${missing.join(', ')}. Add it, or choose fixedMass.`);
+      const names = missing.join(', ');
+      throw unprocessable(
+        `A cavity filled to a fixed volume needs each phosphor's density; the library has none for ${names}. Add it, or choose fixedMass.`
+      );
     }
   }
   const start = { ...spec, phosphors: spec.phosphors.map((p) => ({ ...p, absorptionPerWtPctMm: p.absorptionPerWtPctMm ?? DEFAULT_START_ALPHA })) };

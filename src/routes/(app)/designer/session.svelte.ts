@@ -122,7 +122,10 @@ export class DesignerSession {
   packageModel = $derived(this.packageModelsForPump.find((m) => m.id === this.packageModelId) ?? null);
   sharesKey = $derived(`${this.wantedKey}|${this.pathLengthMm}|${this.packageModel?.id ?? ''}|${roundedShares(this.shares, 4).join(',')}`);
   currentWtPct = $derived(this.wtPct && this.wtPct.key === this.sharesKey ? this.wtPct : null);
-  snapshot = $derived(JSON.stringify({ p: this.pumpId, ph: this.phosphorIds, s: roundedShares(this.shares, 4), a: this.aim, o: this.objective, l: this.pathLengthMm, m: this.packageModelId }));
+  snapshot = $derived(JSON.stringify({
+    p: this.pumpId, ph: this.phosphorIds, s: roundedShares(this.shares, 4), a: this.aim, o: this.objective,
+    l: this.pathLengthMm, m: this.packageModelId
+  }));
   dirty = $derived(this.snapshot !== this.savedSnapshot);
   candidatesUsable = $derived(this.solvedKey === this.loadedKey && this.ready);
   comparedCandidates = $derived(this.solveResult && this.candidatesUsable ? this.solveResult.candidates.filter((c) => this.compared.includes(c.rank)) : []);
@@ -219,7 +222,9 @@ export class DesignerSession {
     const model = this.packageModel;
     try {
       const sol = model
-        ? concentrationsForFractions(basisWithPackageModel(loading, this.phosphorIds, model), fractions, { pathLengthMm: path, geometry: model.dispenseGeometry, cascade: model.cascade })
+        ? concentrationsForFractions(basisWithPackageModel(loading, this.phosphorIds, model), fractions, {
+          pathLengthMm: path, geometry: model.dispenseGeometry, cascade: model.cascade
+        })
         : concentrationsForFractions(loading, fractions, { pathLengthMm: path });
       this.wtPct = sol.converged ? { key, values: sol.concentrationsWtPct, note: null } : { key, values: null, note: sol.refusal };
     } catch (err) {
