@@ -106,6 +106,7 @@ export function compareSettings(a: RevisionContent, b: RevisionContent): Setting
     ['Tolerance', toleranceText],
     ['Floors', floorsText],
     ['Loading basis', (c) => (c.loading ? `wt % of slurry, path ${c.loading.pathLengthMm} mm` : c.phosphors.some((p) => p.wtPct !== null) ? 'wt % of slurry, entered directly' : 'not modelled')],
+    ['Package model', (c) => (c.packageModelRef ? `model ${c.packageModelRef.id} v${c.packageModelRef.version}` : 'none')],
     ['Notes', (c) => c.notes || '—']
   ];
   return rows.map(([label, f]) => ({ label, a: f(a), b: f(b), changed: f(a) !== f(b) }));

@@ -46,4 +46,9 @@ describe('comparing two revisions (hand-worked)', () => {
     const rows = compareSettings(base, { ...base, floors: { raMin: 90, r9Min: 50 }, notes: 'more red' });
     expect(rows.filter((r) => r.changed).map((r) => [r.label, r.b])).toEqual([['Floors', 'Ra ≥ 90, R9 ≥ 50'], ['Notes', 'more red']]);
   });
+
+  it('shows a change of the cited package model (content version 2)', () => {
+    const rows = compareSettings(base, { ...base, packageModelRef: { id: 4, version: 3 } });
+    expect(rows.filter((r) => r.changed).map((r) => [r.label, r.a, r.b])).toEqual([['Package model', 'none', 'model 4 v3']]);
+  });
 });
