@@ -6,7 +6,9 @@ import { db } from '../db/index';
 import { parseBuildsCsv } from './builds-csv';
 import { packageFitSchema, type PackageFitInput } from './schema';
 
-export const FORM_FIELDS = ['name', 'packageType', 'pathLengthMm', 'dispenseMassMg', 'pumpId', 'builds', 'fitEscape', 'fitIqeScale', 'cascade', 'resamples'] as const;
+export const FORM_FIELDS = [
+  'name', 'packageType', 'dispenseGeometry', 'pathLengthMm', 'dispenseMassMg', 'pumpId', 'builds', 'fitEscape', 'fitIqeScale', 'cascade', 'resamples'
+] as const;
 export type FitFormValues = Record<(typeof FORM_FIELDS)[number], string>;
 
 export type FitForm = { ok: true; data: PackageFitInput; values: FitFormValues } | { ok: false; values: FitFormValues; errors: string[] };
@@ -24,6 +26,7 @@ export async function readFitForm(form: FormData): Promise<FitForm> {
   const body = {
     name: values.name,
     packageType: values.packageType,
+    dispenseGeometry: values.dispenseGeometry || 'fixedMass',
     pathLengthMm: numberOrUndefined(values.pathLengthMm),
     dispenseMassMg: numberOrUndefined(values.dispenseMassMg),
     pumpId: numberOrUndefined(values.pumpId),
