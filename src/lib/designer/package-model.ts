@@ -8,6 +8,7 @@
  */
 import type { LoadingBasis } from '../blend/loading/beerLambertPhotonBudget';
 import type { DispenseGeometry } from '../blend/loading/dispenseGeometry';
+import type { BlendComponents } from '../blend/types';
 
 export interface PackageModelChoice {
   id: number;
@@ -31,12 +32,34 @@ export function packageModelsForPump(models: readonly PackageModelChoice[], pump
 
 export const packageModelLabel = (m: { name: string; version: number }) => `${m.name} v${m.version}`;
 
+/** The model's IQE scale on a datasheet IQE, capped at 1 (a photon in, at most one out). */
+const scaledIqe = (iqe: number, model: PackageModelChoice) => Math.min(1, iqe * model.iqeScale);
+
 /** The loading basis with the model's α (fitted phosphors only) and IQE scale; phosphor ids in basis order. */
 export function basisWithPackageModel(basis: LoadingBasis, phosphorIds: readonly number[], model: PackageModelChoice): LoadingBasis {
   const fitted = new Map(model.phosphors.map((p) => [p.materialId, p.absorptionPerWtPctMm]));
   return {
     ...basis,
     absorptionPerWtPctMm: basis.absorptionPerWtPctMm.map((a, i) => fitted.get(phosphorIds[i]) ?? a),
-    iqe: basis.iqe.map((q) => q * model.iqeScale)
+    iqe: basis.iqe.map((q) => scaledIqe(q, model))
+  };
+}
+
+/**
+ * The components sent to the solver with the model's α (at the pump, so no reference wavelength)
+ * for the fitted phosphors and the IQE scale, as the wt % estimate takes them.
+ */
+export function componentsWithPackageModel(
+  components: BlendComponents, phosphorIds: readonly number[], model: PackageModelChoice
+): BlendComponents {
+  const fitted = new Map(model.phosphors.map((p) => [p.materialId, p.absorptionPerWtPctMm]));
+  return {
+    pump: components.pump,
+    phosphors: components.phosphors.map((p, i) => {
+      const alpha = fitted.get(phosphorIds[i]);
+      const { absorptionReferenceNm: _ref, ...rest } = p;
+      const iqe = scaledIqe(p.iqe, model);
+      return alpha === undefined ? { ...p, iqe } : { ...rest, iqe, absorptionPerWtPctMm: alpha };
+    })
   };
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
-  basisWithPackageModel, packageModelLabel, packageModelsForPump, type PackageModelChoice
+  basisWithPackageModel, componentsWithPackageModel, packageModelLabel, packageModelsForPump, type PackageModelChoice
 } from '../../../src/lib/designer/package-model';
 import { filingFormSchema, revisionContentFrom, type DesignedBlend } from '../../../src/lib/designer/filing';
 import { parseRecipe } from '../../../src/lib/recipe';
@@ -33,6 +33,17 @@ describe('the package model the designer applies to the loading model', () => {
     const b = basisWithPackageModel(loading, IDS, partial);
     expect(b.absorptionPerWtPctMm).toEqual([loading.absorptionPerWtPctMm[0], 0.77, loading.absorptionPerWtPctMm[2]]);
     b.iqe.forEach((q, i) => expect(q).toBeCloseTo(loading.iqe[i] * 0.9, 12));
+  });
+
+  it('hands the solver the same α (at the pump) and IQE scale, an IQE capped at 1', () => {
+    const withRef = { ...THREE, phosphors: THREE.phosphors.map((p) => ({ ...p, absorptionReferenceNm: 450 })) };
+    const partial = model({ iqeScale: 1.5, phosphors: [{ materialId: 22, code: 'P-22', absorptionPerWtPctMm: 0.77 }] });
+    const c = componentsWithPackageModel(withRef, IDS, partial);
+    expect(c.phosphors[1].absorptionPerWtPctMm).toBe(0.77);
+    expect(c.phosphors[1]).not.toHaveProperty('absorptionReferenceNm');
+    expect(c.phosphors[0]).toMatchObject({ absorptionPerWtPctMm: THREE.phosphors[0].absorptionPerWtPctMm, absorptionReferenceNm: 450 });
+    c.phosphors.forEach((p, i) => expect(p.iqe).toBeCloseTo(Math.min(1, THREE.phosphors[i].iqe * 1.5), 12));
+    c.phosphors.forEach((p) => expect(p.iqe).toBeLessThanOrEqual(1));
   });
 
   it('twice the absorption for the same mix needs half the wt % (Beer–Lambert: the exponent is α·c·L)', () => {

@@ -11,7 +11,9 @@ import { createLiveEvaluator, type LiveEvaluator, type LiveFrame } from '$lib/de
 import { DEFAULT_AIM, resolveAim, type AimState } from '$lib/designer/aim';
 import { roundedShares, setShare, normaliseShares } from '$lib/designer/shares';
 import type { DesignedBlend } from '$lib/designer/filing';
-import { basisWithPackageModel, packageModelsForPump, type PackageModelChoice } from '$lib/designer/package-model';
+import {
+  basisWithPackageModel, componentsWithPackageModel, packageModelsForPump, type PackageModelChoice
+} from '$lib/designer/package-model';
 import { fractionsWithLeak, phosphorLines, type RevisionContent } from '$lib/recipe';
 import { lightSwatchHex } from '$lib/charts/display-colours';
 import type { Pair } from '$lib/spectral';
@@ -251,14 +253,16 @@ export class DesignerSession {
     this.solveElapsedMs = 0;
     const tick = setInterval(() => (this.solveElapsedMs = performance.now() - this.solveStartedAt), 100);
     const key = this.loadedKey;
+    const model = this.packageModel;
+    const modelLoading = model ? { geometry: model.dispenseGeometry, cascade: model.cascade } : {};
     const outcome = await requestSolve({
-      components: this.components,
+      components: model ? componentsWithPackageModel(this.components, this.phosphorIds, model) : this.components,
       target: aim.target,
       tolerance: aim.tolerance,
       floors: aim.floors,
       objective: this.objective,
       maxCandidates: 5,
-      ...(this.pathLengthMm ? { loading: { pathLengthMm: this.pathLengthMm } } : {})
+      ...(this.pathLengthMm ? { loading: { pathLengthMm: this.pathLengthMm, ...modelLoading } } : {})
     }, abort.signal);
     clearInterval(tick);
     if (this.#abort !== abort) return;
