@@ -220,6 +220,9 @@ test('a package model sets the loading settings and the filed revision cites it'
   await expect(page.getByLabel('Layer path for wt % (mm)')).toHaveValue('0.3');
   await expect(page.getByLabel('Layer path for wt % (mm)')).toBeDisabled();
   await expect(page.getByTestId('wt-RD-625')).toContainText('wt % in the slurry');
+  // The search runs on the same package model (fitted α, IQE scale, geometry).
+  await page.getByRole('button', { name: 'Find blends' }).click();
+  await expect(page.getByTestId('solve-status')).toContainText('Blends found', { timeout: 20_000 });
 
   const code = unique();
   await page.getByLabel('Name').fill(`Package model citation (${code})`);
