@@ -224,3 +224,48 @@ test('the designer is for formulators and admins only', async ({ page }) => {
   const res = await page.goto('/designer');
   expect(res?.status()).toBe(403);
 });
+
+test('a package model sets the loading settings and the filed revision cites it', async ({ page }) => {
+  // The demo package model "KH mid-power 3030 warm" (seeds/06_package_models.ts) is fitted for B-450 at 0.3 mm.
+  const knex = testDb();
+  const model = await knex('package_models').where({ name: 'KH mid-power 3030 warm' }).orderBy('version', 'desc').first('id', 'version');
+  await knex.destroy();
+  expect(model, 'the demo package model is seeded').toBeTruthy();
+  const label = `KH mid-power 3030 warm v${model.version}`;
+
+  await signInThroughForm(page, DEMO.formulator);
+  await page.goto('/designer');
+  await expect(page.getByRole('heading', { name: 'Blend designer' })).toBeVisible({ timeout: 20_000 });
+  await choosePump(page, 'B-450');
+  for (const code of ['GL-530', 'YG-555', 'RD-625']) await addPhosphor(page, code);
+  await page.getByLabel('Layer path for wt % (mm)').fill('0.5');
+  await page.getByLabel('Package model').selectOption({ label });
+  await expect(page.getByLabel('Layer path for wt % (mm)')).toHaveValue('0.3');
+  await expect(page.getByLabel('Layer path for wt % (mm)')).toBeDisabled();
+  await expect(page.getByTestId('wt-RD-625')).toContainText('wt % in the slurry');
+  // The search runs on the same package model (fitted α, IQE scale, geometry).
+  await page.getByRole('button', { name: 'Find blends' }).click();
+  await expect(page.getByTestId('solve-status')).toContainText('Blends found', { timeout: 20_000 });
+
+  const code = unique();
+  await page.getByLabel('Name').fill(`Package model citation (${code})`);
+  await page.getByLabel(/^Code/).fill(code);
+  await page.getByLabel('Silicone system').selectOption({ index: 0 });
+  await page.getByRole('button', { name: 'File draft' }).click();
+  await expect(page.getByTestId('filed')).toContainText(`Filed as ${code} revision 1 (draft)`);
+
+  const db = testDb();
+  try {
+    const f = (await db('formulations').where({ code }).first('id'))!;
+    const rev = (await db('formulation_revisions').where({ formulation_id: f.id }).first('content_json'))!;
+    expect(JSON.parse(rev.content_json)).toMatchObject({
+      contentVersion: 2,
+      packageModelRef: { id: model.id, version: model.version },
+      loading: { pathLengthMm: 0.3 }
+    });
+  } finally {
+    await db.destroy();
+  }
+  await page.getByTestId('filed').getByRole('link', { name: 'Open the revision' }).click();
+  await expect(page.getByRole('link', { name: label })).toHaveAttribute('href', `/library/packages/${model.id}`);
+});

@@ -34,7 +34,9 @@ describe('stored revisions in the database, read through the recipe reader', () 
     expect(signatures.length).toBeGreaterThan(0);
     for (const s of signatures) expect(s.contentSha256).toBe(row.content_sha256);
     const content = parseRecipe(row.content_json);
-    expect(content.contentVersion).toBe(1);
+    // Seeded rows are written as version 2 (citing no package model); any stored version reads as the current one.
+    expect(JSON.parse(row.content_json)).toMatchObject({ contentVersion: 2, packageModelRef: null });
+    expect(content.contentVersion).toBe(2);
     // Pump leak + phosphor optical fractions add up to 1 (optical superposition; rounded to 4 decimals on entry).
     expect(fractionsWithLeak(content).reduce((a, f) => a + f, 0)).toBeCloseTo(1, 3);
     expect((await getRevision(row.id))!.content).toEqual(content);
@@ -44,7 +46,7 @@ describe('stored revisions in the database, read through the recipe reader', () 
 
   it('a row written before the version tag is submitted, signed and read, and keeps its bytes and its hash', async () => {
     const seeded = await approvedRow();
-    const { contentVersion: _tag, ...untagged } = JSON.parse(seeded.content_json);
+    const { contentVersion: _tag, packageModelRef: _ref, ...untagged } = JSON.parse(seeded.content_json);
     const legacyText = JSON.stringify({ ...untagged, notes: 'Stored before content carried a version.' });
     const legacyHash = sha256(canonicalJson(JSON.parse(legacyText)));
     const code = uniqueCode('LG');
@@ -66,7 +68,7 @@ describe('stored revisions in the database, read through the recipe reader', () 
     expect((await listSignatures(id)).map((s) => s.contentSha256)).toEqual([legacyHash]);
     expect(await storedContentVerified(id)).toBe(true);
     const rev = (await getRevision(id))!;
-    expect(rev.content.contentVersion).toBe(1);
+    expect(rev.content).toMatchObject({ contentVersion: 2, packageModelRef: null });
     expect(rev.content.phosphors).toEqual(untagged.phosphors);
   });
 

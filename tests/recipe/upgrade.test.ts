@@ -8,27 +8,28 @@ import {
   createRecipeReader,
   fractionsWithLeak,
   parseRecipe,
-  revisionContentV1Schema,
+  safeParseRecipe,
+  revisionContentV2Schema,
   type ContentVersion,
-  type RevisionContentV1
+  type RevisionContentV2
 } from '../../src/lib/recipe';
 import { compareRatios, compareSettings } from '../../src/lib/formulations/compare';
 import { weighoutInputFromRevision } from '../../src/lib/batches/weighout/from-revision';
 import { computeWeighout } from '../../src/lib/batches/weighout/compute';
 import { LEGACY_ROW, V1_ROW } from './fixtures';
 
-// A version 2 that exists only in this test: it adds the package model the recipe was designed for.
-const contentV2Schema = revisionContentV1Schema.extend({
-  contentVersion: z.literal(2),
-  packageModelRef: z.string().min(1).nullable()
+// A version 3 that exists only in this test: it adds the operating point the target holds at.
+const contentV3Schema = revisionContentV2Schema.extend({
+  contentVersion: z.literal(3),
+  condition: z.object({ junctionTempC: z.number(), driveCurrentMa: z.number() }).nullable()
 });
-type RevisionContentV2 = z.output<typeof contentV2Schema>;
-const v2: ContentVersion<RevisionContentV2> = {
-  version: 2,
-  schema: contentV2Schema,
-  upgrade: (previous: RevisionContentV1) => ({ ...previous, contentVersion: 2, packageModelRef: null })
+type RevisionContentV3 = z.output<typeof contentV3Schema>;
+const v3: ContentVersion<RevisionContentV3> = {
+  version: 3,
+  schema: contentV3Schema,
+  upgrade: (previous: RevisionContentV2) => ({ ...previous, contentVersion: 3, condition: null })
 };
-const readV2 = createRecipeReader([...RECIPE_VERSIONS, v2]);
+const readV3 = createRecipeReader([...RECIPE_VERSIONS, v3]);
 
 const weighRequest = {
   sizing: { kind: 'mass' as const, batchMassG: 20 },
@@ -38,10 +39,12 @@ const weighRequest = {
 };
 
 describe('stored content of version 1 and before the tag, read by the product', () => {
-  it('reads a row without contentVersion as version 1 and leaves the stored text alone', () => {
+  it('reads a row without contentVersion as version 1, upgrades it, and leaves the stored text alone', () => {
     const before = LEGACY_ROW;
     const c = parseRecipe(LEGACY_ROW);
-    expect(c.contentVersion).toBe(1);
+    expect(c.contentVersion).toBe(2);
+    expect(c.packageModelRef).toBeNull();
+    expect(safeParseRecipe(LEGACY_ROW)).toMatchObject({ ok: true, storedVersion: 1 });
     expect(c.pumpLeakFraction).toBe(0.15);
     expect(LEGACY_ROW).toBe(before);
     expect(JSON.parse(LEGACY_ROW)).not.toHaveProperty('contentVersion');
@@ -53,28 +56,40 @@ describe('stored content of version 1 and before the tag, read by the product', 
     expect(raw).not.toHaveProperty('contentVersion');
   });
 
-  it('writes new content as the current version', () => {
-    expect(CONTENT_VERSION).toBe(1);
-    expect(parseRecipe(V1_ROW).contentVersion).toBe(1);
+  it('writes new content as version 2, citing a package model or none', () => {
+    expect(CONTENT_VERSION).toBe(2);
+    expect(parseRecipe(V1_ROW).contentVersion).toBe(2);
+    const stored = JSON.stringify({ ...JSON.parse(V1_ROW), contentVersion: 2, packageModelRef: { id: 4, version: 2 } });
+    expect(safeParseRecipe(stored)).toMatchObject({ ok: true, storedVersion: 2, content: { packageModelRef: { id: 4, version: 2 } } });
+    const { packageModelRef: _p, ...withoutRef } = JSON.parse(stored);
+    expect(parseRecipe(withoutRef).packageModelRef).toBeNull();
+  });
+
+  it('refuses a package model reference that is not an id and a version', () => {
+    const base = { ...JSON.parse(V1_ROW), contentVersion: 2 };
+    expect(() => parseRecipe({ ...base, packageModelRef: 'PKG-2835-A' })).toThrow(/packageModelRef/);
+    expect(() => parseRecipe({ ...base, packageModelRef: { id: 4 } })).toThrow(/packageModelRef\.version/);
+    expect(() => parseRecipe({ ...base, packageModelRef: { id: 4, version: 0 } })).toThrow(/packageModelRef\.version/);
   });
 });
 
-describe('after a (test-only) version 2 adds a field', () => {
-  const legacy = readV2.parse(LEGACY_ROW);
-  const v1 = readV2.parse(V1_ROW);
+describe('after a (test-only) version 3 adds a field', () => {
+  const legacy = readV3.parse(LEGACY_ROW);
+  const v1 = readV3.parse(V1_ROW);
 
-  it('reads both older rows through the upgrader', () => {
-    expect(legacy).toMatchObject({ contentVersion: 2, packageModelRef: null, pumpLeakFraction: 0.15 });
-    expect(v1).toMatchObject({ contentVersion: 2, packageModelRef: null, pumpLeakFraction: 0.13 });
-    const { contentVersion: _a, packageModelRef: _b, ...rest } = v1;
-    const { contentVersion: _c, ...asV1 } = parseRecipe(V1_ROW);
-    expect(rest).toEqual(asV1);
+  it('reads both older rows through the upgraders', () => {
+    expect(legacy).toMatchObject({ contentVersion: 3, condition: null, packageModelRef: null, pumpLeakFraction: 0.15 });
+    expect(v1).toMatchObject({ contentVersion: 3, condition: null, packageModelRef: null, pumpLeakFraction: 0.13 });
+    const { contentVersion: _a, condition: _b, ...rest } = v1;
+    const { contentVersion: _c, ...asV2 } = parseRecipe(V1_ROW);
+    expect(rest).toEqual(asV2);
   });
 
-  it('reads version 2 content as it is, and the version 1 product refuses it by name', () => {
-    const stored = JSON.stringify({ ...JSON.parse(V1_ROW), contentVersion: 2, packageModelRef: 'PKG-2835-A' });
-    expect(readV2.parse(stored).packageModelRef).toBe('PKG-2835-A');
-    expect(() => parseRecipe(stored)).toThrow(/contentVersion: version 2 is newer than this software reads \(up to 1\)/);
+  it('reads version 3 content as it is, and the version 2 product refuses it by name', () => {
+    const condition = { junctionTempC: 85, driveCurrentMa: 150 };
+    const stored = JSON.stringify({ ...JSON.parse(V1_ROW), contentVersion: 3, packageModelRef: null, condition });
+    expect(readV3.parse(stored).condition).toEqual(condition);
+    expect(() => parseRecipe(stored)).toThrow(/contentVersion: version 3 is newer than this software reads \(up to 2\)/);
   });
 
   it('compares them: Δ = B − A on the lines of the recipe (hand-worked from the fixtures)', () => {
@@ -112,14 +127,14 @@ describe('after a (test-only) version 2 adds a field', () => {
   });
 
   it('checks what an upgrader produces, naming the step', () => {
-    const broken: ContentVersion<RevisionContentV2> = { ...v2, upgrade: (p: RevisionContentV1) => ({ ...p, contentVersion: 2 }) };
+    const broken: ContentVersion<RevisionContentV3> = { ...v3, upgrade: (p: RevisionContentV2) => ({ ...p, contentVersion: 3 }) };
     const read = createRecipeReader([...RECIPE_VERSIONS, broken]);
-    expect(() => read.parse(LEGACY_ROW)).toThrow(/upgraded from version 1 to 2 is invalid: packageModelRef/);
+    expect(() => read.parse(LEGACY_ROW)).toThrow(/upgraded from version 1 to 3 is invalid: condition/);
   });
 
   it('refuses a chain with a gap or a missing upgrader', () => {
-    expect(() => createRecipeReader([...RECIPE_VERSIONS, { ...v2, version: 3 }])).toThrow(/version 3 does not follow 1/);
-    expect(() => createRecipeReader([...RECIPE_VERSIONS, { version: 2, schema: contentV2Schema }])).toThrow(/no upgrader from 1/);
+    expect(() => createRecipeReader([...RECIPE_VERSIONS, { ...v3, version: 4 }])).toThrow(/version 4 does not follow 2/);
+    expect(() => createRecipeReader([...RECIPE_VERSIONS, { version: 3, schema: contentV3Schema }])).toThrow(/no upgrader from 2/);
   });
 });
 

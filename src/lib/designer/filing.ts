@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import { floorsSchema, targetSchema, toleranceSchema } from '../aim/index';
-import { CONTENT_VERSION, type MaterialRef, type RevisionContent, type SiliconeSpec } from '../recipe';
+import { CONTENT_VERSION, packageModelRefSchema, type MaterialRef, type RevisionContent, type SiliconeSpec } from '../recipe';
 import { roundedShares } from './shares';
 
 const materialId = z.number().int().positive();
@@ -20,6 +20,8 @@ export const designedBlendSchema = z
     /** wt % per phosphor from the loading model, or null when not modelled. */
     wtPct: z.array(z.number().min(0).max(100)).nullable(),
     pathLengthMm: z.number().gt(0).max(100).nullable(),
+    /** The package model the loading settings came from, or null (library values). */
+    packageModelRef: packageModelRefSchema.nullable().default(null),
     target: targetSchema,
     tolerance: toleranceSchema,
     floors: floorsSchema
@@ -28,7 +30,8 @@ export const designedBlendSchema = z
   .refine((b) => b.wtPct === null || b.wtPct.length === b.phosphorIds.length, 'one wt % per phosphor')
   .refine((b) => new Set(b.phosphorIds).size === b.phosphorIds.length, 'each phosphor may appear only once');
 
-export type DesignedBlend = z.infer<typeof designedBlendSchema>;
+/** As the designer builds it (`packageModelRef` may be left out: no package model). */
+export type DesignedBlend = z.input<typeof designedBlendSchema>;
 
 const blendField = z
   .string('the blend is missing')
@@ -102,6 +105,7 @@ export function revisionContentFrom(
     target: blend.target,
     tolerance: blend.tolerance,
     floors: blend.floors,
+    packageModelRef: blend.packageModelRef ?? null,
     notes
   };
 }

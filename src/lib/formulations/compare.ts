@@ -145,6 +145,7 @@ export function compareSettings(a: RevisionContent, b: RevisionContent): Setting
             ? 'wt % of slurry, entered directly'
             : 'not modelled'
     ],
+    ['Package model', (c) => (c.packageModelRef ? `model ${c.packageModelRef.id} v${c.packageModelRef.version}` : 'none')],
     ['Notes', (c) => c.notes || '—']
   ];
   return rows.map(([label, f]) => ({ label, a: f(a), b: f(b), changed: f(a) !== f(b) }));

@@ -4,7 +4,7 @@
  * silicone system are named by id; their codes, names and properties are filled in from the
  * library on save). Pure, shared by the pages and their tests.
  */
-import type { RevisionContent } from '../recipe';
+import { CONTENT_VERSION, type RevisionContent } from '../recipe';
 
 export const MAX_PHOSPHORS = 5;
 export type FormValues = Record<string, string>;
@@ -22,6 +22,7 @@ export function contentToFormValues(c: RevisionContent): FormValues {
     duv: c.target.kind === 'cctDuv' ? String(c.target.duv) : '0',
     sdcm: c.tolerance.kind === 'sdcm' ? String(c.tolerance.steps) : '3',
     pathMm: str(c.loading?.pathLengthMm),
+    packageModel: c.packageModelRef ? `${c.packageModelRef.id}:${c.packageModelRef.version}` : '',
     notes: c.notes
   };
   for (const k of FLOOR_KEYS) v[k] = str(c.floors[k]);
@@ -42,6 +43,13 @@ export function formDataToValues(fd: FormData): FormValues {
 /** A number, or undefined for an empty field (so the schema reports it as missing). */
 const num = (s: string | undefined) => (s === undefined || s === '' ? undefined : Number(s.replace(',', '.')));
 
+/** The cited package model as `id:version` (hidden field), or null; anything else is left for the schema to refuse. */
+function packageModelRefOf(s: string | undefined): unknown {
+  if (!s) return null;
+  const m = /^(\d+):(\d+)$/.exec(s);
+  return m ? { id: Number(m[1]), version: Number(m[2]) } : s;
+}
+
 export function formValuesToRaw(v: FormValues): unknown {
   const phosphors = [];
   for (let i = 0; i < MAX_PHOSPHORS; i++) {
@@ -57,6 +65,7 @@ export function formValuesToRaw(v: FormValues): unknown {
   const floors: Record<string, number | undefined> = {};
   for (const k of FLOOR_KEYS) if (v[k]) floors[k] = num(v[k]);
   return {
+    contentVersion: CONTENT_VERSION,
     pump: { materialId: num(v.pumpId), code: '?', name: '?' },
     phosphors,
     pumpLeakFraction: num(v.leak),
@@ -73,6 +82,7 @@ export function formValuesToRaw(v: FormValues): unknown {
     target: { kind: 'cctDuv', cct: num(v.cct), duv: num(v.duv) ?? 0 },
     tolerance: { kind: 'sdcm', steps: num(v.sdcm) },
     floors,
+    packageModelRef: packageModelRefOf(v.packageModel),
     notes: v.notes ?? ''
   };
 }

@@ -4,6 +4,7 @@
  * the seeds share. Pure: zod and relative imports only.
  *
  * - `schema.ts`: version 1 of the content (`contentVersion: 1`; stored rows without the tag are version 1).
+ * - `schemaV2.ts`: version 2 = version 1 + `packageModelRef` (the package model the recipe was designed for).
  * - `upgrade.ts`: the chain of versions and their upgraders; `RevisionContent` is the current content.
  * - `read.ts`: `parseRecipe` (stored JSON text or a parsed value → current content), on every read;
  *   `checkRecipe` for content sent in a request (a value, never text).
@@ -13,15 +14,16 @@
  * Signed rows are never rewritten: the SHA-256 an e-signature binds is taken over the stored text
  * (its canonical JSON), never over what the reader returns, so old rows still verify after an upgrade.
  *
- * How version 2 will grow without touching every feature (not implemented yet):
+ * Version 2 (`schemaV2.ts`) adds `packageModelRef`; its upgrader sets it to null for older rows.
+ * How a later version will grow without touching every feature (not implemented yet):
  * - `recipes: { [binKey]: { pumpLeakFraction, phosphors } }` — a recipe per pump wavelength bin beside
  *   the nominal one; the accessors pick `recipes[binKey]` when given a key that has one.
  * - `target.condition: { junctionTempC, driveCurrentMa }` — the operating point the target holds at.
- * - `packageModelRef` — the package model the recipe was designed for.
- * Adding it: write `schemaV2` (v1 extended), an upgrader v1 → v2 (`recipes: {}`, no condition, no
- * package model), append `{ version: 2, schema, upgrade }` to RECIPE_VERSIONS; old rows read unchanged.
+ * Adding it: write the next schema (the previous one extended), an upgrader from the previous version,
+ * append `{ version, schema, upgrade }` to RECIPE_VERSIONS; old rows read unchanged.
  */
 export * from './schema';
+export * from './schemaV2';
 export * from './upgrade';
 export * from './read';
 export * from './accessors';

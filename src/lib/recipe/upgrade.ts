@@ -6,6 +6,7 @@
  */
 import type { z } from 'zod';
 import { revisionContentV1Schema, type RevisionContentV1 } from './schema';
+import { revisionContentV2Schema, type RevisionContentV2 } from './schemaV2';
 
 /** Content without a `contentVersion` tag was written before the tag existed: version 1. */
 export const LEGACY_CONTENT_VERSION = 1;
@@ -79,16 +80,28 @@ export function upgradeContent<T>(chain: ContentVersionChain<T>, raw: unknown): 
 }
 
 /** The versions this software reads, oldest first. A new version adds its schema and its upgrader here. */
-export const RECIPE_VERSIONS = [{ version: 1, schema: revisionContentV1Schema }] as const satisfies ContentVersionChain<RevisionContentV1>;
+export const RECIPE_VERSIONS = [
+  { version: 1, schema: revisionContentV1Schema },
+  {
+    version: 2,
+    schema: revisionContentV2Schema,
+    // Version 1 content was designed without a package model.
+    upgrade: (previous: RevisionContentV1): RevisionContentV2 => ({ ...previous, contentVersion: 2, packageModelRef: null })
+  }
+] as const satisfies ContentVersionChain<RevisionContentV2>;
 
 /** The version new content is written with. */
 export const CONTENT_VERSION = RECIPE_VERSIONS[RECIPE_VERSIONS.length - 1].version;
 
 /** The schema of the current version (what new content is checked against and written as). */
-export const revisionContentSchema = revisionContentV1Schema;
+export const revisionContentSchema = revisionContentV2Schema;
 
 /**
  * The current content as features read it. The tag is a plain number: features never branch on it
  * (the reader has already upgraded), so content of a later version that only adds fields still fits.
  */
-export type RevisionContent = Omit<RevisionContentV1, 'contentVersion'> & { contentVersion: number };
+export type RevisionContent = Omit<RevisionContentV2, 'contentVersion' | 'packageModelRef'> & {
+  contentVersion: number;
+  /** The reader always fills it (null: no package model); content built in code may leave it out. */
+  packageModelRef?: RevisionContentV2['packageModelRef'];
+};

@@ -82,4 +82,9 @@ describe('comparing two revisions (hand-worked)', () => {
       ['Notes', 'more red']
     ]);
   });
+
+  it('shows a change of the cited package model (content version 2)', () => {
+    const rows = compareSettings(base, { ...base, packageModelRef: { id: 4, version: 3 } });
+    expect(rows.filter((r) => r.changed).map((r) => [r.label, r.a, r.b])).toEqual([['Package model', 'none', 'model 4 v3']]);
+  });
 });

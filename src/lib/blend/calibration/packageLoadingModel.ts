@@ -16,7 +16,8 @@ import { xyzToXy } from '../../spectral/colorimetry/chromaticity';
 import { tristimulus } from '../basis';
 import { GRID_LENGTH, radiantPower } from '../grid';
 import { CIE1931_2DEG_CMF } from '../../spectral/data/cie1931-2deg-cmf';
-import { beerLambertPhotonBudget, type LoadingBasis } from '../loading/beerLambertPhotonBudget';
+import { beerLambertPhotonBudget, opticalDepthsOf, type LoadingBasis } from '../loading/beerLambertPhotonBudget';
+import type { DispenseGeometry, GeometrySpec } from '../loading/dispenseGeometry';
 
 export interface PackageParameters {
   /** Absorption at the pump per phosphor, 1/(wt %·mm). */
@@ -30,6 +31,9 @@ export interface PackageParameters {
 export interface PackageOptics {
   cascade?: boolean;
   cascadePathFactor?: number;
+  /** How the package is dispensed (default 'fixedMass'); 'fixedVolume' needs the phosphors' densities in the basis. */
+  geometry?: DispenseGeometry;
+  siliconeDensityGPerCm3?: number;
 }
 
 export interface PackageOutput {
@@ -49,15 +53,22 @@ export function packageSpd(
   optics: PackageOptics = {}
 ): Float64Array {
   const alpha = params.absorptionPerWtPctMm;
+  const geometry: GeometrySpec = {
+    geometry: optics.geometry ?? 'fixedMass',
+    ...(optics.siliconeDensityGPerCm3 !== undefined ? { siliconeDensityGPerCm3: optics.siliconeDensityGPerCm3 } : {})
+  };
   const full = beerLambertPhotonBudget(
     { ...basis, absorptionPerWtPctMm: alpha, iqe: basis.iqe.map((q) => q * params.iqeScale) },
     concentrationsWtPct,
     pathLengthMm,
     optics.cascade ?? false,
-    optics.cascadePathFactor ?? 1
+    optics.cascadePathFactor ?? 1,
+    geometry
   );
   if (params.pumpEscape === 1) return full.spd;
-  const aL = alpha.map((a, i) => a * Math.max(0, concentrationsWtPct[i]) * pathLengthMm);
+  // τᵢ = αᵢ·gᵢ·L with gᵢ the effective loading of the dispense geometry, as in the forward model.
+  const loading = concentrationsWtPct.map((c) => Math.max(0, c));
+  const aL = opticalDepthsOf({ ...basis, absorptionPerWtPctMm: alpha }, loading, pathLengthMm, geometry);
   const out = Float64Array.from(full.spd);
   for (let l = 0; l < GRID_LENGTH; l++) {
     const p = basis.pump[l];

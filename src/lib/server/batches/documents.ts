@@ -9,6 +9,7 @@ import type { PaperSize } from '../../batches/weighout/paper';
 import { LOADING_BASIS_LABELS, type ToleranceSpec } from '../../batches/weighout/schema';
 import { getBatch, type BatchDetail } from './read';
 import { notFound } from './errors';
+import { citedPackageModel } from '../package-models/choices';
 
 export type { MeasurementSummary } from '../pdf/batch-doc';
 
@@ -81,10 +82,18 @@ export function toBatchDoc(d: BatchDetail): BatchDoc {
   };
 }
 
+/** The document with the package model the revision cites, named as "<name> v<version>". */
+async function docWithPackageModel(d: BatchDetail): Promise<BatchDoc> {
+  const doc = toBatchDoc(d);
+  const ref = d.revision?.content.packageModelRef;
+  const cited = ref ? await citedPackageModel(ref) : null;
+  return cited ? { ...doc, formulation: { ...doc.formulation, packageModel: `${cited.name} v${cited.version}` } } : doc;
+}
+
 export async function batchTicketPdf(id: number, size: PaperSize = 'A4'): Promise<{ pdf: Buffer; batchNumber: string }> {
   const d = await getBatch(id);
   if (!d) throw notFound(`Batch ${id}`);
-  return { pdf: await buildBatchTicket(toBatchDoc(d), size), batchNumber: d.batch.batchNumber };
+  return { pdf: await buildBatchTicket(await docWithPackageModel(d), size), batchNumber: d.batch.batchNumber };
 }
 
 /** The batch record as it stands now (with the quality section when given). */
@@ -94,5 +103,5 @@ export async function batchRecordPdf(
 ): Promise<{ pdf: Buffer; batchNumber: string }> {
   const d = await getBatch(id);
   if (!d) throw notFound(`Batch ${id}`);
-  return { pdf: await buildBatchRecord(toBatchDoc(d), opts), batchNumber: d.batch.batchNumber };
+  return { pdf: await buildBatchRecord(await docWithPackageModel(d), opts), batchNumber: d.batch.batchNumber };
 }

@@ -10,6 +10,8 @@ import { PREDICTION_CORE_VERSION, predictRevision, type RevisionPrediction } fro
 import { loadRevisionComponents } from './components';
 import { ValidationError } from './errors';
 import { contentSha256 } from './hash';
+import { citedPackageModel } from '../package-models/choices';
+import { DomainError } from '../../errors/domain-error';
 
 /** Pump leak + phosphor fractions must add up to 1 within this (rounding of four-decimal inputs). */
 export const FRACTION_SUM_TOLERANCE = 0.001;
@@ -36,8 +38,21 @@ export function parseContent(raw: unknown): RevisionContent {
   return c;
 }
 
+/** A cited package model must exist at the cited version (versions are immutable, never deleted). */
+async function checkPackageModelRef(knex: Knex, content: RevisionContent): Promise<void> {
+  const ref = content.packageModelRef;
+  if (!ref || (await citedPackageModel(ref, knex))) return;
+  const message = `package model ${ref.id} version ${ref.version} does not exist; choose a package model from the library`;
+  // Well-formed content citing something that is not there: 422, as the package-model API refuses a fit it cannot make.
+  throw new DomainError('unprocessable', `Invalid revision content: packageModelRef: ${message}`, {
+    issues: [{ path: 'packageModelRef', message }]
+  });
+}
+
 export async function prepareRevision(knex: Knex, raw: unknown): Promise<PreparedRevision> {
-  const loaded = await loadRevisionComponents(knex, parseContent(raw));
+  const content = parseContent(raw);
+  await checkPackageModelRef(knex, content);
+  const loaded = await loadRevisionComponents(knex, content);
   let predicted: RevisionPrediction;
   try {
     predicted = predictRevision(loaded.content, loaded.components);

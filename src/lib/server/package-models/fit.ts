@@ -44,10 +44,16 @@ async function components(input: PackageFitInput) {
 
 /** The fit alone (no database write); throws an unprocessable domain error (422) when it is refused or does not converge. */
 export async function runFit(input: PackageFitInput): Promise<PackageModelFit> {
-  if (input.dispenseGeometry !== 'fixedMass') {
-    throw unprocessable('The fit supports the fixed-mass geometry (a set slurry mass per package) only; choose fixedMass.');
-  }
   const spec = await components(input);
+  if (input.dispenseGeometry === 'fixedVolume') {
+    const missing = spec.phosphors.filter((p) => !(p.densityGPerCm3 && p.densityGPerCm3 > 0)).map((p) => p.name);
+    if (missing.length) {
+      const names = missing.join(', ');
+      throw unprocessable(
+        `A cavity filled to a fixed volume needs each phosphor's density; the library has none for ${names}. Add it, or choose fixedMass.`
+      );
+    }
+  }
   const start = {
     ...spec,
     phosphors: spec.phosphors.map((p) => ({ ...p, absorptionPerWtPctMm: p.absorptionPerWtPctMm ?? DEFAULT_START_ALPHA }))
@@ -60,6 +66,7 @@ export async function runFit(input: PackageFitInput): Promise<PackageModelFit> {
       pathLengthMm: input.pathLengthMm,
       ...(input.dispenseMassMg !== undefined ? { dispenseMassMg: input.dispenseMassMg } : {}),
       cascade: input.cascade,
+      geometry: input.dispenseGeometry,
       fitEscape: input.fitEscape,
       fitIqeScale: input.fitIqeScale
     },

@@ -9,6 +9,7 @@ import { packageFitSchema, type PackageFitInput } from './schema';
 export const FORM_FIELDS = [
   'name',
   'packageType',
+  'dispenseGeometry',
   'pathLengthMm',
   'dispenseMassMg',
   'pumpId',
@@ -39,6 +40,7 @@ export async function readFitForm(form: FormData): Promise<FitForm> {
   const body = {
     name: values.name,
     packageType: values.packageType,
+    dispenseGeometry: values.dispenseGeometry || 'fixedMass',
     pathLengthMm: numberOrUndefined(values.pathLengthMm),
     dispenseMassMg: numberOrUndefined(values.dispenseMassMg),
     pumpId: numberOrUndefined(values.pumpId),

@@ -32,7 +32,8 @@ export interface BatchDoc {
   state: string;
   createdAt: Date;
   createdBy: string;
-  formulation: { code: string; name: string; revisionNo: number };
+  /** packageModel: the package model the revision cites, as "<name> v<version>", or absent. */
+  formulation: { code: string; name: string; revisionNo: number; packageModel?: string | null };
   target: { description: string; xy: string | null; bin: string | null; tolerance: string | null };
   size: { batchMassG: string; sizingNote: string | null; basisLabel: string; loadingSummary: string };
   balance: { resolutionG: string; minWeightG: string; balanceRef: string | null };
@@ -65,6 +66,7 @@ export function headerFields(s: Sheet, d: BatchDoc): void {
   s.fields([
     ['Product', `${d.formulation.code} — ${d.formulation.name}`],
     ['Formulation revision', `Revision ${d.formulation.revisionNo} (approved)`],
+    ...(d.formulation.packageModel ? [['Package model', d.formulation.packageModel] as [string, string]] : []),
     ['Batch number', d.batchNumber],
     ['Target colour point', [d.target.description, d.target.xy].filter(Boolean).join('  ·  ')],
     ['ANSI C78.377 bin', d.target.bin ?? 'outside the nominal quadrangles'],

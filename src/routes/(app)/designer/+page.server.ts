@@ -11,6 +11,7 @@ import { actionFailure } from '$lib/server/http/action-failure';
 import { parseId } from '$lib/server/http/id-param';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
+import { packageModelChoices } from '$lib/server/package-models/choices';
 
 /** A revision opened in the designer (`?from=<revision id>`) to start the next revision from it. */
 async function openedRevision(param: string | null) {
@@ -31,12 +32,13 @@ async function openedRevision(param: string | null) {
 
 export const load: PageServerLoad = async ({ locals, url }) => {
   requireUser(locals, mayDesign);
-  const [pumps, phosphors, silicones, formulations, opened] = await Promise.all([
+  const [pumps, phosphors, silicones, formulations, opened, packageModels] = await Promise.all([
     listMaterialOptions('pump'),
     listMaterialOptions('phosphor'),
     listSiliconeSystems(),
     listFormulations(formulationListSchema.parse({ pageSize: 100, sort: 'code' })),
-    openedRevision(url.searchParams.get('from'))
+    openedRevision(url.searchParams.get('from')),
+    packageModelChoices()
   ]);
   return {
     pumps,
@@ -50,7 +52,8 @@ export const load: PageServerLoad = async ({ locals, url }) => {
       safetyNote: s.safetyNote
     })),
     formulations: formulations.rows.map((f) => ({ id: f.id, code: f.code, name: f.name })),
-    opened
+    opened,
+    packageModels
   };
 };
 

@@ -11,6 +11,12 @@ import { createLiveEvaluator, type LiveEvaluator, type LiveFrame } from '$lib/de
 import { DEFAULT_AIM, resolveAim, type AimState } from '$lib/designer/aim';
 import { roundedShares, setShare, normaliseShares } from '$lib/designer/shares';
 import type { DesignedBlend } from '$lib/designer/filing';
+import {
+  basisWithPackageModel,
+  componentsWithPackageModel,
+  packageModelsForPump,
+  type PackageModelChoice
+} from '$lib/designer/package-model';
 import { fractionsWithLeak, phosphorLines, type RevisionContent } from '$lib/recipe';
 import { lightSwatchHex } from '$lib/charts/display-colours';
 import type { Pair } from '$lib/spectral';
@@ -43,6 +49,8 @@ export class DesignerSession {
   objective = $state<Objective>('maxLer');
   /** Effective optical path of the loading model (mm); null = no wt % estimate. */
   pathLengthMm = $state<number | null>(0.3);
+  /** The package model chosen for the loading settings (id of one version), or null: library values. */
+  packageModelId = $state<number | null>(null);
 
   evaluator = $state.raw<LiveEvaluator | null>(null);
   components = $state.raw<BlendComponents | null>(null);
@@ -65,8 +73,16 @@ export class DesignerSession {
 
   readonly pumps: MaterialChoice[];
   readonly phosphorOptions: MaterialChoice[];
+  packageModels = $state.raw<readonly PackageModelChoice[]>([]);
 
-  constructor(pumps: MaterialChoice[], phosphors: MaterialChoice[], opened: RevisionContent | null, openedAim: AimState | null) {
+  constructor(
+    pumps: MaterialChoice[],
+    phosphors: MaterialChoice[],
+    opened: RevisionContent | null,
+    openedAim: AimState | null,
+    packageModels: readonly PackageModelChoice[] = []
+  ) {
+    this.packageModels = packageModels;
     // A revision may name materials that have since left the active library: keep them choosable.
     const known = (list: MaterialChoice[], ref: { materialId: number; code: string; name: string }) =>
       list.some((m) => m.id === ref.materialId)
@@ -79,6 +95,8 @@ export class DesignerSession {
       this.phosphorIds = phosphorLines(opened).map((p) => p.materialId);
       this.shares = normaliseShares(fractionsWithLeak(opened));
       this.pathLengthMm = opened.loading?.pathLengthMm ?? this.pathLengthMm;
+      const cited = opened.packageModelRef;
+      if (cited && packageModels.some((m) => m.id === cited.id && m.version === cited.version)) this.packageModelId = cited.id;
     } else {
       this.pumpId = (pumps.find((p) => (p.peakNm ?? 0) >= 430) ?? pumps[0])?.id ?? null;
     }
@@ -109,7 +127,10 @@ export class DesignerSession {
   get chosenPhosphors(): MaterialChoice[] {
     return this.phosphorIds.map((id) => this.phosphorOptions.find((p) => p.id === id)).filter((p): p is MaterialChoice => p !== undefined);
   }
-  sharesKey = $derived(`${this.wantedKey}|${this.pathLengthMm}|${roundedShares(this.shares, 4).join(',')}`);
+  packageModelsForPump = $derived(packageModelsForPump(this.packageModels, this.pumpId));
+  /** The chosen package model, if it was fitted for the chosen pump. */
+  packageModel = $derived(this.packageModelsForPump.find((m) => m.id === this.packageModelId) ?? null);
+  sharesKey = $derived(`${this.wantedKey}|${this.pathLengthMm}|${this.packageModel?.id ?? ''}|${roundedShares(this.shares, 4).join(',')}`);
   currentWtPct = $derived(this.wtPct && this.wtPct.key === this.sharesKey ? this.wtPct : null);
   snapshot = $derived(
     JSON.stringify({
@@ -118,7 +139,8 @@ export class DesignerSession {
       s: roundedShares(this.shares, 4),
       a: this.aim,
       o: this.objective,
-      l: this.pathLengthMm
+      l: this.pathLengthMm,
+      m: this.packageModelId
     })
   );
   dirty = $derived(this.snapshot !== this.savedSnapshot);
@@ -194,6 +216,13 @@ export class DesignerSession {
   }
 
   // ——— wt % (loading model) ———
+  /** Chooses a package model (null: library values); its path length replaces the one set by hand. */
+  choosePackageModel(id: number | null): void {
+    const model = this.packageModelsForPump.find((m) => m.id === id) ?? null;
+    this.packageModelId = model?.id ?? null;
+    if (model) this.pathLengthMm = model.pathLengthMm;
+  }
+
   #estimateWtPctAtRest(): (() => void) | void {
     const key = this.sharesKey;
     const basis = this.evaluator?.basis;
@@ -209,8 +238,19 @@ export class DesignerSession {
     if (fractions.length < 2) return void (this.wtPct = { key, values: null, note: 'add a phosphor' });
     if (path === null || !(path > 0)) return void (this.wtPct = { key, values: null, note: 'no path length: wt % not estimated' });
     if (!loading) return void (this.wtPct = { key, values: null, note: 'a phosphor lacks an absorption coefficient in the library' });
-    const sol = concentrationsForFractions(loading, fractions, { pathLengthMm: path });
-    this.wtPct = sol.converged ? { key, values: sol.concentrationsWtPct, note: null } : { key, values: null, note: sol.refusal };
+    const model = this.packageModel;
+    try {
+      const sol = model
+        ? concentrationsForFractions(basisWithPackageModel(loading, this.phosphorIds, model), fractions, {
+            pathLengthMm: path,
+            geometry: model.dispenseGeometry,
+            cascade: model.cascade
+          })
+        : concentrationsForFractions(loading, fractions, { pathLengthMm: path });
+      this.wtPct = sol.converged ? { key, values: sol.concentrationsWtPct, note: null } : { key, values: null, note: sol.refusal };
+    } catch (err) {
+      this.wtPct = { key, values: null, note: err instanceof Error ? err.message : String(err) };
+    }
   }
 
   /** wt % for the current shares, computed now if the resting estimate is not there yet. */
@@ -232,15 +272,17 @@ export class DesignerSession {
     this.solveElapsedMs = 0;
     const tick = setInterval(() => (this.solveElapsedMs = performance.now() - this.solveStartedAt), 100);
     const key = this.loadedKey;
+    const model = this.packageModel;
+    const modelLoading = model ? { geometry: model.dispenseGeometry, cascade: model.cascade } : {};
     const outcome = await requestSolve(
       {
-        components: this.components,
+        components: model ? componentsWithPackageModel(this.components, this.phosphorIds, model) : this.components,
         target: aim.target,
         tolerance: aim.tolerance,
         floors: aim.floors,
         objective: this.objective,
         maxCandidates: 5,
-        ...(this.pathLengthMm ? { loading: { pathLengthMm: this.pathLengthMm } } : {})
+        ...(this.pathLengthMm ? { loading: { pathLengthMm: this.pathLengthMm, ...modelLoading } } : {})
       },
       abort.signal
     );
@@ -285,6 +327,7 @@ export class DesignerSession {
       fractions: [...this.frame.fractions],
       wtPct: wt ? [...wt] : null,
       pathLengthMm: wt ? this.pathLengthMm : null,
+      packageModelRef: wt && this.packageModel ? { id: this.packageModel.id, version: this.packageModel.version } : null,
       target: aim.target,
       tolerance: aim.tolerance,
       floors: aim.floors

@@ -20,6 +20,7 @@ import { returnRevision, sign, submit, withdraw } from '$lib/server/formulations
 import { addAttachment, removeAttachment } from '$lib/server/formulations/attachments';
 import { contentToFormValues, formDataToValues, type FormValues } from '$lib/formulations/form-values';
 import { allowedCommands } from '$lib/formulations/workflow-rules';
+import { citedPackageModel } from '$lib/server/package-models/choices';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
@@ -47,13 +48,15 @@ export const load: PageServerLoad = async ({ locals, params }) => {
   const user = requireUser(locals);
   const rev = await revisionOf(params);
   const commands = allowedCommands(user, rev);
-  const [signatures, attachments, history, current, silicone, hashVerified] = await Promise.all([
+  const ref = rev.content.packageModelRef ?? null;
+  const [signatures, attachments, history, current, silicone, hashVerified, cited] = await Promise.all([
     listSignatures(rev.id),
     listAttachments(rev.id),
     eventsFor('formulation_revision', rev.id),
     currentApprovedRevision(rev.formulationId),
     rev.content.silicone.siliconeSystemId ? siliconeHandling(rev.content.silicone.siliconeSystemId) : null,
-    storedContentVerified(rev.id)
+    storedContentVerified(rev.id),
+    ref ? citedPackageModel(ref) : null
   ]);
   return {
     rev,
@@ -65,7 +68,8 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     hashVerified,
     canStartDraft: mayAuthorFormulations(user),
     editor: commands.includes('edit') ? { values: contentToFormValues(rev.content), options: await editorOptions() } : null,
-    silicone
+    silicone,
+    packageModel: ref ? { id: ref.id, version: ref.version, name: cited?.name ?? null } : null
   };
 };
 
