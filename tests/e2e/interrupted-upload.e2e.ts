@@ -77,7 +77,7 @@ function cutUpload(
 async function storedState() {
   const knex = testDb();
   try {
-    const count = async <T extends {}>(q: Knex.QueryBuilder<T>) =>
+    const count = async <T extends object>(q: Knex.QueryBuilder<T>) =>
       Number(((await q.count({ n: '*' }).first()) as { n: number | string }).n);
     return {
       files: await count(knex('stored_files').where({ entity_type: 'material', entity_id: String(materialId) })),
