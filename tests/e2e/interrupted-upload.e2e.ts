@@ -155,7 +155,8 @@ test('an upload cut off mid-body stores nothing, blocks no edit, and the app kee
       const edit = await api.put(`/api/v1/phosphors/${materialId}`, { data: { version, notes: `edited while an upload hung (${label})` } });
       expect(edit.status(), await edit.text()).toBe(200);
       console.log(
-        `interrupted upload (${label}, ${sendBytes} of ${upload.body.length} bytes sent): an edit of the same material answered in ${Date.now() - t0} ms`
+        `interrupted upload (${label}, ${sendBytes} of ${upload.body.length} bytes ` +
+          `sent): an edit of the same material answered in ${Date.now() - t0} ms`
       );
       version += 1;
     });

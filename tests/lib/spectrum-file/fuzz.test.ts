@@ -89,7 +89,9 @@ describe.each(MODES)('spectrum-file parser fuzz: $name', ({ name, options, parts
       { numRuns: RUNS }
     );
     console.log(
-      `parser fuzz, ${name}: ${RUNS} malformed files, ${tally.refused} refused (${tally.namingLine} naming a line), ${tally.accepted} accepted, ${Math.round(performance.now() - t0)} ms`
+      `parser fuzz, ${name}: ${RUNS} malformed files, ${tally.refused} refused ` +
+        `(${tally.namingLine} naming a line), ${tally.accepted} accepted, ` +
+        `${Math.round(performance.now() - t0)} ms`
     );
     expect(tally.refused).toBeGreaterThan(RUNS * 0.8);
   });
