@@ -134,7 +134,9 @@ export async function seed(knex: Knex): Promise<void> {
       for (let k = 0; k < lots; k++) {
         await trx('material_lots').insert({
           material_id: id,
-          lot_number: `${supplier.split(' ')[0].slice(0, 3).toUpperCase()}-${code.replace(/[^A-Z0-9]/g, '')}-26${String(k * 4 + 1).padStart(2, '0')}`,
+          lot_number:
+            `${supplier.split(' ')[0].slice(0, 3).toUpperCase()}-` +
+            `${code.replace(/[^A-Z0-9]/g, '')}-26${String(k * 4 + 1).padStart(2, '0')}`,
           supplier,
           received_on: `2026-${String(k * 4 + 1).padStart(2, '0')}-1${k}`,
           expires_on: `2028-${String(k * 4 + 1).padStart(2, '0')}-1${k}`,
