@@ -188,7 +188,8 @@ seriesModule({
     header([
       'CIE standard illuminant A and CIE fluorescent illuminants F1–F12 (relative SPDs).',
       'Source: CIE 15:2004 Table T.1 (A) and Table T.6 (F1–F12), table numbers from memory [CIE15-2004].',
-      `A: ${aStart}–${aStart + aStep * (a.columns[0].length - 1)} nm, ${aStep} nm; F: ${fStart}–${fStart + fStep * (f.columns[0].length - 1)} nm, ${fStep} nm.`,
+      `A: ${aStart}–${aStart + aStep * (a.columns[0].length - 1)} nm, ${aStep} nm; F: ` +
+        `${fStart}–${fStart + fStep * (f.columns[0].length - 1)} nm, ${fStep} nm.`,
       'TEST-ONLY: import from tests and scripts, never from app modules (bundle size).',
       COPIED_FROM
     ]) +
@@ -215,7 +216,8 @@ seriesModule({
   const body = rows
     .map(
       ([n, t, tol, lo, hi, duv]) =>
-        `  { nominalCct: ${n}, targetCct: ${t}, cctTolerance: ${tol}, cctMin: ${lo}, cctMax: ${hi}, targetDuv: ${duv.toFixed(4)}, duvTolerance: 0.006 }`
+        `  { nominalCct: ${n}, targetCct: ${t}, cctTolerance: ${tol}, cctMin: ${lo}, ` +
+        `cctMax: ${hi}, targetDuv: ${duv.toFixed(4)}, duvTolerance: 0.006 }`
     )
     .join(',\n');
   const text =
@@ -226,7 +228,9 @@ seriesModule({
       'Flexible-CCT formulas: from memory, corroborated by the same transcription [M].',
       'Units: CCT in K, Duv in CIE 1960 u,v units.'
     ]) +
-    `export interface AnsiTable1Row {\n  nominalCct: number;\n  targetCct: number;\n  cctTolerance: number;\n  cctMin: number;\n  cctMax: number;\n  targetDuv: number;\n  duvTolerance: number;\n}\n\n` +
+    `export interface AnsiTable1Row {\n  nominalCct: number;\n  targetCct: number;\n` +
+    `  cctTolerance: number;\n  cctMin: number;\n  cctMax: number;\n` +
+    `  targetDuv: number;\n  duvTolerance: number;\n}\n\n` +
     `export const ANSI_C78377_2017_TABLE1: AnsiTable1Row[] = [\n${body}\n];\n\n` +
     `/** Flexible CCT: Duv target = a·(1/T)² + b·(1/T) + c for T ≥ 2780 K, else 0 (from memory). */\n` +
     `export const ANSI_FLEX_DUV = { a: 57700, b: -44.6, c: 0.00854, minCct: 2780 };\n\n` +
@@ -260,8 +264,12 @@ seriesModule({
       'ANSI_2700K_3STEP: 3-step ellipse at the ANSI 2700 K centre, seen on an LED package',
       'datasheet .'
     ]) +
-    `export interface ChromaticityEllipse {\n  name: string;\n  nominalCct: number;\n  x: number;\n  y: number;\n  /** Semi-axes of the ellipse at \`steps\` (1 unless stated). */\n  a: number;\n  b: number;\n  thetaDeg: number;\n  steps?: number;\n}\n\n` +
+    `export interface ChromaticityEllipse {\n  name: string;\n  nominalCct: number;\n` +
+    `  x: number;\n  y: number;\n  /** Semi-axes of the ellipse at \`steps\` (1 unless stated). */\n` +
+    `  a: number;\n  b: number;\n  thetaDeg: number;\n  steps?: number;\n}\n\n` +
     `export const IEC_60081_ELLIPSES: ChromaticityEllipse[] = [\n${body}\n];\n\n` +
-    `export const ANSI_2700K_3STEP: ChromaticityEllipse = {\n  name: 'ANSI 2700 K (3-step)',\n  nominalCct: 2700,\n  x: 0.4578,\n  y: 0.4101,\n  a: 0.0081,\n  b: 0.0042,\n  thetaDeg: 53.7,\n  steps: 3\n};\n`;
+    `export const ANSI_2700K_3STEP: ChromaticityEllipse = {\n  name: 'ANSI 2700 K (3-step)',\n` +
+    `  nominalCct: 2700,\n  x: 0.4578,\n  y: 0.4101,\n  a: 0.0081,\n  b: 0.0042,\n` +
+    `  thetaDeg: 53.7,\n  steps: 3\n};\n`;
   write('chromaticity-ellipses.ts', text);
 }

@@ -32,7 +32,8 @@ build_is_stale() {
 fresh_database() {
   [ -z "${PF_EXTERNAL_DB:-}" ] || return 0
   bash scripts/db.sh start >/dev/null || return 1
-  bash scripts/db.sh sql -e "DROP DATABASE IF EXISTS \`$DB_NAME\`; CREATE DATABASE \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
+  local create="CREATE DATABASE \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
+  bash scripts/db.sh sql -e "DROP DATABASE IF EXISTS \`$DB_NAME\`; $create"
 }
 
 # TERM to every started process, 10 s to finish, then KILL; then the private database stops.

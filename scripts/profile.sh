@@ -16,7 +16,8 @@ else
   : "${PF_DB_DIR:=.mariadb}" "${PF_DB_PORT:=33306}" "${DB_NAME:=phosforge}"
   : "${PORT:=5180}" "${PF_SMTP_PORT:=2525}" "${PF_MAIL_WEB_PORT:=2580}" "${PF_S3_PORT:=4569}"
   if [ -z "${AUTH_SECRET:-}" ]; then
-    [ -s .runtime/auth-secret ] || node -e "process.stdout.write(require('crypto').randomBytes(36).toString('base64url'))" > .runtime/auth-secret
+    [ -s .runtime/auth-secret ] ||
+      node -e "process.stdout.write(require('crypto').randomBytes(36).toString('base64url'))" > .runtime/auth-secret
     AUTH_SECRET="$(cat .runtime/auth-secret)"
   fi
 fi

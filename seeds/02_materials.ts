@@ -17,14 +17,18 @@ import type { Spd } from '../src/lib/spectral/types';
 const PHOSPHOR_SUPPLIERS = ['Larkspur Luminescent Materials', 'Tidewater Phosphor Works', 'Corriebrae Phosphors'];
 const PUMP_SUPPLIERS = ['Quillmere Optoelectronics', 'Fernhollow Semiconductor'];
 const POWDER =
-  'Fine powder: weigh under local exhaust or in an enclosure, avoid raising dust, wear gloves and eye protection (FFP2/N95 where dust is possible). Follow the supplier safety data sheet.';
+  'Fine powder: weigh under local exhaust or in an enclosure, avoid raising dust, ' +
+  'wear gloves and eye protection (FFP2/N95 where dust is possible). Follow the ' +
+  'supplier safety data sheet.';
 const SAFETY: Record<string, string> = {
   fluoride: `${POWDER} Fluoride phosphor: keep dry and away from acids (may release HF/fluoride); follow the site fluoride first-aid plan.`,
   nitride: `${POWDER} Nitride: may release ammonia with strong acids or bases.`,
   default: POWDER
 };
 const PUMP_SAFETY =
-  'Blue/violet emitter: do not look into the powered chip; photobiological (blue-light) risk group needs measurement per IEC 62471. Near-UV chips: check UV emission too.';
+  'Blue/violet emitter: do not look into the powered chip; photobiological ' +
+  '(blue-light) risk group needs measurement per IEC 62471. Near-UV chips: check ' +
+  'UV emission too.';
 
 const codeOf = (name: string) => name.split(' ')[0];
 const roundSpd = (s: Spd): Spd => ({ wavelengths: s.wavelengths, values: s.values.map((v) => Number(v.toPrecision(5))) });
@@ -130,7 +134,9 @@ export async function seed(knex: Knex): Promise<void> {
       for (let k = 0; k < lots; k++) {
         await trx('material_lots').insert({
           material_id: id,
-          lot_number: `${supplier.split(' ')[0].slice(0, 3).toUpperCase()}-${code.replace(/[^A-Z0-9]/g, '')}-26${String(k * 4 + 1).padStart(2, '0')}`,
+          lot_number:
+            `${supplier.split(' ')[0].slice(0, 3).toUpperCase()}-` +
+            `${code.replace(/[^A-Z0-9]/g, '')}-26${String(k * 4 + 1).padStart(2, '0')}`,
           supplier,
           received_on: `2026-${String(k * 4 + 1).padStart(2, '0')}-1${k}`,
           expires_on: `2028-${String(k * 4 + 1).padStart(2, '0')}-1${k}`,

@@ -13,7 +13,12 @@ import { loadRevisionComponents } from '../src/lib/server/formulations/component
 import { contentSha256 } from '../src/lib/server/formulations/hash';
 
 const SILICONE_CAUTION =
-  "Uncured parts A and B irritate skin and eyes: wear nitrile gloves and eye protection. The Si–H crosslinker can release hydrogen with acids, bases, alcohols or moisture — never close mixed material in a sealed container. Cure is inhibited by sulfur, amines, organotin and some fluxes. Ventilate the cure-oven exhaust; vacuum degassing carries implosion and splash risk. Follow the supplier's safety data sheet, your site's rules and local codes.";
+  'Uncured parts A and B irritate skin and eyes: wear nitrile gloves and eye ' +
+  'protection. The Si–H crosslinker can release hydrogen with acids, bases, ' +
+  'alcohols or moisture — never close mixed material in a sealed container. Cure ' +
+  'is inhibited by sulfur, amines, organotin and some fluxes. Ventilate the ' +
+  'cure-oven exhaust; vacuum degassing carries implosion and splash risk. Follow ' +
+  "the supplier's safety data sheet, your site's rules and local codes.";
 
 export const SILICONE_SYSTEMS = [
   {
@@ -24,7 +29,8 @@ export const SILICONE_SYSTEMS = [
     pot_life_min: 240,
     cure: '1 h at 80 °C, then 2 h at 150 °C',
     degas_notes:
-      "Planetary mixer 2 min at 2000 rpm (mix and deaerate), or vacuum below 5 kPa for 15 min after hand mixing. Dispense within the plant's slurry-age limit.",
+      'Planetary mixer 2 min at 2000 rpm (mix and deaerate), or vacuum below 5 kPa for ' +
+      "15 min after hand mixing. Dispense within the plant's slurry-age limit.",
     density_g_cm3: 1.08,
     refractive_index: 1.41
   },
@@ -48,7 +54,8 @@ export const SILICONE_SYSTEMS = [
     pot_life_min: 90,
     cure: '4 h at 65 °C or 24 h at 25 °C',
     degas_notes:
-      'Weigh part B on the precision balance (10:1 is sensitive to ratio error); vacuum below 5 kPa for 10–15 min until the foam collapses.',
+      'Weigh part B on the precision balance (10:1 is sensitive to ratio error); ' +
+      'vacuum below 5 kPa for 10–15 min until the foam collapses.',
     density_g_cm3: 1.03,
     refractive_index: 1.41
   }
@@ -151,7 +158,8 @@ const DEMO = [
         ],
         floors: { raMin: 90, r9Min: 80 },
         notes:
-          'Draft: wt % not modelled yet (NR-631 absorbs weakly; needs a thicker layer study). Fluoride phosphor: keep dry, no acid contact.',
+          'Draft: wt % not modelled yet (NR-631 absorbs weakly; needs a thicker layer ' +
+          'study). Fluoride phosphor: keep dry, no acid contact.',
         createdAt: '2026-11-24T10:20:00Z'
       }
     ] as DemoRevision[]
@@ -355,7 +363,9 @@ export async function seed(knex: Knex): Promise<void> {
           );
         }
         console.log(
-          `seed 03_formulations: ${f.code} rev ${i + 1} ${r.state}: ${Math.round(predicted.cct)} K, Duv ${predicted.duv.toFixed(4)}, Ra ${predicted.ra?.toFixed(1)}, R9 ${predicted.r9?.toFixed(1)}`
+          `seed 03_formulations: ${f.code} rev ${i + 1} ${r.state}: ` +
+            `${Math.round(predicted.cct)} K, Duv ${predicted.duv.toFixed(4)}, Ra ` +
+            `${predicted.ra?.toFixed(1)}, R9 ${predicted.r9?.toFixed(1)}`
         );
         previous = revisionId;
       }

@@ -52,7 +52,8 @@ async function rowCounts(): Promise<Record<string, number>> {
   const knex = knexFactory({ client: 'mysql2', connection: conn });
   try {
     const [tables] = await knex.raw(
-      'SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE() AND table_type = "BASE TABLE" ORDER BY table_name'
+      'SELECT table_name AS t FROM information_schema.tables WHERE table_schema = ' +
+        'DATABASE() AND table_type = "BASE TABLE" ORDER BY table_name'
     );
     const counts: Record<string, number> = {};
     for (const { t } of tables as { t: string }[]) {

@@ -30,7 +30,9 @@ for (const o of manifest.objects) {
 const conn = connectionFromEnv();
 if (!yes) {
   console.log(
-    `restore: folder OK (${Object.keys(manifest.rowCounts).length} tables, ${manifest.objects.length} objects). Re-run with --yes to replace database ${conn.database} and bucket ${bucketFromEnv()}.`
+    `restore: folder OK (${Object.keys(manifest.rowCounts).length} tables, ` +
+      `${manifest.objects.length} objects). Re-run with --yes to replace database ` +
+      `${conn.database} and bucket ${bucketFromEnv()}.`
   );
   process.exit(0);
 }

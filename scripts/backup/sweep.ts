@@ -47,7 +47,8 @@ try {
   const bytes = r.orphans.reduce((a, o) => a + o.bytes, 0);
   console.log(`storage:sweep: ${r.objects} objects, ${r.rows} stored-file rows`);
   console.log(
-    `  orphans older than ${args.olderThanHours} h: ${r.orphans.length} (${bytes} bytes)${args.remove ? `, removed ${r.removed}` : ' — run with --remove to delete them'}`
+    `  orphans older than ${args.olderThanHours} h: ${r.orphans.length} (${bytes} ` +
+      `bytes)${args.remove ? `, removed ${r.removed}` : ' — run with --remove to delete them'}`
   );
   for (const o of r.orphans.slice(0, 20)) console.log(`    ${o.key} (${o.bytes} bytes, ${o.lastModified})`);
   if (r.recentUnreferenced) console.log(`  newer objects without a row (left alone, may be uploads in flight): ${r.recentUnreferenced}`);

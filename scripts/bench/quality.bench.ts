@@ -51,6 +51,8 @@ const median = (a: number[]) => [...a].sort((p, q) => p - q)[Math.floor(a.length
 const out = Object.fromEntries(Object.entries(times).map(([k, v]) => [k, Number(median(v).toFixed(1))]));
 for (const [k, v] of Object.entries(out)) console.log(`quality  ${k.padEnd(8)} median ${v.toFixed(1)} ms`);
 console.log(
-  `quality  ${PARTS} parts summarised in ${out.total} ms (budget ${BUDGET_MS} ms${out.total <= BUDGET_MS ? ', ok' : ', OVER'}); yield ${(yieldFraction * 100).toFixed(1)} %`
+  `quality  ${PARTS} parts summarised in ${out.total} ms (budget ${BUDGET_MS} ` +
+    `ms${out.total <= BUDGET_MS ? ', ok' : ', OVER'}); yield ` +
+    `${(yieldFraction * 100).toFixed(1)} %`
 );
 console.log(JSON.stringify({ bench: 'quality', unit: 'ms', parts: PARTS, medians: out }));

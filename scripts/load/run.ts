@@ -76,7 +76,10 @@ for (const s of scenarios(draftContent).filter((x) => only.length === 0 || only.
   rows.push(r);
   const goal = r.goalMs ? (r.p95 <= r.goalMs ? `  (p95 goal ${r.goalMs} ms: ok)` : `  (p95 goal ${r.goalMs} ms: MISSED)`) : '';
   console.log(
-    `${r.route.padEnd(34)} ${String(r.rps).padStart(8)} req/s  p50 ${r.p50.toFixed(1).padStart(7)} ms  p95 ${r.p95.toFixed(1).padStart(7)} ms  p99 ${r.p99.toFixed(1).padStart(7)} ms  errors ${r.errors}${goal}${r.errors ? `  statuses ${JSON.stringify(r.statuses)}` : ''}`
+    `${r.route.padEnd(34)} ${String(r.rps).padStart(8)} req/s  p50 ` +
+      `${r.p50.toFixed(1).padStart(7)} ms  p95 ${r.p95.toFixed(1).padStart(7)} ms  p99 ` +
+      `${r.p99.toFixed(1).padStart(7)} ms  errors ` +
+      `${r.errors}${goal}${r.errors ? `  statuses ${JSON.stringify(r.statuses)}` : ''}`
   );
 }
 console.log(JSON.stringify({ load: { connections, seconds, routes: rows } }));

@@ -187,8 +187,11 @@ test('dragging a share slider re-evaluates every frame; frame times are recorded
   const median = pick(0.5);
   console.log(
     `designer live loop while dragging RD-625: ${probe.inputs.length} slider updates in ${dragMs} ms; ` +
-      `frame time over ${worked.length} frames with an update: median ${median.toFixed(1)} ms, p95 ${pick(0.95).toFixed(1)} ms, max ${sorted[sorted.length - 1].toFixed(1)} ms ` +
-      `(${(1000 / median).toFixed(0)} fps); evaluation (superposition + full core) median ${evals[Math.floor(evals.length / 2)]?.toFixed(2)} ms`
+      `frame time over ${worked.length} frames with an update: median ` +
+      `${median.toFixed(1)} ms, p95 ${pick(0.95).toFixed(1)} ms, max ` +
+      `${sorted[sorted.length - 1].toFixed(1)} ms ` +
+      `(${(1000 / median).toFixed(0)} fps); evaluation (superposition + full core) ` +
+      `median ${evals[Math.floor(evals.length / 2)]?.toFixed(2)} ms`
   );
   expect(probe.inputs.length).toBeGreaterThan(40);
   expect(worked.length).toBeGreaterThan(20);

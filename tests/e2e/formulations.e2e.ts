@@ -33,7 +33,10 @@ test.beforeAll(async () => {
 type Session = Awaited<ReturnType<APIRequestContext['storageState']>>;
 const sessions = new Map<string, Session>();
 
-/** A browser page signed in as this person (one session per person from the sign-in endpoint; the form itself is covered by sign-in.e2e.ts). */
+/**
+ * A browser page signed in as this person (one session per person from the sign-in endpoint; the
+ * form itself is covered by sign-in.e2e.ts).
+ */
 async function as(browser: Browser, email: string): Promise<Page> {
   if (!sessions.has(email)) {
     const api = await signedInContext(email);

@@ -77,7 +77,7 @@ function cutUpload(
 async function storedState() {
   const knex = testDb();
   try {
-    const count = async <T extends {}>(q: Knex.QueryBuilder<T>) =>
+    const count = async <T extends object>(q: Knex.QueryBuilder<T>) =>
       Number(((await q.count({ n: '*' }).first()) as { n: number | string }).n);
     return {
       files: await count(knex('stored_files').where({ entity_type: 'material', entity_id: String(materialId) })),
@@ -155,7 +155,8 @@ test('an upload cut off mid-body stores nothing, blocks no edit, and the app kee
       const edit = await api.put(`/api/v1/phosphors/${materialId}`, { data: { version, notes: `edited while an upload hung (${label})` } });
       expect(edit.status(), await edit.text()).toBe(200);
       console.log(
-        `interrupted upload (${label}, ${sendBytes} of ${upload.body.length} bytes sent): an edit of the same material answered in ${Date.now() - t0} ms`
+        `interrupted upload (${label}, ${sendBytes} of ${upload.body.length} bytes ` +
+          `sent): an edit of the same material answered in ${Date.now() - t0} ms`
       );
       version += 1;
     });

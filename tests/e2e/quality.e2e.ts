@@ -1,5 +1,5 @@
 import { test, expect } from '@playwright/test';
-import { DEMO, DEMO_PASSWORD, signInThroughForm, signedInContext, testDb } from './support/accounts';
+import { DEMO, DEMO_PASSWORD, signInThroughForm, testDb } from './support/accounts';
 import { completedBatch } from './support/batches';
 
 test('quality uploads a multi-part file, sees the plot and releases the batch', async ({ page }) => {

@@ -23,7 +23,8 @@ let target: Knex;
 
 async function tableChecksums(k: Knex): Promise<Record<string, string>> {
   const [tables] = await k.raw(
-    'SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE() AND table_type = "BASE TABLE" ORDER BY table_name'
+    'SELECT table_name AS t FROM information_schema.tables WHERE table_schema = ' +
+      'DATABASE() AND table_type = "BASE TABLE" ORDER BY table_name'
   );
   const out: Record<string, string> = {};
   for (const { t } of tables as { t: string }[]) {

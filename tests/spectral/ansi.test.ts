@@ -14,7 +14,8 @@ import {
 import { ANSI_2700K_3STEP } from '../../src/lib/spectral/data/chromaticity-ellipses';
 
 // Published quadrangles: centre and corner points, CIE 1931 x,y. 2700–6500 K from a public
-// transcription of ANSI C78.377-2015 Table 1 [S]; 2200/2500 K were computed from the 2017 edition's flexible-CCT rule (not printed values; from memory).
+// transcription of ANSI C78.377-2015 Table 1 [S]; 2200/2500 K were computed from the 2017
+// edition's flexible-CCT rule (not printed values; from memory).
 type P = [number, number];
 const published: { nominal: number; centre: P; corners: [P, P, P, P]; source: string }[] = [
   {

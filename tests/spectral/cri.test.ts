@@ -17,7 +17,8 @@ describe('CIE 13.3-1995 §5.2 reference illuminant and definitions', () => {
       expected: { reference: 'daylight', ra: 100 },
       tol: 0.05,
       source:
-        'CIE 13.3 §5.2: daylight from 5000 K; Ra = 100 by definition (tol: the CCT of D at nominal T differs by a few K, so the reference is daylight at that CCT)'
+        'CIE 13.3 §5.2: daylight from 5000 K; Ra = 100 by definition (tol: the CCT of D ' +
+        'at nominal T differs by a few K, so the reference is daylight at that CCT)'
     },
     {
       name: 'Planckian 2700 K',

@@ -1,6 +1,7 @@
 /**
- * Who may use which route: the one table (assembled from one file per feature in ./routes/) the guard in hooks.server.ts enforces (deny by default:
- * a route that is missing here answers 403 for everyone). Keys are SvelteKit route ids.
+ * Who may use which route: the one table (assembled from one file per feature in ./routes/) the
+ * guard in hooks.server.ts enforces (deny by default: a route that is missing here answers 403 for
+ * everyone). Keys are SvelteKit route ids.
  * `sample` is a concrete path for the route-by-role tests; `methods` lists the roles per HTTP
  * method ('public' = no sign-in, 'signedIn' = any active user). Page form actions are POSTs.
  */

@@ -13,7 +13,8 @@ export function colourMapSummary(
 ): string {
   if (!e) return 'No blend yet.';
   const parts = [
-    `Blend at x ${e.x.toFixed(4)}, y ${e.y.toFixed(4)} (u′ ${e.uPrime.toFixed(4)}, v′ ${e.vPrime.toFixed(4)}), ${Math.round(e.cct)} K, Duv ${signed(e.duv)}.`
+    `Blend at x ${e.x.toFixed(4)}, y ${e.y.toFixed(4)} (u′ ${e.uPrime.toFixed(4)}, ` +
+      `v′ ${e.vPrime.toFixed(4)}), ${Math.round(e.cct)} K, Duv ${signed(e.duv)}.`
   ];
   if (target && standing) {
     parts.push(

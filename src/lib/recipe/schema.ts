@@ -21,7 +21,10 @@ export const materialRefSchema = z.object({
 export const revisionPhosphorSchema = materialRefSchema.extend({
   /** Radiant-power fraction of this phosphor in the output (optical superposition model). */
   opticalFraction: z.number().min(0).max(1),
-  /** wt % of this phosphor in the finished slurry (phosphors + silicone A + B + additives), from the loading model; null when not modelled. */
+  /**
+   * wt % of this phosphor in the finished slurry (phosphors + silicone A + B + additives), from the
+   * loading model; null when not modelled.
+   */
   wtPct: z.number().min(0).max(100).nullable()
 });
 

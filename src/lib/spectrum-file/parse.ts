@@ -93,7 +93,10 @@ export function parseSpectrumFile(text: string, options: ParseOptions = {}): Spe
     return fail([
       {
         line: r.line,
-        message: `Line ${r.line}: "${shownField(r.cells[0])}" is not a number; at most ${MAX_HEADER_ROWS} header lines may precede the data (mark other lines as comments with #).`
+        message:
+          `Line ${r.line}: "${shownField(r.cells[0])}" is not a number; at most ` +
+          `${MAX_HEADER_ROWS} header lines may precede the data (mark other lines as ` +
+          `comments with #).`
       }
     ]);
   }
@@ -119,7 +122,9 @@ export function parseSpectrumFile(text: string, options: ParseOptions = {}): Spe
   const rows = checked.data;
   const warnings: string[] = [];
   warnings.push(
-    `Read as ${delimiter === 'whitespace' ? 'space' : delimiter}-separated columns with decimal ${decimal === 'comma' ? 'commas' : 'points'}${header ? `, header on line ${header.line}` : ', no header'}.`
+    `Read as ${delimiter === 'whitespace' ? 'space' : delimiter}-separated columns ` +
+      `with decimal ` +
+      `${decimal === 'comma' ? 'commas' : 'points'}${header ? `, header on line ${header.line}` : ', no header'}.`
   );
   if (comments) warnings.push(`${comments} comment line${comments === 1 ? '' : 's'} skipped.`);
   const columns = names.slice(1).map((name, k) => {

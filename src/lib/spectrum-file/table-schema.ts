@@ -38,7 +38,9 @@ export function rowsSchema(decimal: SpectrumFileDialect['decimal'], columnNames:
         if (cells.length > width) {
           ctx.addIssue({
             code: 'custom',
-            message: `has ${cells.length} values; ${width} are expected (${columnNames.join(', ')})${width === 2 ? ' — this upload takes two columns, wavelength and intensity' : ''}`
+            message:
+              `has ${cells.length} values; ${width} are expected ` +
+              `(${columnNames.join(', ')})${width === 2 ? ' — this upload takes two columns, wavelength and intensity' : ''}`
           });
           return z.NEVER;
         }
@@ -107,7 +109,9 @@ export function spectrumSchema(columnNames: string[], limits: SpectrumLimits) {
           if (r.values[c] < -NEGATIVE_NOISE_FRACTION * max) {
             at(
               i,
-              `intensity ${r.values[c]} in column ${c + 1} (${columnNames[c]}) is negative beyond noise (more than ${NEGATIVE_NOISE_FRACTION * 100} % of the maximum ${max})`
+              `intensity ${r.values[c]} in column ${c + 1} (${columnNames[c]}) is negative ` +
+                `beyond noise (more than ${NEGATIVE_NOISE_FRACTION * 100} % of the maximum ` +
+                `${max})`
             );
           }
         });

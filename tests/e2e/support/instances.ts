@@ -44,7 +44,7 @@ export async function startApp(port: number, env: Record<string, string> = {}): 
     await waitFor(`${url}/api/health`);
   } catch (e) {
     child.kill('SIGTERM');
-    throw new Error(`${(e as Error).message}\n${stderr}`);
+    throw new Error(`${(e as Error).message}\n${stderr}`, { cause: e });
   }
   return {
     url,

@@ -6,7 +6,7 @@ import {
   refusal,
   type RevisionCommand
 } from '../../../src/lib/formulations/workflow-rules';
-import { REVISION_STATES, type RevisionState } from '../../../src/lib/formulations/workflow-rules';
+import { REVISION_STATES } from '../../../src/lib/formulations/workflow-rules';
 import type { Role } from '../../../src/lib/roles';
 import { ALLOWED, type Person } from './permission-table';
 

@@ -94,7 +94,9 @@ describe('correction of a synthetic batch with a known constant colour bias (opt
     // The note says what was applied and which colour point to expect (here: the target itself, 0 steps away).
     expect(next.notes).toBe(
       `first build\n\nCorrection from batch KH-B-0001 Full correction applied; expect x ${target.x.toFixed(4)}, ` +
-        `y ${target.y.toFixed(4)} (${Math.round(target.cct)} K, Duv ${target.duv < 0 ? '−' : '+'}${Math.abs(target.duv).toFixed(4)}), 0.0 steps from target.`
+        `y ${target.y.toFixed(4)} (${Math.round(target.cct)} K, Duv ` +
+        `${target.duv < 0 ? '−' : '+'}${Math.abs(target.duv).toFixed(4)}), 0.0 steps ` +
+        `from target.`
     );
     expect(next.phosphors.every((p) => p.wtPct === null)).toBe(true);
   });

@@ -73,7 +73,9 @@ describe('measurement reader fuzz: parse, then measure every part', () => {
       { numRuns: RUNS }
     );
     console.log(
-      `measurement reader fuzz: ${RUNS} files, ${tally.refusedByParser} refused by the parser, ${tally.refusedByCore} by the core, ${tally.measured} measured (${tally.parts} parts), ${Math.round(performance.now() - t0)} ms`
+      `measurement reader fuzz: ${RUNS} files, ${tally.refusedByParser} refused by the ` +
+        `parser, ${tally.refusedByCore} by the core, ${tally.measured} measured ` +
+        `(${tally.parts} parts), ${Math.round(performance.now() - t0)} ms`
     );
     expect(tally.measured).toBeGreaterThan(0);
   });

@@ -5,8 +5,9 @@
  * is always its typed result — and every error names a line the file has (or none, for a whole-file
  * problem); a file it accepts holds finite, strictly increasing wavelengths in 300–900 nm and finite,
  * non-negative intensities with a positive maximum, within the point limits; a file with bad lines
- * is refused naming only lines at fault (a quote left open must not shift the lines named after it); a valid file in any documented dialect is accepted and reads
- * back the printed numbers exactly. Bytes are decoded as the server decodes uploads.
+ * is refused naming only lines at fault (a quote left open must not shift the lines named after
+ * it); a valid file in any documented dialect is accepted and reads back the printed numbers
+ * exactly. Bytes are decoded as the server decodes uploads.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
@@ -89,7 +90,9 @@ describe.each(MODES)('spectrum-file parser fuzz: $name', ({ name, options, parts
       { numRuns: RUNS }
     );
     console.log(
-      `parser fuzz, ${name}: ${RUNS} malformed files, ${tally.refused} refused (${tally.namingLine} naming a line), ${tally.accepted} accepted, ${Math.round(performance.now() - t0)} ms`
+      `parser fuzz, ${name}: ${RUNS} malformed files, ${tally.refused} refused ` +
+        `(${tally.namingLine} naming a line), ${tally.accepted} accepted, ` +
+        `${Math.round(performance.now() - t0)} ms`
     );
     expect(tally.refused).toBeGreaterThan(RUNS * 0.8);
   });

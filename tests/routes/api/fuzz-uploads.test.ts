@@ -123,7 +123,11 @@ const ROUTES: Route[] = [
 
 function describeUpload(u: Upload, a: Answer): string {
   const file = u.file.kind === 'badLines' ? `badLines ${JSON.stringify(u.file.lines)}` : u.file.kind;
-  return `${file} file, ${u.envelope.kind} envelope, query ${u.query ?? 'clean'}, param ${u.param ?? 'own'}${u.otherRole ? ', other role' : ''}: ${a.status} ${JSON.stringify(a.body).slice(0, 1500)}`;
+  return (
+    `${file} file, ${u.envelope.kind} envelope, query ${u.query ?? 'clean'}, param ` +
+    `${u.param ?? 'own'}${u.otherRole ? ', other role' : ''}: ${a.status} ` +
+    `${JSON.stringify(a.body).slice(0, 1500)}`
+  );
 }
 
 /** A refusal: a JSON error; lines named exist, the first is quoted; known bad lines are the ones named. */

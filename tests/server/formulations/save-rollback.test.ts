@@ -6,7 +6,7 @@
  * code stays free.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { closeDb, db } from '../../../src/lib/server/db/index';
+import { closeDb } from '../../../src/lib/server/db/index';
 import { createFormulationWithDraft, createRevision } from '../../../src/lib/server/formulations/save';
 import { cast, uniqueCode, warmWhite, type Cast } from './support';
 import { INJECTED, dropLeftoverFaults, failureOf, snapshot, withFailingWrite, type Fault } from '../../support/faults';

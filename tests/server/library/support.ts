@@ -40,7 +40,7 @@ export async function removeTestMaterials(): Promise<void> {
 }
 
 export async function counts(materialId: number) {
-  const one = async <T extends {}>(q: Knex.QueryBuilder<T>) => Number(((await q.count({ n: '*' }).first()) as { n: number }).n);
+  const one = async <T extends object>(q: Knex.QueryBuilder<T>) => Number(((await q.count({ n: '*' }).first()) as { n: number }).n);
   return {
     spectra: await one(db()('material_spectra').where({ material_id: materialId })),
     files: await one(db()('stored_files').where({ entity_type: 'material', entity_id: String(materialId) })),

@@ -112,7 +112,10 @@ describe('batch record PDF', () => {
     expect(rows.find((r) => r.includes('RD-625'))).toMatch(/0\.250\s+0\.249 – 0\.251\s+0\.2530\s+ABOVE/);
     expect(flat).toContain('accepted by quality');
     expect(flat).toMatch(
-      /Line 3 RD-625: 0\.2530 g is above range 0\.249 – 0\.251 g \(target 0\.250 g\)\. Accepted by Ines Halloran on 2026-12-02 09:50 UTC\. Reason: Within the colour window/
+      new RegExp(
+        /Line 3 RD-625: 0\.2530 g is above range 0\.249 – 0\.251 g \(target 0\.250 g\)\. /.source +
+          /Accepted by Ines Halloran on 2026-12-02 09:50 UTC\. Reason: Within the colour window/.source
+      )
     );
     expect(flat).toContain('2026-12-02 09:40 UTC'); // mixed
     expect(flat).toContain('2026-12-02 11:40 UTC'); // use before

@@ -126,7 +126,8 @@ export function computeWeighout(input: WeighoutInput): WeighoutResult {
   } else if (basis === 'wtPctOfSlurry' && addedTotal.gte(Rat.HUNDRED)) {
     errors.push({
       path: 'additives',
-      message: `phosphors + additives come to ${addedTotal.toDecimal(4)} wt % of the slurry, leaving no silicone: the sum must be below 100 %`
+      message:
+        `phosphors + additives come to ${addedTotal.toDecimal(4)} wt % of the slurry, ` + `leaving no silicone: the sum must be below 100 %`
     });
   }
   if (errors.length) return { ok: false, errors };
@@ -194,7 +195,9 @@ export function computeWeighout(input: WeighoutInput): WeighoutResult {
     if (tol.lt(res)) {
       errors.push({
         path: `${d.path}.tolerance`,
-        message: `${d.code}: tolerance ±${tol.toDecimal(places + 2)} g is finer than the balance resolution ${res.toDecimal()} g; use a finer balance or a wider tolerance`
+        message:
+          `${d.code}: tolerance ±${tol.toDecimal(places + 2)} g is finer than the balance ` +
+          `resolution ${res.toDecimal()} g; use a finer balance or a wider tolerance`
       });
     }
     if (steps[i] === 0n || target.lt(minWeight)) {

@@ -23,7 +23,10 @@ export function batchSteps(sizing: Sizing, resolution: Rat, places: number): Siz
         note: null,
         error: {
           path: 'sizing.batchMassG',
-          message: `batch size ${sizing.batchMassG} g is not a whole number of balance steps (${resolution.toDecimal()} g); enter it to ${places} decimal place${places === 1 ? '' : 's'}`
+          message:
+            `batch size ${sizing.batchMassG} g is not a whole number of balance steps ` +
+            `(${resolution.toDecimal()} g); enter it to ${places} decimal ` +
+            `place${places === 1 ? '' : 's'}`
         }
       };
     }
@@ -35,7 +38,10 @@ export function batchSteps(sizing: Sizing, resolution: Rat, places: number): Siz
   const massG = new Rat(steps).mul(resolution).toFixed(places);
   return {
     steps,
-    note: `${sizing.partCount} parts × ${sizing.dispenseMassG} g ÷ (1 − ${sizing.yieldLossPct} % yield loss) = ${needed.toDecimal(places + 3)} g, rounded up to the balance step: ${massG} g.`,
+    note:
+      `${sizing.partCount} parts × ${sizing.dispenseMassG} g ÷ (1 − ` +
+      `${sizing.yieldLossPct} % yield loss) = ${needed.toDecimal(places + 3)} g, ` +
+      `rounded up to the balance step: ${massG} g.`,
     error: null
   };
 }

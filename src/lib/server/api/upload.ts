@@ -29,7 +29,8 @@ async function formFile(request: Request, kind: UploadKind): Promise<UploadedFil
     form = await request.formData();
   } catch {
     throw invalid(
-      `The multipart body could not be read (no boundary, truncated or not form data). Send the ${kind.what} file in the multipart field "file". Nothing was saved.`
+      `The multipart body could not be read (no boundary, truncated or not form data). ` +
+        `Send the ${kind.what} file in the multipart field "file". Nothing was saved.`
     );
   }
   const file = form.get('file');

@@ -23,7 +23,8 @@ export async function lockLine(trx: Knex.Transaction, batchId: number, seq: numb
 export function expectVersion(row: { version: number }, version: number, what: string): void {
   if (row.version !== version) {
     throw conflict(
-      `${what} was changed by someone else since you loaded it (version ${version}, now ${row.version}). Reload and check before trying again.`
+      `${what} was changed by someone else since you loaded it (version ${version}, ` +
+        `now ${row.version}). Reload and check before trying again.`
     );
   }
 }

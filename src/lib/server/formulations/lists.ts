@@ -86,7 +86,8 @@ export interface FormulationListRow {
 export async function listFormulations(q: FormulationListQuery): Promise<Page<FormulationListRow>> {
   const count = (state: RevisionState) =>
     db().raw(
-      `(SELECT COUNT(*) FROM formulation_revisions x WHERE x.formulation_id = f.id AND x.state = '${state}') as ${state === 'submitted' ? 'in_review' : 'drafts'}`
+      `(SELECT COUNT(*) FROM formulation_revisions x WHERE x.formulation_id = f.id AND ` +
+        `x.state = '${state}') as ${state === 'submitted' ? 'in_review' : 'drafts'}`
     );
   const base = db()('formulations as f').leftJoin('formulation_revisions as cur', (j) =>
     j.on('cur.formulation_id', 'f.id').andOnVal('cur.state', 'approved')

@@ -60,7 +60,8 @@ async function precheck(command: RevisionCommand, caller: Caller, revisionId: nu
 function checkIntegrity(row: Locked): void {
   if (storedContentSha256(row.content_json) !== row.content_sha256) {
     throw new ConflictError(
-      `Revision ${row.revision_no}: its content no longer matches its recorded SHA-256; it cannot be submitted or signed. Tell an administrator.`
+      `Revision ${row.revision_no}: its content no longer matches its recorded ` +
+        `SHA-256; it cannot be submitted or signed. Tell an administrator.`
     );
   }
 }

@@ -5,5 +5,7 @@ export const notFound = (id: number | string) => notFoundError(`Material ${id} w
 
 export const staleVersion = (current: number, sent: number) =>
   conflict(
-    `This material was changed by someone else since you opened it (you edited version ${sent}, it is now at version ${current}). Nothing was saved: reload it, then make your change again.`
+    `This material was changed by someone else since you opened it (you edited ` +
+      `version ${sent}, it is now at version ${current}). Nothing was saved: reload ` +
+      `it, then make your change again.`
   );

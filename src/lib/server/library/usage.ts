@@ -45,5 +45,9 @@ export function deletionRefusal(code: string, uses: RevisionUse[]): string | nul
   const what = approved.length
     ? `approved formulation${approved.length > 1 ? 's' : ''}`
     : `formulation revision${uses.length > 1 ? 's' : ''}`;
-  return `${code} cannot be deleted: it is used by ${what} ${listed}${uses.length > 5 ? ' and others' : ''}. Archive it instead — archived materials leave the pick lists but keep existing records intact.`;
+  return (
+    `${code} cannot be deleted: it is used by ${what} ` +
+    `${listed}${uses.length > 5 ? ' and others' : ''}. Archive it instead — archived ` +
+    `materials leave the pick lists but keep existing records intact.`
+  );
 }

@@ -17,7 +17,9 @@ export async function setAcceptance(caller: Caller, batchId: number, input: Acce
     const currentVersion = current?.version ?? 0;
     if (input.version !== currentVersion) {
       throw conflict(
-        `The acceptance of batch ${batch.batch_number} was changed by someone else since you loaded it (version ${input.version}, now ${currentVersion}). Reload and check before trying again.`
+        `The acceptance of batch ${batch.batch_number} was changed by someone else since ` +
+          `you loaded it (version ${input.version}, now ${currentVersion}). Reload and ` +
+          `check before trying again.`
       );
     }
     const row = {

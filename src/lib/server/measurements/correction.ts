@@ -49,7 +49,8 @@ export async function makeCorrectionDraft(
   const components = await loadBlendComponents(ids.pump, ids.phosphors);
   const offset = judged.summary.meanOffset!;
   const note =
-    `Correction from batch ${b.batchNumber} (${judged.summary.parts} parts): measured mean x ${mean.x.toFixed(4)}, y ${mean.y.toFixed(4)}, ` +
+    `Correction from batch ${b.batchNumber} (${judged.summary.parts} parts): ` +
+    `measured mean x ${mean.x.toFixed(4)}, y ${mean.y.toFixed(4)}, ` +
     `${offset.steps.toFixed(1)} steps from target.`;
   let corrected;
   try {

@@ -156,7 +156,9 @@ export async function uploadMeasurements(
     if (repeated.length) {
       const list = repeated.slice(0, 10).join(', ') + (repeated.length > 10 ? ` and ${repeated.length - 10} more` : '');
       throw conflict(
-        `${file.name} was not saved: ${repeated.length === 1 ? 'part' : 'parts'} ${list} already measured for batch ${locked.batch_number}. Withdraw the earlier upload first to measure again.`
+        `${file.name} was not saved: ${repeated.length === 1 ? 'part' : 'parts'} ${list} ` +
+          `already measured for batch ${locked.batch_number}. Withdraw the earlier upload ` +
+          `first to measure again.`
       );
     }
     const { uploadId, storedFileId } = await insertMeasurements(trx, batchId, file, m, caller.id);

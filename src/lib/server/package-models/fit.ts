@@ -74,7 +74,8 @@ export async function runFit(input: PackageFitInput): Promise<PackageModelFit> {
   );
   if (!fit.converged) {
     throw unprocessable(
-      `The fit did not converge (${fit.reason} after ${fit.iterations} iterations). Nothing was saved: check the builds, or fit fewer parameters.`
+      `The fit did not converge (${fit.reason} after ${fit.iterations} iterations). ` +
+        `Nothing was saved: check the builds, or fit fewer parameters.`
     );
   }
   return fit;

@@ -90,7 +90,8 @@ export function processNotes(d: BatchDoc): string[] {
       ? `plant slurry-age limit ${d.silicone.plantLimitMin} min (pot life ${d.silicone.potLifeMin} min)`
       : `pot life ${d.silicone.potLifeMin} min`;
   return [
-    `Weighing order: part A, then the phosphors and additives into part A, part B last. Tare the container before every line; record the balance reading as shown.`,
+    `Weighing order: part A, then the phosphors and additives into part A, part B ` +
+      `last. Tare the container before every line; record the balance reading as shown.`,
     `Mixing: the slurry's clock starts when part B is mixed in; note the time. Use within ${limit} of that time.`,
     `Degassing: ${d.silicone.degasNotes?.trim() || 'as your plant procedure specifies.'}`,
     `Cure: ${d.silicone.cure.trim() || 'as your plant procedure specifies.'}`,

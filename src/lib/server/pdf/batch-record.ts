@@ -65,7 +65,9 @@ export async function buildBatchRecord(d: BatchDoc, opts: BatchRecordOptions = {
       ? `Accepted by ${a.override.by} on ${stamp(d, a.override.at)}. Reason: ${a.override.reason}`
       : 'No quality decision recorded.';
     sheet.paragraph(
-      `Line ${l.seq} ${l.code}: ${a.actualG} g is ${STATUS_TEXT[a.status!].toLowerCase()} ${l.lowG} – ${l.highG} g (target ${l.targetG} g). ${decision}`,
+      `Line ${l.seq} ${l.code}: ${a.actualG} g is ` +
+        `${STATUS_TEXT[a.status!].toLowerCase()} ${l.lowG} – ${l.highG} g (target ` +
+        `${l.targetG} g). ${decision}`,
       { size: 9 }
     );
   }

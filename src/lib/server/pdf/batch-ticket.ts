@@ -66,7 +66,8 @@ export async function buildBatchTicket(d: BatchDoc, size: PaperSize = 'A4'): Pro
     28
   );
   sheet.paragraph(
-    `Total of the targets: ${d.size.batchMassG} g. A reading outside its allowed range must not be corrected silently: record it and ask quality for a decision.`,
+    `Total of the targets: ${d.size.batchMassG} g. A reading outside its allowed ` +
+      `range must not be corrected silently: record it and ask quality for a decision.`,
     { size: 8, color: MUTED }
   );
 

@@ -39,5 +39,6 @@ export function pdfSafe(text: string): string {
   let out = text;
   for (const [re, to] of REPLACEMENTS) out = out.replace(re, to);
   // Anything else outside the subset (U+0000–00FF, general punctuation, −, €, ™) becomes '?'.
+  // eslint-disable-next-line no-control-regex -- U+0000 is the deliberate lower bound of the latin subset range
   return out.replace(/[^\u0000-\u00ff\u0131\u0152\u0153\u2000-\u206f\u20ac\u2122\u2212\u2215]/g, '?');
 }

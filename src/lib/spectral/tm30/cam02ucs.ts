@@ -10,7 +10,6 @@
  */
 const L_A = 100;
 const Y_B = 20;
-const F = 1.0;
 const C_SURROUND = 0.69;
 const N_C = 1.0;
 

@@ -20,7 +20,8 @@ export function batchDispositionMessage(n: DispositionNotice): Message {
   const body = frame(
     `Batch ${n.batchNumber} ${verb}`,
     [
-      `${n.signerName} ${verb} batch ${n.batchNumber} (${n.formulation}) on ${n.signedAtUtc.toISOString().slice(0, 16).replace('T', ' ')} UTC.`,
+      `${n.signerName} ${verb} batch ${n.batchNumber} (${n.formulation}) on ` +
+        `${n.signedAtUtc.toISOString().slice(0, 16).replace('T', ' ')} UTC.`,
       `Meaning of the signature: ${n.meaning}.`,
       `Comment: ${n.comment}`,
       `Measured parts: ${n.yieldText}.`

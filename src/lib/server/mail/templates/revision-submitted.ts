@@ -9,7 +9,8 @@ export function revisionSubmittedMessage(to: string[], n: RevisionNotice, submit
     [
       `${submittedBy} submitted revision ${n.revisionNo} of ${n.code} "${n.name}" for review.`,
       `Predicted: ${n.summary}.`,
-      'Review the content and the prediction, then approve it with your e-signature or return it with a reason. Nobody signs off their own revision.'
+      'Review the content and the prediction, then approve it with your e-signature or ' +
+        'return it with a reason. Nobody signs off their own revision.'
     ],
     { href: n.link, label: 'Open the revision' }
   );

@@ -8,7 +8,9 @@ export function revisionSupersededMessage(to: string[], n: RevisionNotice, oldRe
     `${n.code}: build from revision ${n.revisionNo} from now on`,
     [
       `Revision ${n.revisionNo} of ${n.code} "${n.name}" was approved and supersedes revision ${oldRevisionNo}.`,
-      `New batches must be weighed out from revision ${n.revisionNo}. Batches already planned from revision ${oldRevisionNo} should be checked with quality before weighing.`,
+      `New batches must be weighed out from revision ${n.revisionNo}. Batches already ` +
+        `planned from revision ${oldRevisionNo} should be checked with quality before ` +
+        `weighing.`,
       `Predicted: ${n.summary}.`
     ],
     { href: n.link, label: 'Open the current revision' }
