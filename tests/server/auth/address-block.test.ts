@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { db, closeDb } from '../../../src/lib/server/db/index';
 import { checkSignIn } from '../../../src/lib/server/auth/sign-in';
-import { isAddressBlocked, isThrottled, MAX_ACCOUNTS_PER_ADDRESS, MAX_FAILURES } from '../../../src/lib/server/auth/throttle';
+import { isAddressBlocked, isLoopback, isThrottled, MAX_ACCOUNTS_PER_ADDRESS, MAX_FAILURES } from '../../../src/lib/server/auth/throttle';
 
 // Requirement of the product: one client address cannot lock many accounts. Failures from one address against
 // MAX_ACCOUNTS_PER_ADDRESS distinct accounts within 15 minutes block the address; the accounts behind stay open.
@@ -32,5 +32,15 @@ describe('sign-in: per-address blocking', () => {
 
   it('does not block another address', async () => {
     expect(await isAddressBlocked('198.51.100.7')).toBe(false);
+  });
+});
+
+// RFC 1122 §3.2.1.3 (127.0.0.0/8) and RFC 4291 §2.5.3 (::1): a local proxy's address is never blocked.
+describe('sign-in: loopback addresses are not blocked', () => {
+  it.each(['127.0.0.1', '127.8.9.10', '::1', '::ffff:127.0.0.1'])('%s', (address) => {
+    expect(isLoopback(address)).toBe(true);
+  });
+  it.each(['192.0.2.1', '::ffff:192.0.2.1', '2001:db8::1'])('%s is counted', (address) => {
+    expect(isLoopback(address)).toBe(false);
   });
 });

@@ -4,7 +4,9 @@
  * signing for that account until the oldest of those failures is 15 minutes old. Failures before
  * the latest success do not count.
  * Per client address: failures from one address against 3 or more distinct accounts within the
- * window block that address, so that one client cannot lock account after account.
+ * window block that address, so that one client cannot lock account after account. Loopback
+ * addresses are not blocked: behind a local reverse proxy without ADDRESS_HEADER every client would
+ * share that one address, and blocking it would shut everyone out.
  */
 import { db } from '../db/index';
 
@@ -35,13 +37,19 @@ export async function isThrottled(email: string): Promise<boolean> {
 
 /** True when failures from this address reached MAX_ACCOUNTS_PER_ADDRESS distinct accounts in the window. */
 export async function isAddressBlocked(ip: string | null): Promise<boolean> {
-  if (!ip) return false;
+  if (!ip || isLoopback(ip)) return false;
   const row = await db()('sign_in_attempts')
     .where({ ip, succeeded: 0 })
     .andWhere('created_at', '>', windowStart())
     .countDistinct<{ n: number }[]>('email as n')
     .first();
   return Number(row?.n ?? 0) >= MAX_ACCOUNTS_PER_ADDRESS;
+}
+
+/** 127.0.0.0/8 and ::1, also IPv4-mapped (RFC 1122 §3.2.1.3, RFC 4291 §2.5.3). */
+export function isLoopback(ip: string): boolean {
+  const v4 = ip.startsWith('::ffff:') ? ip.slice(7) : ip;
+  return v4.startsWith('127.') || ip === '::1';
 }
 
 export async function recordAttempt(email: string, succeeded: boolean, ip: string | null): Promise<void> {
