@@ -7,10 +7,7 @@ import { SvelteKitAuth, CredentialsSignin } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
 import { getRequestEvent } from '$app/server';
 import { z } from 'zod';
-import * as users from '$lib/server/accounts/users';
-import * as audit from '$lib/server/db/audit';
-import { verifyPassword, DUMMY_HASH } from '$lib/server/auth/passwords';
-import { isThrottled, recordAttempt } from '$lib/server/auth/throttle';
+import { checkSignIn } from '$lib/server/auth/sign-in';
 
 const credentialsSchema = z.object({
   email: z.string().trim().toLowerCase().max(254).pipe(z.email()),
@@ -53,21 +50,8 @@ export const { handle, signIn, signOut } = SvelteKitAuth({
         const parsed = credentialsSchema.safeParse(raw);
         if (!parsed.success) throw new GenericSignInError();
         const { email, password } = parsed.data;
-        const ip = clientIp();
-        if (await isThrottled(email)) {
-          await recordAttempt(email, false, ip);
-          await audit.record({ actorEmail: email, entityType: 'session', action: 'sign-in-throttled', ip });
-          throw new GenericSignInError();
-        }
-        const user = await users.findWithHashByEmail(email);
-        const ok = await verifyPassword(password, user?.passwordHash || DUMMY_HASH);
-        if (!user || !ok || !user.active) {
-          await recordAttempt(email, false, ip);
-          await audit.record({ actorId: user?.id ?? null, actorEmail: email, entityType: 'session', action: 'sign-in-failed', ip });
-          throw new GenericSignInError();
-        }
-        await recordAttempt(email, true, ip);
-        await audit.record({ actorId: user.id, actorEmail: user.email, entityType: 'session', action: 'sign-in', ip });
+        const user = await checkSignIn(email, password, clientIp());
+        if (!user) throw new GenericSignInError();
         return { id: String(user.id), email: user.email, name: user.name };
       }
     })

@@ -5,8 +5,7 @@
  */
 import { db } from '../db/index';
 import { record } from '../db/audit';
-import * as users from '../accounts/users';
-import { verifyPassword } from '../auth/passwords';
+import { checkSigningPassword } from '../auth/signing-password';
 import type { User } from '../accounts/users';
 import { checkActual, parseReadingG, type ActualCheck } from '../../batches/weighout/actual';
 import { slurryExpiry } from '../../batches/weighout/potlife';
@@ -100,8 +99,7 @@ export interface OverrideInput {
 
 export async function acceptDeviation(user: User, batchId: number, seq: number, input: OverrideInput): Promise<void> {
   if (!mayAcceptDeviation(user)) throw forbidden('Only quality can accept a reading outside its range.');
-  const withHash = await users.findWithHashByEmail(user.email);
-  if (!withHash || !(await verifyPassword(input.password, withHash.passwordHash))) {
+  if (!(await checkSigningPassword(user, input.password, { entityType: 'batch', entityId: batchId }))) {
     throw forbidden('The password is not correct: the decision was not signed and nothing was saved.', [
       { path: 'password', message: 'wrong password' }
     ]);

@@ -1,17 +1,14 @@
 /**
  * Re-authentication for an e-signature: the signer re-enters their password at the moment of
- * signing (model: 21 CFR 11.200(a)). A refusal is written to the audit trail.
+ * signing (model: 21 CFR 11.200(a)); wrong passwords are throttled (../auth/signing-password.ts). A refusal is written to the audit trail.
  */
-import { verifyPassword, DUMMY_HASH } from '../auth/passwords';
+import { checkSigningPassword } from '../auth/signing-password';
 import { record } from '../db/audit';
-import * as users from '../accounts/users';
 import { SignatureError } from './errors';
 import type { Caller } from './guard';
 
 export async function verifySignaturePassword(caller: Caller, revisionId: number, meaning: string, password: string): Promise<void> {
-  const account = await users.findWithHashByEmail(caller.email);
-  const ok = await verifyPassword(password, account?.passwordHash || DUMMY_HASH);
-  if (ok && account && account.id === caller.id && account.active) return;
+  if (await checkSigningPassword(caller, password, { entityType: 'formulation_revision', entityId: revisionId })) return;
   await record({
     actorId: caller.id,
     actorEmail: caller.email,

@@ -9,8 +9,7 @@
  */
 import { db } from '../db/index';
 import { record } from '../db/audit';
-import * as users from '../accounts/users';
-import { verifyPassword, DUMMY_HASH } from '../auth/passwords';
+import { checkSigningPassword } from '../auth/signing-password';
 import { putFile } from '../storage/objects';
 import { getBatch } from '../batches/read';
 import { toBatchDoc } from '../batches/documents';
@@ -43,9 +42,7 @@ export async function dispositionRefusal(caller: Caller, ctx: BatchQualityContex
 }
 
 async function verifySigner(caller: Caller, batchId: number, decision: string, password: string): Promise<void> {
-  const account = await users.findWithHashByEmail(caller.email);
-  const ok = await verifyPassword(password, account?.passwordHash || DUMMY_HASH);
-  if (ok && account && account.id === caller.id && account.active) return;
+  if (await checkSigningPassword(caller, password, { entityType: 'batch', entityId: batchId })) return;
   await record({
     actorId: caller.id,
     actorEmail: caller.email,
