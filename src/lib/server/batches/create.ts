@@ -1,5 +1,6 @@
 /** Plans a batch from an approved revision: validate → compute the weigh-out → save batch and lines (one transaction). */
 import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import { getRevision } from '../formulations/read';
 import type { User } from '../accounts/users';
@@ -10,7 +11,7 @@ import { describeTarget } from '../../batches/weighout/target';
 import type { WeighoutInput } from '../../batches/weighout/schema';
 import type { CreateBatchRequest } from '../../batches/schema';
 import { conflict, impossible, invalid, notFound } from './errors';
-import { nextBatchNumber } from './number';
+import { ensureBatchCounter, nextBatchNumber } from './number';
 import { lineRowsFor, planColumns } from './lines';
 
 export interface PreparedBatch {
@@ -53,9 +54,10 @@ export async function createBatch(user: User, req: CreateBatchRequest): Promise<
   const { input, plan, revision } = await prepareBatch(req);
   const target = describeTarget(revision.content.target, revision.content.tolerance);
   const s = revision.content.silicone;
+  await ensureBatchCounter(db());
   for (let attempt = 0; ; attempt++) {
     try {
-      return await db().transaction(async (trx) => {
+      return await writeTransaction(async (trx) => {
         const batchNumber = await nextBatchNumber(trx);
         const [id] = await trx('batches').insert({
           batch_number: batchNumber,

@@ -6,13 +6,29 @@ export function batchNumberPrefix(now: Date): string {
   return `BT-${p(now.getUTCFullYear() % 100)}${p(now.getUTCMonth() + 1)}${p(now.getUTCDate())}-`;
 }
 
+/**
+ * Creates the day's counter row from the batches already numbered under the prefix, once, outside
+ * the batch transaction (reading `batches` there would lock a range that concurrent inserts need).
+ */
+export async function ensureBatchCounter(k: Knex, now = new Date()): Promise<void> {
+  const prefix = batchNumberPrefix(now);
+  if (await k('batch_number_counters').where({ prefix }).first('prefix')) return;
+  await k.raw(
+    `INSERT IGNORE INTO batch_number_counters (prefix, last_no)
+     SELECT ?, COALESCE(MAX(CAST(SUBSTRING(batch_number, ?) AS UNSIGNED)), 0) FROM batches WHERE batch_number LIKE ?`,
+    [prefix, prefix.length + 1, `${prefix}%`]
+  );
+}
+
+/** The next number under today's prefix: one upsert on the counter row, whose lock is held until commit. */
 export async function nextBatchNumber(trx: Knex.Transaction, now = new Date()): Promise<string> {
   const prefix = batchNumberPrefix(now);
-  const last = await trx('batches')
-    .where('batch_number', 'like', `${prefix}%`)
-    .orderBy('batch_number', 'desc')
-    .forUpdate()
-    .first('batch_number');
-  const n = last ? Number(String(last.batch_number).slice(prefix.length)) + 1 : 1;
-  return `${prefix}${String(n).padStart(3, '0')}`;
+  // LAST_INSERT_ID(expr) hands the new value back on this connection on both the insert and the update path.
+  await trx.raw(
+    `INSERT INTO batch_number_counters (prefix, last_no) VALUES (?, LAST_INSERT_ID(1))
+     ON DUPLICATE KEY UPDATE last_no = LAST_INSERT_ID(last_no + 1)`,
+    [prefix]
+  );
+  const [rows] = (await trx.raw('SELECT LAST_INSERT_ID() AS n')) as [{ n: number | string }[]];
+  return `${prefix}${String(Number(rows[0].n)).padStart(3, '0')}`;
 }
