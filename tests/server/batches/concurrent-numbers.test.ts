@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb, db } from '../../../src/lib/server/db/index';
 import { createBatch } from '../../../src/lib/server/batches/create';
-import { batchNumberPrefix } from '../../../src/lib/server/batches/number';
+import { batchNumberPrefix, ensureBatchCounter, nextBatchNumber } from '../../../src/lib/server/batches/number';
 import { createBatchSchema } from '../../../src/lib/batches/schema';
 import { demoUser, makeFixture, request, type Fixture } from './support';
 import type { User } from '../../../src/lib/server/accounts/users';
@@ -37,4 +37,38 @@ describe('batch numbers under concurrent planning', () => {
     const saved = await db()('batches').where({ revision_id: fx.revisionId }).count({ n: '*' }).first();
     expect(Number(saved?.n)).toBe(N);
   }, 60_000);
+
+  it('continues the numbers of a day already numbered before its counter row existed', async () => {
+    // The demo data numbers BT-261201-001 directly (seeds/04_batches.ts), without a counter row.
+    const day = new Date('2026-12-01T09:00:00Z');
+    expect(await db()('batches').where({ batch_number: 'BT-261201-001' }).first('id')).toBeTruthy();
+    await ensureBatchCounter(day);
+    await ensureBatchCounter(day); // once only: a second call changes nothing
+    const trx = await db().transaction();
+    try {
+      expect(await nextBatchNumber(trx, day)).toBe('BT-261201-002');
+    } finally {
+      await trx.rollback();
+    }
+  });
+
+  it('starts a day without batches at 001', async () => {
+    const day = new Date('2099-03-04T12:00:00Z');
+    const trx = await db().transaction();
+    try {
+      expect(await nextBatchNumber(trx, day)).toBe('BT-990304-001');
+      expect(await nextBatchNumber(trx, day)).toBe('BT-990304-002');
+    } finally {
+      await trx.rollback();
+    }
+  });
+
+  it('moves a counter left behind the numbers in use past them instead of failing', async () => {
+    const req = createBatchSchema.parse({ ...request(fx.revisionId), notes: 'counter catch-up test' });
+    await createBatch(tech, req);
+    const prefix = batchNumberPrefix(new Date());
+    await db()('batch_number_counters').where({ prefix }).decrement('last_no', 3);
+    const results = await Promise.allSettled(Array.from({ length: 4 }, () => createBatch(tech, req)));
+    expect(results.filter((r) => r.status === 'rejected')).toEqual([]);
+  });
 });

@@ -1,5 +1,7 @@
 /** Batch numbers: BT-YYMMDD-NNN, counting up per day (UTC). Short enough for a Code 128 on a label. */
 import type { Knex } from 'knex';
+import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 
 export function batchNumberPrefix(now: Date): string {
   const p = (n: number) => String(n).padStart(2, '0');
@@ -7,16 +9,20 @@ export function batchNumberPrefix(now: Date): string {
 }
 
 /**
- * Creates the day's counter row from the batches already numbered under the prefix, once, outside
- * the batch transaction (reading `batches` there would lock a range that concurrent inserts need).
+ * Creates the day's counter row from the batches already numbered under the prefix, outside the batch
+ * transaction (reading `batches` there would lock a range that concurrent inserts need). `resync` also
+ * moves an existing counter up to the highest number in use (after a duplicate number was refused).
  */
-export async function ensureBatchCounter(k: Knex, now = new Date()): Promise<void> {
+export async function ensureBatchCounter(now = new Date(), opts: { resync?: boolean } = {}): Promise<void> {
   const prefix = batchNumberPrefix(now);
-  if (await k('batch_number_counters').where({ prefix }).first('prefix')) return;
-  await k.raw(
-    `INSERT IGNORE INTO batch_number_counters (prefix, last_no)
-     SELECT ?, COALESCE(MAX(CAST(SUBSTRING(batch_number, ?) AS UNSIGNED)), 0) FROM batches WHERE batch_number LIKE ?`,
-    [prefix, prefix.length + 1, `${prefix}%`]
+  if (!opts.resync && (await db()('batch_number_counters').where({ prefix }).first('prefix'))) return;
+  await writeTransaction((trx) =>
+    trx.raw(
+      `INSERT INTO batch_number_counters (prefix, last_no)
+       SELECT ?, COALESCE(MAX(CAST(SUBSTRING(batch_number, ?) AS UNSIGNED)), 0) FROM batches WHERE batch_number LIKE ?
+       ON DUPLICATE KEY UPDATE last_no = GREATEST(last_no, VALUES(last_no))`,
+      [prefix, prefix.length + 1, `${prefix}%`]
+    )
   );
 }
 
