@@ -61,7 +61,7 @@ export const scenarios = ({ draftContent, batchRevisionId }: { draftContent: unk
     path: '/api/v1/formulations',
     expect: 201,
     body: () => ({ code: `LD-${RUN}-${n}`, name: `Load-run draft ${n++}`, description: 'made by npm run load', content: draftContent })
-  }
+  },
   {
     // Every connection plans a batch of the same revision at once: each gets its own number, none a deadlock.
     name: 'create batch',
