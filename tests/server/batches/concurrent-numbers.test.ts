@@ -68,7 +68,7 @@ describe('batch numbers under concurrent planning', () => {
     await createBatch(tech, req);
     const prefix = batchNumberPrefix(new Date());
     await db()('batch_number_counters').where({ prefix }).decrement('last_no', 3);
-    const results = await Promise.allSettled(Array.from({ length: 4 }, () => createBatch(tech, req)));
+    const results = await Promise.allSettled(Array.from({ length: 30 }, () => createBatch(tech, req)));
     expect(results.filter((r) => r.status === 'rejected')).toEqual([]);
   });
 });

@@ -10,18 +10,22 @@ export function batchNumberPrefix(now: Date): string {
 
 /**
  * Creates the day's counter row from the batches already numbered under the prefix, outside the batch
- * transaction (reading `batches` there would lock a range that concurrent inserts need). `resync` also
- * moves an existing counter up to the highest number in use (after a duplicate number was refused).
+ * transaction. `resync` also moves an existing counter up to the highest number in use (after a
+ * duplicate number was refused). The highest number is a plain read, which locks nothing in
+ * `batches`: a locking read there would wait on, and deadlock with, the batch inserts running now.
  */
 export async function ensureBatchCounter(now = new Date(), opts: { resync?: boolean } = {}): Promise<void> {
   const prefix = batchNumberPrefix(now);
   if (!opts.resync && (await db()('batch_number_counters').where({ prefix }).first('prefix'))) return;
+  const [rows] = (await db().raw(
+    'SELECT COALESCE(MAX(CAST(SUBSTRING(batch_number, ?) AS UNSIGNED)), 0) AS n FROM batches WHERE batch_number LIKE ?',
+    [prefix.length + 1, `${prefix}%`]
+  )) as [{ n: number | string }[]];
   await writeTransaction((trx) =>
     trx.raw(
-      `INSERT INTO batch_number_counters (prefix, last_no)
-       SELECT ?, COALESCE(MAX(CAST(SUBSTRING(batch_number, ?) AS UNSIGNED)), 0) FROM batches WHERE batch_number LIKE ?
+      `INSERT INTO batch_number_counters (prefix, last_no) VALUES (?, ?)
        ON DUPLICATE KEY UPDATE last_no = GREATEST(last_no, VALUES(last_no))`,
-      [prefix, prefix.length + 1, `${prefix}%`]
+      [prefix, Number(rows[0].n)]
     )
   );
 }
