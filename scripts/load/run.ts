@@ -63,16 +63,27 @@ async function runOne(s: Scenario, token: string) {
 
 const formulator = await db()('users').where({ email: 'rhea.okafor@kestrelhollow.example' }).first('id');
 if (!formulator) throw new Error('load: the demo formulator is missing (seed the database first)');
-const { token } = await createToken(formulator.id, 'load run', 1);
+const technician = await db()('users').where({ email: 'tomas.brand@kestrelhollow.example' }).first('id');
+if (!technician) throw new Error('load: the demo technician is missing (seed the database first)');
+const tokens = {
+  formulator: (await createToken(formulator.id, 'load run', 1)).token,
+  technician: (await createToken(technician.id, 'load run', 1)).token
+};
 const approved = await db()('formulation_revisions').where({ state: 'approved' }).first('content_json');
 if (!approved) throw new Error('load: no approved demo revision to copy a draft from (seed the database first)');
 const draftContent = parseRecipe(approved.content_json);
+const batchRevision = await db()('formulation_revisions as r')
+  .join('formulations as f', 'f.id', 'r.formulation_id')
+  .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' })
+  .first('r.id');
+if (!batchRevision) throw new Error('load: the approved demo revision of KH-W30-90 is missing (seed the database first)');
 await closeDb();
 
 console.log(`load: ${connections} connections, ${seconds} s per route, ${base}`);
 const rows = [];
-for (const s of scenarios(draftContent).filter((x) => only.length === 0 || only.includes(x.name))) {
-  const r = await runOne(s, token);
+const all = scenarios({ draftContent, batchRevisionId: batchRevision.id });
+for (const s of all.filter((x) => only.length === 0 || only.includes(x.name))) {
+  const r = await runOne(s, tokens[s.as ?? 'formulator']);
   rows.push(r);
   const goal = r.goalMs ? (r.p95 <= r.goalMs ? `  (p95 goal ${r.goalMs} ms: ok)` : `  (p95 goal ${r.goalMs} ms: MISSED)`) : '';
   console.log(

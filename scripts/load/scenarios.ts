@@ -8,6 +8,8 @@ export interface Scenario {
   expect: number;
   body?: () => unknown;
   p95GoalMs?: number;
+  /** Whose token sends it: the demo formulator unless the route is the line's. */
+  as?: 'formulator' | 'technician';
 }
 
 const components = { pump: BLUE_PUMP, phosphors: [demoPhosphor('ph-gl530'), demoPhosphor('ph-yl568'), demoPhosphor('ph-rd625')] };
@@ -16,8 +18,11 @@ const band = (l: number, p: number, w: number) => Math.exp(-0.5 * ((l - p) / (w 
 let n = 0;
 const RUN = Date.now().toString(36).toUpperCase();
 
-/** `draftContent`: a valid revision content (taken from the demo data) for the create-draft route. */
-export const scenarios = (draftContent: unknown): Scenario[] => [
+/**
+ * `draftContent`: a valid revision content (taken from the demo data) for the create-draft route;
+ * `batchRevisionId`: an approved demo revision that the concurrent batch plans all come from.
+ */
+export const scenarios = ({ draftContent, batchRevisionId }: { draftContent: unknown; batchRevisionId: number }): Scenario[] => [
   {
     name: 'evaluate',
     method: 'POST',
@@ -56,5 +61,22 @@ export const scenarios = (draftContent: unknown): Scenario[] => [
     path: '/api/v1/formulations',
     expect: 201,
     body: () => ({ code: `LD-${RUN}-${n}`, name: `Load-run draft ${n++}`, description: 'made by npm run load', content: draftContent })
+  },
+  {
+    // Every connection plans a batch of the same revision at once: each gets its own number, none a deadlock.
+    name: 'create batch',
+    method: 'POST',
+    path: '/api/v1/batches',
+    expect: 201,
+    as: 'technician',
+    body: () => ({
+      revisionId: batchRevisionId,
+      sizing: { kind: 'mass', batchMassG: 10 + (n++ % 10) },
+      loading: { mode: 'perPhosphor', basis: 'wtPctOfSlurry' },
+      additives: [],
+      balance: { resolutionG: 0.001, minWeightG: 0.05, ref: 'BAL-LOAD' },
+      plantLimitMin: 120,
+      notes: 'made by npm run load'
+    })
   }
 ];

@@ -1,6 +1,6 @@
 import { test, expect, request, type APIRequestContext } from '@playwright/test';
 import { startApp, type AppInstance } from './support/instances';
-import { BASE, makeUser, postSignIn, testDb } from './support/accounts';
+import { BASE, DEMO, DEMO_PASSWORD, makeUser, postSignIn, testDb } from './support/accounts';
 import { createApiToken, tokenContext } from './support/tokens';
 
 // Two app instances behind one database: whatever one instance decides from shared state, the
@@ -262,4 +262,42 @@ test.describe('writes through both instances', () => {
       await knex.destroy();
     }
   });
+});
+
+test('50 batches planned at once, split over both instances: 50 distinct numbers and no error', async () => {
+  const knex = testDb();
+  let revisionId: number;
+  try {
+    const rev = await knex('formulation_revisions as r')
+      .join('formulations as f', 'f.id', 'r.formulation_id')
+      .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' })
+      .first('r.id');
+    revisionId = rev!.id;
+  } finally {
+    await knex.destroy();
+  }
+  const token = await createApiToken(DEMO.technician, DEMO_PASSWORD, 'two-instances batches');
+  const a = await tokenContext(BASE, token);
+  const b = await tokenContext(second.url, token);
+  contexts.push(a, b);
+  const body = {
+    revisionId,
+    sizing: { kind: 'mass', batchMassG: 10 },
+    loading: { mode: 'perPhosphor', basis: 'wtPctOfSlurry' },
+    additives: [],
+    balance: { resolutionG: 0.001, minWeightG: 0.05, ref: 'BAL-TWO' },
+    plantLimitMin: 120,
+    notes: 'planned at once on two instances'
+  };
+  const t0 = Date.now();
+  const answers = await Promise.all(Array.from({ length: 50 }, (_, i) => (i % 2 ? b : a).post('/api/v1/batches', { data: body })));
+  const statuses = answers.map((r) => r.status());
+  console.log(`two instances, 50 simultaneous batch plans: ${statuses.filter((s) => s === 201).length} × 201 in ${Date.now() - t0} ms`);
+  const refused = answers.find((r) => r.status() !== 201);
+  expect(
+    statuses.filter((s) => s !== 201),
+    refused && (await refused.text())
+  ).toEqual([]);
+  const numbers = await Promise.all(answers.map(async (r) => (await r.json()).batchNumber as string));
+  expect(new Set(numbers).size).toBe(50);
 });

@@ -1,5 +1,5 @@
 /** Account administration: invitations, acceptance, roles, deactivation — each audited. */
-import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import * as users from './users';
 import * as invites from './invites';
 import * as audit from '../db/audit';
@@ -39,7 +39,7 @@ export async function acceptInvite(token: string, name: string, password: string
   const open = await invites.findOpen(token);
   if (!open) throw new AccountError('This invitation link is invalid, already used or expired.');
   const passwordHash = await hashPassword(password);
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const claimed = await trx('invites')
       .where({ token_hash: sha256Hex(token) })
       .whereNull('used_at')

@@ -1,5 +1,6 @@
 /** Users and their roles. */
 import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { isRole, type Role } from '../../roles';
 
 export interface User {
@@ -56,7 +57,7 @@ export async function list(): Promise<User[]> {
 }
 
 export async function create(input: { email: string; name: string; passwordHash: string; roles: Role[] }): Promise<number> {
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const [id] = await trx('users').insert({ email: input.email.toLowerCase(), name: input.name, password_hash: input.passwordHash });
     if (input.roles.length) await trx('user_roles').insert(input.roles.map((role) => ({ user_id: id, role })));
     return id;
@@ -64,7 +65,7 @@ export async function create(input: { email: string; name: string; passwordHash:
 }
 
 export async function setRoles(id: number, roles: Role[]): Promise<void> {
-  await db().transaction(async (trx) => {
+  await writeTransaction(async (trx) => {
     await trx('user_roles').where({ user_id: id }).delete();
     if (roles.length) await trx('user_roles').insert(roles.map((role) => ({ user_id: id, role })));
     await trx('users').where({ id }).update({ updated_at: trx.fn.now() });

@@ -4,7 +4,7 @@
  * storage and the batch becomes `complete` — in one transaction (the stored object is removed
  * again if the transaction fails).
  */
-import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import { putFile } from '../storage/objects';
 import type { User } from '../accounts/users';
@@ -15,7 +15,7 @@ import { getBatch } from './read';
 import { toBatchDoc } from './documents';
 
 export async function completeBatch(user: User, batchId: number, version: number): Promise<{ recordFileId: number }> {
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const row = await lockBatch(trx, batchId);
     expectVersion(row, version, `Batch ${row.batch_number}`);
     expectState(row, ['weighing'], 'be completed');

@@ -1,5 +1,5 @@
 /** Plans a batch from an approved revision: validate → compute the weigh-out → save batch and lines (one transaction). */
-import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import { getRevision } from '../formulations/read';
 import type { User } from '../accounts/users';
@@ -10,7 +10,7 @@ import { describeTarget } from '../../batches/weighout/target';
 import type { WeighoutInput } from '../../batches/weighout/schema';
 import type { CreateBatchRequest } from '../../batches/schema';
 import { conflict, impossible, invalid, notFound } from './errors';
-import { nextBatchNumber } from './number';
+import { ensureBatchCounter, nextBatchNumber } from './number';
 import { lineRowsFor, planColumns } from './lines';
 
 export interface PreparedBatch {
@@ -53,9 +53,10 @@ export async function createBatch(user: User, req: CreateBatchRequest): Promise<
   const { input, plan, revision } = await prepareBatch(req);
   const target = describeTarget(revision.content.target, revision.content.tolerance);
   const s = revision.content.silicone;
+  await ensureBatchCounter();
   for (let attempt = 0; ; attempt++) {
     try {
-      return await db().transaction(async (trx) => {
+      return await writeTransaction(async (trx) => {
         const batchNumber = await nextBatchNumber(trx);
         const [id] = await trx('batches').insert({
           batch_number: batchNumber,
@@ -100,8 +101,11 @@ export async function createBatch(user: User, req: CreateBatchRequest): Promise<
         return { id, batchNumber };
       });
     } catch (err) {
-      // Two batches planned in the same instant can pick the same number: try the next one.
-      if ((err as { code?: string }).code === 'ER_DUP_ENTRY' && attempt < 3) continue;
+      // A number already taken (a batch numbered outside the counter): move the counter past it and try again.
+      if ((err as { code?: string }).code === 'ER_DUP_ENTRY' && attempt < 3) {
+        await ensureBatchCounter(new Date(), { resync: true });
+        continue;
+      }
       throw err;
     }
   }

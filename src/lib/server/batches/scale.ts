@@ -1,5 +1,5 @@
 /** Scaling a planned batch up or down: the stored weigh-out input at a new size, recomputed exactly. */
-import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import type { User } from '../accounts/users';
 import { computeWeighout } from '../../batches/weighout/compute';
@@ -14,7 +14,7 @@ import { decimalText, placesOf } from './records';
 export type ScaleInput = { version: number; batchMassG: number } | { version: number; factor: number };
 
 export async function scaleBatch(user: User, batchId: number, input: ScaleInput): Promise<{ batchMassG: string }> {
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const row = await lockBatch(trx, batchId);
     expectVersion(row, input.version, `Batch ${row.batch_number}`);
     expectState(row, ['planned'], 'be rescaled once weighing has started');

@@ -3,7 +3,7 @@
  * e-signed with the password), note the time part B was mixed in. Each runs in one transaction
  * with the batch row locked, checks the version the caller read, and is audited.
  */
-import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import { checkSigningPassword } from '../auth/signing-password';
 import type { User } from '../accounts/users';
@@ -33,7 +33,7 @@ export async function recordLine(
     throw invalid(`"${input.actualG}" is not a balance reading: enter grams, e.g. 12.345.`, [
       { path: 'actualG', message: 'not a reading in g' }
     ]);
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const batch = await lockBatch(trx, batchId);
     expectState(batch, ['planned', 'weighing'], 'take new readings');
     const line = await lockLine(trx, batchId, seq);
@@ -104,7 +104,7 @@ export async function acceptDeviation(user: User, batchId: number, seq: number, 
       { path: 'password', message: 'wrong password' }
     ]);
   }
-  await db().transaction(async (trx) => {
+  await writeTransaction(async (trx) => {
     const batch = await lockBatch(trx, batchId);
     expectState(batch, ['weighing'], 'accept deviations');
     const line = await lockLine(trx, batchId, seq);
@@ -135,7 +135,7 @@ export async function markMixed(
   batchId: number,
   input: { version: number; mixedAt?: Date }
 ): Promise<{ mixedAt: Date; expiresAt: Date }> {
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const batch = await lockBatch(trx, batchId);
     expectVersion(batch, input.version, `Batch ${batch.batch_number}`);
     expectState(batch, ['weighing'], 'be marked as mixed');

@@ -56,6 +56,11 @@ export interface BatchAcceptanceRow {
   updated_at: Date;
 }
 
+export interface BatchNumberCounterRow {
+  prefix: string;
+  last_no: number;
+}
+
 export interface BatchCorrectionRow {
   id: number;
   batch_id: number;
@@ -374,6 +379,7 @@ declare module 'knex/types/tables' {
     batch_acceptance: Table<BatchAcceptanceRow, 'steps', 'require_target_bin'>;
     batch_corrections: Table<BatchCorrectionRow, 'step_fraction'>;
     batch_dispositions: Table<BatchDispositionRow>;
+    batch_number_counters: Table<BatchNumberCounterRow>;
     batch_lines: Table<BatchLineRow, 'basis_pct' | 'ideal_g' | 'target_g' | 'low_g' | 'high_g' | 'tolerance_value' | 'actual_g'>;
     batches: Table<
       BatchRow,

@@ -4,6 +4,7 @@
  * change (trigger), so a signed revision keeps exactly the files it was signed with.
  */
 import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import { deleteFile, getFile, putFile } from '../storage/objects';
 import { NotFoundError, ValidationError } from './errors';
@@ -39,7 +40,7 @@ export async function addAttachment(
   if (file.body.length > MAX_ATTACHMENT_BYTES)
     throw new ValidationError(`file: larger than ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB; nothing was saved`);
   const text = label.trim().slice(0, 200) || file.name;
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const fileId = await putFile(
       {
         body: file.body,
@@ -75,7 +76,7 @@ export async function addAttachment(
 
 export async function removeAttachment(caller: Caller, revisionId: number, attachmentId: number): Promise<void> {
   await draftOf(caller, revisionId);
-  await db().transaction(async (trx) => {
+  await writeTransaction(async (trx) => {
     const row = await trx('revision_attachments').where({ id: attachmentId, revision_id: revisionId }).forUpdate().first();
     if (!row) throw new NotFoundError('That attachment is not on this revision.');
     await trx('revision_attachments').where({ id: attachmentId }).delete();

@@ -6,6 +6,7 @@
 import { z } from 'zod';
 import type { Knex } from 'knex';
 import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import type { RevisionContent } from '../../recipe';
 import { ConflictError, NotFoundError, ValidationError } from './errors';
@@ -115,7 +116,7 @@ export async function createFormulationWithDraft(
   // A suggested code can be taken by a concurrent request between the check and the insert: try the next one.
   for (let attempt = 0; ; attempt++) {
     try {
-      return await db().transaction(async (trx) => {
+      return await writeTransaction(async (trx) => {
         const code = meta.data.code ?? (await suggestCode(trx, prepared.content, prepared.predicted.target.cct));
         if (await trx('formulations').where({ code }).first('id'))
           throw new ConflictError(`The code ${code} is already taken; choose another.`);
@@ -162,7 +163,7 @@ export async function createRevision(
       throw new ValidationError(`basedOnRevisionId: revision ${basedOnRevisionId} does not belong to this formulation`);
   }
   const prepared = await prepareRevision(db(), content);
-  return db().transaction((trx) => insertDraft(trx, caller, formulationId, prepared, { basedOnRevisionId }));
+  return writeTransaction((trx) => insertDraft(trx, caller, formulationId, prepared, { basedOnRevisionId }));
 }
 
 /** A draft made from a batch's results (quality's correction); based on the revision the batch was built from. */
@@ -179,7 +180,7 @@ export async function createCorrectionDraft<T>(
   const base = await db()('formulation_revisions').where({ id: revisionId }).first('formulation_id');
   if (!base) throw new NotFoundError(`Revision ${revisionId} does not exist.`);
   const prepared = await prepareRevision(db(), content);
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const draft = await insertDraft(trx, caller, base.formulation_id, prepared, { basedOnRevisionId: revisionId, sourceBatchId });
     return { ...draft, alongside: await alongside(trx, draft) };
   });
@@ -197,7 +198,7 @@ export async function updateDraft(
   enforce('edit', caller, { state: found.state, createdBy: found.created_by, version: found.version });
   checkVersion(version, found.version, found.state);
   const prepared = await prepareRevision(db(), content);
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const row = await trx('formulation_revisions').where({ id: revisionId }).forUpdate().first();
     if (!row) throw new NotFoundError(`Revision ${revisionId} does not exist.`);
     enforce('edit', caller, { state: row.state, createdBy: row.created_by, version: row.version });

@@ -6,6 +6,7 @@
 import type { Knex } from 'knex';
 import { z } from 'zod';
 import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import type { RevisionCommand } from '../../formulations/workflow-rules';
 import { ConflictError, NotFoundError } from './errors';
@@ -88,7 +89,7 @@ async function reload(revisionId: number) {
 }
 
 export async function submit(caller: Caller, revisionId: number, version?: number) {
-  await db().transaction(async (trx) => {
+  await writeTransaction(async (trx) => {
     const row = await lockRevision(trx, revisionId);
     enforce('submit', caller, { state: row.state, createdBy: row.created_by, version: row.version });
     checkVersion(version, row.version, row.state);
@@ -105,7 +106,7 @@ export async function submit(caller: Caller, revisionId: number, version?: numbe
 }
 
 export async function withdraw(caller: Caller, revisionId: number, reason: string, version?: number) {
-  await db().transaction(async (trx) => {
+  await writeTransaction(async (trx) => {
     const row = await lockRevision(trx, revisionId);
     enforce('withdraw', caller, { state: row.state, createdBy: row.created_by, version: row.version });
     checkVersion(version, row.version, row.state);
@@ -164,7 +165,7 @@ export async function sign(caller: Caller, revisionId: number, meaning: 'reviewe
   await verifySignaturePassword(caller, revisionId, meaning, input.password);
   const signedAt = new Date();
   let superseded: number | null = null;
-  await db().transaction(async (trx) => {
+  await writeTransaction(async (trx) => {
     const row = await lockRevision(trx, revisionId);
     enforce(command, caller, { state: row.state, createdBy: row.created_by, version: row.version });
     checkVersion(version, row.version, row.state);
@@ -214,7 +215,7 @@ export async function returnRevision(caller: Caller, revisionId: number, input: 
   await precheck('return', caller, revisionId);
   await verifySignaturePassword(caller, revisionId, 'returned', input.password);
   const signedAt = new Date();
-  await db().transaction(async (trx) => {
+  await writeTransaction(async (trx) => {
     const row = await lockRevision(trx, revisionId);
     enforce('return', caller, { state: row.state, createdBy: row.created_by, version: row.version });
     checkVersion(version, row.version, row.state);

@@ -1,5 +1,6 @@
 /** Documents of a material (safety data sheets, certificates, other PDFs) in object storage. */
 import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import * as audit from '../db/audit';
 import { deleteFile, listFilesFor, putFile, toStoredFile, type StoredFileRow } from '../storage/objects';
 import { ATTACHMENT_PURPOSES } from '../../library/schema';
@@ -21,7 +22,7 @@ export async function add(
 ): Promise<number> {
   if (!(await records.get(materialId))) throw notFound(materialId);
   assertPdf(file.name, file.body);
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const id = await putFile(
       {
         body: file.body,
@@ -50,7 +51,7 @@ export async function add(
 }
 
 export async function remove(actor: User, materialId: number, fileId: number): Promise<void> {
-  await db().transaction(async (trx) => {
+  await writeTransaction(async (trx) => {
     const row = await trx('stored_files')
       .where({ id: fileId, entity_type: 'material', entity_id: String(materialId) })
       .whereIn('purpose', ATTACHMENT_PURPOSES)

@@ -3,7 +3,7 @@
  * Every change runs in one transaction with its audit event.
  */
 import type { Knex } from 'knex';
-import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import * as audit from '../db/audit';
 import { deleteStoredObject } from '../storage/objects';
 import { kindIssues, type MaterialFieldsInput } from '../../library/schema';
@@ -32,7 +32,7 @@ function checkKind(kind: MaterialKind, fields: Partial<MaterialFieldsInput>) {
 export async function create(actor: User, kind: MaterialKind, fields: MaterialFieldsInput): Promise<number> {
   checkKind(kind, fields);
   try {
-    return await db().transaction(async (trx) => {
+    return await writeTransaction(async (trx) => {
       const [id] = await trx('materials').insert({ kind, ...records.fieldsToColumns(fields), created_by: actor.id, updated_by: actor.id });
       await audit.record({ ...actorOf(actor), entityType: 'material', entityId: id, action: 'create', after: { kind, ...fields } }, trx);
       return id;
@@ -65,7 +65,7 @@ function changed(before: MaterialFields, after: MaterialFields) {
 /** Applies the given fields (others keep their value). Returns the new version. */
 export async function update(actor: User, id: number, version: number, fields: Partial<MaterialFieldsInput>): Promise<number> {
   try {
-    return await db().transaction(async (trx) => {
+    return await writeTransaction(async (trx) => {
       const current = await lockForEdit(trx, id, version);
       const beforeFields = records.editableSnapshot(current);
       const merged = { ...beforeFields, ...fields };
@@ -89,7 +89,7 @@ export async function update(actor: User, id: number, version: number, fields: P
 }
 
 export async function setArchived(actor: User, id: number, version: number, archived: boolean): Promise<number> {
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const current = await records.get(id, trx);
     if (!current) throw notFound(id);
     if (current.version !== version) throw staleVersion(current.version, version);
@@ -106,7 +106,7 @@ export async function setArchived(actor: User, id: number, version: number, arch
 export async function remove(actor: User, id: number): Promise<void> {
   const keys: string[] = [];
   try {
-    await db().transaction(async (trx) => {
+    await writeTransaction(async (trx) => {
       const current = await records.get(id, trx);
       if (!current) throw notFound(id);
       const refusal = deletionRefusal(current.code, await revisionsUsing(id, trx));

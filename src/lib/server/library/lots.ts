@@ -1,5 +1,6 @@
 /** Supplier lots of a material, each optionally with its certificate of analysis (PDF in object storage). */
 import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import * as audit from '../db/audit';
 import { deleteFile, putFile } from '../storage/objects';
 import { conflict, notFound as notFoundError } from '../../errors/domain-error';
@@ -51,7 +52,7 @@ export async function add(actor: User, materialId: number, input: LotInput, cert
   if (material.archivedAt) throw conflict(`${material.code} is archived; restore it before adding lots.`);
   if (certificate) assertPdf(certificate.name, certificate.body);
   try {
-    return await db().transaction(async (trx) => {
+    return await writeTransaction(async (trx) => {
       const [id] = await trx('material_lots').insert({
         material_id: materialId,
         lot_number: input.lotNumber,
@@ -98,7 +99,7 @@ export async function add(actor: User, materialId: number, input: LotInput, cert
 
 export async function remove(actor: User, materialId: number, lotId: number): Promise<void> {
   try {
-    await db().transaction(async (trx) => {
+    await writeTransaction(async (trx) => {
       const lot = await trx('material_lots').where({ id: lotId, material_id: materialId }).forUpdate().first();
       if (!lot) throw notFoundError(`Lot ${lotId} of material ${materialId} was not found.`);
       await trx('material_lots').where({ id: lotId }).delete();

@@ -4,7 +4,7 @@
  * valid file is stored: original to object storage, parsed spectrum to material_spectra, the
  * material's pointer, peak and FWHM updated — one transaction; the object is removed if it fails.
  */
-import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import * as audit from '../db/audit';
 import { putFile } from '../storage/objects';
 import { DEFAULT_MAX_BYTES, formatBytes, parseSpectrumFile } from '../../spectrum-file/parse';
@@ -69,7 +69,7 @@ export async function uploadSpectrum(
   if (!material) throw notFound(materialId);
   if (kind === 'excitation' && material.kind === 'pump') throw invalid('A pump has an emission spectrum only.');
   const preview = previewSpectrumFile(file);
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const current = await lockForEdit(trx, materialId, version, 'given a new spectrum');
     const fileId = await putFile(
       {

@@ -1,5 +1,5 @@
 /** Quality's colour acceptance for a batch (optimistic lock on `version`; 0 = none saved yet). */
-import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import type { AcceptanceInput } from '../../measurements/schema';
 import { lockBatch } from '../batches/lock';
@@ -9,7 +9,7 @@ import * as records from './records';
 
 export async function setAcceptance(caller: Caller, batchId: number, input: AcceptanceInput): Promise<{ version: number }> {
   requireQuality(caller, 'Choosing the acceptance');
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const batch = await lockBatch(trx, batchId);
     if (batch.state === 'released' || batch.state === 'rejected')
       throw conflict(`Batch ${batch.batch_number} is ${batch.state}: its acceptance is part of the signed record.`);

@@ -8,6 +8,7 @@
  * Model: 21 CFR 11.50/11.70/11.200.
  */
 import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import { checkSigningPassword } from '../auth/signing-password';
 import { putFile } from '../storage/objects';
@@ -72,7 +73,7 @@ export async function disposeBatch(caller: Caller, batchId: number, input: Dispo
   const decision = input.decision === 'release' ? 'released' : 'rejected';
   await verifySigner(caller, batchId, decision, input.password);
 
-  const outcome = await db().transaction(async (trx) => {
+  const outcome = await writeTransaction(async (trx) => {
     const row = await lockBatch(trx, batchId);
     expectVersion(row, input.version, `Batch ${row.batch_number}`);
     expectState(row, ['complete'], decision === 'released' ? 'be released' : 'be rejected');

@@ -7,6 +7,7 @@
  */
 import type { Knex } from 'knex';
 import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import { putFile } from '../storage/objects';
 import { decodeText } from '../../spectrum-file/decode';
@@ -148,7 +149,7 @@ export async function uploadMeasurements(
   await precheckUpload(caller, batchId);
   const m = await measureFile(file, onProgress);
   onProgress?.({ phase: 'saving' });
-  return db().transaction(async (trx) => {
+  return writeTransaction(async (trx) => {
     const locked = await lockBatch(trx, batchId);
     if (!OPEN_STATES.includes(locked.state)) throw stateRefusal(locked.batch_number, locked.state);
     const existing = await records.activeLabels(batchId, trx);
@@ -180,7 +181,7 @@ export async function uploadMeasurements(
 /** Takes an upload out of the batch's results (kept on record with the reason); only before the disposition. */
 export async function withdrawUpload(caller: Caller, batchId: number, uploadId: number, reason: string): Promise<void> {
   requireQuality(caller, 'Withdrawing measurements');
-  await db().transaction(async (trx) => {
+  await writeTransaction(async (trx) => {
     const locked = await lockBatch(trx, batchId);
     if (!OPEN_STATES.includes(locked.state)) throw stateRefusal(locked.batch_number, locked.state);
     const up = await trx('measurement_uploads').where({ id: uploadId, batch_id: batchId }).forUpdate().first();

@@ -4,6 +4,7 @@
  * does not converge saves nothing and says why.
  */
 import { db } from '../db/index';
+import { writeTransaction } from '../db/transaction';
 import { DomainError, conflict, unprocessable } from '../../errors/domain-error';
 import { loadBlendComponents } from '../library/components';
 import { prepareBasis, tristimulus } from '../../blend/basis';
@@ -86,7 +87,7 @@ export async function createByFit(actor: User, input: PackageFitInput): Promise<
   const codes: { id: number; code: string }[] = await db()('materials').whereIn('id', input.phosphorIds).select('id', 'code');
   const phosphors = input.phosphorIds.map((id) => ({ materialId: id, code: codes.find((c) => Number(c.id) === id)?.code ?? String(id) }));
   try {
-    const ref = await db().transaction((trx) => storeModel(trx, actor, input, fit, phosphors));
+    const ref = await writeTransaction((trx) => storeModel(trx, actor, input, fit, phosphors));
     return ref.id;
   } catch (err) {
     const code = (err as { code?: string })?.code;
