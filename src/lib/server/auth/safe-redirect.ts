@@ -7,7 +7,7 @@ export function safeRedirect(target: string | null | undefined, origin: string):
   if (!target || target.length > 2000) return '/';
   if (!target.startsWith('/') || target[1] === '/' || target[1] === '\\') return '/';
   // Backslashes and control characters have no place in our own paths; they only serve to hide a host.
-  if (/[\\\u0000-\u001f\u007f]/.test(target)) return '/';
+  if ([...target].some((ch) => ch === '\\' || ch.charCodeAt(0) < 0x20 || ch.charCodeAt(0) === 0x7f)) return '/';
   let base: URL;
   let url: URL;
   try {
