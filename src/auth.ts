@@ -3,11 +3,14 @@
  * Throttling and every attempt are recorded in MariaDB; the guard in hooks.server.ts re-reads
  * the user on each request, so deactivation and role changes take effect at once.
  */
-import { SvelteKitAuth, CredentialsSignin } from '@auth/sveltekit';
+import { SvelteKitAuth, CredentialsSignin, type SvelteKitAuthConfig } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
 import { getRequestEvent } from '$app/server';
 import { z } from 'zod';
 import { checkSignIn } from '$lib/server/auth/sign-in';
+import { authForwardedHeaders, useSecureCookies } from '$lib/server/auth/public-origin';
+import { config } from '$lib/server/config';
+import { safeRedirect } from '$lib/server/auth/safe-redirect';
 
 const credentialsSchema = z.object({
   email: z.string().trim().toLowerCase().max(254).pipe(z.email()),
@@ -31,7 +34,8 @@ function clientIp(): string | null {
   }
 }
 
-export const { handle, signIn, signOut } = SvelteKitAuth({
+const authConfig: SvelteKitAuthConfig = {
+  // The host Auth.js reads is the app's own origin unless TRUST_PROXY_HOST=1 (see hooks.server.ts).
   trustHost: true,
   logger: {
     // A wrong password is routine (it is recorded and audited); everything else is logged.
@@ -57,6 +61,11 @@ export const { handle, signIn, signOut } = SvelteKitAuth({
     })
   ],
   callbacks: {
+    // Only paths on this site are followed after sign-in and sign-out, whatever the form said.
+    redirect({ url, baseUrl }) {
+      const relative = url.startsWith(baseUrl + '/') ? url.slice(baseUrl.length) : url;
+      return baseUrl + safeRedirect(relative, baseUrl);
+    },
     jwt({ token, user }) {
       if (user?.id) token.uid = user.id;
       return token;
@@ -66,4 +75,9 @@ export const { handle, signIn, signOut } = SvelteKitAuth({
       return session;
     }
   }
-});
+};
+
+export const { handle, signIn, signOut } = SvelteKitAuth(async (event) => ({
+  ...authConfig,
+  useSecureCookies: useSecureCookies(authForwardedHeaders(event.url, event.request.headers, config().trustProxyHost).proto)
+}));

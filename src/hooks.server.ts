@@ -7,6 +7,8 @@ import { userForToken } from '$lib/server/auth/tokens';
 import { closeDb, isDbUnavailable } from '$lib/server/db/index';
 import { securityHeaders } from '$lib/server/security-headers';
 import { errorBody } from '$lib/server/http/status';
+import { authForwardedHeaders } from '$lib/server/auth/public-origin';
+import { config } from '$lib/server/config';
 
 /** Who is asking: a bearer token on /api, else the Auth.js session. Inactive users count as signed out. */
 async function identify(event: Parameters<Handle>[0]['event']): Promise<Response | null> {
@@ -82,7 +84,25 @@ const headers: Handle = async ({ event, resolve }) => {
   return response;
 };
 
-export const handle = sequence(headers, authHandle, guard);
+/**
+ * Auth.js builds its redirects from X-Forwarded-Host/-Proto (else Host). Unless a trusted proxy
+ * sets them (TRUST_PROXY_HOST=1), they are overwritten with the app's own origin before it runs.
+ */
+const publicOrigin: Handle = async ({ event, resolve }) => {
+  const { host, proto } = authForwardedHeaders(event.url, event.request.headers, config().trustProxyHost);
+  try {
+    event.request.headers.set('x-forwarded-host', host);
+    event.request.headers.set('x-forwarded-proto', proto);
+  } catch {
+    const copy = new Headers(event.request.headers);
+    copy.set('x-forwarded-host', host);
+    copy.set('x-forwarded-proto', proto);
+    event.request = new Request(event.request, { headers: copy });
+  }
+  return resolve(event);
+};
+
+export const handle = sequence(headers, publicOrigin, authHandle, guard);
 
 export const handleError: HandleServerError = ({ error: err, status }) => {
   if (isDbUnavailable(err)) return { message: 'The database is not reachable; try again shortly.' };

@@ -10,6 +10,7 @@ const SOLVE_WORKERS_RULE = 'PF_SOLVE_WORKERS must be a whole number from 0 to 16
 const envSchema = z.object({
   AUTH_SECRET: z.string().min(32, 'AUTH_SECRET must be at least 32 characters').optional(),
   ORIGIN: z.string().url().optional(),
+  TRUST_PROXY_HOST: z.enum(['0', '1'], 'TRUST_PROXY_HOST must be 0 or 1').default('0'),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().positive().default(2525),
   SMTP_USER: z.string().optional(),
@@ -42,6 +43,8 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env) {
   return {
     authSecret: env.AUTH_SECRET,
     origin: env.ORIGIN,
+    /** Whether X-Forwarded-Host/-Proto come from a trusted reverse proxy; otherwise ORIGIN decides. */
+    trustProxyHost: env.TRUST_PROXY_HOST === '1',
     production: env.NODE_ENV === 'production',
     db: connectionSettings(source),
     dbPoolMax: env.DB_POOL_MAX,

@@ -3,19 +3,15 @@ import { AuthError } from '@auth/sveltekit';
 import { signIn } from '../../auth';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
+import { safeRedirect } from '$lib/server/auth/safe-redirect';
 
 export const load: PageServerLoad = ({ locals, url }) => {
-  if (locals.user) redirect(303, safeRedirect(url.searchParams.get('redirectTo')));
+  if (locals.user) redirect(303, safeRedirect(url.searchParams.get('redirectTo'), url.origin));
   return {
     failed: url.searchParams.has('error'),
-    redirectTo: safeRedirect(url.searchParams.get('redirectTo'))
+    redirectTo: safeRedirect(url.searchParams.get('redirectTo'), url.origin)
   };
 };
-
-/** Only same-site paths are followed after sign-in. */
-function safeRedirect(target: string | null): string {
-  return target && target.startsWith('/') && !target.startsWith('//') ? target : '/';
-}
 
 export const actions: Actions = {
   /** A refused sign-in (wrong password, unknown account, throttled, deactivated) shows one generic message. */
@@ -26,7 +22,7 @@ export const actions: Actions = {
       return await signIn(event);
     } catch (err) {
       if (err instanceof AuthError) {
-        const back = safeRedirect(event.url.searchParams.get('redirectTo'));
+        const back = safeRedirect(event.url.searchParams.get('redirectTo'), event.url.origin);
         redirect(303, `/signin?error=CredentialsSignin${back !== '/' ? `&redirectTo=${encodeURIComponent(back)}` : ''}`);
       }
       throw err;

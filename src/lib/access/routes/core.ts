@@ -5,7 +5,7 @@ import { mayAdminister } from '../policies';
 export const CORE_ROUTES: RouteTable = {
   '/(app)': { sample: '/', methods: { GET: 'signedIn' } },
   '/signin': { sample: '/signin', methods: { GET: 'public', POST: 'public' } },
-  '/signout': { sample: '/signout', methods: { POST: 'signedIn' } },
+  '/signout': { sample: '/signout', methods: { GET: 'public', POST: 'signedIn' } },
   '/invite/[token]': { sample: '/invite/nonexistent-token', methods: { GET: 'public', POST: 'public' } },
   '/(app)/profile': { sample: '/profile', methods: { GET: 'signedIn', POST: 'signedIn' }, nav: { label: 'Profile & tokens', order: 90 } },
   '/(app)/admin/users': {
