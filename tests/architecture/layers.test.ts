@@ -29,7 +29,8 @@ const PURE = lib(
   'audit',
   'storage',
   'errors',
-  'roles'
+  'roles',
+  'pump-bins'
 );
 const SERVER = lib('server');
 const DATABASE = lib('server/db');

@@ -262,7 +262,7 @@ test('a package model sets the loading settings and the filed revision cites it'
     const f = (await db('formulations').where({ code }).first('id'))!;
     const rev = (await db('formulation_revisions').where({ formulation_id: f.id }).first('content_json'))!;
     expect(JSON.parse(rev.content_json)).toMatchObject({
-      contentVersion: 2,
+      contentVersion: 3,
       packageModelRef: { id: model.id, version: model.version },
       loading: { pathLengthMm: 0.3 }
     });

@@ -54,7 +54,7 @@ describe('round trip: stored text → parseRecipe → stored text', () => {
           const { contentVersion: _v, ...untagged } = { ...content, phosphors, pumpLeakFraction: leak };
           const stored = JSON.stringify(tagged ? { contentVersion: 1, ...untagged } : untagged);
           const read = parseRecipe(stored);
-          expect(read.contentVersion).toBe(2);
+          expect(read.contentVersion).toBe(3);
           expect(read.packageModelRef).toBeNull();
           expect(phosphorLines(read)).toEqual(JSON.parse(stored).phosphors);
           expect(fractionsWithLeak(read)).toEqual([

@@ -22,10 +22,12 @@ describe('the signature hash is taken over the stored text, whatever its content
     const parsed = safeParseRecipe(JSON.parse(LEGACY_ROW));
     if (!parsed.ok) throw new Error(parsed.message);
     const stored = JSON.stringify(parsed.content);
-    expect(JSON.parse(stored).contentVersion).toBe(2);
+    expect(JSON.parse(stored).contentVersion).toBe(3);
     expect(JSON.parse(stored).packageModelRef).toBeNull();
     expect(storedContentSha256(stored)).toBe(contentSha256(parsed.content));
-    expect(canonicalJson(JSON.parse(stored))).toMatch(/^\{"contentVersion":2,"floors":/);
+    expect(canonicalJson(JSON.parse(stored))).toMatch(
+      /^\{"binRecipes":\[\],"coldCheck":null,"condition":null,"contentVersion":3,"floors":/
+    );
   });
 
   it('does not depend on the key order or spacing of the stored text', () => {

@@ -34,9 +34,9 @@ describe('stored revisions in the database, read through the recipe reader', () 
     expect(signatures.length).toBeGreaterThan(0);
     for (const s of signatures) expect(s.contentSha256).toBe(row.content_sha256);
     const content = parseRecipe(row.content_json);
-    // Seeded rows are written as version 2 (citing no package model); any stored version reads as the current one.
-    expect(JSON.parse(row.content_json)).toMatchObject({ contentVersion: 2, packageModelRef: null });
-    expect(content.contentVersion).toBe(2);
+    // Seeded rows are written as version 3 (citing no package model); any stored version reads as the current one.
+    expect(JSON.parse(row.content_json)).toMatchObject({ contentVersion: 3, packageModelRef: null });
+    expect(content.contentVersion).toBe(3);
     // Pump leak + phosphor optical fractions add up to 1 (optical superposition; rounded to 4 decimals on entry).
     expect(fractionsWithLeak(content).reduce((a, f) => a + f, 0)).toBeCloseTo(1, 3);
     expect((await getRevision(row.id))!.content).toEqual(content);
@@ -68,7 +68,7 @@ describe('stored revisions in the database, read through the recipe reader', () 
     expect((await listSignatures(id)).map((s) => s.contentSha256)).toEqual([legacyHash]);
     expect(await storedContentVerified(id)).toBe(true);
     const rev = (await getRevision(id))!;
-    expect(rev.content).toMatchObject({ contentVersion: 2, packageModelRef: null });
+    expect(rev.content).toMatchObject({ contentVersion: 3, packageModelRef: null });
     expect(rev.content.phosphors).toEqual(untagged.phosphors);
   });
 

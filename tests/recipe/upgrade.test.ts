@@ -9,27 +9,30 @@ import {
   fractionsWithLeak,
   parseRecipe,
   safeParseRecipe,
-  revisionContentV2Schema,
+  revisionContentV3ObjectSchema,
+  checkBinRecipes,
   type ContentVersion,
-  type RevisionContentV2
+  type RevisionContentV3
 } from '../../src/lib/recipe';
 import { compareRatios, compareSettings } from '../../src/lib/formulations/compare';
 import { weighoutInputFromRevision } from '../../src/lib/batches/weighout/from-revision';
 import { computeWeighout } from '../../src/lib/batches/weighout/compute';
 import { LEGACY_ROW, V1_ROW } from './fixtures';
 
-// A version 3 that exists only in this test: it adds the operating point the target holds at.
-const contentV3Schema = revisionContentV2Schema.extend({
-  contentVersion: z.literal(3),
-  condition: z.object({ junctionTempC: z.number(), driveCurrentMa: z.number() }).nullable()
-});
-type RevisionContentV3 = z.output<typeof contentV3Schema>;
-const v3: ContentVersion<RevisionContentV3> = {
-  version: 3,
-  schema: contentV3Schema,
-  upgrade: (previous: RevisionContentV2) => ({ ...previous, contentVersion: 3, condition: null })
+// A version 4 that exists only in this test: it adds the package outline the recipe was built in.
+const contentV4Schema = revisionContentV3ObjectSchema
+  .extend({
+    contentVersion: z.literal(4),
+    outline: z.object({ lengthMm: z.number(), widthMm: z.number() }).nullable()
+  })
+  .superRefine(checkBinRecipes);
+type RevisionContentV4 = z.output<typeof contentV4Schema>;
+const v4: ContentVersion<RevisionContentV4> = {
+  version: 4,
+  schema: contentV4Schema,
+  upgrade: (previous: RevisionContentV3) => ({ ...previous, contentVersion: 4, outline: null })
 };
-const readV3 = createRecipeReader([...RECIPE_VERSIONS, v3]);
+const readV4 = createRecipeReader([...RECIPE_VERSIONS, v4]);
 
 const weighRequest = {
   sizing: { kind: 'mass' as const, batchMassG: 20 },
@@ -42,8 +45,9 @@ describe('stored content of version 1 and before the tag, read by the product', 
   it('reads a row without contentVersion as version 1, upgrades it, and leaves the stored text alone', () => {
     const before = LEGACY_ROW;
     const c = parseRecipe(LEGACY_ROW);
-    expect(c.contentVersion).toBe(2);
+    expect(c.contentVersion).toBe(3);
     expect(c.packageModelRef).toBeNull();
+    expect(c).toMatchObject({ condition: null, coldCheck: null, binRecipes: [] });
     expect(safeParseRecipe(LEGACY_ROW)).toMatchObject({ ok: true, storedVersion: 1 });
     expect(c.pumpLeakFraction).toBe(0.15);
     expect(LEGACY_ROW).toBe(before);
@@ -56,9 +60,9 @@ describe('stored content of version 1 and before the tag, read by the product', 
     expect(raw).not.toHaveProperty('contentVersion');
   });
 
-  it('writes new content as version 2, citing a package model or none', () => {
-    expect(CONTENT_VERSION).toBe(2);
-    expect(parseRecipe(V1_ROW).contentVersion).toBe(2);
+  it('writes new content as version 3; a version 2 row cites a package model or none', () => {
+    expect(CONTENT_VERSION).toBe(3);
+    expect(parseRecipe(V1_ROW).contentVersion).toBe(3);
     const stored = JSON.stringify({ ...JSON.parse(V1_ROW), contentVersion: 2, packageModelRef: { id: 4, version: 2 } });
     expect(safeParseRecipe(stored)).toMatchObject({ ok: true, storedVersion: 2, content: { packageModelRef: { id: 4, version: 2 } } });
     const { packageModelRef: _p, ...withoutRef } = JSON.parse(stored);
@@ -73,23 +77,23 @@ describe('stored content of version 1 and before the tag, read by the product', 
   });
 });
 
-describe('after a (test-only) version 3 adds a field', () => {
-  const legacy = readV3.parse(LEGACY_ROW);
-  const v1 = readV3.parse(V1_ROW);
+describe('after a (test-only) version 4 adds a field', () => {
+  const legacy = readV4.parse(LEGACY_ROW);
+  const v1 = readV4.parse(V1_ROW);
 
   it('reads both older rows through the upgraders', () => {
-    expect(legacy).toMatchObject({ contentVersion: 3, condition: null, packageModelRef: null, pumpLeakFraction: 0.15 });
-    expect(v1).toMatchObject({ contentVersion: 3, condition: null, packageModelRef: null, pumpLeakFraction: 0.13 });
-    const { contentVersion: _a, condition: _b, ...rest } = v1;
+    expect(legacy).toMatchObject({ contentVersion: 4, outline: null, condition: null, packageModelRef: null, pumpLeakFraction: 0.15 });
+    expect(v1).toMatchObject({ contentVersion: 4, outline: null, condition: null, packageModelRef: null, pumpLeakFraction: 0.13 });
+    const { contentVersion: _a, outline: _b, ...rest } = v1;
     const { contentVersion: _c, ...asV2 } = parseRecipe(V1_ROW);
     expect(rest).toEqual(asV2);
   });
 
-  it('reads version 3 content as it is, and the version 2 product refuses it by name', () => {
-    const condition = { junctionTempC: 85, driveCurrentMa: 150 };
-    const stored = JSON.stringify({ ...JSON.parse(V1_ROW), contentVersion: 3, packageModelRef: null, condition });
-    expect(readV3.parse(stored).condition).toEqual(condition);
-    expect(() => parseRecipe(stored)).toThrow(/contentVersion: version 3 is newer than this software reads \(up to 2\)/);
+  it('reads version 4 content as it is, and the version 3 product refuses it by name', () => {
+    const outline = { lengthMm: 2.8, widthMm: 3.5 };
+    const stored = JSON.stringify({ ...JSON.parse(V1_ROW), contentVersion: 4, packageModelRef: null, outline });
+    expect(readV4.parse(stored).outline).toEqual(outline);
+    expect(() => parseRecipe(stored)).toThrow(/contentVersion: version 4 is newer than this software reads \(up to 3\)/);
   });
 
   it('compares them: Δ = B − A on the lines of the recipe (hand-worked from the fixtures)', () => {
@@ -127,14 +131,14 @@ describe('after a (test-only) version 3 adds a field', () => {
   });
 
   it('checks what an upgrader produces, naming the step', () => {
-    const broken: ContentVersion<RevisionContentV3> = { ...v3, upgrade: (p: RevisionContentV2) => ({ ...p, contentVersion: 3 }) };
+    const broken: ContentVersion<RevisionContentV4> = { ...v4, upgrade: (p: RevisionContentV3) => ({ ...p, contentVersion: 4 }) };
     const read = createRecipeReader([...RECIPE_VERSIONS, broken]);
-    expect(() => read.parse(LEGACY_ROW)).toThrow(/upgraded from version 1 to 3 is invalid: condition/);
+    expect(() => read.parse(LEGACY_ROW)).toThrow(/upgraded from version 1 to 4 is invalid: outline/);
   });
 
   it('refuses a chain with a gap or a missing upgrader', () => {
-    expect(() => createRecipeReader([...RECIPE_VERSIONS, { ...v3, version: 4 }])).toThrow(/version 4 does not follow 2/);
-    expect(() => createRecipeReader([...RECIPE_VERSIONS, { version: 3, schema: contentV3Schema }])).toThrow(/no upgrader from 2/);
+    expect(() => createRecipeReader([...RECIPE_VERSIONS, { ...v4, version: 5 }])).toThrow(/version 5 does not follow 3/);
+    expect(() => createRecipeReader([...RECIPE_VERSIONS, { version: 4, schema: contentV4Schema }])).toThrow(/no upgrader from 3/);
   });
 });
 

@@ -19,3 +19,12 @@ export {
   type LoopMetrics
 } from './floors';
 export { targetSchema, toleranceSchema, floorsSchema } from './schema';
+export {
+  BENCH_TEMPERATURE_C,
+  BENCH_CONDITION,
+  operatingConditionSchema,
+  conditionOf,
+  isBenchCondition,
+  describeCondition,
+  type OperatingCondition
+} from './condition';

@@ -5,6 +5,7 @@
  *
  * - `schema.ts`: version 1 of the content (`contentVersion: 1`; stored rows without the tag are version 1).
  * - `schemaV2.ts`: version 2 = version 1 + `packageModelRef` (the package model the recipe was designed for).
+ * - `schemaV3.ts`: version 3 = version 2 + `condition`, `coldCheck` and `binRecipes` (the recipe matrix).
  * - `upgrade.ts`: the chain of versions and their upgraders; `RevisionContent` is the current content.
  * - `read.ts`: `parseRecipe` (stored JSON text or a parsed value → current content), on every read;
  *   `checkRecipe` for content sent in a request (a value, never text).
@@ -15,15 +16,15 @@
  * (its canonical JSON), never over what the reader returns, so old rows still verify after an upgrade.
  *
  * Version 2 (`schemaV2.ts`) adds `packageModelRef`; its upgrader sets it to null for older rows.
- * How a later version will grow without touching every feature (not implemented yet):
- * - `recipes: { [binKey]: { pumpLeakFraction, phosphors } }` — a recipe per pump wavelength bin beside
- *   the nominal one; the accessors pick `recipes[binKey]` when given a key that has one.
- * - `target.condition: { junctionTempC, driveCurrentMa }` — the operating point the target holds at.
- * Adding it: write the next schema (the previous one extended), an upgrader from the previous version,
- * append `{ version, schema, upgrade }` to RECIPE_VERSIONS; old rows read unchanged.
+ * Version 3 (`schemaV3.ts`) adds `condition` (the operating condition the target holds at; null =
+ * bench), `coldCheck` (the bench point a hot-aimed recipe should measure) and `binRecipes` (the recipe
+ * matrix, one recipe per pump wavelength bin); the accessors pick a bin's recipe when given its key.
+ * A later version: write the next schema (the previous one extended), an upgrader from the previous
+ * version, append `{ version, schema, upgrade }` to RECIPE_VERSIONS; old rows read unchanged.
  */
 export * from './schema';
 export * from './schemaV2';
+export * from './schemaV3';
 export * from './upgrade';
 export * from './read';
 export * from './accessors';

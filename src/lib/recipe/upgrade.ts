@@ -7,6 +7,7 @@
 import type { z } from 'zod';
 import { revisionContentV1Schema, type RevisionContentV1 } from './schema';
 import { revisionContentV2Schema, type RevisionContentV2 } from './schemaV2';
+import { revisionContentV3Schema, type RevisionContentV3 } from './schemaV3';
 
 /** Content without a `contentVersion` tag was written before the tag existed: version 1. */
 export const LEGACY_CONTENT_VERSION = 1;
@@ -87,21 +88,40 @@ export const RECIPE_VERSIONS = [
     schema: revisionContentV2Schema,
     // Version 1 content was designed without a package model.
     upgrade: (previous: RevisionContentV1): RevisionContentV2 => ({ ...previous, contentVersion: 2, packageModelRef: null })
+  },
+  {
+    version: 3,
+    schema: revisionContentV3Schema,
+    // Version 2 content aimed at the bench condition with one recipe for every pump bin.
+    upgrade: (previous: RevisionContentV2): RevisionContentV3 => ({
+      ...previous,
+      contentVersion: 3,
+      condition: null,
+      coldCheck: null,
+      binRecipes: []
+    })
   }
-] as const satisfies ContentVersionChain<RevisionContentV2>;
+] as const satisfies ContentVersionChain<RevisionContentV3>;
 
 /** The version new content is written with. */
 export const CONTENT_VERSION = RECIPE_VERSIONS[RECIPE_VERSIONS.length - 1].version;
 
 /** The schema of the current version (what new content is checked against and written as). */
-export const revisionContentSchema = revisionContentV2Schema;
+export const revisionContentSchema = revisionContentV3Schema;
 
 /**
  * The current content as features read it. The tag is a plain number: features never branch on it
  * (the reader has already upgraded), so content of a later version that only adds fields still fits.
  */
-export type RevisionContent = Omit<RevisionContentV2, 'contentVersion' | 'packageModelRef'> & {
+export type RevisionContent = Omit<RevisionContentV3, 'contentVersion' | 'packageModelRef' | 'condition' | 'coldCheck' | 'binRecipes'> & {
   contentVersion: number;
-  /** The reader always fills it (null: no package model); content built in code may leave it out. */
-  packageModelRef?: RevisionContentV2['packageModelRef'];
+  /** The reader always fills the fields below; content built in code may leave them out. */
+  /** The package model the recipe was designed for (null: the library's loading values). */
+  packageModelRef?: RevisionContentV3['packageModelRef'];
+  /** The operating condition the target holds at (null: bench). */
+  condition?: RevisionContentV3['condition'];
+  /** The bench colour point to check a hot-aimed recipe against (null: the target itself). */
+  coldCheck?: RevisionContentV3['coldCheck'];
+  /** The recipe matrix, one recipe per pump bin (empty: one recipe for every bin). */
+  binRecipes?: RevisionContentV3['binRecipes'];
 };

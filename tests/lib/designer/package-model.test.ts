@@ -91,10 +91,10 @@ describe('a filed revision cites the package model', () => {
   };
   const silicone = { siliconeSystemId: 2, name: '1:1 clear', ratioA: 1, ratioB: 1, potLifeMin: 240, cure: '', densityGPerCm3: 1.08 };
 
-  it('as content version 2 with { id, version }; none when not chosen', () => {
+  it('as current content (version 3) with { id, version }; none when not chosen', () => {
     const form = filingFormSchema.parse({ mode: 'new', name: 'Cited', notes: '', siliconeSystemId: '2', blend: JSON.stringify(blend) });
     const c = revisionContentFrom(form.blend, refs, silicone, '');
-    expect(c).toMatchObject({ contentVersion: 2, packageModelRef: { id: 9, version: 2 } });
+    expect(c).toMatchObject({ contentVersion: 3, packageModelRef: { id: 9, version: 2 } });
     expect(parseRecipe(JSON.parse(JSON.stringify(c))).packageModelRef).toEqual({ id: 9, version: 2 });
     const { packageModelRef: _r, ...withoutModel } = blend;
     expect(revisionContentFrom(withoutModel, refs, silicone, '').packageModelRef).toBeNull();

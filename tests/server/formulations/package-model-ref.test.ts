@@ -22,18 +22,18 @@ describe('revisions citing a package model', () => {
   });
   afterAll(closeDb);
 
-  it('stores the reference in the content as version 2 and returns it', async () => {
+  it('stores the reference in the content (written as the current version, 3) and returns it', async () => {
     const content = { ...(await warmWhite()), contentVersion: 2, packageModelRef: model };
     const made = await createFormulationWithDraft(c.rhea, { code: uniqueCode('PM'), name: 'Cites a package model', content });
     const row = await db()('formulation_revisions').where({ id: made.revisionId }).first('content_json');
-    expect(JSON.parse(row!.content_json)).toMatchObject({ contentVersion: 2, packageModelRef: model });
+    expect(JSON.parse(row!.content_json)).toMatchObject({ contentVersion: 3, packageModelRef: model });
     expect((await getRevision(made.revisionId))!.content.packageModelRef).toEqual(model);
   });
 
-  it('writes version 1 content sent by a client as version 2, citing no package model', async () => {
+  it('writes version 1 content sent by a client as the current version (3), citing no package model', async () => {
     const made = await createFormulationWithDraft(c.rhea, { code: uniqueCode('PM'), name: 'Version 1 body', content: await warmWhite() });
     const row = await db()('formulation_revisions').where({ id: made.revisionId }).first('content_json');
-    expect(JSON.parse(row!.content_json)).toMatchObject({ contentVersion: 2, packageModelRef: null });
+    expect(JSON.parse(row!.content_json)).toMatchObject({ contentVersion: 3, packageModelRef: null, binRecipes: [] });
   });
 
   const missing = (): [string, { id: number; version: number }][] => [
