@@ -106,7 +106,9 @@ export const handle = sequence(headers, publicOrigin, authHandle, guard);
 
 export const handleError: HandleServerError = ({ error: err, status }) => {
   if (isDbUnavailable(err)) return { message: 'The database is not reachable; try again shortly.' };
-  if (status !== 404) console.error('[phosforge] unexpected error', err instanceof Error ? err.stack : err);
+  // A missing page is not a fault of ours: say it is missing, and log only real errors.
+  if (status === 404) return { message: 'There is no page at this address.' };
+  console.error('[phosforge] unexpected error', err instanceof Error ? err.stack : err);
   return { message: 'Something went wrong on our side. The error has been logged.' };
 };
 

@@ -23,8 +23,14 @@ export interface SlurryAge {
   expired: boolean;
 }
 
+/**
+ * Age and time left at `now`. A clock that reads a little before the mixing time (a browser clock
+ * behind the server's, or a page clock not yet ticked) reads age 0 and the whole limit left, never a
+ * negative age or more than the limit.
+ */
 export function slurryAge(limit: Pick<SlurryLimit, 'mixedAt' | 'expiresAt'>, now: Date): SlurryAge {
-  const ageMin = Math.floor((now.getTime() - limit.mixedAt.getTime()) / 60_000);
-  const remainingMs = limit.expiresAt.getTime() - now.getTime();
+  const at = Math.max(now.getTime(), limit.mixedAt.getTime());
+  const ageMin = Math.floor((at - limit.mixedAt.getTime()) / 60_000);
+  const remainingMs = limit.expiresAt.getTime() - at;
   return { ageMin, remainingMin: Math.max(0, Math.floor(remainingMs / 60_000)), expired: remainingMs <= 0 };
 }

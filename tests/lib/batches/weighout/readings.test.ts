@@ -67,6 +67,11 @@ describe('slurry age and pot life', () => {
     expect(slurryAge(l, new Date('2026-12-02T11:30:00Z'))).toEqual({ ageMin: 90, remainingMin: 30, expired: false });
     expect(slurryAge(l, new Date('2026-12-02T12:00:00Z')).expired).toBe(true);
   });
+
+  it('reads age 0 and the whole limit, never "age −1 min", on a clock just behind the mixing time', () => {
+    const l = slurryExpiry(new Date('2026-12-02T10:00:00Z'), 90);
+    expect(slurryAge(l, new Date('2026-12-02T09:59:20Z'))).toEqual({ ageMin: 0, remainingMin: 90, expired: false });
+  });
 });
 
 describe('scaling', () => {
