@@ -91,12 +91,35 @@ test('formulator submits, quality approves with an e-signature, technician sees 
 
   const ines = await as(browser, DEMO.quality);
   await ines.goto(revisionUrl);
-  await ines.getByRole('radio', { name: /Approved/ }).check();
-  await ines.getByLabel('Comment or reason').fill('Matches the trial builds.');
+  // The meaning is a deliberate choice: nothing is pre-selected, and no password is asked before it.
+  await expect(ines.getByRole('radio', { checked: true })).toHaveCount(0);
+  await expect(ines.getByLabel('Your password')).toHaveCount(0);
+  await ines.getByRole('button', { name: 'Continue to signature' }).click();
+  await expect(ines.getByRole('alert')).toContainText('Choose what your signature means first.');
+  // A return with a wrong password and no reason: both problems at once, under "Not signed".
+  await ines.getByRole('radio', { name: /Returned/ }).check();
+  await ines.getByRole('button', { name: 'Continue to signature' }).click();
   await ines.getByLabel('Your password').fill('not-the-password');
   await ines.getByRole('button', { name: 'Sign', exact: true }).click();
+  const refused = ines.getByRole('alert');
+  await expect(refused).toContainText('Not signed');
+  await expect(refused).toContainText('password is not correct');
+  await expect(refused).toContainText('say why the revision is returned');
+  await ines.getByRole('radio', { name: /Approved/ }).check();
+  await ines.getByLabel('Comment or reason').fill('Matches the trial builds.');
+  await ines.getByRole('button', { name: 'Continue to signature' }).click();
+  // What is signed is shown before the password is checked: code, revision, meaning, content hash.
+  const summary = ines.getByTestId('sign-summary');
+  await expect(summary).toContainText(`${code} revision 1`);
+  await expect(summary).toContainText('Approved — release for production');
+  await expect(summary).toContainText(/[0-9a-f]{64}/);
+  await ines.getByLabel('Your password').fill('not-the-password');
+  await ines.getByRole('button', { name: 'Sign', exact: true }).click();
+  await expect(ines.getByRole('alert')).toContainText('Not signed');
   await expect(ines.getByRole('alert')).toContainText('password is not correct');
   await expect(ines.getByLabel('Comment or reason')).toHaveValue('Matches the trial builds.');
+  await ines.getByRole('button', { name: 'Continue to signature' }).click();
+  await expect(ines.getByLabel('Your password')).toHaveValue('');
   await ines.getByLabel('Your password').fill(DEMO_PASSWORD);
   await ines.getByRole('button', { name: 'Sign', exact: true }).click();
   await expect(ines.getByRole('status')).toContainText('Signed and approved');

@@ -36,6 +36,11 @@ test('quality uploads a multi-part file, sees the plot and releases the batch', 
   await page.getByRole('button', { name: 'Sign and release' }).click();
   await expect(page.getByTestId('disposition')).toContainText('Released');
   await expect(page.getByTestId('disposition')).toContainText('Ines Halloran');
+  // The signed batch record opens from the link beside the signature.
+  const record = page.getByRole('link', { name: 'Batch record with the measurement summary (PDF)' });
+  const answer = await page.request.get((await record.getAttribute('href'))!);
+  expect(answer.status()).toBe(200);
+  expect(answer.headers()['content-type']).toContain('application/pdf');
   await expect(page.getByTestId('batch-state')).toHaveText('released');
   await expect(page.getByRole('link', { name: /Batch record with the measurement summary/ })).toBeVisible();
 });
@@ -57,4 +62,13 @@ test('a wrong password signs nothing and says so', async ({ page }) => {
   await page.getByRole('button', { name: 'Sign and reject' }).click();
   await expect(page.getByTestId('disposition-error')).toContainText('password is not correct');
   await expect(page.getByTestId('batch-state')).toHaveText('complete');
+});
+
+test('a missing page says it is missing, not that something went wrong', async ({ page }) => {
+  await signInThroughForm(page, DEMO.quality);
+  const answer = await page.goto('/library/no-such-page/anywhere');
+  expect(answer?.status()).toBe(404);
+  await expect(page.getByRole('heading', { level: 1 })).toHaveText('Nothing here');
+  await expect(page.getByText('There is no page at this address.')).toBeVisible();
+  await expect(page.getByText('Something went wrong on our side')).toHaveCount(0);
 });

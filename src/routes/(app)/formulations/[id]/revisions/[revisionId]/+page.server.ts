@@ -11,12 +11,12 @@ import {
 } from '$lib/server/formulations/read';
 import { contentFromForm, editorOptions } from '$lib/server/formulations/page-support';
 import { mayActOnRevisions, mayAuthorFormulations, maySignRevisions } from '$lib/access/policies';
-import { invalid } from '$lib/errors/domain-error';
 import { actionFailure } from '$lib/server/http/action-failure';
 import { idParam } from '$lib/server/http/id-param';
 import { createRevision, updateDraft } from '$lib/server/formulations/save';
 import { siliconeHandling } from '$lib/server/formulations/silicone';
 import { returnRevision, sign, submit, withdraw } from '$lib/server/formulations/workflow';
+import { signingProblems } from '$lib/server/formulations/signing-problems';
 import { addAttachment, removeAttachment } from '$lib/server/formulations/attachments';
 import { contentToFormValues, formDataToValues, type FormValues } from '$lib/formulations/form-values';
 import { allowedCommands } from '$lib/formulations/workflow-rules';
@@ -115,7 +115,7 @@ export const actions: Actions = {
     const rev = await revisionOf(params);
     const values = formDataToValues(await readForm(request));
     const parsed = signSchema.safeParse(values);
-    if (!parsed.success) return actionFailure(invalid(parsed.error.issues.map((i) => i.message).join('; ')), { action: 'sign', values });
+    if (!parsed.success) return actionFailure(await signingProblems(user, rev.id, values, parsed.error), { action: 'sign', values });
     const s = parsed.data;
     try {
       if (s.meaning === 'returned') await returnRevision(user, rev.id, { password: s.password, reason: s.comment }, s.version);
