@@ -64,13 +64,17 @@ describe('audit trail search and export', () => {
       'actor_email',
       'actor_name',
       'entity_type',
+      'record',
       'entity_id',
       'action',
+      'event',
       'before',
       'after',
       'ip'
     ]);
     expect(parsed.data.map((r) => r.action)).toEqual(['create', 'approve', 'create']);
+    // The stored codes stay for machines; people read the labels of the one table.
+    expect(parsed.data.map((r) => r.event)).toEqual(['Created', 'Approved', 'Created']);
     expect(parsed.data[0].at_utc).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/);
     // OWASP "CSV injection": a cell starting with "=" is prefixed with a quote mark.
     expect(parsed.data[2].entity_id).toBe("'=2+3");

@@ -7,6 +7,7 @@ import { z } from 'zod';
 import type { Knex } from 'knex';
 import { db } from '../db/index';
 import type { AuditRow } from '../../audit/types';
+import { actionLabel, entityLabel } from '../../audit/labels';
 
 export type { AuditRow } from '../../audit/types';
 
@@ -109,7 +110,21 @@ export async function auditCsv(q: AuditQuery): Promise<string | null> {
   const rows: AuditRow[] = (await filtered(q).select(COLUMNS).orderBy('a.id', 'asc')).map(toRow);
   return Papa.unparse(
     {
-      fields: ['id', 'at_utc', 'actor_id', 'actor_email', 'actor_name', 'entity_type', 'entity_id', 'action', 'before', 'after', 'ip'],
+      fields: [
+        'id',
+        'at_utc',
+        'actor_id',
+        'actor_email',
+        'actor_name',
+        'entity_type',
+        'record',
+        'entity_id',
+        'action',
+        'event',
+        'before',
+        'after',
+        'ip'
+      ],
       data: rows.map((r: AuditRow) => [
         r.id,
         r.at.toISOString(),
@@ -117,8 +132,10 @@ export async function auditCsv(q: AuditQuery): Promise<string | null> {
         r.actorEmail ?? '',
         r.actorName ?? '',
         r.entityType,
+        entityLabel(r.entityType),
         r.entityId ?? '',
         r.action,
+        actionLabel(r.action),
         r.before ?? '',
         r.after ?? '',
         r.ip ?? ''

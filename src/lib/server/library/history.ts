@@ -1,22 +1,9 @@
 /** Edit history of a material, read from the append-only audit trail. */
 import { db } from '../db/index';
 import type { HistoryEntry } from '../../library/types';
+import { actionLabel } from '../../audit/labels';
 
 export type { HistoryEntry } from '../../library/types';
-
-const ACTION_LABELS: Record<string, string> = {
-  create: 'Created',
-  update: 'Edited',
-  archive: 'Archived',
-  restore: 'Restored',
-  delete: 'Deleted',
-  'emission-spectrum-upload': 'Emission spectrum uploaded',
-  'excitation-spectrum-upload': 'Excitation spectrum uploaded',
-  'lot-add': 'Lot added',
-  'lot-remove': 'Lot removed',
-  'attachment-add': 'Document added',
-  'attachment-remove': 'Document removed'
-};
 
 const show = (v: unknown) =>
   v === null || v === undefined || v === '' ? '—' : typeof v === 'string' ? (v.length > 60 ? `${v.slice(0, 60)}…` : v) : JSON.stringify(v);
@@ -58,7 +45,7 @@ export async function forMaterial(materialId: number, limit = 100): Promise<Hist
     id: Number(r.id),
     at: r.at as Date,
     actor: String(r.actor_name ?? r.actor_email ?? 'system'),
-    action: ACTION_LABELS[String(r.action)] ?? String(r.action),
+    action: actionLabel(String(r.action)),
     changes: describe(String(r.action), parse(r.before_json), parse(r.after_json))
   }));
 }
