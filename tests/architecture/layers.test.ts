@@ -30,7 +30,8 @@ const PURE = lib(
   'storage',
   'errors',
   'roles',
-  'pump-bins'
+  'pump-bins',
+  'home'
 );
 const SERVER = lib('server');
 const DATABASE = lib('server/db');
