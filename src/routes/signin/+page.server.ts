@@ -4,11 +4,13 @@ import { signIn } from '../../auth';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 import { safeRedirect } from '$lib/server/auth/safe-redirect';
+import { takeWelcome } from '$lib/server/accounts/welcome';
 
-export const load: PageServerLoad = ({ locals, url }) => {
+export const load: PageServerLoad = ({ locals, url, cookies }) => {
   if (locals.user) redirect(303, safeRedirect(url.searchParams.get('redirectTo'), url.origin));
   return {
     failed: url.searchParams.has('error'),
+    welcome: url.searchParams.has('welcome') ? (takeWelcome(cookies) ?? { name: null, email: '' }) : null,
     redirectTo: safeRedirect(url.searchParams.get('redirectTo'), url.origin)
   };
 };

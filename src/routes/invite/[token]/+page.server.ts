@@ -6,6 +6,7 @@ import * as accounts from '$lib/server/accounts/service';
 import { acceptSchema } from '$lib/accounts/schema';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
+import { setWelcome } from '$lib/server/accounts/welcome';
 
 export const load: PageServerLoad = async ({ params }) => {
   const open = await findOpenInvite(params.token);
@@ -13,15 +14,17 @@ export const load: PageServerLoad = async ({ params }) => {
 };
 
 export const actions: Actions = {
-  accept: async ({ params, request }) => {
+  accept: async ({ params, request, cookies, url }) => {
     const form = Object.fromEntries(await readForm(request));
     const parsed = acceptSchema.safeParse(form);
     if (!parsed.success) return actionFailure(400, { name: String(form.name ?? ''), errors: z.flattenError(parsed.error).fieldErrors });
+    const open = await findOpenInvite(params.token);
     try {
       await accounts.acceptInvite(params.token, parsed.data.name, parsed.data.password);
     } catch (err) {
       return actionFailure(err, { name: parsed.data.name });
     }
+    if (open) setWelcome(cookies, url, { name: parsed.data.name, email: open.email });
     redirect(303, '/signin?welcome=1');
   }
 };
