@@ -13,6 +13,7 @@ import {
   type Target,
   type Tolerance
 } from '../aim/index';
+import { fieldLabel, readableIssue, readableSummary } from '../errors/readable-issues';
 import { ANSI_C78377_2017_TABLE1 } from '../spectral/data/ansi-c78377-2017';
 
 export type TargetKind = Target['kind'];
@@ -83,12 +84,15 @@ export function resolveAim(aim: AimState): AimResult {
   const t = targetSchema.safeParse(targetInput(aim));
   if (!t.success)
     errors.target = t.error.issues
-      .map((i) => (i.code === 'invalid_type' ? `${String(i.path.at(-1) ?? 'value')} is required` : i.message))
+      .map((i) => {
+        const path = i.path.join('.');
+        return i.code === 'invalid_type' ? `${fieldLabel(path) || 'A value'} is required` : readableIssue({ path, message: i.message });
+      })
       .join('; ');
   const steps = aim.toleranceSdcm;
   if (blank(steps) || !(steps > 0 && steps <= 20)) errors.tolerance = 'tolerance must be 0–20 SDCM steps';
   const f = floorsSchema.safeParse(floorsOf(aim.floors));
-  if (!f.success) errors.floors = f.error.issues.map((i) => `${String(i.path.at(-1))}: ${i.message}`).join('; ');
+  if (!f.success) errors.floors = readableSummary(f.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message })));
   if (!t.success || !f.success || errors.tolerance) return { ok: false, errors };
   return { ok: true, target: t.data, resolved: resolveTarget(t.data), tolerance: { kind: 'sdcm', steps: steps as number }, floors: f.data };
 }

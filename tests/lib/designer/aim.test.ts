@@ -28,9 +28,9 @@ describe('designer aim → target, tolerance, floors', () => {
     if (r.ok) return;
     expect(r.errors.target).toContain('CCT must be 1000–20000 K');
     expect(r.errors.tolerance).toContain('SDCM');
-    expect(r.errors.floors).toContain('raMin');
+    expect(r.errors.floors).toBe('Ra floor: must be at most 100');
     const missing = resolveAim(aim({ kind: 'xy', x: null }));
-    expect(!missing.ok && missing.errors.target).toContain('x is required');
+    expect(!missing.ok && missing.errors.target).toContain('Chromaticity x is required');
   });
 
   it('leaves empty floors out', () => {

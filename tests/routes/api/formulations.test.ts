@@ -56,7 +56,7 @@ describe('/api/v1/formulations', () => {
     const content = await warmWhite();
     const res = await call(collection.POST, event(c.rhea, { body: { name: 'x', content: { ...content, phosphors: [] } } }));
     expect(res.status).toBe(400);
-    expect(res.body.error).toMatch(/phosphors: at least one phosphor/);
+    expect(res.body.error).toMatch(/Phosphors: needs at least one phosphor|Phosphors: at least one phosphor/);
     expect((await db()('formulations').count({ n: '*' }))[0].n).toBe(before);
   });
 

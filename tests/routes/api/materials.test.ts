@@ -69,7 +69,7 @@ describe('/api/v1/phosphors and /api/v1/pumps', () => {
   it('answers 400 with the field named for an invalid body', async () => {
     const r = await call(phosphors.POST, event('formulator', { body: { ...phosphorFields('TST-A2'), iqe: 1.7 } }));
     expect(r.status).toBe(400);
-    expect(r.body.error).toMatch(/iqe: IQE must be 0\.01–1/);
+    expect(r.body.error).toMatch(/IQE must be 0\.01–1/);
   });
 
   it('edits with the version read, and answers 409 to a stale edit', async () => {

@@ -55,7 +55,8 @@ describe('apiHandler', () => {
     const a = await answer(parsed.error);
     expect(a.status).toBe(400);
     expect(a.body.issues).toEqual([{ path: 'batchMassG', message: 'must be > 0' }]);
-    expect(a.body.error).toBe('Invalid request: batchMassG: must be > 0');
+    // The message names the field by its label, the issue keeps the path for programs.
+    expect(a.body.error).toBe('Invalid request: Batch mass: must be > 0');
   });
 
   it('answers SvelteKit errors (sign-in, role) with their status in the same body shape', async () => {

@@ -9,6 +9,7 @@ import { checkRecipe, fractionsWithLeak, type RevisionContent } from '../../reci
 import { PREDICTION_CORE_VERSION, predictRevision, type RevisionPrediction } from '../../formulations/prediction';
 import { loadRevisionComponents } from './components';
 import { ValidationError } from './errors';
+import { readableSummary } from '../../errors/readable-issues';
 import { contentSha256 } from './hash';
 import { citedPackageModel } from '../package-models/choices';
 import { DomainError } from '../../errors/domain-error';
@@ -27,7 +28,7 @@ export function parseContent(raw: unknown): RevisionContent {
   const parsed = checkRecipe(raw);
   if (!parsed.ok) {
     const issues = parsed.issues;
-    throw new ValidationError(`Invalid revision content: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`, issues);
+    throw new ValidationError(`The revision cannot be saved: ${readableSummary(issues)}`, issues);
   }
   const c = parsed.content;
   const sum = fractionsWithLeak(c).reduce((s, f) => s + f, 0);

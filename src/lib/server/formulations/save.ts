@@ -10,6 +10,7 @@ import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import type { RevisionContent } from '../../recipe';
 import { ConflictError, NotFoundError, ValidationError } from './errors';
+import { readableSummary } from '../../errors/readable-issues';
 import { checkVersion, enforce, requireRoles, type Caller } from './guard';
 import { prepareRevision, type PreparedRevision } from './prepare';
 import { mayAuthorFormulations, mayDraftCorrection } from '../../access/policies';
@@ -110,7 +111,7 @@ export async function createFormulationWithDraft(
   const meta = formulationMetaSchema.safeParse(input);
   if (!meta.success) {
     const issues = meta.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
-    throw new ValidationError(issues.map((i) => i.message).join('; '), issues);
+    throw new ValidationError(readableSummary(issues), issues);
   }
   const prepared = await prepareRevision(db(), input.content);
   // A suggested code can be taken by a concurrent request between the check and the insert: try the next one.
