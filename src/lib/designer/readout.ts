@@ -7,6 +7,7 @@
 import { colourDistance, FLOOR_RULES, withinTolerance, type Floors, type ResolvedTarget, type Tolerance } from '../aim/index';
 import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
 import type { SpectrumEvaluation } from '../spectral/types';
+import { cctMeaningful } from '../spectral/meaningful';
 
 export interface FloorCheck {
   key: keyof Floors;
@@ -29,10 +30,17 @@ export function floorChecks(floors: Floors, e: SpectrumEvaluation): FloorCheck[]
   return FLOOR_RULES.filter((r) => floors[r.key] !== undefined).map((r) => {
     const limit = floors[r.key] as number;
     const criMetric = r.metric === 'ra' || r.metric === 'r9';
-    const value = criMetric && !e.cri.valid ? null : metricValue(e, r.metric);
+    // CIE 13.3 and TM-30 are judged together: neither where CIE 13.3 does not hold (../spectral/meaningful.ts).
+    const renderingMetric = criMetric || r.metric === 'rf' || r.metric === 'rg';
+    const rendering = e.cri.valid && cctMeaningful(e.cct, e.duv);
+    const value = renderingMetric && !rendering ? null : metricValue(e, r.metric);
     const pass = value !== null && r.sense * (limit - value) <= 0;
     const note =
-      value !== null ? null : criMetric ? 'not defined: too far from the Planckian locus (CIE 13.3 §5.3)' : 'not defined for this spectrum';
+      value !== null
+        ? null
+        : renderingMetric
+          ? 'not defined: too far from the Planckian locus (CIE 13.3 §5.3)'
+          : 'not defined for this spectrum';
     return { key: r.key, label: r.label, sense: r.sense > 0 ? '≥' : '≤', limit, value, pass, note };
   });
 }

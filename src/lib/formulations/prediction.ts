@@ -6,6 +6,7 @@
  */
 // Narrow imports: the blend index also loads the solver, whose module set-up is slow on a cold start.
 import { mix } from '../blend/mix';
+import { cctMeaningful } from '../spectral/meaningful';
 import { colourDistance, resolveTarget, violatedFloors, withinTolerance } from '../aim/index';
 import type { BlendComponents } from '../blend/types';
 import { findAnsiBin } from '../spectral/ansi/c78377';
@@ -42,15 +43,16 @@ export interface RevisionPrediction {
 const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
 const round = (v: number, digits: number) => Number(v.toFixed(digits));
 
-/** Floors the prediction misses; Ra/R9 floors count as missed when CIE 13.3 is not meaningful (DC ≥ 5.4e-3). */
+/** Floors the prediction misses; rendering floors count as missed when CIE 13.3 is not meaningful (DC ≥ 5.4e-3). */
 function missedFloors(
   content: RevisionContent,
   m: { ra: number | null; r9: number | null; rf: number | null; rg: number | null; ler: number }
 ): string[] {
   const f = content.floors;
+  const renderingFloor = [f.raMin, f.r9Min, f.rfMin, f.rgMin, f.rgMax].some((v) => v !== undefined);
   const undefinedCri =
-    (f.raMin !== undefined || f.r9Min !== undefined) && m.ra === null
-      ? ['Ra/R9 not defined (colour point too far from the Planckian locus, CIE 13.3 §5.3)']
+    renderingFloor && m.ra === null
+      ? ['Colour rendering (Ra, R9, Rf, Rg) not defined (colour point too far from the Planckian locus, CIE 13.3 §5.3)']
       : [];
   return [...undefinedCri, ...violatedFloors(f, { ra: m.ra ?? 100, r9: m.r9 ?? 100, rf: m.rf, rg: m.rg, ler: m.ler, costPer1000Lm: null })];
 }
@@ -60,10 +62,12 @@ export function predictRevision(content: RevisionContent, components: BlendCompo
   const e = result.evaluation;
   const target = resolveTarget(content.target);
   const err = colourDistance(e.x, e.y, target);
-  const ra = e.cri.valid ? e.cri.ra : null;
-  const r9 = e.cri.valid ? e.cri.ri[8] : null;
-  const rf = finite(e.tm30.rf);
-  const rg = finite(e.tm30.rg);
+  // Colour rendering only where CIE 13.3 holds and CCT means something, TM-30 with it (../spectral/meaningful.ts).
+  const rendering = e.cri.valid && cctMeaningful(e.cct, e.duv);
+  const ra = rendering ? e.cri.ra : null;
+  const r9 = rendering ? e.cri.ri[8] : null;
+  const rf = rendering ? finite(e.tm30.rf) : null;
+  const rg = rendering ? finite(e.tm30.rg) : null;
   const peak = Math.max(...result.spd.values);
   return {
     x: e.x,
@@ -74,7 +78,7 @@ export function predictRevision(content: RevisionContent, components: BlendCompo
     duv: e.duv,
     ra,
     r9,
-    ri: e.cri.valid ? e.cri.ri : [],
+    ri: rendering ? e.cri.ri : [],
     rf,
     rg,
     lerLmPerW: e.ler,

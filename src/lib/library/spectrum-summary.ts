@@ -8,8 +8,9 @@ import { evaluateGrid } from '../spectral/evaluate';
 import { resampleToGrid } from '../spectral/resample';
 import type { Spd } from '../spectral/types';
 
-export const CCT_DUV_LIMIT = 0.05;
-export const CCT_RANGE_K: [number, number] = [1000, 20_000];
+import { cctMeaningful } from '../spectral/meaningful';
+
+export { CCT_DUV_LIMIT, CCT_RANGE_K } from '../spectral/meaningful';
 
 export interface SpectrumSummary {
   peakNm: number;
@@ -27,7 +28,7 @@ export interface SpectrumSummary {
 
 export function summariseSpectrum(spd: Spd): SpectrumSummary {
   const e = evaluateGrid(resampleToGrid(spd), { cri: false, tm30: false });
-  const nearLocus = Number.isFinite(e.duv) && Math.abs(e.duv) <= CCT_DUV_LIMIT && e.cct >= CCT_RANGE_K[0] && e.cct <= CCT_RANGE_K[1];
+  const nearLocus = cctMeaningful(e.cct, e.duv);
   return {
     peakNm: e.peakNm,
     fwhmNm: e.fwhmNm,
