@@ -29,6 +29,10 @@ const envSchema = z.object({
     z.coerce.number(SOLVE_WORKERS_RULE).int(SOLVE_WORKERS_RULE).min(0, SOLVE_WORKERS_RULE).max(16, SOLVE_WORKERS_RULE).optional()
   ),
   PF_SOLVE_WORKER: z.string().min(1).default('build/solve-worker.js'),
+  PRICE_CURRENCY: z
+    .string()
+    .regex(/^[A-Z]{3}$/, 'PRICE_CURRENCY must be an ISO 4217 code such as EUR')
+    .default('EUR'),
   NODE_ENV: z.string().default('development')
 });
 
@@ -46,6 +50,8 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env) {
     /** Whether X-Forwarded-Host/-Proto come from a trusted reverse proxy; otherwise ORIGIN decides. */
     trustProxyHost: env.TRUST_PROXY_HOST === '1',
     production: env.NODE_ENV === 'production',
+    /** The currency of every price in the library (ISO 4217), shown beside costs. */
+    priceCurrency: env.PRICE_CURRENCY,
     db: connectionSettings(source),
     dbPoolMax: env.DB_POOL_MAX,
     /** Solver worker threads per instance; null = one per core (at most 4). */
