@@ -10,6 +10,9 @@ test('quality uploads a multi-part file, sees the plot and releases the batch', 
   await page.getByTestId('awaiting').getByRole('link', { name: batch.batchNumber }).click();
   await page.waitForURL(new RegExp(`/measurements/${batch.id}$`));
   await expect(page.getByTestId('batch-state')).toHaveText('complete');
+  // Before any upload the page says what to do next, not "0 of 0 parts pass".
+  await expect(page.getByTestId('next-step')).toContainText('Next: upload the spectra');
+  await expect(page.getByText('0 of 0')).toHaveCount(0);
 
   await page
     .getByLabel('Measurement file', { exact: true })

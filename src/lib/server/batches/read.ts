@@ -3,6 +3,7 @@
  * lines, lots and revision; lists with filters; lot traceability in both directions.
  */
 import type { Knex } from 'knex';
+import { massAtStep } from '../../batches/weighout/mass-at-step';
 import { db } from '../db/index';
 import { getRevision, type RevisionRecord } from '../formulations/read';
 import { toBatch, toLine, toSummary, type Batch, type BatchLine, type BatchSummary } from './records';
@@ -171,7 +172,12 @@ export async function traceLot(lotNumber: string): Promise<{ lots: LotTrace[]; u
     const byBatch = new Map<number, LotTrace['batches'][number]>();
     for (const r of rows) {
       const entry = byBatch.get(r.id) ?? { ...toSummary(r), lines: [] };
-      entry.lines.push({ seq: r.line_seq, code: r.line_code, actualG: r.line_actual_g === null ? null : String(r.line_actual_g) });
+      // Masses at the batch balance's step, so "64.900" and "2.857" read alike.
+      entry.lines.push({
+        seq: r.line_seq,
+        code: r.line_code,
+        actualG: r.line_actual_g === null ? null : massAtStep(r.line_actual_g, r.resolution_g)
+      });
       byBatch.set(r.id, entry);
     }
     out.push({
