@@ -97,7 +97,8 @@ function materials(): SeedMaterial[] {
       absorption_reference_nm: p.absorptionReferenceNm,
       cost_per_kg: p.costPerKg,
       d50_um: 12 + ((i * 7) % 12),
-      safety_note: safetyFor(p.family ?? '')
+      safety_note: safetyFor(p.family ?? ''),
+      hazards: /fluoride/i.test(p.family ?? '') ? 'hydrogenFluoride' : ''
     }
   }));
   return [...pumps, ...phosphors];

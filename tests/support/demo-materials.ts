@@ -64,7 +64,8 @@ export async function ensureDemoMaterials(knex: Knex): Promise<Map<string, numbe
         density_g_cm3: p.densityGPerCm3,
         cost_per_kg: p.costPerKg,
         peak_nm: p.nominalPeakNm,
-        fwhm_nm: p.nominalFwhmNm
+        fwhm_nm: p.nominalFwhmNm,
+        hazards: /fluoride/i.test(p.family ?? '') ? 'hydrogenFluoride' : ''
       })
     );
   }

@@ -3,6 +3,7 @@
  * Form fields arrive as strings: empty means "not known" (null); a decimal comma is accepted.
  */
 import { z } from 'zod';
+import { HAZARD_CODES, isHazardCode } from './hazards';
 
 const text = (max: number, label: string) =>
   z.preprocess(
@@ -45,7 +46,23 @@ export const materialFieldsSchema = z.object({
   costPerKg: optionalNumber('Cost per kg', 0, 10_000_000),
   d50Um: optionalNumber('Particle size D50', 0.01, 1000, ' µm'),
   notes: optionalText(5000, 'Notes'),
-  safetyNote: optionalText(2000, 'Safety note')
+  safetyNote: optionalText(2000, 'Safety note'),
+  /** Hazard codes, as a list or comma-separated text; stored as sorted comma-separated codes. */
+  hazards: z.preprocess(
+    (v) => (v === undefined || v === null ? '' : Array.isArray(v) ? v.join(',') : v),
+    z
+      .string('Hazards must be a list of hazard codes')
+      .transform((s) => [
+        ...new Set(
+          s
+            .split(',')
+            .map((c) => c.trim())
+            .filter(Boolean)
+        )
+      ])
+      .refine((codes) => codes.every(isHazardCode), `Hazards: each must be one of ${HAZARD_CODES.join(', ')}`)
+      .transform((codes) => HAZARD_CODES.filter((c) => codes.includes(c)).join(','))
+  )
 });
 
 export type MaterialFieldsInput = z.infer<typeof materialFieldsSchema>;

@@ -82,7 +82,7 @@ describe('POST /api/v1/solve', () => {
       jsonEvent({ components, target: { kind: 'cctDuv', cct: 3000, duv: 0 }, objective: 'fastest' })
     );
     expect(status).toBe(400);
-    expect(body.error).toMatch(/objective/);
+    expect(body.error).toMatch(/objective/i);
   });
 });
 

@@ -35,7 +35,8 @@ const fields = (code: string, kind: 'phosphor' | 'pump') => ({
   costPerKg: 150,
   d50Um: null,
   notes: 'fuzz probe',
-  safetyNote: null
+  safetyNote: null,
+  hazards: ''
 });
 
 beforeAll(async () => {

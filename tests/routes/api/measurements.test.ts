@@ -89,7 +89,7 @@ describe('PUT acceptance and POST disposition validate their bodies', () => {
       })
     );
     expect(res.status).toBe(400);
-    expect(res.body.error).toMatch(/steps must be 1–7/);
+    expect(res.body.error).toMatch(/steps must be 1–7/i);
   });
   it('disposition: a comment and the password are required; a meaning must fit the decision', async () => {
     const body = { decision: 'release', meaning: 'Rejection for rework', comment: '', password: '', version: 1 };

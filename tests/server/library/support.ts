@@ -61,5 +61,6 @@ export const phosphorFields = (code: string) => ({
   costPerKg: 150,
   d50Um: 15,
   notes: null,
-  safetyNote: null
+  safetyNote: null,
+  hazards: ''
 });

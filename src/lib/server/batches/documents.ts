@@ -3,6 +3,7 @@
  * `batchRecordPdf(id, { measurementSummary })` to add its measured-colour section.
  */
 import { buildBatchTicket } from '../pdf/batch-ticket';
+import { batchCautions } from './cautions';
 import { buildBatchRecord } from '../pdf/batch-record';
 import type { BatchDoc, MeasurementSummary } from '../pdf/batch-doc';
 import type { PaperSize } from '../../batches/weighout/paper';
@@ -87,7 +88,10 @@ async function docWithPackageModel(d: BatchDetail): Promise<BatchDoc> {
   const doc = toBatchDoc(d);
   const ref = d.revision?.content.packageModelRef;
   const cited = ref ? await citedPackageModel(ref) : null;
-  return cited ? { ...doc, formulation: { ...doc.formulation, packageModel: `${cited.name} v${cited.version}` } } : doc;
+  const cautions = await batchCautions(d.lines);
+  return cited
+    ? { ...doc, cautions, formulation: { ...doc.formulation, packageModel: `${cited.name} v${cited.version}` } }
+    : { ...doc, cautions };
 }
 
 export async function batchTicketPdf(id: number, size: PaperSize = 'A4'): Promise<{ pdf: Buffer; batchNumber: string }> {

@@ -253,6 +253,8 @@ export interface MaterialRow {
   d50_um: number | null; // decimal(8,2), read as a number (decimalNumbers)
   notes: string | null;
   safety_note: string | null;
+  /** Comma-separated hazard codes (src/lib/library/hazards.ts); '' for none. */
+  hazards: string;
   emission_spectrum_id: number | null;
   excitation_spectrum_id: number | null;
   archived_at: Date | null;

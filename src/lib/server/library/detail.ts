@@ -81,6 +81,7 @@ export function toApi(m: Material, detail?: Pick<MaterialDetail, 'emission' | 'e
     d50Um: m.d50Um,
     notes: m.notes,
     safetyNote: m.safetyNote,
+    hazards: m.hazards,
     archived: m.archivedAt !== null,
     archivedAt: m.archivedAt,
     version: m.version,

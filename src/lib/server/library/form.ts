@@ -7,7 +7,8 @@ export type FormValues = Record<string, string>;
 export type FieldErrors = Record<string, string[] | undefined>;
 
 export function formValues(fd: FormData, keys: readonly string[]): FormValues {
-  return Object.fromEntries(keys.map((k) => [k, String(fd.get(k) ?? '')]));
+  // Checkbox groups (hazards) send one value per ticked box.
+  return Object.fromEntries(keys.map((k) => [k, k === 'hazards' ? fd.getAll(k).map(String).join(',') : String(fd.get(k) ?? '')]));
 }
 
 export const MATERIAL_FORM_KEYS = Object.keys(EDITABLE_COLUMNS);

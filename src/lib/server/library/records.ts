@@ -23,6 +23,8 @@ export interface Material {
   d50Um: number | null;
   notes: string | null;
   safetyNote: string | null;
+  /** Comma-separated hazard codes ('' for none): ../../library/hazards.ts. */
+  hazards: string;
   emissionSpectrumId: number | null;
   excitationSpectrumId: number | null;
   archivedAt: Date | null;
@@ -48,7 +50,8 @@ export const EDITABLE_COLUMNS = {
   costPerKg: 'cost_per_kg',
   d50Um: 'd50_um',
   notes: 'notes',
-  safetyNote: 'safety_note'
+  safetyNote: 'safety_note',
+  hazards: 'hazards'
 } as const;
 export type EditableField = keyof typeof EDITABLE_COLUMNS;
 export type MaterialFields = { [K in EditableField]: Material[K] };
@@ -74,6 +77,7 @@ export function toMaterial(r: Row | MaterialRow): Material {
     d50Um: num(r.d50_um),
     notes: (r.notes as string) ?? null,
     safetyNote: (r.safety_note as string) ?? null,
+    hazards: (r.hazards as string) ?? '',
     emissionSpectrumId: num(r.emission_spectrum_id),
     excitationSpectrumId: num(r.excitation_spectrum_id),
     archivedAt: (r.archived_at as Date) ?? null,

@@ -50,6 +50,8 @@ export interface BatchDoc {
   process: { mixedAt: Date | null; expiresAt: Date | null; completedAt: Date | null; completedBy: string | null };
   notes: string | null;
   timeZone?: string;
+  /** Handling cautions for this batch's materials (./cautions.ts); the general ones when absent. */
+  cautions?: string[];
 }
 
 /** Optional section the quality feature adds to the batch record (measured colour of finished parts). */

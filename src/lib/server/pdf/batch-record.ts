@@ -6,7 +6,7 @@
  */
 import { newDocument, renderToBuffer, type PaperSize } from './document';
 import { headerFields, stamp, type BatchDoc, type MeasurementSummary } from './batch-doc';
-import { WEIGHOUT_CAUTIONS, WEIGHOUT_CAUTION_TITLE } from './cautions';
+import { WEIGHOUT_CAUTION_TITLE, weighoutCautions } from './cautions';
 import { MUTED, Sheet } from './sheet';
 
 const STATUS_TEXT = { in: 'in range', below: 'BELOW RANGE', above: 'ABOVE RANGE' } as const;
@@ -102,7 +102,7 @@ export async function buildBatchRecord(d: BatchDoc, opts: BatchRecordOptions = {
     ['Prepared by', 'Checked by', 'Quality disposition'],
     [d.process.completedBy ? `Completed in Phosforge by ${d.process.completedBy}` : null]
   );
-  sheet.boxed(WEIGHOUT_CAUTION_TITLE, WEIGHOUT_CAUTIONS, '#9c4309');
+  sheet.boxed(WEIGHOUT_CAUTION_TITLE, d.cautions ?? weighoutCautions([]), '#9c4309');
   sheet.footers(`${d.batchNumber} · ${d.formulation.code} rev. ${d.formulation.revisionNo} · batch record`);
   return renderToBuffer(doc);
 }

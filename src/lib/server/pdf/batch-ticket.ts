@@ -6,7 +6,7 @@
 import { code128Png, qrPng } from './barcodes';
 import { newDocument, renderToBuffer, type PaperSize } from './document';
 import { headerFields, processNotes, stamp, type BatchDoc } from './batch-doc';
-import { WEIGHOUT_CAUTIONS, WEIGHOUT_CAUTION_TITLE } from './cautions';
+import { WEIGHOUT_CAUTION_TITLE, weighoutCautions } from './cautions';
 import { MUTED, Sheet } from './sheet';
 
 export async function buildBatchTicket(d: BatchDoc, size: PaperSize = 'A4'): Promise<Buffer> {
@@ -39,7 +39,7 @@ export async function buildBatchTicket(d: BatchDoc, size: PaperSize = 'A4'): Pro
   sheet.y = top + qrSize + 12;
 
   headerFields(sheet, d);
-  sheet.boxed(WEIGHOUT_CAUTION_TITLE, WEIGHOUT_CAUTIONS, '#9c4309');
+  sheet.boxed(WEIGHOUT_CAUTION_TITLE, d.cautions ?? weighoutCautions([]), '#9c4309');
 
   sheet.heading('Lines in weighing order');
   sheet.table(

@@ -11,7 +11,8 @@ import { scaleBatch } from '$lib/server/batches/scale';
 import { loadingSummary, toleranceLabel } from '$lib/server/batches/documents';
 import { completeSchema, overrideLineSchema, recordLineSchema } from '$lib/batches/schema';
 import { LOADING_BASIS_LABELS } from '$lib/batches/weighout/schema';
-import { WEIGHOUT_CAUTIONS, WEIGHOUT_CAUTION_TITLE } from '$lib/server/pdf/cautions';
+import { WEIGHOUT_CAUTION_TITLE } from '$lib/server/pdf/cautions';
+import { batchCautions } from '$lib/server/batches/cautions';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
@@ -26,7 +27,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     basisLabel: LOADING_BASIS_LABELS[batch.loadingBasis],
     loadingSummary: loadingSummary(d.batch),
     silicone: d.silicone,
-    caution: { title: WEIGHOUT_CAUTION_TITLE, lines: WEIGHOUT_CAUTIONS },
+    caution: { title: WEIGHOUT_CAUTION_TITLE, lines: await batchCautions(d.lines) },
     canWeigh: mayWeigh(user),
     canAccept: mayAcceptDeviation(user),
     userId: user.id

@@ -21,6 +21,8 @@ import { addAttachment, removeAttachment } from '$lib/server/formulations/attach
 import { contentToFormValues, formDataToValues, type FormValues } from '$lib/formulations/form-values';
 import { allowedCommands } from '$lib/formulations/workflow-rules';
 import { citedPackageModel } from '$lib/server/package-models/choices';
+import { hazardCautionsOf } from '$lib/server/library/hazard-cautions';
+import { materialIdsOf } from '$lib/recipe';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
@@ -58,6 +60,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     storedContentVerified(rev.id),
     ref ? citedPackageModel(ref) : null
   ]);
+  const hazardCautions = await hazardCautionsOf(materialIdsOf(rev.content).phosphors);
   return {
     rev,
     commands,
@@ -69,7 +72,8 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     canStartDraft: mayAuthorFormulations(user),
     editor: commands.includes('edit') ? { values: contentToFormValues(rev.content), options: await editorOptions() } : null,
     silicone,
-    packageModel: ref ? { id: ref.id, version: ref.version, name: cited?.name ?? null } : null
+    packageModel: ref ? { id: ref.id, version: ref.version, name: cited?.name ?? null } : null,
+    hazardCautions
   };
 };
 
