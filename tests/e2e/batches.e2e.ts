@@ -67,6 +67,8 @@ test('a technician plans a batch, downloads the ticket and records weights inclu
   const first = page.getByTestId('line-2');
   await first.getByLabel(/Lot/).fill('NO-SUCH-LOT');
   await first.getByLabel('Balance reading (g)').fill('1.864');
+  // Said live, before Record: the reading may be in range, the lot is not one of GL-530's.
+  await expect(first.getByTestId('lot-problem-2')).toContainText('"NO-SUCH-LOT" is not a known lot of GL-530');
   await first.getByRole('button', { name: 'Re-record' }).click();
   await expect(first.getByRole('alert')).toContainText('not a known lot of GL-530');
   await expect(first.getByLabel('Balance reading (g)')).toHaveValue('1.864');

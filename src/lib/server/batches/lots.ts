@@ -5,6 +5,8 @@
  */
 import type { Knex } from 'knex';
 import { invalid } from './errors';
+import { db } from '../db/index';
+import { lotStanding, type KnownLot } from '../../batches/lot-standing';
 
 export interface CheckedLot {
   lotId: number | null;
@@ -19,26 +21,35 @@ export async function checkLot(
 ): Promise<CheckedLot> {
   const text = lotNumber.trim();
   if (line.material_id === null) return { lotId: null, lotNumber: text };
-  const lot = await trx('material_lots').where({ material_id: line.material_id, lot_number: text }).first('id', 'lot_number', 'expires_on');
-  if (!lot) {
-    const known: { lot_number: string }[] = await trx('material_lots')
-      .where({ material_id: line.material_id })
-      .orderBy('created_at', 'desc')
-      .limit(5)
-      .select('lot_number');
-    const hint = known.length
-      ? ` Known lots: ${known.map((k) => k.lot_number).join(', ')}.`
-      : ' No lot of this material is registered yet.';
-    throw invalid(`"${text}" is not a known lot of ${line.code}.${hint}`, [
-      { path: 'lotNumber', message: `not a known lot of ${line.code}` }
-    ]);
-  }
-  const expires: Date | null = lot.expires_on ? new Date(lot.expires_on) : null;
-  if (expires && expires.toISOString().slice(0, 10) < today.toISOString().slice(0, 10)) {
-    throw invalid(
-      `Lot ${lot.lot_number} of ${line.code} expired on ${expires.toISOString().slice(0, 10)}; use a current lot or have it retested.`,
-      [{ path: 'lotNumber', message: 'lot expired' }]
-    );
-  }
+  const known = await knownLots(trx, [line.material_id]);
+  const standing = lotStanding(text, line.code, known.get(line.material_id) ?? [], today.toISOString().slice(0, 10));
+  if (standing.kind === 'unknown') throw invalid(standing.message, [{ path: 'lotNumber', message: `not a known lot of ${line.code}` }]);
+  if (standing.kind === 'expired') throw invalid(standing.message, [{ path: 'lotNumber', message: 'lot expired' }]);
+  const lot = await trx('material_lots').where({ material_id: line.material_id, lot_number: text }).first('id', 'lot_number');
+  if (!lot)
+    throw invalid(`"${text}" is not a known lot of ${line.code}.`, [{ path: 'lotNumber', message: `not a known lot of ${line.code}` }]);
   return { lotId: lot.id, lotNumber: lot.lot_number };
+}
+
+/** Registered lots per material, newest first (for the check above and the weighing page's live hint). */
+export async function knownLots(k: Knex | Knex.Transaction, materialIds: readonly number[]): Promise<Map<number, KnownLot[]>> {
+  const out = new Map<number, KnownLot[]>();
+  if (!materialIds.length) return out;
+  const rows = await k('material_lots')
+    .whereIn('material_id', [...new Set(materialIds)])
+    .orderBy('created_at', 'desc')
+    .orderBy('id', 'desc')
+    .select('material_id', 'lot_number', 'expires_on');
+  for (const r of rows as { material_id: number; lot_number: string; expires_on: Date | string | null }[]) {
+    const list = out.get(r.material_id) ?? [];
+    const expires = r.expires_on === null ? null : new Date(r.expires_on).toISOString().slice(0, 10);
+    list.push({ lotNumber: r.lot_number, expiresOn: expires });
+    out.set(r.material_id, list);
+  }
+  return out;
+}
+
+/** Registered lots of these materials, keyed by material id (for pages). */
+export async function lotsOfMaterials(materialIds: readonly number[]): Promise<Record<number, KnownLot[]>> {
+  return Object.fromEntries(await knownLots(db(), materialIds));
 }

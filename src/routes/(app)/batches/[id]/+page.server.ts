@@ -13,6 +13,7 @@ import { completeSchema, overrideLineSchema, recordLineSchema } from '$lib/batch
 import { LOADING_BASIS_LABELS } from '$lib/batches/weighout/schema';
 import { WEIGHOUT_CAUTION_TITLE } from '$lib/server/pdf/cautions';
 import { batchCautions } from '$lib/server/batches/cautions';
+import { lotsOfMaterials } from '$lib/server/batches/lots';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
@@ -28,6 +29,9 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     loadingSummary: loadingSummary(d.batch),
     silicone: d.silicone,
     caution: { title: WEIGHOUT_CAUTION_TITLE, lines: await batchCautions(d.lines) },
+    // Registered lots per line's material, for the live lot hint (the server checks again on Record).
+    lots: await lotsOfMaterials(d.lines.map((l) => l.materialId).filter((id): id is number => id !== null)),
+    today: new Date().toISOString().slice(0, 10),
     canWeigh: mayWeigh(user),
     canAccept: mayAcceptDeviation(user),
     userId: user.id
