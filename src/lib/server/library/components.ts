@@ -16,21 +16,31 @@ export interface MaterialOption {
   name: string;
   family: string | null;
   peakNm: number | null;
+  /** False until an emission spectrum is uploaded: the blend model cannot use the material yet. */
+  hasSpectrum: boolean;
 }
 
 export async function listMaterialOptions(kind: MaterialKind): Promise<MaterialOption[]> {
-  const rows: { id: number; code: string; name: string; family: string | null; peak_nm: number | null }[] = await db()('materials')
+  const rows: {
+    id: number;
+    code: string;
+    name: string;
+    family: string | null;
+    peak_nm: number | null;
+    emission_spectrum_id: number | null;
+  }[] = await db()('materials')
     .where({ kind })
     .whereNull('archived_at')
     .orderByRaw('peak_nm IS NULL, peak_nm')
     .orderBy('code')
-    .select('id', 'code', 'name', 'family', 'peak_nm');
+    .select('id', 'code', 'name', 'family', 'peak_nm', 'emission_spectrum_id');
   return rows.map((r) => ({
     id: r.id,
     code: r.code,
     name: r.name,
     family: r.family,
-    peakNm: r.peak_nm == null ? null : Number(r.peak_nm)
+    peakNm: r.peak_nm == null ? null : Number(r.peak_nm),
+    hasSpectrum: r.emission_spectrum_id !== null
   }));
 }
 

@@ -30,6 +30,8 @@ export interface MaterialChoice {
   name: string;
   family: string | null;
   peakNm: number | null;
+  /** False for a material without an emission spectrum: offered, but not choosable. */
+  hasSpectrum?: boolean;
 }
 
 export const MAX_PHOSPHORS = 5;
@@ -98,7 +100,8 @@ export class DesignerSession {
       const cited = opened.packageModelRef;
       if (cited && packageModels.some((m) => m.id === cited.id && m.version === cited.version)) this.packageModelId = cited.id;
     } else {
-      this.pumpId = (pumps.find((p) => (p.peakNm ?? 0) >= 430) ?? pumps[0])?.id ?? null;
+      const usable = pumps.filter((p) => p.hasSpectrum !== false);
+      this.pumpId = (usable.find((p) => (p.peakNm ?? 0) >= 430) ?? usable[0])?.id ?? null;
     }
     if (openedAim) this.aim = openedAim;
     this.savedSnapshot = this.snapshot;
