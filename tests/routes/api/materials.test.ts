@@ -104,6 +104,23 @@ describe('/api/v1/phosphors and /api/v1/pumps', () => {
     expect(dry.status).toBe(200);
     expect(dry.body).toMatchObject({ saved: false, points: 81 });
     expect((await db()('material_spectra').where({ material_id: Number(id) })).length).toBe(0);
+    // A yellow band exported over 540–580 nm only: refused, naming where it is cut off; nothing saved.
+    const band = [
+      'wavelength,intensity',
+      ...Array.from({ length: 41 }, (_, i) => 540 + i).map((l) => `${l},${Math.exp(-(((l - 560) / 60) ** 2)).toFixed(4)}`)
+    ];
+    const cut = await call(
+      phosphorSpectrum.POST,
+      event('formulator', {
+        params: { id },
+        query: '?kind=emission&version=1',
+        raw: band.join('\n'),
+        headers: { 'content-type': 'text/csv' }
+      })
+    );
+    expect(cut.status).toBe(422);
+    expect(cut.body.error).toMatch(/emission is cut off at 540 nm .* and at 580 nm .*380–780 nm/);
+    expect((await db()('material_spectra').where({ material_id: Number(id) })).length).toBe(0);
     const form = new FormData();
     form.set('file', new File([gaussianCsv(600, 45)], 'orange.csv', { type: 'text/csv' }));
     const saved = await call(phosphorSpectrum.POST, event('formulator', { params: { id }, query: '?kind=emission&version=1', raw: form }));

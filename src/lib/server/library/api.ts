@@ -104,7 +104,7 @@ export function spectrumUpload(kind: MaterialKind) {
         const q = readQuery(event.url.searchParams, uploadQuerySchema);
         const file = await readUploadedFile(event.request, SPECTRUM_UPLOAD);
         if (q.dryRun === '1' || q.dryRun === 'true') {
-          const p = previewSpectrumFile(file);
+          const p = previewSpectrumFile(file, q.kind);
           return finiteJson({ saved: false, points: p.spd.wavelengths.length, metrics: p.summary, warnings: p.warnings, spectrum: p.spd });
         }
         const r = await uploadSpectrum(user, id, q.kind, file, q.version);

@@ -5,6 +5,7 @@
  * material's pointer, peak and FWHM updated — one transaction; the object is removed if it fails.
  */
 import { writeTransaction } from '../db/transaction';
+import { emissionCoverage } from '../../library/spectrum-coverage';
 import * as audit from '../db/audit';
 import { putFile } from '../storage/objects';
 import { DEFAULT_MAX_BYTES, formatBytes, parseSpectrumFile } from '../../spectrum-file/parse';
@@ -33,8 +34,11 @@ export interface SpectrumPreview {
   fileName: string;
 }
 
-/** Parses and checks a file; throws a domain error (413/422) naming the lines. Saves nothing. */
-export function previewSpectrumFile(file: SpectrumFileInput): SpectrumPreview {
+/**
+ * Parses and checks a file; throws a domain error (413/422) naming the lines. Saves nothing.
+ * An emission file must hold its whole band (../../library/spectrum-coverage.ts).
+ */
+export function previewSpectrumFile(file: SpectrumFileInput, kind: SpectrumKind = 'emission'): SpectrumPreview {
   if (file.body.length === 0) throw unprocessable('The file is empty.');
   if (file.body.length > DEFAULT_MAX_BYTES) {
     throw tooLarge(`The file is ${formatBytes(file.body.length)}; the limit is ${formatBytes(DEFAULT_MAX_BYTES)}. Nothing was saved.`);
@@ -48,8 +52,10 @@ export function previewSpectrumFile(file: SpectrumFileInput): SpectrumPreview {
     );
   }
   const spd = { wavelengths: parsed.wavelengths, values: parsed.columns[0].values };
+  const coverage = kind === 'emission' ? emissionCoverage(spd) : { refusal: null, warnings: [] };
+  if (coverage.refusal) throw unprocessable(`${file.name} was not saved: ${coverage.refusal}.`, [lineIssue(null, coverage.refusal)]);
   try {
-    return { spd, summary: summariseSpectrum(spd), warnings: parsed.warnings, fileName: file.name };
+    return { spd, summary: summariseSpectrum(spd), warnings: [...parsed.warnings, ...coverage.warnings], fileName: file.name };
   } catch (err) {
     if (err instanceof SpectrumInputError)
       throw unprocessable(`${file.name} was not saved: ${err.message}.`, [lineIssue(null, err.message)]);
@@ -68,7 +74,7 @@ export async function uploadSpectrum(
   const material = await records.get(materialId);
   if (!material) throw notFound(materialId);
   if (kind === 'excitation' && material.kind === 'pump') throw invalid('A pump has an emission spectrum only.');
-  const preview = previewSpectrumFile(file);
+  const preview = previewSpectrumFile(file, kind);
   return writeTransaction(async (trx) => {
     const current = await lockForEdit(trx, materialId, version, 'given a new spectrum');
     const fileId = await putFile(

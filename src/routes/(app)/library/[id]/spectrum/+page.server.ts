@@ -43,7 +43,7 @@ export const actions: Actions = {
     const { kind, file } = await readUpload(request);
     if (!kind) return actionFailure(400, { error: 'Choose emission or excitation.' });
     if (!file) return actionFailure(400, { error: 'Choose a spectrum file (CSV or TXT) first.' });
-    const p = await tryAction({ kind }, async () => previewSpectrumFile(file));
+    const p = await tryAction({ kind }, async () => previewSpectrumFile(file, kind));
     if ('status' in p) return p;
     return { preview: { kind, fileName: p.fileName, spd: p.spd, summary: p.summary, warnings: p.warnings } };
   },
