@@ -42,6 +42,8 @@ export interface RevisionRecord {
   sourceBatchId: number | null;
   returnReason: string | null;
   withdrawReason: string | null;
+  /** Why it was submitted although its prediction misses its aim; null when it meets it. */
+  offAimReason: string | null;
 }
 
 export interface SignatureRecord {

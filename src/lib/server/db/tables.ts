@@ -184,6 +184,7 @@ export interface FormulationRevisionRow {
   source_batch_id: number | null;
   return_reason: string | null;
   withdraw_reason: string | null;
+  off_aim_reason: string | null;
 }
 
 export interface FormulationRow {

@@ -38,8 +38,9 @@ async function emailsOf(role: 'quality' | 'technician', except: number[] = []): 
   return (await users.byRole(role)).filter((u) => !except.includes(u.id)).map((u) => u.email);
 }
 
-export async function notifySubmitted(r: RevisionRecord, submitter: { id: number; name: string }): Promise<boolean> {
-  return send(revisionSubmittedMessage(await emailsOf('quality', [submitter.id]), notice(r), submitter.name));
+export async function notifySubmitted(r: RevisionRecord, submitter: { id: number; name: string }, miss: string[] = []): Promise<boolean> {
+  const offAim = miss.length ? { miss, reason: r.offAimReason ?? '' } : null;
+  return send(revisionSubmittedMessage(await emailsOf('quality', [submitter.id]), notice(r), submitter.name, offAim));
 }
 
 async function authorEmail(r: RevisionRecord): Promise<string[]> {

@@ -41,6 +41,7 @@ export interface RevisionRow {
   source_batch_id: number | null;
   return_reason: string | null;
   withdraw_reason: string | null;
+  off_aim_reason?: string | null;
 }
 
 export function toRevisionRecord(r: RevisionRow): RevisionRecord {
@@ -70,6 +71,7 @@ export function toRevisionRecord(r: RevisionRow): RevisionRecord {
     basedOnRevisionId: r.based_on_revision_id,
     sourceBatchId: r.source_batch_id,
     returnReason: r.return_reason,
-    withdrawReason: r.withdraw_reason
+    withdrawReason: r.withdraw_reason,
+    offAimReason: r.off_aim_reason ?? null
   };
 }

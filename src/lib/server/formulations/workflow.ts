@@ -4,12 +4,14 @@
  * the caller and the optimistic-lock version, leaves audit rows, then sends its notices.
  */
 import type { Knex } from 'knex';
+import { aimMiss, OFF_AIM_REASON_MIN } from '../../formulations/aim-miss';
+import type { RevisionPrediction } from '../../formulations/prediction';
 import { z } from 'zod';
 import { db } from '../db/index';
 import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import type { RevisionCommand } from '../../formulations/workflow-rules';
-import { ConflictError, NotFoundError } from './errors';
+import { ConflictError, NotFoundError, ValidationError } from './errors';
 import { checkVersion, enforce, type Caller } from './guard';
 import { storedContentSha256 } from './hash';
 import { getRevision } from './read';
@@ -39,6 +41,7 @@ interface Locked {
   version: number;
   content_json: string;
   content_sha256: string;
+  predicted_json: string;
 }
 
 async function lockRevision(trx: Knex.Transaction, revisionId: number): Promise<Locked> {
@@ -88,20 +91,43 @@ async function reload(revisionId: number) {
   return r;
 }
 
-export async function submit(caller: Caller, revisionId: number, version?: number) {
+/**
+ * Draft → submitted. A revision whose prediction misses its aim (outside the tolerance, or a floor
+ * missed) is submitted only with a stated reason, which the review mail and the record carry.
+ */
+export async function submit(caller: Caller, revisionId: number, version?: number, offAimReason?: string) {
+  let miss: string[] = [];
   await writeTransaction(async (trx) => {
     const row = await lockRevision(trx, revisionId);
     enforce('submit', caller, { state: row.state, createdBy: row.created_by, version: row.version });
     checkVersion(version, row.version, row.state);
     checkIntegrity(row);
+    miss = aimMiss(JSON.parse(row.predicted_json) as RevisionPrediction);
+    const reason = offAimReason?.trim() ?? '';
+    if (miss.length && reason.length < OFF_AIM_REASON_MIN)
+      throw new ValidationError(`This revision misses its aim (${miss.join('; ')}): say why it should be reviewed anyway.`, [
+        { path: 'offAimReason', message: `give a reason of at least ${OFF_AIM_REASON_MIN} characters` }
+      ]);
     const now = new Date();
     await trx('formulation_revisions')
       .where({ id: row.id })
-      .update({ state: 'submitted', submitted_at: now, submitted_by: caller.id, version: row.version + 1, updated_at: now });
-    await audit(trx, caller, row, 'submit', { state: 'submitted', version: row.version + 1, contentSha256: row.content_sha256 });
+      .update({
+        state: 'submitted',
+        submitted_at: now,
+        submitted_by: caller.id,
+        version: row.version + 1,
+        updated_at: now,
+        off_aim_reason: miss.length ? reason : null
+      });
+    await audit(trx, caller, row, 'submit', {
+      state: 'submitted',
+      version: row.version + 1,
+      contentSha256: row.content_sha256,
+      ...(miss.length ? { offAim: miss, offAimReason: reason } : {})
+    });
   });
   const rev = await reload(revisionId);
-  await notifySubmitted(rev, caller);
+  await notifySubmitted(rev, caller, miss);
   return rev;
 }
 

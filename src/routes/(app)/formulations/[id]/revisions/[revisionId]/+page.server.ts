@@ -92,13 +92,15 @@ export const actions: Actions = {
   submit: async ({ locals, params, request }) => {
     const user = requireUser(locals, mayActOnRevisions);
     const rev = await revisionOf(params);
-    const parsed = version.safeParse((await readForm(request)).get('version'));
+    const fd = await readForm(request);
+    const parsed = version.safeParse(fd.get('version'));
     if (!parsed.success) return actionFailure(400, { action: 'submit', error: parsed.error.issues[0].message });
+    const offAimReason = String(fd.get('offAimReason') ?? '').slice(0, 2000);
     try {
-      await submit(user, rev.id, parsed.data);
+      await submit(user, rev.id, parsed.data, offAimReason);
       return { action: 'submit', done: 'Submitted for review; quality has been notified.' };
     } catch (err) {
-      return actionFailure(err, { action: 'submit', values: NO_VALUES });
+      return actionFailure(err, { action: 'submit', values: { offAimReason } });
     }
   },
   withdraw: async ({ locals, params, request }) => {

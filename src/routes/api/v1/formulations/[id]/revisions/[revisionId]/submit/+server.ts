@@ -13,6 +13,9 @@ export const POST: RequestHandler = (event) =>
   apiHandler(async () => {
     const user = requireUser(event.locals, mayActOnRevisions);
     const rev = await revisionFromPath(event.params);
-    const body = await readJson(event, z.object({ version: versionField.optional() }));
-    return json(await submit(user, rev.id, body.version));
+    const body = await readJson(
+      event,
+      z.object({ version: versionField.optional(), offAimReason: z.string().trim().max(2000).optional() })
+    );
+    return json(await submit(user, rev.id, body.version, body.offAimReason));
   });
