@@ -103,7 +103,7 @@ describe('values finer than the stored precision (DECIMAL(…, 6) grams)', () =>
   it('stores a 1 µg balance step exactly (the finest the column keeps)', async () => {
     const res = await call(create, ev({ ...request(fx.revisionId), balance: { resolutionG: 0.000001, minWeightG: 0 } }));
     expect(res.status).toBe(201);
-    const row = await db()('batches').where({ id: res.body.id }).first();
+    const row = (await db()('batches').where({ id: res.body.id }).first())!;
     expect(Number(row.resolution_g)).toBe(0.000001);
     const lines = await db()('batch_lines').where({ batch_id: res.body.id }).orderBy('seq');
     // Lines add up to the batch exactly (sum of targets = batch mass), as before the fix.
