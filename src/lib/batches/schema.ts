@@ -5,6 +5,7 @@
  */
 import { z } from 'zod';
 import { additiveSchema, balanceStepG, grams, LOADING_BASES, minWeightG, sizingSchema, toleranceSpecSchema } from './weighout/schema';
+import { plainText } from '../text/hidden-characters';
 import { MAX_BATCH_MASS_G, MAX_BATCH_MASS_MESSAGE } from './weighout/limits';
 import { PAPER_SIZES } from './weighout/paper';
 
@@ -48,7 +49,7 @@ export const createBatchSchema = z.object({
   balance: z.object({
     resolutionG: balanceStepG,
     minWeightG,
-    ref: z.string().trim().max(80).optional()
+    ref: z.string().trim().max(80).superRefine(plainText('balance reference')).optional()
   }),
   /** Plant slurry-age limit (min), when shorter than the silicone's pot life. */
   plantLimitMin: z
@@ -69,7 +70,7 @@ const reading = z.union([z.string(), z.number().finite().nonnegative()]).transfo
 
 export const recordLineSchema = z.object({
   actualG: reading.refine((v) => v !== '', 'enter the balance reading in g'),
-  lotNumber: z.string().trim().min(1, 'scan or type the lot number').max(80),
+  lotNumber: z.string().trim().min(1, 'scan or type the lot number').max(80).superRefine(plainText('lot number')),
   version: version
 });
 

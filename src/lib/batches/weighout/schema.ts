@@ -4,6 +4,7 @@
  */
 import { z } from 'zod';
 import { Rat } from './rational';
+import { plainText } from '../../text/hidden-characters';
 import { MAX_BATCH_MASS_G, MAX_BATCH_MASS_MESSAGE, partsMassG, storable, STORED_G_PLACES, STORED_PCT_PLACES } from './limits';
 
 export const LOADING_BASES = ['wtPctOfSlurry', 'phr'] as const;
@@ -88,8 +89,8 @@ export const weighoutPhosphorSchema = z.object({
 });
 
 export const additiveSchema = z.object({
-  code: z.string().trim().min(1, 'additive code is required').max(40),
-  name: z.string().trim().min(1, 'additive name is required').max(200),
+  code: z.string().trim().min(1, 'additive code is required').max(40).superRefine(plainText('additive code')),
+  name: z.string().trim().min(1, 'additive name is required').max(200).superRefine(plainText('additive name')),
   /** On the batch basis (wt % of slurry or phr), like the phosphors. */
   pct: pos('additive loading').max(1000),
   tolerance: toleranceSpecSchema
