@@ -15,7 +15,7 @@ export async function assertPdf(name: string, body: Buffer): Promise<void> {
     throw tooLarge(`${name} is ${formatBytes(body.length)}; the limit is ${formatBytes(MAX_ATTACHMENT_BYTES)}. Nothing was saved.`);
   const notPdf = `${name} is not a PDF file. Data sheets and certificates are accepted as PDF. Nothing was saved.`;
   if (body.subarray(0, 5).toString('latin1') !== '%PDF-') throw unsupportedType(notPdf);
-  let pages = 0;
+  let pages: number;
   try {
     const doc = await PDFDocument.load(body, { ignoreEncryption: true, updateMetadata: false, throwOnInvalidObject: true });
     pages = doc.getPageCount();
