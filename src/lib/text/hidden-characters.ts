@@ -3,7 +3,7 @@
  * (C0 U+0000–U+001F, DEL U+007F, C1 U+0080–U+009F; Unicode 15 §23.1) and the bidirectional
  * formatting characters that reorder what is shown (LRE/RLE/PDF/LRO/RLO U+202A–U+202E, LRI/RLI/
  * FSI/PDI U+2066–U+2069, LRM/RLM U+200E/U+200F, ALM U+061C; Unicode UAX #9 §2). A name with U+202E
- * shows "report‮fdp.exe" as "reportexe.pdf". Multi-line fields (notes) may keep tab and line breaks.
+ * shows "report<U+202E>fdp.exe" as "reportexe.pdf". Multi-line fields (notes) may keep tab and line breaks.
  * Pure: used by the zod schemas of every feature.
  */
 

@@ -1,7 +1,7 @@
 /**
  * Names, codes, lot numbers and file names with control characters (NUL, ESC) or bidirectional
  * overrides are refused with 400 naming the character, and nothing is saved. A file named
- * "orange‮vsc.exe" (U+202E, Unicode UAX #9 §2) would otherwise be listed and downloaded disguised.
+ * "orange<U+202E>vsc.exe" (U+202E, Unicode UAX #9 §2) would otherwise be listed and downloaded disguised.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, closeDb } from '../../../src/lib/server/db/index';

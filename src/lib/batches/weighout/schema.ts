@@ -63,7 +63,9 @@ export const sizingSchema = z.discriminatedUnion(
           ctx.addIssue({
             code: 'custom',
             path: ['partCount'],
-            message: `${s.partCount} parts × ${s.dispenseMassG} g with ${s.yieldLossPct} % yield loss need ${massG.toFixed(0)} g: ${MAX_BATCH_MASS_MESSAGE}`
+            message:
+              `${s.partCount} parts × ${s.dispenseMassG} g with ${s.yieldLossPct} % yield loss ` +
+              `need ${massG.toFixed(0)} g: ${MAX_BATCH_MASS_MESSAGE}`
           });
       })
   ],
