@@ -1,7 +1,7 @@
 /** Form and API schemas for accounts (shared by pages and endpoints). */
 import { z } from 'zod';
 import { ROLES } from '../roles';
-import { plainText } from '../text/hidden-characters';
+import { plainText } from '../errors/hidden-characters';
 
 export const rolesField = z.array(z.enum(ROLES, 'Unknown role')).min(1, 'Pick at least one role');
 

@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import { additiveSchema, balanceStepG, grams, LOADING_BASES, minWeightG, sizingSchema, toleranceSpecSchema } from './weighout/schema';
-import { plainText } from '../text/hidden-characters';
+import { plainText } from '../errors/hidden-characters';
 import { MAX_BATCH_MASS_G, MAX_BATCH_MASS_MESSAGE } from './weighout/limits';
 import { PAPER_SIZES } from './weighout/paper';
 

@@ -6,7 +6,7 @@
  */
 import { z } from 'zod';
 import { floorsSchema, targetSchema, toleranceSchema } from '../aim/schema';
-import { plainText } from '../text/hidden-characters';
+import { plainText } from '../errors/hidden-characters';
 
 export const spdSchema = z
   .object({

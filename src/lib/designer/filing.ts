@@ -7,7 +7,7 @@ import { z } from 'zod';
 import { floorsSchema, targetSchema, toleranceSchema } from '../aim/index';
 import { CONTENT_VERSION, packageModelRefSchema, type MaterialRef, type RevisionContent, type SiliconeSpec } from '../recipe';
 import { roundedShares } from './shares';
-import { plainText } from '../text/hidden-characters';
+import { plainText } from '../errors/hidden-characters';
 
 const materialId = z.number().int().positive();
 

@@ -3,7 +3,7 @@
  * Form fields arrive as strings: empty means "not known" (null); a decimal comma is accepted.
  */
 import { z } from 'zod';
-import { plainText } from '../text/hidden-characters';
+import { plainText } from '../errors/hidden-characters';
 
 const text = (max: number, label: string) =>
   z.preprocess(

@@ -4,7 +4,7 @@
  */
 import { z } from 'zod';
 import { Rat } from './rational';
-import { plainText } from '../../text/hidden-characters';
+import { plainText } from '../../errors/hidden-characters';
 import { MAX_BATCH_MASS_G, MAX_BATCH_MASS_MESSAGE, partsMassG, storable, STORED_G_PLACES, STORED_PCT_PLACES } from './limits';
 
 export const LOADING_BASES = ['wtPctOfSlurry', 'phr'] as const;

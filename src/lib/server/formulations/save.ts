@@ -10,7 +10,7 @@ import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import type { RevisionContent } from '../../recipe';
 import { ConflictError, NotFoundError, ValidationError } from './errors';
-import { plainText } from '../../text/hidden-characters';
+import { plainText } from '../../errors/hidden-characters';
 import { checkVersion, enforce, requireRoles, type Caller } from './guard';
 import { prepareRevision, type PreparedRevision } from './prepare';
 import { mayAuthorFormulations, mayDraftCorrection } from '../../access/policies';

@@ -11,7 +11,7 @@ import { db } from '../db/index';
 import { bucket, ensureBucket, s3 } from './client';
 import type { StoredFileRow } from '../../storage/types';
 import { invalid } from '../../errors/domain-error';
-import { hiddenCharacterReason } from '../../text/hidden-characters';
+import { hiddenCharacterReason } from '../../errors/hidden-characters';
 
 export type { StoredFileRow } from '../../storage/types';
 

@@ -6,7 +6,7 @@ import * as tokens from '$lib/server/auth/tokens';
 import { issueToken, revokeToken } from '$lib/server/auth/token-commands';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
-import { plainText } from '$lib/text/hidden-characters';
+import { plainText } from '$lib/errors/hidden-characters';
 
 const createSchema = z.object({
   name: z.string().trim().min(1, 'Give the token a name').max(80, 'At most 80 characters').superRefine(plainText('Token name')),

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { z } from 'zod';
-import { hiddenCharacterReason, plainText } from '../../../src/lib/text/hidden-characters';
+import { hiddenCharacterReason, plainText } from '../../../src/lib/errors/hidden-characters';
 
 // Control characters: C0 U+0000–U+001F, DEL U+007F, C1 U+0080–U+009F (Unicode 15 §23.1).
 // Bidirectional formatting characters: U+202A–U+202E, U+2066–U+2069, U+200E, U+200F, U+061C (Unicode UAX #9 §2).
