@@ -4,6 +4,7 @@
 # Uses the development profile unless PF_PROFILE or DATABASE_URL / S3_* say otherwise; starts the
 # private server and the fakes when they are not up.
 set -euo pipefail
+umask 077 # backups hold password hashes: owner-only folders and files
 cd "$(dirname "$0")/.."
 what="${1:?usage: backup.sh backup|restore|sweep [args]}"; shift
 PF_PROFILE="${PF_PROFILE:-dev}" . scripts/profile.sh

@@ -4,7 +4,8 @@ import { handle as authHandle } from './auth';
 import { decide } from '$lib/access/route-table';
 import * as users from '$lib/server/accounts/users';
 import { userForToken } from '$lib/server/auth/tokens';
-import { closeDb, isDbUnavailable } from '$lib/server/db/index';
+import { closeDb } from '$lib/server/db/index';
+import { answerOutages, logOutage, noteOutage, OUTAGE_MESSAGE, outageOf, RETRY_AFTER } from '$lib/server/http/outage';
 import { securityHeaders } from '$lib/server/security-headers';
 import { errorBody } from '$lib/server/http/status';
 import { authForwardedHeaders } from '$lib/server/auth/public-origin';
@@ -39,10 +40,11 @@ const guard: Handle = async ({ event, resolve }) => {
     const early = await identify(event);
     if (early) return early;
   } catch (err) {
-    if (isDbUnavailable(err)) {
-      if (isApi)
-        return json({ error: 'The database is not reachable; try again shortly.' }, { status: 503, headers: { 'retry-after': '5' } });
-      error(503, 'The database is not reachable; try again shortly.');
+    const outage = outageOf(err);
+    if (outage) {
+      logOutage(outage, err, 'sign-in check');
+      if (isApi) return json(errorBody(OUTAGE_MESSAGE[outage]), { status: 503, headers: RETRY_AFTER });
+      error(503, { message: OUTAGE_MESSAGE[outage], outage });
     }
     throw err;
   }
@@ -102,10 +104,11 @@ const publicOrigin: Handle = async ({ event, resolve }) => {
   return resolve(event);
 };
 
-export const handle = sequence(headers, publicOrigin, authHandle, guard);
+export const handle = sequence(answerOutages, headers, publicOrigin, authHandle, guard);
 
-export const handleError: HandleServerError = ({ error: err, status }) => {
-  if (isDbUnavailable(err)) return { message: 'The database is not reachable; try again shortly.' };
+export const handleError: HandleServerError = ({ error: err, status, event }) => {
+  const outage = noteOutage(err, event);
+  if (outage) return outage;
   // A missing page is not a fault of ours: say it is missing, and log only real errors.
   if (status === 404) return { message: 'There is no page at this address.' };
   console.error('[phosforge] unexpected error', err instanceof Error ? err.stack : err);

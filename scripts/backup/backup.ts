@@ -3,10 +3,11 @@
  * no locks on InnoDB tables) plus every object of the file bucket, into a new folder:
  *   <dir>/database.sql, <dir>/objects/<key>, <dir>/manifest.json (keys, sizes, SHA-256, row counts).
  * Usage: node --import tsx scripts/backup/backup.ts [<dir>]   (default backups/<UTC timestamp>)
+ * The dump holds password hashes: the folder tree is created 0700 and every file 0600, whatever the umask.
  */
 import { spawn } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { createWriteStream, mkdirSync, writeFileSync } from 'node:fs';
+import { chmodSync, createWriteStream, mkdirSync, writeFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { GetObjectCommand } from '@aws-sdk/client-s3';
 import knexFactory from 'knex';
@@ -16,7 +17,16 @@ import { listObjects } from '../../src/lib/server/storage/list';
 
 const stamp = new Date().toISOString().replace(/[:.]/g, '-');
 const dir = resolve(process.argv[2] ?? join('backups', stamp));
-mkdirSync(join(dir, 'objects'), { recursive: true });
+process.umask(0o077);
+const PRIVATE_DIR = 0o700;
+const PRIVATE_FILE = 0o600;
+/** A folder only the owner can enter, also when it already existed or the umask was looser. */
+function privateDir(path: string): void {
+  mkdirSync(path, { recursive: true, mode: PRIVATE_DIR });
+  chmodSync(path, PRIVATE_DIR);
+}
+privateDir(dir);
+privateDir(join(dir, 'objects'));
 const conn = connectionFromEnv();
 
 async function dumpDatabase(): Promise<void> {
@@ -35,6 +45,8 @@ async function dumpDatabase(): Promise<void> {
     String(conn.database)
   ];
   await new Promise<void>((ok, fail) => {
+    writeFileSync(join(dir, 'database.sql'), '', { mode: PRIVATE_FILE });
+    chmodSync(join(dir, 'database.sql'), PRIVATE_FILE);
     const out = createWriteStream(join(dir, 'database.sql'));
     const p = spawn('mariadb-dump', args, {
       env: { ...process.env, MYSQL_PWD: String(conn.password ?? '') },
@@ -75,8 +87,9 @@ async function copyObjects(): Promise<{ key: string; bytes: number; sha256: stri
     const body = Buffer.from(await res.Body!.transformToByteArray());
     const file = join(dir, 'objects', key);
     if (!file.startsWith(join(dir, 'objects'))) throw new Error(`refusing object key outside the backup folder: ${key}`);
-    mkdirSync(dirname(file), { recursive: true });
-    writeFileSync(file, body);
+    for (let d = dirname(file); d.startsWith(join(dir, 'objects')); d = dirname(d)) privateDir(d);
+    writeFileSync(file, body, { mode: PRIVATE_FILE });
+    chmodSync(file, PRIVATE_FILE);
     out.push({ key, bytes: body.length, sha256: createHash('sha256').update(body).digest('hex') });
   }
   return out;
@@ -92,7 +105,9 @@ writeFileSync(
     { createdAt: new Date().toISOString(), database: conn.database, bucket: bucketFromEnv(), rowCounts: counts, objects },
     null,
     2
-  )
+  ),
+  { mode: PRIVATE_FILE }
 );
+chmodSync(join(dir, 'manifest.json'), PRIVATE_FILE);
 const rows = Object.values(counts).reduce((a, b) => a + b, 0);
 console.log(`backup: ${dir} — ${Object.keys(counts).length} tables, ${rows} rows, ${objects.length} objects, ${Date.now() - t0} ms`);

@@ -49,6 +49,10 @@ test('a database outage answers 503 and the app recovers by itself', async () =>
   expect(health.status).toBe(503);
   const page = await ctx.get('/', { headers: { accept: 'text/html' }, maxRedirects: 0 });
   expect(page.status()).toBe(503);
+  // The page says which service is down, in words.
+  const text = await page.text();
+  expect(text).toMatch(/error 503/);
+  expect(text).toMatch(/database is not reachable/i);
 
   await db.start();
   await expect.poll(async () => (await me()).status, { timeout: 30_000 }).toBe(200);

@@ -4,7 +4,7 @@
  * object's bytes must match.
  */
 import { execFile } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, readdirSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { promisify } from 'node:util';
@@ -72,6 +72,23 @@ describe('npm run backup / npm run restore', () => {
     );
     const obj = await s3FromEnv().send(new GetObjectCommand({ Bucket: restoreBucket, Key: 'backup-check/marker.txt' }));
     expect(await obj.Body!.transformToString()).toBe('Kestrel Hollow backup marker ✓');
+  }, 180_000);
+
+  it('writes the backup owner-only (folders 0700, files 0600) even under umask 000', async () => {
+    // The dump holds password hashes; a world-readable backup leaks them (common practice: 0700/0600).
+    const loose = join(dir, 'under-umask-000');
+    await run('sh', ['-c', 'umask 000 && exec node --import tsx scripts/backup/backup.ts "$0"', loose], { env: process.env });
+    const modes: string[] = [];
+    const walk = (p: string): void => {
+      const st = statSync(p);
+      modes.push(`${p.slice(loose.length) || '/'} ${(st.mode & 0o777).toString(8)}`);
+      if (st.isDirectory()) for (const e of readdirSync(p)) walk(join(p, e));
+    };
+    walk(loose);
+    expect(modes).toContain('/database.sql 600');
+    expect(modes).toContain('/manifest.json 600');
+    expect(modes).toContain('/objects/backup-check/marker.txt 600');
+    for (const m of modes) expect(m).toMatch(/ (700|600)$/);
   }, 180_000);
 
   it('refuses a folder that is not a backup and changes nothing', async () => {

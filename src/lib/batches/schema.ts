@@ -4,7 +4,9 @@
  * system, the request supplies size, loading, tolerances, additives and the balance.
  */
 import { z } from 'zod';
-import { additiveSchema, LOADING_BASES, sizingSchema, toleranceSpecSchema } from './weighout/schema';
+import { additiveSchema, balanceStepG, grams, LOADING_BASES, minWeightG, sizingSchema, toleranceSpecSchema } from './weighout/schema';
+import { plainText } from '../errors/hidden-characters';
+import { MAX_BATCH_MASS_G, MAX_BATCH_MASS_MESSAGE } from './weighout/limits';
 import { PAPER_SIZES } from './weighout/paper';
 
 export const BATCH_STATES = ['planned', 'weighing', 'complete', 'released', 'rejected'] as const;
@@ -45,9 +47,9 @@ export const createBatchSchema = z.object({
   siliconeTolerances: z.object({ a: toleranceSpecSchema, b: toleranceSpecSchema }).optional(),
   additives: z.array(additiveSchema).max(5).default([]),
   balance: z.object({
-    resolutionG: z.number().finite().gt(0, 'balance resolution must be > 0 g').max(10),
-    minWeightG: z.number().finite().min(0).max(10_000),
-    ref: z.string().trim().max(80).optional()
+    resolutionG: balanceStepG,
+    minWeightG,
+    ref: z.string().trim().max(80).superRefine(plainText('balance reference')).optional()
   }),
   /** Plant slurry-age limit (min), when shorter than the silicone's pot life. */
   plantLimitMin: z
@@ -68,7 +70,7 @@ const reading = z.union([z.string(), z.number().finite().nonnegative()]).transfo
 
 export const recordLineSchema = z.object({
   actualG: reading.refine((v) => v !== '', 'enter the balance reading in g'),
-  lotNumber: z.string().trim().min(1, 'scan or type the lot number').max(80),
+  lotNumber: z.string().trim().min(1, 'scan or type the lot number').max(80).superRefine(plainText('lot number')),
   version: version
 });
 
@@ -82,7 +84,7 @@ export const mixSchema = z.object({ version, mixedAt: z.coerce.date().optional()
 export const completeSchema = z.object({ version });
 export const scaleSchema = z.union(
   [
-    z.object({ version, batchMassG: z.number().finite().gt(0).max(100_000) }),
+    z.object({ version, batchMassG: grams('batch size').max(MAX_BATCH_MASS_G, MAX_BATCH_MASS_MESSAGE) }),
     z.object({ version, factor: z.number().finite().gt(0).max(100) })
   ],
   'give batchMassG or factor'

@@ -6,6 +6,7 @@
  */
 import { z } from 'zod';
 import { floorsSchema, targetSchema, toleranceSchema } from '../aim/schema';
+import { plainText } from '../errors/hidden-characters';
 
 export const spdSchema = z
   .object({
@@ -18,7 +19,7 @@ export const spdSchema = z
   .refine((s) => s.wavelengths.length === s.values.length, 'wavelengths and values must have the same length');
 
 const id = z.string().min(1, 'id is required').max(100);
-const name = z.string().min(1, 'name is required').max(200);
+const name = z.string().min(1, 'name is required').max(200).superRefine(plainText('name'));
 
 export const pumpSchema = z
   .object({

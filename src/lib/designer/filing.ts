@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { floorsSchema, targetSchema, toleranceSchema } from '../aim/index';
 import { CONTENT_VERSION, packageModelRefSchema, type MaterialRef, type RevisionContent, type SiliconeSpec } from '../recipe';
 import { roundedShares } from './shares';
+import { plainText } from '../errors/hidden-characters';
 
 const materialId = z.number().int().positive();
 
@@ -57,7 +58,7 @@ export const filingFormSchema = z.discriminatedUnion(
   [
     z.object({
       mode: z.literal('new'),
-      name: z.string().trim().min(1, 'give the formulation a name').max(200, 'name: at most 200 characters'),
+      name: z.string().trim().min(1, 'give the formulation a name').max(200, 'name: at most 200 characters').superRefine(plainText('name')),
       code: z
         .string()
         .trim()

@@ -4,17 +4,23 @@
  */
 import { z } from 'zod';
 import { HAZARD_CODES, isHazardCode } from './hazards';
+import { plainText } from '../errors/hidden-characters';
 
 const text = (max: number, label: string) =>
   z.preprocess(
     (v) => (typeof v === 'string' ? v.trim() : v),
-    z.string(`${label} must be text`).max(max, `${label}: at most ${max} characters`)
+    z.string(`${label} must be text`).max(max, `${label}: at most ${max} characters`).superRefine(plainText(label))
   );
 
-const optionalText = (max: number, label: string) =>
+/** Empty = null; `multiline` for notes (tab and line breaks allowed). */
+const optionalText = (max: number, label: string, multiline = false) =>
   z.preprocess(
     (v) => (v === undefined || v === null || (typeof v === 'string' && v.trim() === '') ? null : typeof v === 'string' ? v.trim() : v),
-    z.string(`${label} must be text`).max(max, `${label}: at most ${max} characters`).nullable()
+    z
+      .string(`${label} must be text`)
+      .max(max, `${label}: at most ${max} characters`)
+      .superRefine(plainText(label, { multiline }))
+      .nullable()
   );
 
 const optionalNumber = (label: string, min: number, max: number, unit = '') =>
@@ -45,8 +51,8 @@ export const materialFieldsSchema = z.object({
   absorptionReferenceNm: optionalNumber('Absorption reference wavelength', 300, 900, ' nm'),
   costPerKg: optionalNumber('Cost per kg', 0, 10_000_000),
   d50Um: optionalNumber('Particle size D50', 0.01, 1000, ' µm'),
-  notes: optionalText(5000, 'Notes'),
-  safetyNote: optionalText(2000, 'Safety note'),
+  notes: optionalText(5000, 'Notes', true),
+  safetyNote: optionalText(2000, 'Safety note', true),
   /** Hazard codes, as a list or comma-separated text; stored as sorted comma-separated codes. */
   hazards: z.preprocess(
     (v) => (v === undefined || v === null ? '' : Array.isArray(v) ? v.join(',') : v),
@@ -90,7 +96,7 @@ export const lotSchema = z
     supplier: optionalText(200, 'Supplier'),
     receivedOn: optionalText(10, 'Received on').pipe(z.iso.date('Received on: use a date like 2026-03-14').nullable()),
     expiresOn: optionalText(10, 'Expires on').pipe(z.iso.date('Expires on: use a date like 2027-03-14').nullable()),
-    notes: optionalText(2000, 'Notes')
+    notes: optionalText(2000, 'Notes', true)
   })
   .refine((l) => !l.receivedOn || !l.expiresOn || l.expiresOn >= l.receivedOn, {
     message: 'Expires on must not be before received on',

@@ -20,6 +20,12 @@ describe('isDbUnavailable', () => {
     expect(isDbUnavailable(err('Knex: Timeout acquiring a connection. The pool is probably full.', {}))).toBe(true);
   });
 
+  it('counts a server shutting down or killing the connection under a running query (MariaDB errors 1053, 1927)', () => {
+    expect(isDbUnavailable(err('Server shutdown in progress', { code: 'ER_SERVER_SHUTDOWN', errno: 1053 }))).toBe(true);
+    expect(isDbUnavailable(err('Connection was killed', { code: 'ER_CONNECTION_KILLED', errno: 1927 }))).toBe(true);
+    expect(isDbUnavailable(err("Can't add new command when connection is in closed state", {}))).toBe(true);
+  });
+
   it('does not count a client that dropped its request, or ordinary errors', () => {
     expect(isDbUnavailable(err('aborted', { code: 'ECONNRESET' }))).toBe(false);
     expect(isDbUnavailable(err('write EPIPE', { code: 'EPIPE' }))).toBe(false);

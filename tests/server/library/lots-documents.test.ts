@@ -7,14 +7,18 @@ import * as history from '../../../src/lib/server/library/history';
 import { getFile } from '../../../src/lib/server/storage/objects';
 import { demoUser, phosphorFields, removeTestMaterials } from './support';
 import type { User } from '../../../src/lib/server/accounts/users';
+import { PDFDocument } from 'pdf-lib';
 
-// Smallest PDF header; the library checks the %PDF- signature (ISO 32000-1 §7.5.2), not the file name.
-const pdf = Buffer.from('%PDF-1.4\n%test certificate\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n', 'latin1');
+// A one-page PDF; the library checks the bytes (ISO 32000-1 §7.5.2 header, then the whole document), not the file name.
+let pdf: Buffer;
 let rhea: User;
 let id = 0;
 
 describe('lots and documents of a material', () => {
   beforeAll(async () => {
+    const doc = await PDFDocument.create();
+    doc.addPage().drawText('Certificate of analysis, lot LLM-7731 (test)');
+    pdf = Buffer.from(await doc.save());
     await removeTestMaterials();
     rhea = await demoUser('formulator');
     id = await editing.create(rhea, 'phosphor', phosphorFields('TST-L1'));
@@ -58,6 +62,31 @@ describe('lots and documents of a material', () => {
       )
     ).rejects.toMatchObject({ status: 415, message: expect.stringMatching(/not a PDF/) });
     expect(await db()('material_lots').where({ material_id: id, lot_number: 'LLM-7732' }).first()).toBeUndefined();
+    expect((await db()('stored_files').count({ n: '*' }).first())?.n).toBe(files?.n);
+  });
+
+  it('refuses files that only start like a PDF (%PDF-<html>, a header alone, a cut-off document), saving nothing', async () => {
+    const files = await db()('stored_files').count({ n: '*' }).first();
+    const fakes = [
+      Buffer.from('%PDF-<html><body><script>alert(1)</script></body></html>', 'latin1'),
+      Buffer.from('%PDF-1.7\n', 'latin1'),
+      pdf.subarray(0, Math.floor(pdf.length / 2))
+    ];
+    for (const body of fakes) {
+      await expect(attachments.add(rhea, id, 'safety-data-sheet', { name: 'SDS.pdf', body })).rejects.toMatchObject({
+        status: 415,
+        message: expect.stringMatching(/cannot be read as one.*Nothing was saved/)
+      });
+      await expect(
+        lots.add(
+          rhea,
+          id,
+          { lotNumber: 'LLM-7733', supplier: null, receivedOn: null, expiresOn: null, notes: null },
+          { name: 'coa.pdf', body }
+        )
+      ).rejects.toMatchObject({ status: 415 });
+    }
+    expect(await db()('material_lots').where({ material_id: id, lot_number: 'LLM-7733' }).first()).toBeUndefined();
     expect((await db()('stored_files').count({ n: '*' }).first())?.n).toBe(files?.n);
   });
 

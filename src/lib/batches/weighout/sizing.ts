@@ -6,6 +6,7 @@
  */
 import { Rat } from './rational';
 import type { Sizing } from './schema';
+import { MAX_BATCH_MASS_G, MAX_BATCH_MASS_MESSAGE, partsMassG } from './limits';
 
 export interface SizingResult {
   /** Batch mass in balance steps. */
@@ -15,6 +16,14 @@ export interface SizingResult {
 }
 
 export function batchSteps(sizing: Sizing, resolution: Rat, places: number): SizingResult {
+  const sized = stepsFor(sizing, resolution, places);
+  const massG = new Rat(sized.steps).mul(resolution);
+  if (sized.error || !massG.gt(Rat.int(MAX_BATCH_MASS_G))) return sized;
+  const path = sizing.kind === 'mass' ? 'sizing.batchMassG' : 'sizing.partCount';
+  return { steps: 0n, note: null, error: { path, message: `${MAX_BATCH_MASS_MESSAGE} (this one would be ${massG.toFixed(places)} g)` } };
+}
+
+function stepsFor(sizing: Sizing, resolution: Rat, places: number): SizingResult {
   if (sizing.kind === 'mass') {
     const exact = Rat.fromNumber(sizing.batchMassG).div(resolution);
     if (!exact.isInteger()) {
@@ -32,8 +41,7 @@ export function batchSteps(sizing: Sizing, resolution: Rat, places: number): Siz
     }
     return { steps: exact.n, note: null, error: null };
   }
-  const good = Rat.ONE.sub(Rat.fromNumber(sizing.yieldLossPct).div(Rat.HUNDRED));
-  const needed = Rat.int(sizing.partCount).mul(Rat.fromNumber(sizing.dispenseMassG)).div(good);
+  const needed = partsMassG(sizing.partCount, sizing.dispenseMassG, sizing.yieldLossPct);
   const steps = needed.div(resolution).ceil();
   const massG = new Rat(steps).mul(resolution).toFixed(places);
   return {

@@ -5,6 +5,7 @@
  * be read — no boundary, truncated, garbage — or no file in the field (400), another type (415).
  */
 import { invalid, tooLarge, unsupportedType } from '../../errors/domain-error';
+import { assertPlainFileName } from '../storage/objects';
 
 export interface UploadedFile {
   name: string;
@@ -38,6 +39,12 @@ async function formFile(request: Request, kind: UploadKind): Promise<UploadedFil
   return { name: file.name || kind.defaultName, contentType: file.type || 'text/plain', body: Buffer.from(await file.arrayBuffer()) };
 }
 
+/** The file's name must be plain text: a control or text-direction character would disguise it. */
+function plainName(file: UploadedFile): UploadedFile {
+  assertPlainFileName(file.name);
+  return file;
+}
+
 export async function readUploadedFile(request: Request, kind: UploadKind): Promise<UploadedFile> {
   const declared = Number(request.headers.get('content-length') ?? '0');
   if (declared > kind.maxBytes + FRAMING_BYTES) {
@@ -45,13 +52,13 @@ export async function readUploadedFile(request: Request, kind: UploadKind): Prom
     throw tooLarge(`The upload is larger than the ${mb} MB limit for ${kind.what} files. Nothing was saved.`);
   }
   const type = request.headers.get('content-type') ?? '';
-  if (/^multipart\/form-data/i.test(type)) return formFile(request, kind);
+  if (/^multipart\/form-data/i.test(type)) return plainName(await formFile(request, kind));
   if (/^text\/(csv|plain|tab-separated-values)\b/i.test(type)) {
-    return {
+    return plainName({
       name: request.headers.get('x-file-name')?.slice(0, 200) || kind.defaultName,
       contentType: type.split(';')[0],
       body: Buffer.from(await request.arrayBuffer())
-    };
+    });
   }
   throw unsupportedType(`Send the ${kind.what} file as multipart/form-data (field "file") or as a text/csv or text/plain body.`);
 }

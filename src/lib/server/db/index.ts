@@ -23,7 +23,8 @@ export async function closeDb(): Promise<void> {
 /**
  * Errors that mean "the database cannot be reached right now" (→ 503, not 500). A reset or broken
  * socket counts only when the database driver marks it fatal: a client that drops its own upload
- * also ends in ECONNRESET, and that is not an outage.
+ * also ends in ECONNRESET, and that is not an outage. A server shutting down or killing the
+ * connection mid-query (ER_SERVER_SHUTDOWN 1053, ER_CONNECTION_KILLED 1927) is an outage too.
  */
 export function isDbUnavailable(err: unknown): boolean {
   const e = (err ?? {}) as { code?: string; fatal?: boolean };
@@ -31,7 +32,7 @@ export function isDbUnavailable(err: unknown): boolean {
   const msg = err instanceof Error ? err.message : '';
   if (['ECONNRESET', 'EPIPE', 'ETIMEDOUT'].includes(code)) return e.fatal === true;
   return (
-    ['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ER_CON_COUNT_ERROR'].includes(code) ||
-    /Knex: Timeout acquiring a connection|Connection lost|connect ECONNREFUSED/i.test(msg)
+    ['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ER_CON_COUNT_ERROR', 'ER_CONNECTION_KILLED', 'ER_SERVER_SHUTDOWN'].includes(code) ||
+    /Knex: Timeout acquiring a connection|Connection lost|connect ECONNREFUSED|connection is in closed state/i.test(msg)
   );
 }

@@ -11,6 +11,7 @@ import { record } from '../db/audit';
 import type { RevisionContent } from '../../recipe';
 import { ConflictError, NotFoundError, ValidationError } from './errors';
 import { readableSummary } from '../../errors/readable-issues';
+import { plainText } from '../../errors/hidden-characters';
 import { checkVersion, enforce, requireRoles, type Caller } from './guard';
 import { prepareRevision, type PreparedRevision } from './prepare';
 import { mayAuthorFormulations, mayDraftCorrection } from '../../access/policies';
@@ -24,7 +25,7 @@ export const formulationMetaSchema = z.object({
     .toUpperCase()
     .regex(/^[A-Z0-9][A-Z0-9-]{1,39}$/, 'code: 2–40 letters, digits or dashes, e.g. KH-W30-90')
     .optional(),
-  name: z.string().trim().min(1, 'name is required').max(200, 'name: at most 200 characters'),
+  name: z.string().trim().min(1, 'name is required').max(200, 'name: at most 200 characters').superRefine(plainText('name')),
   description: z.string().trim().max(5000, 'description: at most 5000 characters').default('')
 });
 

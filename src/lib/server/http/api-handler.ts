@@ -2,20 +2,23 @@
  * The one wrapper of every `+server.ts` under /api: runs the handler and turns whatever it throws
  * into the product's error body `{ error, issues? }` — a domain error by its kind
  * (./status.ts), a zod error as 400 with its issues, SvelteKit's `error()` (sign-in, role) with its
- * status, a database outage as 503, anything else as a logged 500.
+ * status, an outage of the database or the file storage as a logged 503 naming it (./outage.ts),
+ * anything else as a logged 500.
  */
 import { isHttpError, isRedirect, json } from '@sveltejs/kit';
 import { ZodError } from 'zod';
 import { DomainError } from '../../errors/domain-error';
-import { isDbUnavailable } from '../db/index';
+import { DB_UNAVAILABLE, logOutage, outageOf, RETRY_AFTER } from './outage';
 import { describeIssues, issueSummary } from './issues';
 import { errorBody, refusalOf } from './status';
 
-export const DB_UNAVAILABLE = 'The database is not reachable; try again shortly.';
+export { DB_UNAVAILABLE };
 export const UNEXPECTED = 'Something went wrong on our side. The error has been logged.';
 
 /** The answer to a thrown error (also used by streamed answers, which write it as a line). */
 export function errorAnswer(err: unknown): { status: number; body: ReturnType<typeof errorBody>; headers?: Record<string, string> } {
+  const outage = outageOf(err);
+  if (outage === 'file storage') return { ...refusalOf(err as DomainError), headers: RETRY_AFTER }; // logged where it happened
   if (err instanceof DomainError) return refusalOf(err);
   if (err instanceof ZodError) {
     const issues = describeIssues(err);
@@ -25,7 +28,10 @@ export function errorAnswer(err: unknown): { status: number; body: ReturnType<ty
     const { message, reason } = err.body;
     return { status: err.status, body: errorBody(reason ? `${message}: ${reason}` : message) };
   }
-  if (isDbUnavailable(err)) return { status: 503, body: errorBody(DB_UNAVAILABLE), headers: { 'retry-after': '5' } };
+  if (outage === 'database') {
+    logOutage('database', err, 'API');
+    return { status: 503, body: errorBody(DB_UNAVAILABLE), headers: RETRY_AFTER };
+  }
   console.error('[phosforge] unexpected API error', err instanceof Error ? err.stack : err);
   return { status: 500, body: errorBody(UNEXPECTED) };
 }

@@ -21,7 +21,7 @@ export async function add(
   file: { name: string; body: Buffer }
 ): Promise<number> {
   if (!(await records.get(materialId))) throw notFound(materialId);
-  assertPdf(file.name, file.body);
+  await assertPdf(file.name, file.body);
   return writeTransaction(async (trx) => {
     const id = await putFile(
       {

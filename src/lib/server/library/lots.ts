@@ -50,7 +50,7 @@ export async function add(actor: User, materialId: number, input: LotInput, cert
   const material = await records.get(materialId);
   if (!material) throw notFound(materialId);
   if (material.archivedAt) throw conflict(`${material.code} is archived; restore it before adding lots.`);
-  if (certificate) assertPdf(certificate.name, certificate.body);
+  if (certificate) await assertPdf(certificate.name, certificate.body);
   try {
     return await writeTransaction(async (trx) => {
       const [id] = await trx('material_lots').insert({

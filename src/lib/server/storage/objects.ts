@@ -10,6 +10,8 @@ import type { Knex } from 'knex';
 import { db } from '../db/index';
 import { bucket, ensureBucket, s3 } from './client';
 import type { StoredFileRow } from '../../storage/types';
+import { invalid } from '../../errors/domain-error';
+import { hiddenCharacterReason } from '../../errors/hidden-characters';
 
 export type { StoredFileRow } from '../../storage/types';
 
@@ -75,7 +77,14 @@ export function safeFileName(name: string): string {
   return cleaned || 'file';
 }
 
+/** Refuses a file name with control or text-direction characters (it would be shown and downloaded disguised). */
+export function assertPlainFileName(name: string): void {
+  const reason = hiddenCharacterReason(name, 'The file name');
+  if (reason) throw invalid(`${reason}. Nothing was saved.`, [{ path: 'file', message: reason }]);
+}
+
 export async function putFile(input: PutFileInput, trx?: Knex.Transaction): Promise<number> {
+  assertPlainFileName(input.originalName);
   await ensureBucket();
   const sha256 = createHash('sha256').update(input.body).digest('hex');
   const key = `${input.purpose}/${new Date().toISOString().slice(0, 7)}/${randomUUID()}-${safeFileName(input.originalName)}`;

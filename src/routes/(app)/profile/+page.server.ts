@@ -6,9 +6,10 @@ import * as tokens from '$lib/server/auth/tokens';
 import { issueToken, revokeToken } from '$lib/server/auth/token-commands';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
+import { plainText } from '$lib/errors/hidden-characters';
 
 const createSchema = z.object({
-  name: z.string().trim().min(1, 'Give the token a name').max(80, 'At most 80 characters'),
+  name: z.string().trim().min(1, 'Give the token a name').max(80, 'At most 80 characters').superRefine(plainText('Token name')),
   days: z.coerce.number().int('Whole days').min(1, 'At least 1 day').max(365, 'At most 365 days')
 });
 

@@ -42,8 +42,10 @@ describe('weigh-out rounding properties (fast-check)', () => {
       fc.property(inputs, (inp) => {
         const r = computeWeighout(inp);
         if (!r.ok) {
-          // The only refusals possible here: loading ≥ 100 %, tolerance finer than a step, a line rounding to 0 g.
-          for (const e of r.errors) expect(e.message).toMatch(/below 100 %|no silicone|finer than the balance resolution|minimum weight/);
+          // The only refusals possible here: loading ≥ 100 %, tolerance finer than a step, a line rounding to 0 g,
+          // a batch above the 100 kg limit.
+          for (const e of r.errors)
+            expect(e.message).toMatch(/below 100 %|no silicone|finer than the balance resolution|minimum weight|at most 100 kg/);
           return;
         }
         accepted++;
@@ -84,6 +86,10 @@ describe('weigh-out rounding properties (fast-check)', () => {
           }
         };
         const r2 = computeWeighout(bigger);
+        if (bigger.sizing.batchMassG > 100_000) {
+          expect(r2.ok).toBe(false); // above the 100 kg batch limit: refused, never clipped
+          return;
+        }
         expect(r2.ok).toBe(true);
         if (r2.ok && r.ok) expect(r2.plan.lines.reduce((a, l) => a + l.targetSteps, 0)).toBe(r.plan.batchSteps * k);
       }),

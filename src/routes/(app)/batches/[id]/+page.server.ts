@@ -16,6 +16,7 @@ import { batchCautions } from '$lib/server/batches/cautions';
 import { lotsOfMaterials } from '$lib/server/batches/lots';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
+import { MAX_BATCH_MASS_G, MAX_BATCH_MASS_MESSAGE, storable, STORED_G_PLACES } from '$lib/batches/weighout/limits';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
   const user = requireUser(locals);
@@ -101,7 +102,12 @@ export const actions: Actions = {
     const parsed = z
       .object({
         version: z.coerce.number().int().positive(),
-        batchMassG: z.coerce.number('enter the new batch size in g').finite().gt(0, 'the batch size must be > 0 g').max(100_000)
+        batchMassG: z.coerce
+          .number('enter the new batch size in g')
+          .finite()
+          .gt(0, 'the batch size must be > 0 g')
+          .max(MAX_BATCH_MASS_G, MAX_BATCH_MASS_MESSAGE)
+          .refine(...storable('batch size', STORED_G_PLACES, ' g'))
       })
       .safeParse({ version: v.version, batchMassG: (v.batchMassG ?? '').replace(',', '.') });
     if (!parsed.success) return invalidForm('scale', v, parsed.error);
