@@ -32,7 +32,7 @@ describe('submitting outside the aim', () => {
     expect(rev.state).toBe('submitted');
     expect(rev.offAimReason).toBe(reason);
     const submitted = (await auditOf('formulation_revision', made.revisionId)).find((e) => e.action === 'submit')!;
-    expect(JSON.parse(submitted.after_json)).toMatchObject({
+    expect(JSON.parse(submitted.after_json!)).toMatchObject({
       offAimReason: reason,
       offAim: [expect.stringMatching(/outside the tolerance/)]
     });
