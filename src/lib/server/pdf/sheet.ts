@@ -88,6 +88,13 @@ export class Sheet {
     return lines * (doc.currentLineHeight(true) + LINE_GAP);
   }
 
+  /** Height of a table cell as pdfkit lays it out (the estimate above can break lines elsewhere). */
+  cellHeight(text: string, width: number, size: number, align: 'left' | 'right' | 'center' = 'left'): number {
+    if (text === '') return 0;
+    const doc = this.doc.font(FONT.regular).fontSize(size);
+    return Math.max(doc.heightOfString(pdfSafe(text), { width, align, lineGap: LINE_GAP }), this.height(text, width, size));
+  }
+
   /** Writes text at (x, y) without moving the cursor; returns its height. */
   put(
     text: string,
@@ -160,7 +167,9 @@ export class Sheet {
     };
     header();
     for (const row of rows) {
-      const h = Math.max(minRowHeight, ...row.map((cell, i) => this.height(cell, widths[i] - 6, 8.5) + 8));
+      // Cells are measured with pdfkit's own line breaking (the text is written with it), so a range
+      // that wraps in a narrow column never runs over the row's rule.
+      const h = Math.max(minRowHeight, ...row.map((cell, i) => this.cellHeight(cell, widths[i] - 6, 8.5, columns[i].align) + 8));
       if (this.y + h > this.bottom) {
         this.newPage();
         header();
