@@ -6,6 +6,7 @@
 import { z } from 'zod';
 import { additiveSchema, LOADING_BASES, sizingSchema, toleranceSpecSchema } from './weighout/schema';
 import { PAPER_SIZES } from './weighout/paper';
+import { chipLotSchema } from './chip-lot';
 
 export const BATCH_STATES = ['planned', 'weighing', 'complete', 'released', 'rejected'] as const;
 export type BatchState = (typeof BATCH_STATES)[number];
@@ -59,6 +60,8 @@ export const createBatchSchema = z.object({
     .optional(),
   /** Must be the revision's silicone system when given (a different silicone needs a new revision). */
   siliconeSystemId: id.nullable().optional(),
+  /** The chip lot built with: required (with its bin code or wavelength) when the revision has a recipe per chip bin. */
+  chipLot: chipLotSchema.nullable().optional(),
   notes: z.string().trim().max(2000).optional()
 });
 export type CreateBatchRequest = z.infer<typeof createBatchSchema>;
