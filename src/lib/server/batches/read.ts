@@ -136,7 +136,11 @@ export async function listBatches(f: BatchFilter = {}): Promise<{ items: BatchSu
   }
   if (f.lot) {
     const lot = f.lot;
-    base.whereExists((s) => s.select(db().raw('1')).from('batch_lines as l').whereRaw('l.batch_id = b.id').andWhere('l.lot_number', lot));
+    base.where((w) =>
+      w
+        .where('b.chip_lot', lot)
+        .orWhereExists((s) => s.select(db().raw('1')).from('batch_lines as l').whereRaw('l.batch_id = b.id').andWhere('l.lot_number', lot))
+    );
   }
   const [{ n }] = await base.clone().count({ n: '*' });
   const rows = await base
@@ -154,8 +158,11 @@ export interface LotTrace {
   batches: (BatchSummary & { lines: { seq: number; code: string; actualG: string | null }[] })[];
 }
 
-/** From a lot number to every batch that used it, per material lot with that number. */
-export async function traceLot(lotNumber: string): Promise<{ lots: LotTrace[]; unlinked: BatchSummary[] }> {
+/**
+ * From a lot number to every batch that used it: per material lot with that number, the batches
+ * that recorded it as text on a silicone or additive line, and the batches built with it as chip lot.
+ */
+export async function traceLot(lotNumber: string): Promise<{ lots: LotTrace[]; unlinked: BatchSummary[]; chipLots: BatchSummary[] }> {
   const lots = await db()('material_lots as ml')
     .join('materials as m', 'm.id', 'ml.material_id')
     .where('ml.lot_number', lotNumber.trim())
@@ -199,5 +206,10 @@ export async function traceLot(lotNumber: string): Promise<{ lots: LotTrace[]; u
     )
     .select('b.*', 'cu.name as created_by_name')
     .orderBy('b.created_at', 'desc');
-  return { lots: out, unlinked: unlinked.map(toSummary) };
+  const chipLots = await db()('batches as b')
+    .leftJoin('users as cu', 'cu.id', 'b.created_by')
+    .where('b.chip_lot', lotNumber.trim())
+    .select('b.*', 'cu.name as created_by_name')
+    .orderBy('b.created_at', 'desc');
+  return { lots: out, unlinked: unlinked.map(toSummary), chipLots: chipLots.map(toSummary) };
 }

@@ -11,6 +11,7 @@ import { scaleBatch } from '$lib/server/batches/scale';
 import { loadingSummary, toleranceLabel } from '$lib/server/batches/documents';
 import { completeSchema, overrideLineSchema, recordLineSchema } from '$lib/batches/schema';
 import { LOADING_BASIS_LABELS } from '$lib/batches/weighout/schema';
+import { chipBinSummary } from '$lib/batches/chip-bin-summary';
 import { WEIGHOUT_CAUTIONS, WEIGHOUT_CAUTION_TITLE } from '$lib/server/pdf/cautions';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
@@ -25,6 +26,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     lines: d.lines.map((l) => ({ ...l, toleranceLabel: toleranceLabel(l.tolerance) })),
     basisLabel: LOADING_BASIS_LABELS[batch.loadingBasis],
     loadingSummary: loadingSummary(d.batch),
+    chip: chipBinSummary(d.revision?.content ?? null, d.batch),
     silicone: d.silicone,
     caution: { title: WEIGHOUT_CAUTION_TITLE, lines: WEIGHOUT_CAUTIONS },
     canWeigh: mayWeigh(user),
