@@ -7,23 +7,9 @@ import { chooseChipBin } from '../../../src/lib/batches/chip-lot';
 import { planInputFromRevision } from '../../../src/lib/batches/plan-weighout';
 import { computeWeighout } from '../../../src/lib/batches/weighout/compute';
 import { parseRecipe, type RevisionContent } from '../../../src/lib/recipe';
-import { withRecipeMatrix } from '../../fixtures/recipe-matrix';
+import { NOMINAL_CONTENT, withRecipeMatrix } from '../../fixtures/recipe-matrix';
 
-const nominal = {
-  contentVersion: 1,
-  pump: { materialId: 1, code: 'B-450', name: 'blue pump' },
-  phosphors: [
-    { materialId: 2, code: 'GL-530', name: 'green garnet', opticalFraction: 0.4, wtPct: 7 },
-    { materialId: 3, code: 'RD-625', name: 'red nitride', opticalFraction: 0.2, wtPct: 2.5 }
-  ],
-  pumpLeakFraction: 0.4,
-  loading: null,
-  silicone: { siliconeSystemId: 1, name: 'Test 10:1', ratioA: 10, ratioB: 1, potLifeMin: 240, cure: '1 h at 150 °C', densityGPerCm3: 1.05 },
-  target: { kind: 'cctDuv' as const, cct: 3000, duv: 0 },
-  tolerance: { kind: 'sdcm' as const, steps: 3 },
-  floors: { raMin: 90 },
-  notes: ''
-};
+const nominal = NOMINAL_CONTENT;
 const matrix: RevisionContent = withRecipeMatrix(parseRecipe(nominal));
 const single: RevisionContent = parseRecipe(nominal);
 
