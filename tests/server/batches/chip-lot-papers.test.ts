@@ -49,5 +49,6 @@ describe('chip lot in lot trace', () => {
     expect((await traceLot(chipLot)).chipLots.map((b) => b.id)).toEqual([id]);
     expect((await listBatches({ lot: chipLot })).items.map((b) => b.id)).toEqual([id]);
     expect((await listBatches({ lot: `${chipLot}-P` })).items.map((b) => b.id)).toEqual([plainId]);
+    expect((await listBatches({ q: chipLot })).items.map((b) => b.id).sort()).toEqual([id, plainId].sort());
   });
 });

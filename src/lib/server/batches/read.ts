@@ -117,7 +117,7 @@ export interface BatchFilter {
 
 const like = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
-/** Batches newest first; `q` matches the batch number or a lot used; `lot` is an exact lot number. */
+/** Batches newest first; `q` matches the batch number or a lot used (chip lot included); `lot` is an exact lot number. */
 export async function listBatches(f: BatchFilter = {}): Promise<{ items: BatchSummary[]; total: number }> {
   const base = db()('batches as b');
   if (f.state) base.where('b.state', f.state);
@@ -125,13 +125,16 @@ export async function listBatches(f: BatchFilter = {}): Promise<{ items: BatchSu
   if (f.q) {
     const q = f.q;
     base.where((w) =>
-      w.where('b.batch_number', 'like', `%${like(q)}%`).orWhereExists((s) =>
-        s
-          .select(db().raw('1'))
-          .from('batch_lines as l')
-          .whereRaw('l.batch_id = b.id')
-          .andWhere('l.lot_number', 'like', `${like(q)}%`)
-      )
+      w
+        .where('b.batch_number', 'like', `%${like(q)}%`)
+        .orWhere('b.chip_lot', 'like', `${like(q)}%`)
+        .orWhereExists((s) =>
+          s
+            .select(db().raw('1'))
+            .from('batch_lines as l')
+            .whereRaw('l.batch_id = b.id')
+            .andWhere('l.lot_number', 'like', `${like(q)}%`)
+        )
     );
   }
   if (f.lot) {
