@@ -10,6 +10,7 @@ export const MAX_ADDITIVES = 2;
 export type PlanFields = Record<string, string>;
 
 const num = (v: string | undefined): number => (v === undefined || v.trim() === '' ? Number.NaN : Number(v.trim().replace(',', '.')));
+const text = (v: string | undefined): string => (v ?? '').trim();
 const tol = (f: PlanFields, key: string): ToleranceSpec => ({ kind: f[`${key}Kind`] === 'g' ? 'g' : 'pct', value: num(f[`${key}Value`]) });
 
 /** Request object for zod (numbers may be NaN: zod then names the field). */
@@ -24,6 +25,8 @@ export function fieldsToRequest(f: PlanFields, phosphorCount: number): CreateBat
       pct: num(f[`add${j}Pct`]),
       tolerance: tol(f, `add${j}Tol`)
     }));
+  const typedPcts = idx.map((i) => text(f[`pct${i}`]));
+  const chipGiven = [f.chipLot, f.chipBinCode, f.chipWavelengthNm].some((v) => text(v) !== '');
   return {
     revisionId: num(f.revisionId),
     sizing:
@@ -33,11 +36,19 @@ export function fieldsToRequest(f: PlanFields, phosphorCount: number): CreateBat
     loading:
       f.loadingMode === 'total'
         ? { mode: 'total', basis, totalPct: num(f.totalPct) }
-        : { mode: 'perPhosphor', basis, pcts: idx.map((i) => num(f[`pct${i}`])) },
+        : // All loadings left empty: the revision's own (the chip bin's recipe with a recipe matrix).
+          { mode: 'perPhosphor', basis, pcts: typedPcts.every((v) => v === '') ? undefined : typedPcts.map((v) => num(v)) },
     phosphorTolerances: idx.map((i) => tol(f, `p${i}Tol`)),
     siliconeTolerances: { a: tol(f, 'aTol'), b: tol(f, 'bTol') },
     additives,
     balance: { resolutionG: num(f.resolutionG), minWeightG: num(f.minWeightG), ref: (f.balanceRef ?? '').trim() || undefined },
+    chipLot: chipGiven
+      ? {
+          lotNumber: text(f.chipLot),
+          binCode: text(f.chipBinCode) || undefined,
+          wavelengthNm: text(f.chipWavelengthNm) === '' ? undefined : num(f.chipWavelengthNm)
+        }
+      : null,
     plantLimitMin: (f.plantLimitMin ?? '').trim() === '' ? null : num(f.plantLimitMin),
     notes: (f.notes ?? '').trim() || undefined
   };
@@ -62,6 +73,9 @@ export function defaultFields(revisionId: number, phosphorCount: number, loading
     resolutionG: '0.001',
     minWeightG: '0.05',
     balanceRef: '',
+    chipLot: '',
+    chipBinCode: '',
+    chipWavelengthNm: '',
     plantLimitMin: '',
     notes: ''
   };

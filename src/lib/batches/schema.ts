@@ -8,6 +8,7 @@ import { additiveSchema, balanceStepG, grams, LOADING_BASES, minWeightG, sizingS
 import { plainText } from '../errors/hidden-characters';
 import { MAX_BATCH_MASS_G, MAX_BATCH_MASS_MESSAGE } from './weighout/limits';
 import { PAPER_SIZES } from './weighout/paper';
+import { chipLotSchema } from './chip-lot';
 
 export const BATCH_STATES = ['planned', 'weighing', 'complete', 'released', 'rejected'] as const;
 export type BatchState = (typeof BATCH_STATES)[number];
@@ -61,6 +62,8 @@ export const createBatchSchema = z.object({
     .optional(),
   /** Must be the revision's silicone system when given (a different silicone needs a new revision). */
   siliconeSystemId: id.nullable().optional(),
+  /** The chip lot built with: required (with its bin code or wavelength) when the revision has a recipe per chip bin. */
+  chipLot: chipLotSchema.nullable().optional(),
   notes: z.string().trim().max(2000).optional()
 });
 export type CreateBatchRequest = z.infer<typeof createBatchSchema>;

@@ -20,6 +20,7 @@ export { judgePart, floorFailures, colourFailure, describeTolerance } from './ac
 export { describe as describeValues } from './statistics';
 export { histogram, niceStep } from './histogram';
 export { predictedVsMeasured, colourPoint, type ColourPoint, type PredictionCheck } from './prediction';
+export { batchPrediction, stepsFromPrediction, type BatchPrediction } from './bin-prediction';
 export { summariseBatch, type BatchSummary } from './summarise';
 export { ellipseOutline, toleranceOutline, planckianOutline, quadrangleOutline } from './outlines';
 export { judgeBatch, defaultAcceptance, batchAcceptance, describeAcceptance, type JudgedBatch, type AcceptanceChoice } from './judgeBatch';

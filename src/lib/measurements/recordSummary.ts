@@ -32,7 +32,9 @@ export function recordMeasurementSummary(
   acceptance: Acceptance,
   targetLabel: string,
   prediction: PredictionCheck | null,
-  signature: RecordSignature | null
+  signature: RecordSignature | null,
+  /** Whose prediction the parts were compared with, e.g. "chip bin B3 (452.5–455 nm peak) of revision 2". */
+  predictionSource: string | null = null
 ): RecordMeasurementSummary {
   const s = summary.stats;
   const bins = summary.bins.map((b) => `${b.nominalCct === null ? 'no bin' : `${b.nominalCct} K`}: ${b.count}`).join(', ');
@@ -63,6 +65,7 @@ export function recordMeasurementSummary(
     },
     { label: 'ANSI C78.377 bins', value: bins || '—' }
   ];
+  if (predictionSource) rows.push({ label: 'Prediction compared', value: `predicted point of ${predictionSource}` });
   if (prediction) {
     rows.push({
       label: 'Measured − predicted',

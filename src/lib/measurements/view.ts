@@ -48,6 +48,8 @@ export interface PartView {
   label: string;
   metrics: PartMetrics;
   verdict: PartVerdict;
+  /** Steps from the batch's prediction (its chip bin's predicted point with a recipe matrix); null without one. */
+  stepsFromPrediction: number | null;
 }
 
 export interface CorrectionView {
@@ -82,6 +84,8 @@ export interface BatchResultsView {
   parts: PartView[];
   summary: BatchSummary;
   prediction: PredictionCheck | null;
+  /** Which prediction the parts are compared with: the batch's chip bin's, or the revision's. */
+  predictionSource: { kind: 'bin' | 'revision'; label: string; binCode: string | null } | null;
   plot: ChromaticityPlotModel;
   corrections: CorrectionView[];
   disposition: DispositionView | null;

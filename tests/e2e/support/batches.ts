@@ -8,6 +8,23 @@ import { syntheticPartsCsv } from '../../../src/lib/measurements/syntheticParts'
 export const json = (ctx: APIRequestContext, url: string, data: object) =>
   ctx.post(url, { data, headers: { 'content-type': 'application/json' } });
 
+/** Weighs every line of a planned batch at its target (current lots), notes the mixing and completes it. */
+export async function weighMixComplete(tech: APIRequestContext, knex: ReturnType<typeof testDb>, id: number): Promise<void> {
+  const batch = await (await tech.get(`/api/v1/batches/${id}`)).json();
+  for (const l of batch.lines) {
+    const lot = l.materialId
+      ? (await knex('material_lots').where({ material_id: l.materialId }).orderBy('id', 'desc').first('lot_number'))!.lot_number
+      : 'BKF-LX11-2611';
+    expect(
+      (await json(tech, `/api/v1/batches/${id}/lines/${l.seq}`, { actualG: l.targetG, lotNumber: lot, version: l.version })).status()
+    ).toBe(200);
+  }
+  let version = (await (await tech.get(`/api/v1/batches/${id}`)).json()).version;
+  expect((await json(tech, `/api/v1/batches/${id}/mix`, { version })).status()).toBe(200);
+  version = (await (await tech.get(`/api/v1/batches/${id}`)).json()).version;
+  expect((await json(tech, `/api/v1/batches/${id}/complete`, { version })).status()).toBe(200);
+}
+
 /** A technician plans, weighs (every line at target, current lots), mixes and completes a 10 g batch of KH-W30-90. */
 export async function completedBatch(): Promise<{ id: number; batchNumber: string; csv: string }> {
   const knex = testDb();
@@ -27,19 +44,7 @@ export async function completedBatch(): Promise<{ id: number; batchNumber: strin
     });
     expect(created.status()).toBe(201);
     const { id, batchNumber } = await created.json();
-    const batch = await (await tech.get(`/api/v1/batches/${id}`)).json();
-    for (const l of batch.lines) {
-      const lot = l.materialId
-        ? (await knex('material_lots').where({ material_id: l.materialId }).orderBy('id', 'desc').first('lot_number'))!.lot_number
-        : 'BKF-LX11-2611';
-      expect(
-        (await json(tech, `/api/v1/batches/${id}/lines/${l.seq}`, { actualG: l.targetG, lotNumber: lot, version: l.version })).status()
-      ).toBe(200);
-    }
-    let version = (await (await tech.get(`/api/v1/batches/${id}`)).json()).version;
-    expect((await json(tech, `/api/v1/batches/${id}/mix`, { version })).status()).toBe(200);
-    version = (await (await tech.get(`/api/v1/batches/${id}`)).json()).version;
-    expect((await json(tech, `/api/v1/batches/${id}/complete`, { version })).status()).toBe(200);
+    await weighMixComplete(tech, knex, id);
     await tech.dispose();
     // 12 synthetic parts of the revision (invented), red 3 % high with a little scatter.
     const content = parseRecipe(rev.content_json);

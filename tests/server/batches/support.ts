@@ -7,6 +7,7 @@ import { db } from '../../../src/lib/server/db/index';
 import * as users from '../../../src/lib/server/accounts/users';
 import type { User } from '../../../src/lib/server/accounts/users';
 import type { RevisionContent } from '../../../src/lib/recipe';
+import { withRecipeMatrix } from '../../fixtures/recipe-matrix';
 
 export const DEMO_EMAILS = {
   technician: 'tomas.brand@kestrelhollow.example',
@@ -32,7 +33,8 @@ export interface Fixture {
   formulationCode: string;
 }
 
-export async function makeFixture(opts: { withWtPct?: boolean } = {}): Promise<Fixture> {
+/** `matrix`: the approved revision holds a recipe per chip bin (tests/fixtures/recipe-matrix.ts). */
+export async function makeFixture(opts: { withWtPct?: boolean; matrix?: boolean } = {}): Promise<Fixture> {
   const k = db();
   const sfx = Math.random().toString(36).slice(2, 7).toUpperCase();
   const admin = await demoUser('admin');
@@ -86,7 +88,7 @@ export async function makeFixture(opts: { withWtPct?: boolean } = {}): Promise<F
     formulation_id: formulationId,
     revision_no,
     state,
-    content_json: JSON.stringify(content),
+    content_json: JSON.stringify(opts.matrix ? withRecipeMatrix(content) : content),
     predicted_json: '{}',
     core_version: 'test',
     content_sha256: '0'.repeat(64),

@@ -8,6 +8,8 @@
  * phrᵢ = wᵢ · 100 / (100 − Σw)  (phosphor mass per 100 g of silicone).
  * The conversion stays exact (rationals): the phr printed to 4 decimals is for people; the
  * weigh-out is computed from the exact fraction, so the lines weigh the revision's exact masses.
+ * With a recipe matrix, `binCode` names the chip bin whose recipe is weighed (the recipe accessors
+ * refuse a bin the matrix lacks); without one, the one recipe serves every bin.
  */
 import { Rat } from './rational';
 import type { LoadingBasis, Sizing, ToleranceSpec, WeighoutInput } from './schema';
@@ -25,8 +27,8 @@ export const DEFAULT_TOLERANCE: Record<'phosphor' | 'additive' | 'silicone', Tol
  * The revision's per-phosphor loadings on the chosen basis, exactly (rationals from the wt % as
  * written), or null when the revision has none or they leave no silicone.
  */
-export function revisionLoadingsExact(content: RevisionContent, basis: 'wtPctOfSlurry' | 'phr'): Rat[] | null {
-  const wt = loadingOf(content);
+export function revisionLoadingsExact(content: RevisionContent, basis: 'wtPctOfSlurry' | 'phr', binCode?: string): Rat[] | null {
+  const wt = loadingOf(content, binCode);
   if (wt === null) return null;
   const exact = wt.map((w) => Rat.fromNumber(w));
   if (basis === 'wtPctOfSlurry') return exact;
@@ -36,8 +38,8 @@ export function revisionLoadingsExact(content: RevisionContent, basis: 'wtPctOfS
 }
 
 /** The same loadings as printed (4 decimals): for display and for a person to copy, never to weigh from. */
-export function revisionLoadings(content: RevisionContent, basis: 'wtPctOfSlurry' | 'phr'): number[] | null {
-  return revisionLoadingsExact(content, basis)?.map(printPct) ?? null;
+export function revisionLoadings(content: RevisionContent, basis: 'wtPctOfSlurry' | 'phr', binCode?: string): number[] | null {
+  return revisionLoadingsExact(content, basis, binCode)?.map(printPct) ?? null;
 }
 
 const printPct = (r: Rat) => Number(r.toFixed(4));
@@ -61,10 +63,10 @@ export interface WeighoutRequest {
 
 export type FromRevisionResult = { ok: true; input: WeighoutInput } | { ok: false; errors: WeighoutIssue[] };
 
-export function weighoutInputFromRevision(content: RevisionContent, req: WeighoutRequest): FromRevisionResult {
-  const lines = phosphorLines(content);
+export function weighoutInputFromRevision(content: RevisionContent, req: WeighoutRequest, binCode?: string): FromRevisionResult {
+  const lines = phosphorLines(content, binCode);
   const n = lines.length;
-  const fromRevision = revisionLoadingsExact(content, req.loading.basis);
+  const fromRevision = revisionLoadingsExact(content, req.loading.basis, binCode);
   let pcts: (number | Rat)[];
   let totalPct: number | null = null;
   if (req.loading.mode === 'perPhosphor') {

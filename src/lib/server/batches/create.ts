@@ -5,7 +5,8 @@ import { getRevision } from '../formulations/read';
 import type { User } from '../accounts/users';
 import { computeWeighout, type WeighoutPlan } from '../../batches/weighout/compute';
 import { ExactNumberError } from '../../batches/weighout/rational';
-import { weighoutInputFromRevision } from '../../batches/weighout/from-revision';
+import { planInputFromRevision } from '../../batches/plan-weighout';
+import type { ChosenChipBin } from '../../batches/chip-lot';
 import { describeTarget } from '../../batches/weighout/target';
 import type { WeighoutInput } from '../../batches/weighout/schema';
 import type { CreateBatchRequest } from '../../batches/schema';
@@ -16,6 +17,7 @@ import { lineRowsFor, planColumns } from './lines';
 export interface PreparedBatch {
   input: WeighoutInput;
   plan: WeighoutPlan;
+  chip: ChosenChipBin;
 }
 
 /** The plan a request would give, without saving (also used by the preview endpoint). */
@@ -36,7 +38,7 @@ export async function prepareBatch(
       [{ path: 'siliconeSystemId', message: "must be the revision's silicone system" }]
     );
   }
-  const built = weighoutInputFromRevision(revision.content, req);
+  const built = planInputFromRevision(revision.content, req);
   if (!built.ok) throw invalid(built.errors.map((e) => e.message).join('; '), built.errors);
   let result: ReturnType<typeof computeWeighout>;
   try {
@@ -46,11 +48,11 @@ export async function prepareBatch(
     throw err;
   }
   if (!result.ok) throw impossible(result.errors);
-  return { input: built.input, plan: result.plan, revision };
+  return { input: built.input, plan: result.plan, chip: built.chip, revision };
 }
 
 export async function createBatch(user: User, req: CreateBatchRequest): Promise<{ id: number; batchNumber: string }> {
-  const { input, plan, revision } = await prepareBatch(req);
+  const { input, plan, chip, revision } = await prepareBatch(req);
   const target = describeTarget(revision.content.target, revision.content.tolerance);
   const s = revision.content.silicone;
   await ensureBatchCounter();
@@ -81,6 +83,9 @@ export async function createBatch(user: User, req: CreateBatchRequest): Promise<
           resolution_g: plan.resolutionG,
           min_weight_g: plan.minWeightG,
           balance_ref: req.balance.ref || null,
+          chip_lot: chip.lotNumber,
+          chip_bin_code: chip.binCode,
+          chip_wavelength_nm: chip.wavelengthNm,
           input_json: JSON.stringify(input),
           target_json: JSON.stringify(target),
           notes: req.notes || null,
@@ -94,7 +99,13 @@ export async function createBatch(user: User, req: CreateBatchRequest): Promise<
             entityType: 'batch',
             entityId: id,
             action: 'create',
-            after: { batchNumber, revisionId: revision.id, request: req, lines: plan.lines.map((l) => [l.code, l.targetG]) }
+            after: {
+              batchNumber,
+              revisionId: revision.id,
+              chipBin: chip.binCode,
+              request: req,
+              lines: plan.lines.map((l) => [l.code, l.targetG])
+            }
           },
           trx
         );

@@ -11,6 +11,7 @@ import { LOADING_BASIS_LABELS, type ToleranceSpec } from '../../batches/weighout
 import { getBatch, type BatchDetail } from './read';
 import { notFound } from './errors';
 import { citedPackageModel } from '../package-models/choices';
+import { chipBinSummary } from '../../batches/chip-bin-summary';
 
 export type { MeasurementSummary } from '../pdf/batch-doc';
 
@@ -25,6 +26,7 @@ export function loadingSummary(b: BatchDetail['batch']): string {
 export function toBatchDoc(d: BatchDetail): BatchDoc {
   const b = d.batch;
   const unit = b.loadingBasis === 'phr' ? 'phr' : 'wt %';
+  const chip = chipBinSummary(d.revision?.content ?? null, b);
   return {
     batchNumber: b.batchNumber,
     state: b.state,
@@ -37,6 +39,7 @@ export function toBatchDoc(d: BatchDetail): BatchDoc {
       bin: b.target.ansiBin ? `${b.target.ansiBin} K quadrangle` : null,
       tolerance: b.target.tolerance
     },
+    chip: chip ? { lot: chip.lot, bin: chip.bin, predicted: chip.predictedText } : null,
     size: {
       batchMassG: b.batchMassG,
       sizingNote:

@@ -118,7 +118,7 @@ export interface BatchFilter {
 
 const like = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
-/** Batches newest first; `q` matches the batch number or a lot used; `lot` is an exact lot number. */
+/** Batches newest first; `q` matches the batch number or a lot used (chip lot included); `lot` is an exact lot number. */
 export async function listBatches(f: BatchFilter = {}): Promise<{ items: BatchSummary[]; total: number }> {
   const base = db()('batches as b');
   if (f.state) base.where('b.state', f.state);
@@ -126,18 +126,25 @@ export async function listBatches(f: BatchFilter = {}): Promise<{ items: BatchSu
   if (f.q) {
     const q = f.q;
     base.where((w) =>
-      w.where('b.batch_number', 'like', `%${like(q)}%`).orWhereExists((s) =>
-        s
-          .select(db().raw('1'))
-          .from('batch_lines as l')
-          .whereRaw('l.batch_id = b.id')
-          .andWhere('l.lot_number', 'like', `${like(q)}%`)
-      )
+      w
+        .where('b.batch_number', 'like', `%${like(q)}%`)
+        .orWhere('b.chip_lot', 'like', `${like(q)}%`)
+        .orWhereExists((s) =>
+          s
+            .select(db().raw('1'))
+            .from('batch_lines as l')
+            .whereRaw('l.batch_id = b.id')
+            .andWhere('l.lot_number', 'like', `${like(q)}%`)
+        )
     );
   }
   if (f.lot) {
     const lot = f.lot;
-    base.whereExists((s) => s.select(db().raw('1')).from('batch_lines as l').whereRaw('l.batch_id = b.id').andWhere('l.lot_number', lot));
+    base.where((w) =>
+      w
+        .where('b.chip_lot', lot)
+        .orWhereExists((s) => s.select(db().raw('1')).from('batch_lines as l').whereRaw('l.batch_id = b.id').andWhere('l.lot_number', lot))
+    );
   }
   const [{ n }] = await base.clone().count({ n: '*' });
   const rows = await base
@@ -155,8 +162,11 @@ export interface LotTrace {
   batches: (BatchSummary & { lines: { seq: number; code: string; actualG: string | null }[] })[];
 }
 
-/** From a lot number to every batch that used it, per material lot with that number. */
-export async function traceLot(lotNumber: string): Promise<{ lots: LotTrace[]; unlinked: BatchSummary[] }> {
+/**
+ * From a lot number to every batch that used it: per material lot with that number, the batches
+ * that recorded it as text on a silicone or additive line, and the batches built with it as chip lot.
+ */
+export async function traceLot(lotNumber: string): Promise<{ lots: LotTrace[]; unlinked: BatchSummary[]; chipLots: BatchSummary[] }> {
   const lots = await db()('material_lots as ml')
     .join('materials as m', 'm.id', 'ml.material_id')
     .where('ml.lot_number', lotNumber.trim())
@@ -205,5 +215,10 @@ export async function traceLot(lotNumber: string): Promise<{ lots: LotTrace[]; u
     )
     .select('b.*', 'cu.name as created_by_name')
     .orderBy('b.created_at', 'desc');
-  return { lots: out, unlinked: unlinked.map(toSummary) };
+  const chipLots = await db()('batches as b')
+    .leftJoin('users as cu', 'cu.id', 'b.created_by')
+    .where('b.chip_lot', lotNumber.trim())
+    .select('b.*', 'cu.name as created_by_name')
+    .orderBy('b.created_at', 'desc');
+  return { lots: out, unlinked: unlinked.map(toSummary), chipLots: chipLots.map(toSummary) };
 }

@@ -20,6 +20,8 @@ export interface BatchSummary {
   createdAt: Date;
   createdByName: string;
   completedAt: Date | null;
+  /** Lot number of the LED chips built with (null when not recorded). */
+  chipLot: string | null;
 }
 
 export interface Batch extends BatchSummary {
@@ -41,6 +43,9 @@ export interface Batch extends BatchSummary {
   places: number;
   minWeightG: string;
   balanceRef: string | null;
+  /** Pump bin whose recipe was weighed (a revision with a recipe matrix), and the chip lot's measured wavelength, nm. */
+  chipBinCode: string | null;
+  chipWavelengthNm: number | null;
   input: WeighoutInput;
   target: BatchTarget;
   notes: string | null;
@@ -84,7 +89,8 @@ export function toSummary(r: Row): BatchSummary {
     batchMassG: decimalText(r.batch_mass_g, places),
     createdAt: r.created_at,
     createdByName: r.created_by_name ?? '',
-    completedAt: r.completed_at ?? null
+    completedAt: r.completed_at ?? null,
+    chipLot: r.chip_lot ?? null
   };
 }
 
@@ -110,6 +116,8 @@ export function toBatch(r: Row): Batch {
     places,
     minWeightG: decimalText(r.min_weight_g, 0),
     balanceRef: r.balance_ref,
+    chipBinCode: r.chip_bin_code ?? null,
+    chipWavelengthNm: num(r.chip_wavelength_nm),
     input: JSON.parse(r.input_json),
     target: JSON.parse(r.target_json),
     notes: r.notes,

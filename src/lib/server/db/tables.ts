@@ -146,6 +146,9 @@ export interface BatchRow {
   resolution_g: number; // decimal(10,6), read as a number (decimalNumbers)
   min_weight_g: number; // decimal(12,6), read as a number (decimalNumbers)
   balance_ref: string | null;
+  chip_lot: string | null;
+  chip_bin_code: string | null;
+  chip_wavelength_nm: number | null; // decimal(6,2), read as a number (decimalNumbers)
   input_json: string;
   target_json: string;
   notes: string | null;
@@ -396,6 +399,7 @@ declare module 'knex/types/tables' {
       | 'ratio_b'
       | 'resolution_g'
       | 'min_weight_g'
+      | 'chip_wavelength_nm'
     >;
     formulation_revisions: Table<FormulationRevisionRow>;
     formulations: Table<FormulationRow>;

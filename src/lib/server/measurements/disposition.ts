@@ -77,7 +77,7 @@ export async function disposeBatch(caller: Caller, batchId: number, input: Dispo
     const row = await lockBatch(trx, batchId);
     expectVersion(row, input.version, `Batch ${row.batch_number}`);
     expectState(row, ['complete'], decision === 'released' ? 'be released' : 'be rejected');
-    const { judged } = await computeResults(ctx);
+    const { judged, view } = await computeResults(ctx);
     if (decision === 'released' && judged.summary.parts === 0)
       throw conflict(`Batch ${row.batch_number} has no measured parts: upload measurements before releasing it.`);
     const files = await trx('measurement_uploads as m')
@@ -119,14 +119,21 @@ export async function disposeBatch(caller: Caller, batchId: number, input: Dispo
     const detail = (await getBatch(batchId, trx))!;
     const doc = toBatchDoc(detail);
     doc.state = decision;
-    const summary = recordMeasurementSummary(judged.summary, judged.acceptance, judged.target.label, null, {
-      decision,
-      signerName: caller.name,
-      meaning: input.meaning,
-      comment: input.comment,
-      signedAtText: `${signedAt.toISOString().slice(0, 19).replace('T', ' ')} UTC`,
-      contentSha256: signed.sha256
-    });
+    const summary = recordMeasurementSummary(
+      judged.summary,
+      judged.acceptance,
+      judged.target.label,
+      view.prediction,
+      {
+        decision,
+        signerName: caller.name,
+        meaning: input.meaning,
+        comment: input.comment,
+        signedAtText: `${signedAt.toISOString().slice(0, 19).replace('T', ' ')} UTC`,
+        contentSha256: signed.sha256
+      },
+      view.predictionSource?.label ?? null
+    );
     const pdf = await buildBatchRecord(doc, { measurementSummary: summary });
     const recordFileId = await putFile(
       {

@@ -7,6 +7,8 @@ import { getBatch, type BatchDetail } from '../batches/read';
 import type { RevisionRecord } from '../formulations/read';
 import {
   batchAcceptance,
+  batchPrediction,
+  stepsFromPrediction,
   chromaticityPlotModel,
   describeAcceptance,
   describeTolerance,
@@ -56,11 +58,18 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
   const acceptance = batchAcceptance(revision.content, choice);
   const judged = judgeBatch(parts, revision.content.target, acceptance);
   const mean = judged.summary.meanPoint;
-  const predicted = predictedPoint(revision);
+  const forBatch = batchPrediction(revision.content, revision.revisionNo, predictedPoint(revision), b.chipBinCode);
+  const predicted = forBatch?.point ?? null;
   const prediction: PredictionCheck | null = mean && predicted ? predictedVsMeasured(predicted, mean) : null;
+  const partSteps = forBatch
+    ? stepsFromPrediction(
+        judged.parts.map((p) => p.metrics),
+        forBatch
+      )
+    : null;
   const markers: PlotMarker[] = [];
   if (mean) markers.push({ kind: 'mean', label: 'Measured mean', x: mean.x, y: mean.y });
-  if (predicted) markers.push({ kind: 'predicted', label: `Predicted (revision ${revision.revisionNo})`, x: predicted.x, y: predicted.y });
+  if (forBatch) markers.push({ kind: 'predicted', label: `Predicted (${forBatch.label})`, x: forBatch.point.x, y: forBatch.point.y });
   const last = corrections.at(-1);
   if (last)
     markers.push({
@@ -98,10 +107,12 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
       uploadId: parts[i].uploadId,
       label: p.label,
       metrics: p.metrics,
-      verdict: p.verdict
+      verdict: p.verdict,
+      stepsFromPrediction: partSteps?.[i] ?? null
     })),
     summary: judged.summary,
     prediction,
+    predictionSource: forBatch ? { kind: forBatch.source, label: forBatch.label, binCode: forBatch.bin?.code ?? null } : null,
     plot: chromaticityPlotModel(judged, markers),
     corrections,
     disposition

@@ -35,6 +35,8 @@ export interface BatchDoc {
   /** packageModel: the package model the revision cites, as "<name> v<version>", or absent. */
   formulation: { code: string; name: string; revisionNo: number; packageModel?: string | null };
   target: { description: string; xy: string | null; bin: string | null; tolerance: string | null };
+  /** The LED chip lot built with and, with a recipe per chip bin, the bin weighed and its predicted point. */
+  chip?: { lot: string | null; bin: string | null; predicted: string | null } | null;
   size: { batchMassG: string; sizingNote: string | null; basisLabel: string; loadingSummary: string };
   balance: { resolutionG: string; minWeightG: string; balanceRef: string | null };
   silicone: {
@@ -73,6 +75,7 @@ export function headerFields(s: Sheet, d: BatchDoc): void {
     ['Target colour point', [d.target.description, d.target.xy].filter(Boolean).join('  ·  ')],
     ['ANSI C78.377 bin', d.target.bin ?? 'outside the nominal quadrangles'],
     ['Colour tolerance', d.target.tolerance ?? '—'],
+    ...chipFields(d),
     ['Batch size (finished slurry)', `${d.size.batchMassG} g`],
     ['Loading basis', d.size.basisLabel],
     ['Phosphor loading', d.size.loadingSummary],
@@ -84,6 +87,14 @@ export function headerFields(s: Sheet, d: BatchDoc): void {
     ['Planned', `${stamp(d, d.createdAt)} by ${d.createdBy}`]
   ]);
   if (d.size.sizingNote) s.paragraph(`Sizing: ${d.size.sizingNote}`, { size: 8, color: '#58657d' });
+}
+
+function chipFields(d: BatchDoc): [string, string][] {
+  if (!d.chip) return [];
+  const rows: [string, string][] = [['Chip lot', d.chip.lot ?? '—']];
+  if (d.chip.bin) rows.push(['Chip bin (recipe weighed)', d.chip.bin]);
+  if (d.chip.predicted) rows.push(["Bin's predicted point", d.chip.predicted]);
+  return rows;
 }
 
 export function processNotes(d: BatchDoc): string[] {

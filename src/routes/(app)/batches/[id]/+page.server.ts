@@ -14,6 +14,7 @@ import { LOADING_BASIS_LABELS } from '$lib/batches/weighout/schema';
 import { WEIGHOUT_CAUTION_TITLE } from '$lib/server/pdf/cautions';
 import { batchCautions } from '$lib/server/batches/cautions';
 import { lotsOfMaterials } from '$lib/server/batches/lots';
+import { chipBinSummary } from '$lib/batches/chip-bin-summary';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 import { MAX_BATCH_MASS_G, MAX_BATCH_MASS_MESSAGE, storable, STORED_G_PLACES } from '$lib/batches/weighout/limits';
@@ -28,6 +29,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     lines: d.lines.map((l) => ({ ...l, toleranceLabel: toleranceLabel(l.tolerance) })),
     basisLabel: LOADING_BASIS_LABELS[batch.loadingBasis],
     loadingSummary: loadingSummary(d.batch),
+    chip: chipBinSummary(d.revision?.content ?? null, d.batch),
     silicone: d.silicone,
     caution: { title: WEIGHOUT_CAUTION_TITLE, lines: await batchCautions(d.lines) },
     // Registered lots per line's material, for the live lot hint (the server checks again on Record).

@@ -10,6 +10,7 @@ import { describeIssues } from '$lib/server/http/issues';
 import { createBatchSchema } from '$lib/batches/schema';
 import { defaultFields, fieldsToRequest } from '$lib/batches/plan-form';
 import { revisionLoadings } from '$lib/batches/weighout/from-revision';
+import { hasRecipeMatrix } from '$lib/recipe';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
@@ -31,7 +32,14 @@ export const load: PageServerLoad = async ({ locals, url }) => {
           content: usable.content
         }
       : null,
-    defaults: usable ? defaultFields(usable.id, usable.content.phosphors.length, revisionLoadings(usable.content, 'wtPctOfSlurry')) : null,
+    // With a recipe per chip bin the loadings stay empty: the chosen bin's recipe is weighed.
+    defaults: usable
+      ? defaultFields(
+          usable.id,
+          usable.content.phosphors.length,
+          hasRecipeMatrix(usable.content) ? null : revisionLoadings(usable.content, 'wtPctOfSlurry')
+        )
+      : null,
     revisionLoadingsPhr: usable ? revisionLoadings(usable.content, 'phr') : null
   };
 };

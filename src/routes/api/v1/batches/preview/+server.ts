@@ -10,6 +10,7 @@ import type { RequestHandler } from './$types';
 export const POST: RequestHandler = (event) =>
   apiHandler(async () => {
     requireUser(event.locals);
-    const { plan, input } = await prepareBatch(await readJson(event, createBatchSchema));
-    return json({ plan, weighoutInput: input });
+    const { plan, input, chip } = await prepareBatch(await readJson(event, createBatchSchema));
+    const chipLot = { lotNumber: chip.lotNumber, binCode: chip.binCode, wavelengthNm: chip.wavelengthNm, bin: chip.binRecipe?.bin ?? null };
+    return json({ plan, weighoutInput: input, chipLot, predicted: chip.binRecipe?.predicted ?? null });
   });
