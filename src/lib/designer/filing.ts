@@ -112,8 +112,8 @@ export function revisionContentFrom(
     tolerance: blend.tolerance,
     floors: blend.floors,
     packageModelRef: blend.packageModelRef ?? null,
-    condition: blend.condition ?? null,
-    coldCheck: blend.coldCheck ?? null,
+    condition: blend.condition ? operatingConditionSchema.parse(blend.condition) : null,
+    coldCheck: blend.coldCheck ? coldCheckSchema.parse(blend.coldCheck) : null,
     notes
   };
 }
