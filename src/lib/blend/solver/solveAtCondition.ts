@@ -11,7 +11,7 @@ import { type OperatingCondition, BENCH_CONDITION, isBenchCondition } from '../.
 import { colourDistance } from '../../aim/distance';
 import { resolveTarget } from '../../aim/target';
 import { mix, type MixRatios } from '../mix';
-import { normaliseRatios } from '../superposition';
+import { dequenchedFractions } from '../thermal/fractions';
 import { type HotShift, type ThermalById, requireHotComponents } from '../thermal/hotComponents';
 import type { SolveCandidate } from './buildCandidate';
 import { type SolveProblem, type SolveResult, solveBlend } from './solveBlend';
@@ -46,7 +46,7 @@ export interface ConditionSolveProblem extends SolveProblem {
 /** The recipe a candidate hands over, as the bench build will weigh it. */
 export function benchRecipeOf(c: SolveCandidate, quench: number[], loading: SolveProblem['loading']): MixRatios {
   if (loading && c.concentrationsWtPct) return { kind: 'loading', concentrationsWtPct: c.concentrationsWtPct, loading };
-  return { kind: 'optical', fractions: normaliseRatios(c.opticalFractions.map((w, k) => (k === 0 ? w : w / quench[k - 1]))) };
+  return { kind: 'optical', fractions: dequenchedFractions(c.opticalFractions, quench) };
 }
 
 function coldPointOf(problem: ConditionSolveProblem, quench: number[], c: SolveCandidate): ColdCheckPoint {

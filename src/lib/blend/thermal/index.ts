@@ -10,3 +10,4 @@ export {
   type HotShift,
   type HotComponentsResult
 } from './hotComponents';
+export { quenchedFractions, dequenchedFractions } from './fractions';
