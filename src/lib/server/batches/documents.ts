@@ -10,6 +10,8 @@ import { LOADING_BASIS_LABELS, type ToleranceSpec } from '../../batches/weighout
 import { getBatch, type BatchDetail } from './read';
 import { notFound } from './errors';
 import { citedPackageModel } from '../package-models/choices';
+import { describeCondition } from '../../aim/condition';
+import type { ColdCheck } from '../../recipe/schemaV3';
 
 export type { MeasurementSummary } from '../pdf/batch-doc';
 
@@ -21,7 +23,15 @@ export function loadingSummary(b: BatchDetail['batch']): string {
     : `${b.phosphorWtPct.toFixed(4)} wt % of slurry (${b.phosphorPhr.toFixed(4)} phr)`;
 }
 
+/** The cold check target as printed: "x 0.4372, y 0.4021 (2990 K, Duv 0.0006) at bench (25 °C)". */
+export function coldCheckLabel(c: ColdCheck): string {
+  const cct = c.cct === null ? '' : ` (${Math.round(c.cct)} K${c.duv === null ? '' : `, Duv ${c.duv.toFixed(4)}`})`;
+  const at = c.condition.temperatureC === 25 && c.condition.driveCurrentMa === null ? 'bench (25 °C)' : describeCondition(c.condition);
+  return `x ${c.x.toFixed(4)}, y ${c.y.toFixed(4)}${cct} at ${at}`;
+}
+
 export function toBatchDoc(d: BatchDetail): BatchDoc {
+  const content = d.revision?.content;
   const b = d.batch;
   const unit = b.loadingBasis === 'phr' ? 'phr' : 'wt %';
   return {
@@ -34,7 +44,9 @@ export function toBatchDoc(d: BatchDetail): BatchDoc {
       description: b.target.description,
       xy: `x ${b.target.x.toFixed(4)}, y ${b.target.y.toFixed(4)}`,
       bin: b.target.ansiBin ? `${b.target.ansiBin} K quadrangle` : null,
-      tolerance: b.target.tolerance
+      tolerance: b.target.tolerance,
+      condition: content?.condition ? describeCondition(content.condition) : null,
+      coldCheck: content?.condition && content.coldCheck ? coldCheckLabel(content.coldCheck) : null
     },
     size: {
       batchMassG: b.batchMassG,
