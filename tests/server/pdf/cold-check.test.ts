@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildBatchTicket } from '../../../src/lib/server/pdf/batch-ticket';
 import { buildBatchRecord } from '../../../src/lib/server/pdf/batch-record';
-import { coldCheckLabel } from '../../../src/lib/server/batches/documents';
+import { coldCheckLabel } from '../../../src/lib/formulations/cold-check';
 import { sampleDoc } from './fixtures';
 import { pdfToText } from './pdf-text';
 

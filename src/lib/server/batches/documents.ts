@@ -11,7 +11,7 @@ import { getBatch, type BatchDetail } from './read';
 import { notFound } from './errors';
 import { citedPackageModel } from '../package-models/choices';
 import { describeCondition } from '../../aim/condition';
-import type { ColdCheck } from '../../recipe/schemaV3';
+import { coldCheckLabel } from '../../formulations/cold-check';
 
 export type { MeasurementSummary } from '../pdf/batch-doc';
 
@@ -21,13 +21,6 @@ export function loadingSummary(b: BatchDetail['batch']): string {
   return b.loadingBasis === 'phr'
     ? `${b.phosphorPhr.toFixed(4)} phr (${b.phosphorWtPct.toFixed(4)} wt % of slurry)`
     : `${b.phosphorWtPct.toFixed(4)} wt % of slurry (${b.phosphorPhr.toFixed(4)} phr)`;
-}
-
-/** The cold check target as printed: "x 0.4372, y 0.4021 (2990 K, Duv 0.0006) at bench (25 °C)". */
-export function coldCheckLabel(c: ColdCheck): string {
-  const cct = c.cct === null ? '' : ` (${Math.round(c.cct)} K${c.duv === null ? '' : `, Duv ${c.duv.toFixed(4)}`})`;
-  const at = c.condition.temperatureC === 25 && c.condition.driveCurrentMa === null ? 'bench (25 °C)' : describeCondition(c.condition);
-  return `x ${c.x.toFixed(4)}, y ${c.y.toFixed(4)}${cct} at ${at}`;
 }
 
 export function toBatchDoc(d: BatchDetail): BatchDoc {
