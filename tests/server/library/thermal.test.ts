@@ -8,6 +8,7 @@ import { db, closeDb } from '../../../src/lib/server/db/index';
 import * as editing from '../../../src/lib/server/library/editing';
 import { getThermal, putThermal, thermalByMaterialIds, uploadThermalCsv } from '../../../src/lib/server/library/thermal';
 import { materialThermalSchema } from '../../../src/lib/blend/thermal';
+import { saveThermalForm } from '../../../src/lib/server/library/thermal-form';
 import { demoUser, phosphorFields, removeTestMaterials } from './support';
 import type { User } from '../../../src/lib/server/accounts/users';
 
@@ -95,5 +96,21 @@ describe('material thermal data', () => {
     const r = await getThermal(id);
     expect(r.source).toBe('quench.csv');
     expect(r.thermal?.kind === 'phosphor' && r.thermal.relativeEmission.map((p) => p.value)).toEqual([1, 0.97, 0.93]);
+  });
+
+  it('saves a table typed into the material page form, and names the line of a bad one', async () => {
+    const id = await editing.create(rhea, 'phosphor', phosphorFields('TST-T5'));
+    const form = (csv: string, version = '0') => {
+      const fd = new FormData();
+      fd.set('csv', csv);
+      fd.set('version', version);
+      return fd;
+    };
+    await expect(saveThermalForm(rhea, id, form('temperature_c,relative_emission\n25,1\n85,x'))).rejects.toMatchObject({
+      status: 422,
+      message: expect.stringMatching(/^The table was not saved: one problem in the file\. Line 3: relative_emission "x" is not a number/)
+    });
+    expect(await saveThermalForm(rhea, id, form('temperature_c,relative_emission\n25,1\n85,0.97'))).toBe(1);
+    await expect(saveThermalForm(rhea, id, form(''))).rejects.toMatchObject({ status: 400 });
   });
 });
