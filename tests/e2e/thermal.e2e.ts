@@ -11,7 +11,7 @@ const expect = baseExpect.configure({ timeout: 15_000 });
 async function materialId(code: string): Promise<number> {
   const knex = testDb();
   try {
-    return Number((await knex('materials').where({ code }).first('id')).id);
+    return Number((await knex('materials').where({ code }).first('id'))!.id);
   } finally {
     await knex.destroy();
   }

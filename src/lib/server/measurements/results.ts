@@ -17,6 +17,7 @@ import {
   type PredictionCheck
 } from '../../measurements/index';
 import type { BatchResultsView } from '../../measurements/view';
+import { judgingBasis } from '../../measurements/test-condition';
 import { conflict } from './errors';
 import * as records from './records';
 
@@ -53,10 +54,13 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
     records.listCorrections(b.id),
     records.getDisposition(b.id)
   ]);
-  const acceptance = batchAcceptance(revision.content, choice);
-  const judged = judgeBatch(parts, revision.content.target, acceptance);
+  // Uploads are bench measurements: a hot-aimed revision's parts are judged against its cold check.
+  const basis = judgingBasis(revision.content, predictedPoint(revision), null);
+  const chosen = batchAcceptance(revision.content, choice);
+  const acceptance = basis.status === 'ok' && basis.dropBinRule ? { ...chosen, requireTargetBin: false } : chosen;
+  const judged = judgeBatch(parts, basis.status === 'ok' ? basis.target : revision.content.target, acceptance);
   const mean = judged.summary.meanPoint;
-  const predicted = predictedPoint(revision);
+  const predicted = basis.status === 'ok' ? basis.predicted : predictedPoint(revision);
   const prediction: PredictionCheck | null = mean && predicted ? predictedVsMeasured(predicted, mean) : null;
   const markers: PlotMarker[] = [];
   if (mean) markers.push({ kind: 'mean', label: 'Measured mean', x: mean.x, y: mean.y });
