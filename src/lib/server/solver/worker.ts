@@ -1,5 +1,6 @@
 /**
- * Worker thread of the solver pool: runs the solver (`solveAtCondition`, `solveBlend` at the bench) off the request thread, so a long search
+ * Worker thread of the solver pool: runs the solver (`solveAtCondition`; `solveBlend` at the bench)
+ * off the request thread, so a long search
  * never stalls other requests and both cores are used. Bundled to build/solve-worker.js by
  * scripts/build-solve-worker.mjs. Messages: { id, problem } → { id, result } | { id, error }.
  */

@@ -6,7 +6,10 @@ import { thermalByMaterialIds } from '$lib/server/library/thermal';
 import { componentQuerySchema } from '$lib/designer/component-query';
 import type { RequestHandler } from './$types';
 
-/** Library pump + phosphors as blend-model specs (spectra included) and their thermal data by id (absent = not characterised), for the designer's live loop. */
+/**
+ * Library pump + phosphors as blend-model specs (spectra included) and their thermal data by id
+ * (absent = not characterised), for the designer's live loop.
+ */
 export const GET: RequestHandler = ({ locals, url }) =>
   apiHandler(async () => {
     requireUser(locals);
