@@ -20,7 +20,9 @@ describe('material library role rules', () => {
         '/api/v1/phosphors',
         '/api/v1/phosphors/[id]',
         '/api/v1/pumps',
-        '/api/v1/pumps/[id]'
+        '/api/v1/pumps/[id]',
+        '/api/v1/phosphors/[id]/thermal',
+        '/api/v1/pumps/[id]/thermal'
       ]) {
         expect(decide(id, 'GET', [role]), `${role} GET ${id}`).toBe('allow');
       }
@@ -42,7 +44,11 @@ describe('material library role rules', () => {
       ['/api/v1/pumps', 'POST'],
       ['/api/v1/pumps/[id]', 'PUT'],
       ['/api/v1/pumps/[id]', 'DELETE'],
-      ['/api/v1/pumps/[id]/spectrum', 'POST']
+      ['/api/v1/pumps/[id]/spectrum', 'POST'],
+      ['/api/v1/phosphors/[id]/thermal', 'PUT'],
+      ['/api/v1/phosphors/[id]/thermal', 'POST'],
+      ['/api/v1/pumps/[id]/thermal', 'PUT'],
+      ['/api/v1/pumps/[id]/thermal', 'POST']
     ];
     for (const [id, method] of changes) {
       for (const role of editors) expect(decide(id, method, [role]), `${role} ${method} ${id}`).toBe('allow');

@@ -7,6 +7,8 @@
 import { z } from 'zod';
 import { floorsSchema, targetSchema, toleranceSchema } from '../aim/schema';
 import { plainText } from '../errors/hidden-characters';
+import { operatingConditionSchema } from '../aim/condition';
+import { materialThermalSchema } from './thermal/schema';
 
 export const spdSchema = z
   .object({
@@ -85,7 +87,11 @@ export const solveProblemSchema = z.object({
   floors: floorsSchema.optional(),
   objective: z.enum(['maxLer', 'maxRa', 'maxRf', 'minCost'], 'objective must be maxLer, maxRa, maxRf or minCost'),
   maxCandidates: z.number().int().min(1).max(10).optional(),
-  loading: loadingParamsSchema.optional()
+  loading: loadingParamsSchema.optional(),
+  /** The condition the target holds at (null or absent = bench); a hot one solves on the components at it. */
+  condition: operatingConditionSchema.nullable().optional(),
+  /** Thermal data by component id; absent = the library's (the server looks them up), null = not characterised. */
+  thermal: z.record(z.string(), materialThermalSchema.nullable()).optional()
 });
 
 export const correctionRequestSchema = z.object({

@@ -5,6 +5,8 @@
  */
 import { z } from 'zod';
 import { floorsSchema, targetSchema, toleranceSchema } from '../aim/index';
+import { operatingConditionSchema } from '../aim/condition';
+import { coldCheckSchema } from '../recipe/schemaV3';
 import { CONTENT_VERSION, packageModelRefSchema, type MaterialRef, type RevisionContent, type SiliconeSpec } from '../recipe';
 import { roundedShares } from './shares';
 import { plainText } from '../errors/hidden-characters';
@@ -25,8 +27,12 @@ export const designedBlendSchema = z
     packageModelRef: packageModelRefSchema.nullable().default(null),
     target: targetSchema,
     tolerance: toleranceSchema,
-    floors: floorsSchema
+    floors: floorsSchema,
+    /** The condition the target holds at (null: bench) and, for a hot one, the bench point to check. */
+    condition: operatingConditionSchema.nullable().default(null),
+    coldCheck: coldCheckSchema.nullable().default(null)
   })
+  .refine((b) => b.coldCheck === null || b.condition !== null, 'a cold check belongs to a target at an operating condition')
   .refine((b) => b.fractions.length === b.phosphorIds.length + 1, 'one fraction per component (pump leak first)')
   .refine((b) => b.wtPct === null || b.wtPct.length === b.phosphorIds.length, 'one wt % per phosphor')
   .refine((b) => new Set(b.phosphorIds).size === b.phosphorIds.length, 'each phosphor may appear only once');
@@ -107,6 +113,8 @@ export function revisionContentFrom(
     tolerance: blend.tolerance,
     floors: blend.floors,
     packageModelRef: blend.packageModelRef ?? null,
+    condition: blend.condition ? operatingConditionSchema.parse(blend.condition) : null,
+    coldCheck: blend.coldCheck ? coldCheckSchema.parse(blend.coldCheck) : null,
     notes
   };
 }

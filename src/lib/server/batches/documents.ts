@@ -12,6 +12,8 @@ import { getBatch, type BatchDetail } from './read';
 import { notFound } from './errors';
 import { citedPackageModel } from '../package-models/choices';
 import { chipBinSummary } from '../../batches/chip-bin-summary';
+import { describeCondition } from '../../aim/condition';
+import { coldCheckLabel } from '../../formulations/cold-check';
 
 export type { MeasurementSummary } from '../pdf/batch-doc';
 
@@ -24,6 +26,7 @@ export function loadingSummary(b: BatchDetail['batch']): string {
 }
 
 export function toBatchDoc(d: BatchDetail): BatchDoc {
+  const content = d.revision?.content;
   const b = d.batch;
   const unit = b.loadingBasis === 'phr' ? 'phr' : 'wt %';
   const chip = chipBinSummary(d.revision?.content ?? null, b);
@@ -37,7 +40,9 @@ export function toBatchDoc(d: BatchDetail): BatchDoc {
       description: b.target.description,
       xy: `x ${b.target.x.toFixed(4)}, y ${b.target.y.toFixed(4)}`,
       bin: b.target.ansiBin ? `${b.target.ansiBin} K quadrangle` : null,
-      tolerance: b.target.tolerance
+      tolerance: b.target.tolerance,
+      condition: content?.condition ? describeCondition(content.condition) : null,
+      coldCheck: content?.condition && content.coldCheck ? coldCheckLabel(content.coldCheck) : null
     },
     chip: chip ? { lot: chip.lot, bin: chip.bin, predicted: chip.predictedText } : null,
     size: {

@@ -225,6 +225,15 @@ export interface MaterialLotRow {
   created_at: Date;
 }
 
+export interface MaterialThermalRow {
+  material_id: number;
+  data_json: string;
+  source: string | null;
+  version: number;
+  updated_by: number | null;
+  updated_at: Date;
+}
+
 export interface MaterialSpectrumRow {
   id: number;
   material_id: number;
@@ -406,6 +415,7 @@ declare module 'knex/types/tables' {
     invites: Table<InviteRow>;
     material_lots: Table<MaterialLotRow, never, never, 'received_on' | 'expires_on'>;
     material_spectra: Table<MaterialSpectrumRow, 'min_nm' | 'max_nm'>;
+    material_thermal: Table<MaterialThermalRow>;
     materials: Table<MaterialRow, 'peak_nm' | 'fwhm_nm' | 'density_g_cm3' | 'iqe' | 'absorption_reference_nm' | 'cost_per_kg' | 'd50_um'>;
     measurement_uploads: Table<MeasurementUploadRow>;
     part_measurements: Table<PartMeasurementRow>;

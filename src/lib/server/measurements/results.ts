@@ -19,6 +19,7 @@ import {
   type PredictionCheck
 } from '../../measurements/index';
 import type { BatchResultsView } from '../../measurements/view';
+import { judgingBasis } from '../../measurements/test-condition';
 import { conflict } from './errors';
 import * as records from './records';
 
@@ -55,10 +56,15 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
     records.listCorrections(b.id),
     records.getDisposition(b.id)
   ]);
-  const acceptance = batchAcceptance(revision.content, choice);
-  const judged = judgeBatch(parts, revision.content.target, acceptance);
+  // Uploads are bench measurements: a hot-aimed revision's parts are judged against its cold check.
+  const basis = judgingBasis(revision.content, predictedPoint(revision), null);
+  const chosen = batchAcceptance(revision.content, choice);
+  const acceptance = basis.status === 'ok' && basis.dropBinRule ? { ...chosen, requireTargetBin: false } : chosen;
+  const judged = judgeBatch(parts, basis.status === 'ok' ? basis.target : revision.content.target, acceptance);
   const mean = judged.summary.meanPoint;
-  const forBatch = batchPrediction(revision.content, revision.revisionNo, predictedPoint(revision), b.chipBinCode);
+  // A hot-aimed revision's bench uploads compare with its cold check; a batch of a chip bin with that bin's prediction.
+  const revisionPoint = basis.status === 'ok' ? basis.predicted : predictedPoint(revision);
+  const forBatch = batchPrediction(revision.content, revision.revisionNo, revisionPoint, b.chipBinCode);
   const predicted = forBatch?.point ?? null;
   const prediction: PredictionCheck | null = mean && predicted ? predictedVsMeasured(predicted, mean) : null;
   const partSteps = forBatch

@@ -34,7 +34,18 @@ export interface BatchDoc {
   createdBy: string;
   /** packageModel: the package model the revision cites, as "<name> v<version>", or absent. */
   formulation: { code: string; name: string; revisionNo: number; packageModel?: string | null };
-  target: { description: string; xy: string | null; bin: string | null; tolerance: string | null };
+  /**
+   * condition: the operating condition a hot target holds at ("Tj 85 °C, 350 mA"); coldCheck: the bench
+   * point a build of the recipe should measure ("x …, y …, 2990 K, Duv …"). Both absent for a bench target.
+   */
+  target: {
+    description: string;
+    xy: string | null;
+    bin: string | null;
+    tolerance: string | null;
+    condition?: string | null;
+    coldCheck?: string | null;
+  };
   /** The LED chip lot built with and, with a recipe per chip bin, the bin weighed and its predicted point. */
   chip?: { lot: string | null; bin: string | null; predicted: string | null } | null;
   size: { batchMassG: string; sizingNote: string | null; basisLabel: string; loadingSummary: string };
@@ -76,6 +87,8 @@ export function headerFields(s: Sheet, d: BatchDoc): void {
     ['ANSI C78.377 bin', d.target.bin ?? 'outside the nominal quadrangles'],
     ['Colour tolerance', d.target.tolerance ?? '—'],
     ...chipFields(d),
+    ...(d.target.condition ? [['Target holds at', d.target.condition] as [string, string]] : []),
+    ...(d.target.coldCheck ? [['Cold check target (bench)', d.target.coldCheck] as [string, string]] : []),
     ['Batch size (finished slurry)', `${d.size.batchMassG} g`],
     ['Loading basis', d.size.basisLabel],
     ['Phosphor loading', d.size.loadingSummary],

@@ -11,7 +11,7 @@ import { resolve } from 'node:path';
 import { Worker } from 'node:worker_threads';
 import { config } from '../config';
 import { BlendInputError } from '../../blend/errors';
-import { solveBlend, type SolveProblem, type SolveResult } from '../../blend/index';
+import { solveAtCondition, type ConditionSolveProblem, type ConditionSolveResult } from '../../blend/solver/solveAtCondition';
 import { SpectrumInputError } from '../../spectral/errors';
 
 const workerFile = (): string => resolve(config().solveWorkerFile);
@@ -20,14 +20,15 @@ interface Slot {
   worker: Worker;
   busy: Set<number>;
 }
-type Pending = { resolve: (r: SolveResult) => void; reject: (e: Error) => void };
+type Pending = { resolve: (r: ConditionSolveResult) => void; reject: (e: Error) => void };
 
 let slots: Slot[] | null = null;
 const pending = new Map<number, Pending>();
 let nextId = 1;
 
 function revive(error: { name: string; message: string }): Error {
-  if (error.name === 'BlendInputError') return new BlendInputError(error.message);
+  if (['BlendInputError', 'ThermalRangeError', 'ThermalNotCharacterisedError'].includes(error.name))
+    return new BlendInputError(error.message);
   if (error.name === 'SpectrumInputError') return new SpectrumInputError(error.message);
   return new Error(`solver worker: ${error.message}`);
 }
@@ -36,7 +37,7 @@ function startSlot(): Slot {
   const worker = new Worker(workerFile());
   worker.unref();
   const slot: Slot = { worker, busy: new Set<number>() };
-  worker.on('message', (m: { id: number; result?: SolveResult; error?: { name: string; message: string } }) => {
+  worker.on('message', (m: { id: number; result?: ConditionSolveResult; error?: { name: string; message: string } }) => {
     slot.busy.delete(m.id);
     const p = pending.get(m.id);
     pending.delete(m.id);
@@ -71,13 +72,13 @@ export function usesWorkers(): boolean {
   return built && workerCount() > 0 && existsSync(workerFile());
 }
 
-/** Solves in a worker thread when the bundled worker exists, else in this thread. */
-export function solveOffThread(problem: SolveProblem): Promise<SolveResult> {
-  if (!usesWorkers()) return Promise.resolve().then(() => solveBlend(problem));
+/** Solves (at the problem's condition; bench when none) in a worker thread when the bundled worker exists, else in this thread. */
+export function solveOffThread(problem: ConditionSolveProblem): Promise<ConditionSolveResult> {
+  if (!usesWorkers()) return Promise.resolve().then(() => solveAtCondition(problem));
   warmSolverPool();
   const slot = slots!.reduce((a, b) => (b.busy.size < a.busy.size ? b : a));
   const id = nextId++;
-  return new Promise<SolveResult>((resolvePromise, reject) => {
+  return new Promise<ConditionSolveResult>((resolvePromise, reject) => {
     pending.set(id, { resolve: resolvePromise, reject });
     slot.busy.add(id);
     slot.worker.postMessage({ id, problem });

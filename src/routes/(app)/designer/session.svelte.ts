@@ -5,7 +5,12 @@
  */
 import { superposeSpd } from '$lib/blend/superposition';
 import { gridToSpd } from '$lib/blend/grid';
-import { concentrationsForFractions, type BlendComponents, type SolveCandidate, type SolveResult } from '$lib/blend';
+import { concentrationsForFractions, type BlendComponents, type SolveCandidate } from '$lib/blend';
+import type { ConditionSolveResult } from '$lib/blend/solver/solveAtCondition';
+import { dequenchedFractions, type ThermalById } from '$lib/blend/thermal';
+import { BENCH_CONDITION, type OperatingCondition } from '$lib/aim/condition';
+import { colourDistance } from '$lib/aim/distance';
+import { hotViewOf } from '$lib/designer/hot-view';
 import type { Objective } from '$lib/aim';
 import { createLiveEvaluator, type LiveEvaluator, type LiveFrame } from '$lib/designer/live-evaluator';
 import { DEFAULT_AIM, resolveAim, type AimState } from '$lib/designer/aim';
@@ -48,6 +53,10 @@ export class DesignerSession {
   /** Optical fractions, pump leak first. */
   shares = $state<number[]>([1]);
   aim = $state<AimState>(structuredClone(DEFAULT_AIM));
+  /** The condition the target holds at (null: bench). */
+  condition = $state<OperatingCondition | null>(null);
+  /** Thermal data of the loaded components, by id (absent: not characterised). */
+  thermal = $state.raw<ThermalById>({});
   objective = $state<Objective>('maxLer');
   /** Effective optical path of the loading model (mm); null = no wt % estimate. */
   pathLengthMm = $state<number | null>(0.3);
@@ -66,7 +75,7 @@ export class DesignerSession {
   solveStartedAt = $state(0);
   solveElapsedMs = $state(0);
   solveError = $state<string | null>(null);
-  solveResult = $state.raw<SolveResult | null>(null);
+  solveResult = $state.raw<ConditionSolveResult | null>(null);
   solvedKey = $state('');
   compared = $state<number[]>([]);
   #abort: AbortController | null = null;
@@ -104,6 +113,7 @@ export class DesignerSession {
       this.pumpId = (usable.find((p) => (p.peakNm ?? 0) >= 430) ?? usable[0])?.id ?? null;
     }
     if (openedAim) this.aim = openedAim;
+    this.condition = opened?.condition ?? null;
     this.savedSnapshot = this.snapshot;
 
     $effect(() => this.#followComponentSet());
@@ -123,6 +133,7 @@ export class DesignerSession {
   });
   frame: LiveFrame | null = $derived(this.live.frame);
   aimResult = $derived(resolveAim(this.aim));
+  hotView = $derived(hotViewOf(this.components, this.thermal, this.condition, this.frame?.fractions ?? null));
   componentColours = $derived(this.evaluator ? this.evaluator.basis.components.map((c) => lightSwatchHex(c.xyz)) : []);
   get pump(): MaterialChoice | null {
     return this.pumps.find((p) => p.id === this.pumpId) ?? null;
@@ -143,7 +154,8 @@ export class DesignerSession {
       a: this.aim,
       o: this.objective,
       l: this.pathLengthMm,
-      m: this.packageModelId
+      m: this.packageModelId,
+      c: this.condition
     })
   );
   dirty = $derived(this.snapshot !== this.savedSnapshot);
@@ -171,6 +183,7 @@ export class DesignerSession {
         try {
           this.evaluator = createLiveEvaluator(components);
           this.components = components;
+          this.thermal = (components as BlendComponents & { thermal?: ThermalById }).thermal ?? {};
           this.loadedKey = key;
         } catch (err) {
           this.loadError = err instanceof Error ? err.message : String(err);
@@ -285,6 +298,7 @@ export class DesignerSession {
         floors: aim.floors,
         objective: this.objective,
         maxCandidates: 5,
+        condition: this.condition,
         ...(this.pathLengthMm ? { loading: { pathLengthMm: this.pathLengthMm, ...modelLoading } } : {})
       },
       abort.signal
@@ -311,7 +325,8 @@ export class DesignerSession {
 
   applyCandidate(c: SolveCandidate): void {
     if (!this.candidatesUsable) return;
-    this.shares = normaliseShares(c.opticalFractions);
+    const quench = this.solveResult?.shift?.quench;
+    this.shares = normaliseShares(quench ? dequenchedFractions(c.opticalFractions, quench) : c.opticalFractions);
   }
 
   toggleCompared(rank: number): void {
@@ -333,8 +348,19 @@ export class DesignerSession {
       packageModelRef: wt && this.packageModel ? { id: this.packageModel.id, version: this.packageModel.version } : null,
       target: aim.target,
       tolerance: aim.tolerance,
-      floors: aim.floors
+      floors: aim.floors,
+      condition: this.condition,
+      coldCheck: this.coldCheck()
     };
+  }
+
+  /** The bench point of the current recipe, as the cold check of a hot-aimed revision (null at the bench). */
+  coldCheck(): DesignedBlend['coldCheck'] {
+    const aim = this.aimResult;
+    if (this.hotView.status !== 'ok' || !this.frame || !aim.ok) return null;
+    const e = this.frame.evaluation;
+    const steps = colourDistance(e.x, e.y, aim.resolved).steps;
+    return { x: e.x, y: e.y, cct: e.cct, duv: e.duv, ra: e.cri.ra, r9: e.cri.ri[8], steps, condition: BENCH_CONDITION };
   }
 
   markSaved(): void {

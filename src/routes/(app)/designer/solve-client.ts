@@ -1,5 +1,6 @@
 /** Sends a blend problem to POST /api/v1/solve from the browser; cancellable. */
-import type { SolveProblemInput, SolveResult } from '$lib/blend';
+import type { SolveProblemInput } from '$lib/blend';
+import type { ConditionSolveResult as SolveResult } from '$lib/blend/solver/solveAtCondition';
 
 export type SolveOutcome = { ok: true; result: SolveResult } | { ok: false; error: string; aborted: boolean };
 

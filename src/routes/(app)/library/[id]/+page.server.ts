@@ -12,6 +12,8 @@ import { idParam } from '$lib/server/http/id-param';
 import { attachmentPurposeSchema, lotSchema } from '$lib/library/schema';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
+import { getThermal } from '$lib/server/library/thermal';
+import { THERMAL_FORM_KEYS, saveThermalForm } from '$lib/server/library/thermal-form';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
   const user = requireUser(locals, mayRead);
@@ -23,6 +25,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     ...d,
     emission: spd(d.emission),
     excitation: spd(d.excitation),
+    thermal: await getThermal(d.material.id),
     canEdit: mayEditLibrary(user)
   };
 };
@@ -75,6 +78,15 @@ export const actions: Actions = {
       attachments.add(user, idParam(params.id, 'No such material.'), purpose.data, file)
     );
     return typeof r === 'number' ? { action: 'addDocument', done: `${file.name} added.` } : r;
+  },
+  thermal: async ({ locals, request, params }) => {
+    const user = requireUser(locals, mayEditLibrary);
+    const fd = await readForm(request);
+    const thermalValues = formValues(fd, THERMAL_FORM_KEYS);
+    const r = await tryAction({ action: 'thermal', thermalValues }, () =>
+      saveThermalForm(user, idParam(params.id, 'No such material.'), fd)
+    );
+    return typeof r === 'number' ? { action: 'thermal', done: 'Thermal data saved.' } : r;
   },
   removeDocument: async ({ locals, request, params }) => {
     const user = requireUser(locals, mayEditLibrary);
