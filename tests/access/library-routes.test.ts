@@ -22,7 +22,8 @@ describe('material library role rules', () => {
         '/api/v1/pumps',
         '/api/v1/pumps/[id]',
         '/api/v1/phosphors/[id]/thermal',
-        '/api/v1/pumps/[id]/thermal'
+        '/api/v1/pumps/[id]/thermal',
+        '/api/v1/pumps/[id]/bins'
       ]) {
         expect(decide(id, 'GET', [role]), `${role} GET ${id}`).toBe('allow');
       }
@@ -48,7 +49,8 @@ describe('material library role rules', () => {
       ['/api/v1/phosphors/[id]/thermal', 'PUT'],
       ['/api/v1/phosphors/[id]/thermal', 'POST'],
       ['/api/v1/pumps/[id]/thermal', 'PUT'],
-      ['/api/v1/pumps/[id]/thermal', 'POST']
+      ['/api/v1/pumps/[id]/thermal', 'POST'],
+      ['/api/v1/pumps/[id]/bins', 'PUT']
     ];
     for (const [id, method] of changes) {
       for (const role of editors) expect(decide(id, method, [role]), `${role} ${method} ${id}`).toBe('allow');

@@ -41,6 +41,8 @@ export const ACTION_LABELS: Readonly<Record<string, string>> = {
   'lot-add': 'Lot added',
   'lot-remove': 'Lot removed',
   'measurements-upload': 'Measurements uploaded',
+  'pump-bins': 'Chip bins set',
+  thermal: 'Thermal data set',
   'measurements-withdraw': 'Measurements withdrawn',
   mixed: 'Part B mixed in',
   reactivated: 'Reactivated',

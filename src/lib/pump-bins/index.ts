@@ -6,3 +6,4 @@
 export * from './schema';
 export * from './lookup';
 export * from './shift';
+export * from './text';

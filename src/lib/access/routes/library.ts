@@ -22,6 +22,7 @@ export const LIBRARY_ROUTES: RouteTable = {
   '/api/v1/pumps': { sample: '/api/v1/pumps', methods: { GET: ALL, POST: mayEditLibrary.roles } },
   '/api/v1/pumps/[id]': { sample: '/api/v1/pumps/999999', methods: { GET: ALL, PUT: mayEditLibrary.roles, DELETE: mayEditLibrary.roles } },
   '/api/v1/pumps/[id]/spectrum': { sample: '/api/v1/pumps/999999/spectrum', methods: { POST: mayEditLibrary.roles } },
+  '/api/v1/pumps/[id]/bins': { sample: '/api/v1/pumps/999999/bins', methods: { GET: ALL, PUT: mayEditLibrary.roles } },
   '/api/v1/pumps/[id]/thermal': {
     sample: '/api/v1/pumps/999999/thermal',
     methods: { GET: ALL, PUT: mayEditLibrary.roles, POST: mayEditLibrary.roles }

@@ -294,6 +294,14 @@ export interface MeasurementUploadRow {
   withdraw_reason: string | null;
 }
 
+export interface PumpBinSetRow {
+  material_id: number;
+  set_json: string;
+  version: number;
+  updated_by: number | null;
+  updated_at: Date;
+}
+
 export interface PartMeasurementRow {
   id: number;
   upload_id: number;
@@ -419,6 +427,7 @@ declare module 'knex/types/tables' {
     materials: Table<MaterialRow, 'peak_nm' | 'fwhm_nm' | 'density_g_cm3' | 'iqe' | 'absorption_reference_nm' | 'cost_per_kg' | 'd50_um'>;
     measurement_uploads: Table<MeasurementUploadRow>;
     part_measurements: Table<PartMeasurementRow>;
+    pump_bin_sets: Table<PumpBinSetRow>;
     revision_attachments: Table<RevisionAttachmentRow>;
     revision_signatures: Table<RevisionSignatureRow>;
     sign_in_attempts: Table<SignInAttemptRow, never, 'succeeded'>;

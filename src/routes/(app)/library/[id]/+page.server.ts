@@ -14,6 +14,9 @@ import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 import { getThermal } from '$lib/server/library/thermal';
 import { THERMAL_FORM_KEYS, saveThermalForm } from '$lib/server/library/thermal-form';
+import { getPumpBins, putPumpBins } from '$lib/server/library/pump-bins';
+import { binText, parseBinText, wavelengthBasisSchema } from '$lib/pump-bins';
+import { lineIssue, invalid } from '$lib/errors/domain-error';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
   const user = requireUser(locals, mayRead);
@@ -26,9 +29,15 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     emission: spd(d.emission),
     excitation: spd(d.excitation),
     thermal: await getThermal(d.material.id),
+    pumpBins: d.material.kind === 'pump' ? await pumpBinsView(d.material.id) : null,
     canEdit: mayEditLibrary(user)
   };
 };
+
+async function pumpBinsView(materialId: number) {
+  const r = await getPumpBins(materialId);
+  return { basis: r.set?.basis ?? 'peak', bins: r.set?.bins ?? [], text: r.set ? binText(r.set) : '', version: r.version };
+}
 
 const idSchema = z.coerce.number().int().positive();
 const LOT_KEYS = ['lotNumber', 'supplier', 'receivedOn', 'expiresOn', 'notes'] as const;
@@ -78,6 +87,28 @@ export const actions: Actions = {
       attachments.add(user, idParam(params.id, 'No such material.'), purpose.data, file)
     );
     return typeof r === 'number' ? { action: 'addDocument', done: `${file.name} added.` } : r;
+  },
+  pumpBins: async ({ locals, request, params }) => {
+    const user = requireUser(locals, mayEditLibrary);
+    const fd = await readForm(request);
+    const binValues = { basis: String(fd.get('basis') ?? ''), text: String(fd.get('bins') ?? '') };
+    const version = z.coerce.number().int().min(0).safeParse(fd.get('binsVersion'));
+    const basis = wavelengthBasisSchema.safeParse(binValues.basis);
+    if (!version.success || !basis.success)
+      return actionFailure(400, { action: 'pumpBins', binValues, error: 'Choose peak or dominant wavelength, and reload the page.' });
+    const parsed = parseBinText(basis.data, binValues.text);
+    if (!parsed.ok) {
+      const shown = invalid(
+        `Nothing was saved: ${parsed.errors.map((e) => e.message).join(' ')}`,
+        parsed.errors.map((e) => lineIssue(e.line, e.message))
+      );
+      return actionFailure(shown, { action: 'pumpBins', binValues });
+    }
+    const set = parsed.set;
+    const r = await tryAction({ action: 'pumpBins', binValues }, () =>
+      putPumpBins(user, idParam(params.id, 'No such material.'), version.data, set)
+    );
+    return typeof r === 'number' ? { action: 'pumpBins', done: `${set.bins.length} bin${set.bins.length === 1 ? '' : 's'} saved.` } : r;
   },
   thermal: async ({ locals, request, params }) => {
     const user = requireUser(locals, mayEditLibrary);

@@ -17,6 +17,7 @@ import { createRevision, updateDraft } from '$lib/server/formulations/save';
 import { siliconeHandling } from '$lib/server/formulations/silicone';
 import { returnRevision, sign, submit, withdraw } from '$lib/server/formulations/workflow';
 import { signingProblems } from '$lib/server/formulations/signing-problems';
+import { solveRevisionMatrix } from '$lib/server/formulations/bin-matrix';
 import { addAttachment, removeAttachment } from '$lib/server/formulations/attachments';
 import { contentToFormValues, formDataToValues, type FormValues } from '$lib/formulations/form-values';
 import { allowedCommands } from '$lib/formulations/workflow-rules';
@@ -78,6 +79,18 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 };
 
 export const actions: Actions = {
+  solveBins: async ({ locals, params, request }) => {
+    const user = requireUser(locals, mayActOnRevisions);
+    const rev = await revisionOf(params);
+    const parsed = version.safeParse((await readForm(request)).get('version'));
+    if (!parsed.success) return actionFailure(400, { action: 'solveBins', error: parsed.error.issues[0].message });
+    try {
+      await solveRevisionMatrix(user, rev.id, parsed.data);
+      return { action: 'solveBins', done: 'Recipe matrix solved and saved in the draft.' };
+    } catch (err) {
+      return actionFailure(err, { action: 'solveBins', values: NO_VALUES });
+    }
+  },
   save: async ({ locals, params, request }) => {
     const user = requireUser(locals, mayActOnRevisions);
     const rev = await revisionOf(params);

@@ -1,0 +1,38 @@
+import { test, expect } from '@playwright/test';
+import { DEMO, signInThroughForm, signedInContext, testDb } from './support/accounts';
+import { json } from './support/batches';
+
+// A formulator sees the pump's chip bins in the library, then solves a recipe per chip bin on a
+// draft and sees one row per bin with its predicted point.
+test('chip bins on the pump, then a recipe per bin on a draft revision', async ({ page }) => {
+  const knex = testDb();
+  let content: Record<string, unknown>;
+  let pumpId: number;
+  try {
+    const approved = await knex('formulation_revisions as r')
+      .join('formulations as f', 'f.id', 'r.formulation_id')
+      .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' })
+      .first('r.content_json');
+    content = JSON.parse(approved.content_json);
+    pumpId = (content.pump as { materialId: number }).materialId;
+  } finally {
+    await knex.destroy();
+  }
+  const api = await signedInContext(DEMO.formulator);
+  const created = await json(api, '/api/v1/formulations', { name: 'E2E chip-bin matrix', content: { ...content, binRecipes: [] } });
+  expect(created.status(), await created.text()).toBe(201);
+  const { formulationId, revisionId } = await created.json();
+  await api.dispose();
+
+  await signInThroughForm(page, DEMO.formulator);
+  await page.goto(`/library/${pumpId}`);
+  await expect(page.getByTestId('pump-bins')).toContainText('Stated on the peak wavelength');
+  const bins = (await page.getByTestId('pump-bins').locator('tbody tr').count()) as number;
+  expect(bins).toBeGreaterThan(1);
+
+  await page.goto(`/formulations/${formulationId}/revisions/${revisionId}`);
+  await page.getByRole('button', { name: 'Solve a recipe per chip bin' }).click();
+  const matrix = page.getByTestId('recipe-matrix');
+  await expect(matrix.locator('tbody tr')).toHaveCount(bins);
+  await expect(matrix.locator('tbody tr').first().locator('td').last()).toHaveText(/^0\.[0-4]\d$/);
+});
