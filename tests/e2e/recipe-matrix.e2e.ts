@@ -35,4 +35,8 @@ test('chip bins on the pump, then a recipe per bin on a draft revision', async (
   const matrix = page.getByTestId('recipe-matrix');
   await expect(matrix.locator('tbody tr')).toHaveCount(bins);
   await expect(matrix.locator('tbody tr').first().locator('td').last()).toHaveText(/^0\.[0-4]\d$/);
+  // The revision record prints the matrix with the signatures that will approve it.
+  const record = await page.request.get(`/formulations/${formulationId}/revisions/${revisionId}/record`);
+  expect(record.status()).toBe(200);
+  expect(record.headers()['content-type']).toBe('application/pdf');
 });

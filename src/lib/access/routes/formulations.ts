@@ -16,6 +16,10 @@ export const FORMULATIONS_ROUTES: RouteTable = {
     sample: '/formulations/999999/revisions/999999',
     methods: { GET: ALL, POST: ACTORS }
   },
+  '/(app)/formulations/[id]/revisions/[revisionId]/record': {
+    sample: '/formulations/999999/revisions/999999/record',
+    methods: { GET: ALL }
+  },
   '/(app)/formulations/[id]/revisions/[revisionId]/attachments/[attachmentId]': {
     sample: '/formulations/999999/revisions/999999/attachments/999999',
     methods: { GET: ALL }
