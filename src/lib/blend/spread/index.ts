@@ -7,3 +7,5 @@ export { simulateSpread, DEFAULT_PARTS, MAX_PARTS, type SpreadRecipe, type Sprea
 export { yieldFigures, distributionOf, stepsFrom, shareWithinSteps, STEP_RINGS, type YieldFigures, type Distribution } from './figures';
 export { spreadBreakdown, uvPrimeCovariance, type SpreadBreakdown } from './breakdown';
 export { predictYield, type YieldPredictionInput, type YieldPrediction } from './predict';
+export { wilsonInterval, Z95, type BinomialInterval } from './wilson';
+export { fitSlurryMassCv, type SpreadFit } from './fitSpread';
