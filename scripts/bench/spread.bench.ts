@@ -50,7 +50,8 @@ const predict = median(() => predictYield({ ...input, breakdown: false }), RUNS)
 const withBreakdown = median(() => predictYield({ ...input, breakdown: true }), 3);
 const sample = predictYield({ ...input, breakdown: false }).figures;
 console.log(
-  `spread  ${PARTS} parts + figures      median ${predict.toFixed(1)} ms  (budget ${BUDGET_MS} ms${predict <= BUDGET_MS ? ', ok' : ', OVER'})`
+  `spread  ${PARTS} parts + figures      median ${predict.toFixed(1)} ms` +
+    `  (budget ${BUDGET_MS} ms${predict <= BUDGET_MS ? ', ok' : ', OVER'})`
 );
 console.log(`spread  with variance breakdown (7 runs) median ${withBreakdown.toFixed(1)} ms`);
 console.log(`spread  mean steps ${sample.meanSteps.toFixed(2)}, in 3-step ${(sample.inSteps[2].share * 100).toFixed(1)} %`);
