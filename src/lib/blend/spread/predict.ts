@@ -7,6 +7,7 @@ import { yieldFigures, type YieldFigures } from './figures';
 import type { VariationModel } from './model';
 import { buildPartModel } from './partColour';
 import { simulateSpread, type SpreadCloud } from './simulate';
+import { DEFAULT_RENDERING_SUBSAMPLE, renderingOfDraws, type RenderingFigures } from './renderingSubsample';
 
 export interface YieldPredictionInput {
   basis: LoadingBasis;
@@ -19,6 +20,8 @@ export interface YieldPredictionInput {
   model: VariationModel;
   parts: number;
   seed: number;
+  /** Parts whose Ra and R9 are computed from full spectra (default 200; 0 = none). */
+  renderingSubsample?: number;
   /** Also run the one-source-at-a-time breakdown (7 runs in all). */
   breakdown?: boolean;
 }
@@ -27,6 +30,7 @@ export interface YieldPrediction {
   cloud: SpreadCloud;
   figures: YieldFigures;
   breakdown: SpreadBreakdown | null;
+  rendering: RenderingFigures | null;
 }
 
 export function predictYield(input: YieldPredictionInput): YieldPrediction {
@@ -35,10 +39,12 @@ export function predictYield(input: YieldPredictionInput): YieldPrediction {
     opticalDepths: opticalDepthsOf(input.basis, input.concentrationsWtPct, input.pathLengthMm),
     pumpPeakNm: input.pumpPeakNm
   };
-  const cloud = simulateSpread(part, recipe, input.model, input.parts, input.seed);
+  const keep = Math.min(input.parts, input.renderingSubsample ?? DEFAULT_RENDERING_SUBSAMPLE);
+  const cloud = simulateSpread(part, recipe, input.model, input.parts, input.seed, keep);
   return {
     cloud,
     figures: yieldFigures(cloud, input.centre, input.quadrangle, input.tolerance),
+    rendering: keep > 0 ? renderingOfDraws(input.basis, cloud.draws) : null,
     breakdown: input.breakdown === false ? null : spreadBreakdown(part, recipe, input.model, input.parts, input.seed)
   };
 }

@@ -20,11 +20,20 @@ export interface SpreadRecipe {
   pumpPeakNm: number;
 }
 
+/** What was drawn for one part (kept for the first parts, for the rendering subsample). */
+export interface PartDraw {
+  pumpShiftNm: number;
+  opticalDepths: number[];
+  peakShiftNm: number[];
+}
+
 export interface SpreadCloud {
   x: Float64Array;
   y: Float64Array;
   /** Luminous efficacy of radiation per part (lm/W), 683 Σ S ȳ / Σ S (CIE 15:2004). */
   ler: Float64Array;
+  /** Draws of the first `keepDraws` parts. */
+  draws: PartDraw[];
 }
 
 export const DEFAULT_PARTS = 10_000;
@@ -50,7 +59,14 @@ function pumpDraw(spread: PumpSpread, peakNm: number, rnd: Random): () => number
   };
 }
 
-export function simulateSpread(part: PartModel, recipe: SpreadRecipe, model: VariationModel, parts: number, seed: number): SpreadCloud {
+export function simulateSpread(
+  part: PartModel,
+  recipe: SpreadRecipe,
+  model: VariationModel,
+  parts: number,
+  seed: number,
+  keepDraws = 0
+): SpreadCloud {
   const rnd = seededRandom(seed);
   const n = part.n;
   const x = new Float64Array(parts);
@@ -65,6 +81,7 @@ export function simulateSpread(part: PartModel, recipe: SpreadRecipe, model: Var
   const absCv = model.absorptionLotCvPct / 100;
   const peakSd = model.peakLotSigmaNm;
   const noise = model.measurementSigmaUvPrime;
+  const draws: PartDraw[] = [];
   for (let p = 0; p < parts; p++) {
     const delta = pump();
     const m = massCv > 0 ? Math.max(0, 1 + massCv * rnd.normal()) : 1;
@@ -75,6 +92,7 @@ export function simulateSpread(part: PartModel, recipe: SpreadRecipe, model: Var
       peak[i] = peakSd > 0 ? peakSd * rnd.normal() : 0;
     }
     partXyz(part, tau, delta, peak, xyz);
+    if (p < keepDraws) draws.push({ pumpShiftNm: delta, opticalDepths: Array.from(tau), peakShiftNm: Array.from(peak) });
     let [u, v] = xyzToUvPrime(xyz[0], xyz[1], xyz[2]);
     if (noise > 0) {
       u += noise * rnd.normal();
@@ -85,5 +103,5 @@ export function simulateSpread(part: PartModel, recipe: SpreadRecipe, model: Var
     y[p] = py;
     ler[p] = xyz[3] > 0 ? (KM * xyz[1]) / xyz[3] : 0;
   }
-  return { x, y, ler };
+  return { x, y, ler, draws };
 }

@@ -43,6 +43,7 @@ export const POST: RequestHandler = (event) =>
       model: body.model,
       target: { x: target.x, y: target.y, cct: target.cct, duv: target.duv, label: target.label },
       figures: p.figures,
+      rendering: p.rendering,
       breakdown: p.breakdown,
       cloud: body.cloud ? { x: Array.from(p.cloud.x, round5), y: Array.from(p.cloud.y, round5) } : null
     });
