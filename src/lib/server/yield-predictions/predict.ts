@@ -39,7 +39,12 @@ export async function predictRevisionYield(actor: { id: number; email: string },
   if (!basis) throw unprocessable('every phosphor needs an absorption coefficient in the library for a yield prediction');
   let peak = 0;
   for (let l = 1; l < basis.pump.length; l++) if (basis.pump[l] > basis.pump[peak]) peak = l;
-  const bins = content.binRecipes.map((b) => ({ code: b.bin.code, fromNm: b.bin.fromNm, toNm: b.bin.toNm, sharePct: b.bin.sharePct }));
+  const bins = (content.binRecipes ?? []).map((b) => ({
+    code: b.bin.code,
+    fromNm: b.bin.fromNm,
+    toNm: b.bin.toNm,
+    sharePct: b.bin.sharePct
+  }));
   const model = req.model ?? variationModelSchema.parse(bins.length ? { pump: { kind: 'bins', bins } } : {});
   const target = resolveTarget(content.target);
   const p = predictYield({
