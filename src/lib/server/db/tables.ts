@@ -395,6 +395,18 @@ export interface UserRow {
   updated_at: Date;
 }
 
+export interface YieldPredictionRow {
+  id: number;
+  revision_id: number;
+  model_json: string;
+  seed: number;
+  parts: number;
+  figures_json: string;
+  source: string;
+  computed_by: number;
+  computed_at: Date;
+}
+
 declare module 'knex/types/tables' {
   interface Tables {
     api_tokens: Table<ApiTokenRow>;
@@ -435,5 +447,6 @@ declare module 'knex/types/tables' {
     stored_files: Table<StoredFileRow>;
     user_roles: Table<UserRoleRow>;
     users: Table<UserRow, never, 'active'>;
+    yield_predictions: Table<YieldPredictionRow>;
   }
 }

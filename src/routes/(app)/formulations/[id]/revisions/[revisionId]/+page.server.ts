@@ -10,7 +10,10 @@ import {
   storedContentVerified
 } from '$lib/server/formulations/read';
 import { contentFromForm, editorOptions } from '$lib/server/formulations/page-support';
-import { mayActOnRevisions, mayAuthorFormulations, maySignRevisions } from '$lib/access/policies';
+import { mayActOnRevisions, mayAuthorFormulations, mayDesign, maySignRevisions } from '$lib/access/policies';
+import { listYieldPredictions } from '$lib/server/yield-predictions/store';
+import { predictRevisionYield } from '$lib/server/yield-predictions/predict';
+import { MAX_PARTS } from '$lib/blend/spread';
 import { actionFailure } from '$lib/server/http/action-failure';
 import { idParam } from '$lib/server/http/id-param';
 import { createRevision, updateDraft } from '$lib/server/formulations/save';
@@ -38,6 +41,14 @@ const signSchema = z
     version
   })
   .refine((s) => s.meaning !== 'returned' || s.comment.length >= 3, { message: 'say why the revision is returned', path: ['comment'] });
+const predictYieldSchema = z.object({
+  parts: z.coerce.number().int('parts must be a whole number').min(100, 'at least 100 parts').max(MAX_PARTS, `at most ${MAX_PARTS} parts`),
+  seed: z.coerce
+    .number()
+    .int('seed must be a whole number')
+    .min(0, 'seed must be ≥ 0')
+    .max(2 ** 32 - 1)
+});
 const withdrawSchema = z.object({ reason: z.string().trim().min(3, 'say why the revision is withdrawn').max(2000), version });
 
 async function revisionOf(params: { id: string; revisionId: string }) {
@@ -52,14 +63,15 @@ export const load: PageServerLoad = async ({ locals, params }) => {
   const rev = await revisionOf(params);
   const commands = allowedCommands(user, rev);
   const ref = rev.content.packageModelRef ?? null;
-  const [signatures, attachments, history, current, silicone, hashVerified, cited] = await Promise.all([
+  const [signatures, attachments, history, current, silicone, hashVerified, cited, yields] = await Promise.all([
     listSignatures(rev.id),
     listAttachments(rev.id),
     eventsFor('formulation_revision', rev.id),
     currentApprovedRevision(rev.formulationId),
     rev.content.silicone.siliconeSystemId ? siliconeHandling(rev.content.silicone.siliconeSystemId) : null,
     storedContentVerified(rev.id),
-    ref ? citedPackageModel(ref) : null
+    ref ? citedPackageModel(ref) : null,
+    listYieldPredictions(rev.id)
   ]);
   const hazardCautions = await hazardCautionsOf(materialIdsOf(rev.content).phosphors);
   return {
@@ -73,12 +85,27 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     canStartDraft: mayAuthorFormulations(user),
     editor: commands.includes('edit') ? { values: contentToFormValues(rev.content), options: await editorOptions() } : null,
     silicone,
+    latestYield: yields[0] ?? null,
+    canPredictYield: mayDesign(user),
     packageModel: ref ? { id: ref.id, version: ref.version, name: cited?.name ?? null } : null,
     hazardCautions
   };
 };
 
 export const actions: Actions = {
+  predictYield: async ({ locals, params, request }) => {
+    const user = requireUser(locals, mayDesign);
+    const rev = await revisionOf(params);
+    const values = formDataToValues(await readForm(request));
+    const parsed = predictYieldSchema.safeParse(values);
+    if (!parsed.success) return actionFailure(400, { action: 'predictYield', values, error: parsed.error.issues[0].message });
+    try {
+      await predictRevisionYield(user, { revisionId: rev.id, model: null, parts: parsed.data.parts, seed: parsed.data.seed });
+      return { action: 'predictYield', done: 'Yield forecast computed and kept with the revision.' };
+    } catch (err) {
+      return actionFailure(err, { action: 'predictYield', values });
+    }
+  },
   solveBins: async ({ locals, params, request }) => {
     const user = requireUser(locals, mayActOnRevisions);
     const rev = await revisionOf(params);
