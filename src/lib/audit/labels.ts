@@ -15,7 +15,8 @@ export const ENTITY_LABELS: Readonly<Record<string, string>> = {
   'material-lot': 'Material lot',
   'package-model': 'Package model',
   session: 'Sign-in',
-  user: 'User account'
+  user: 'User account',
+  'yield-prediction': 'Yield forecast'
 };
 
 export const ACTION_LABELS: Readonly<Record<string, string>> = {
