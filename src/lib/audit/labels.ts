@@ -11,6 +11,7 @@ export const ENTITY_LABELS: Readonly<Record<string, string>> = {
   batch_line: 'Batch line',
   formulation: 'Formulation',
   formulation_revision: 'Formulation revision',
+  invite: 'Invitation',
   material: 'Material',
   'material-lot': 'Material lot',
   'package-model': 'Package model',

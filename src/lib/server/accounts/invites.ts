@@ -1,5 +1,6 @@
 /** One-time invitation links (token stored as a hash). */
 import { randomBytes } from 'node:crypto';
+import type { Knex } from 'knex';
 import { db } from '../db/index';
 import { sha256Hex } from '../auth/tokens';
 import { isRole, type Role } from '../../roles';
@@ -14,17 +15,23 @@ export interface Invite {
   usedAt: Date | null;
 }
 
-export async function create(email: string, roles: Role[], invitedBy: number): Promise<{ token: string; expiresAt: Date }> {
+/** Writes an invitation (in the caller's transaction when given); returns its id and the one-time token. */
+export async function create(
+  email: string,
+  roles: Role[],
+  invitedBy: number,
+  trx?: Knex.Transaction
+): Promise<{ id: number; token: string; expiresAt: Date }> {
   const token = randomBytes(32).toString('base64url');
   const expiresAt = new Date(Date.now() + INVITE_HOURS * 3_600_000);
-  await db()('invites').insert({
+  const [id] = await (trx ?? db())('invites').insert({
     email: email.toLowerCase(),
     roles: roles.join(','),
     token_hash: sha256Hex(token),
     invited_by: invitedBy,
     expires_at: expiresAt
   });
-  return { token, expiresAt };
+  return { id, token, expiresAt };
 }
 
 /** The invite for a token if it is unused and not expired. */

@@ -18,19 +18,23 @@ export class AccountError extends DomainError {
   }
 }
 
+/**
+ * Invites someone: the invitation and its audit event are written in one transaction (the event
+ * names the invitation by id; the address, up to 254 characters, goes into its details), and the
+ * mail is sent only after the commit, so a failure leaves neither a half-made invitation nor a link.
+ */
 export async function invite(admin: User, email: string, roles: Role[], origin: string): Promise<{ link: string; mailed: boolean }> {
   const existing = await users.findWithHashByEmail(email);
   if (existing) throw new AccountError(`${email} already has an account.`);
-  const { token, expiresAt } = await invites.create(email, roles, admin.id);
-  const link = `${origin}/invite/${token}`;
-  await audit.record({
-    actorId: admin.id,
-    actorEmail: admin.email,
-    entityType: 'user',
-    entityId: email,
-    action: 'invite',
-    after: { email, roles }
+  const { token, expiresAt } = await writeTransaction(async (trx) => {
+    const made = await invites.create(email, roles, admin.id, trx);
+    await audit.record(
+      { actorId: admin.id, actorEmail: admin.email, entityType: 'invite', entityId: made.id, action: 'invite', after: { email, roles } },
+      trx
+    );
+    return made;
   });
+  const link = `${origin}/invite/${token}`;
   const mailed = await send(inviteMessage(email, admin.name, link, expiresAt, roles));
   return { link, mailed };
 }
