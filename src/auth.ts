@@ -11,6 +11,7 @@ import { checkSignIn } from '$lib/server/auth/sign-in';
 import { authForwardedHeaders, useSecureCookies } from '$lib/server/auth/public-origin';
 import { config } from '$lib/server/config';
 import { safeRedirect } from '$lib/server/auth/safe-redirect';
+import { sessionEpochOf } from '$lib/server/auth/session-epoch';
 
 const credentialsSchema = z.object({
   email: z.string().trim().toLowerCase().max(254).pipe(z.email()),
@@ -56,7 +57,7 @@ const authConfig: SvelteKitAuthConfig = {
         const { email, password } = parsed.data;
         const user = await checkSignIn(email, password, clientIp());
         if (!user) throw new GenericSignInError();
-        return { id: String(user.id), email: user.email, name: user.name };
+        return { id: String(user.id), email: user.email, name: user.name, epoch: (await sessionEpochOf(user.id)) ?? 0 };
       }
     })
   ],
@@ -66,9 +67,17 @@ const authConfig: SvelteKitAuthConfig = {
       const relative = url.startsWith(baseUrl + '/') ? url.slice(baseUrl.length) : url;
       return baseUrl + safeRedirect(relative, baseUrl);
     },
-    jwt({ token, user }) {
-      if (user?.id) token.uid = user.id;
-      return token;
+    // A session carries the session epoch it began in; one from an older epoch (signed out,
+    // deactivated, roles changed) is void: Auth.js then drops the cookie and answers signed-out.
+    async jwt({ token, user }) {
+      if (user?.id) {
+        token.uid = user.id;
+        token.epoch = (user as { epoch?: number }).epoch ?? 0;
+        return token;
+      }
+      if (typeof token.uid !== 'string') return token;
+      const current = await sessionEpochOf(Number(token.uid));
+      return current !== null && current === Number(token.epoch ?? 0) ? token : null;
     },
     session({ session, token }) {
       if (typeof token.uid === 'string') session.user.id = token.uid;

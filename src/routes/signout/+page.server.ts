@@ -1,5 +1,7 @@
 import { redirect } from '@sveltejs/kit';
 import { signOut } from '../../auth';
+import { endSessions } from '$lib/server/auth/session-epoch';
+import { record } from '$lib/server/db/audit';
 import type { Actions, PageServerLoad } from './$types';
 
 /** Signing out is a POST (CSRF-checked); a GET only asks for confirmation, or goes home when signed out. */
@@ -8,4 +10,14 @@ export const load: PageServerLoad = ({ locals }) => {
   return { name: locals.user.name };
 };
 
-export const actions: Actions = { default: signOut };
+export const actions: Actions = {
+  // Ends every session of the user on the server (a copied cookie stops working too), then clears this one.
+  default: async (event) => {
+    const user = event.locals.user;
+    if (user && !event.locals.viaToken) {
+      await endSessions(user.id);
+      await record({ actorId: user.id, actorEmail: user.email, entityType: 'session', entityId: user.id, action: 'sign-out' });
+    }
+    return signOut(event);
+  }
+};

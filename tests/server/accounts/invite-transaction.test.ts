@@ -35,7 +35,7 @@ describe('invitations', () => {
     const event = (await db()('audit_events')
       .where({ entity_type: 'invite', entity_id: String(row.id), action: 'invite' })
       .first())!;
-    expect(JSON.parse(event.after_json)).toEqual({ email, roles: ['technician'] });
+    expect(JSON.parse(event.after_json!)).toEqual({ email, roles: ['technician'] });
   });
 
   it('leave nothing behind and send nothing when the audit event fails', async () => {

@@ -4,6 +4,8 @@ import * as users from './users';
 import * as invites from './invites';
 import * as audit from '../db/audit';
 import { hashPassword } from '../auth/passwords';
+import { endSessions } from '../auth/session-epoch';
+import { revokeAllTokens } from '../auth/tokens';
 import { sha256Hex } from '../auth/tokens';
 import { send } from '../mail/index';
 import { inviteMessage } from '../mail/templates/invite';
@@ -65,6 +67,8 @@ export async function changeRoles(admin: User, userId: number, roles: Role[]): P
   if (!before) throw new AccountError('No such user.');
   if (userId === admin.id && !roles.includes('admin')) throw new AccountError('You cannot remove your own admin role.');
   await users.setRoles(userId, roles);
+  // Sessions signed in under the old roles end; the user signs in again with the new ones.
+  await endSessions(userId);
   await audit.record({
     actorId: admin.id,
     actorEmail: admin.email,
@@ -81,6 +85,11 @@ export async function setActive(admin: User, userId: number, active: boolean): P
   if (!before) throw new AccountError('No such user.');
   if (userId === admin.id && !active) throw new AccountError('You cannot deactivate yourself.');
   await users.setActive(userId, active);
+  // Deactivation ends every session and revokes every API token; reactivating brings neither back.
+  if (!active) {
+    await endSessions(userId);
+    await revokeAllTokens(userId);
+  }
   await audit.record({
     actorId: admin.id,
     actorEmail: admin.email,

@@ -135,3 +135,8 @@ export async function userForToken(token: string): Promise<User | null> {
     createdAt: row.created_at
   };
 }
+
+/** Revokes every live API token of a user (on deactivation: reactivation does not bring them back). */
+export async function revokeAllTokens(userId: number): Promise<number> {
+  return db()('api_tokens').where({ user_id: userId }).whereNull('revoked_at').update({ revoked_at: db().fn.now() });
+}

@@ -1,0 +1,19 @@
+/**
+ * Server-side revocation of signed-in sessions (JWT cookies): a session names the user's session
+ * epoch it began in, and only the current epoch is accepted. Ending a user's sessions moves the
+ * epoch on (one indexed update); checking costs one primary-key lookup per request.
+ */
+import type { Knex } from 'knex';
+import { db } from '../db/index';
+
+/** The user's current epoch, or null when the user does not exist. */
+export async function sessionEpochOf(userId: number): Promise<number | null> {
+  const row = await db()('users').where({ id: userId }).first('session_epoch');
+  return row ? Number(row.session_epoch) : null;
+}
+
+/** Ends every signed-in session of the user (API tokens are separate: see tokens.ts). */
+export async function endSessions(userId: number, trx?: Knex | Knex.Transaction): Promise<void> {
+  const k = trx ?? db();
+  await k('users').where({ id: userId }).increment('session_epoch', 1);
+}
