@@ -1,7 +1,6 @@
 import { redirect } from '@sveltejs/kit';
 import { signOut } from '../../auth';
-import { endSessions } from '$lib/server/auth/session-epoch';
-import { record } from '$lib/server/db/audit';
+import { signOutEverywhere } from '$lib/server/auth/session-epoch';
 import type { Actions, PageServerLoad } from './$types';
 
 /** Signing out is a POST (CSRF-checked); a GET only asks for confirmation, or goes home when signed out. */
@@ -14,10 +13,7 @@ export const actions: Actions = {
   // Ends every session of the user on the server (a copied cookie stops working too), then clears this one.
   default: async (event) => {
     const user = event.locals.user;
-    if (user && !event.locals.viaToken) {
-      await endSessions(user.id);
-      await record({ actorId: user.id, actorEmail: user.email, entityType: 'session', entityId: user.id, action: 'sign-out' });
-    }
+    if (user && !event.locals.viaToken) await signOutEverywhere(user);
     return signOut(event);
   }
 };

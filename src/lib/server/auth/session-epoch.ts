@@ -5,6 +5,7 @@
  */
 import type { Knex } from 'knex';
 import { db } from '../db/index';
+import { record } from '../db/audit';
 
 /** The user's current epoch, or null when the user does not exist. */
 export async function sessionEpochOf(userId: number): Promise<number | null> {
@@ -16,4 +17,10 @@ export async function sessionEpochOf(userId: number): Promise<number | null> {
 export async function endSessions(userId: number, trx?: Knex | Knex.Transaction): Promise<void> {
   const k = trx ?? db();
   await k('users').where({ id: userId }).increment('session_epoch', 1);
+}
+
+/** Sign-out: ends every session of the user (a copied cookie too), with its audit event. */
+export async function signOutEverywhere(user: { id: number; email: string }): Promise<void> {
+  await endSessions(user.id);
+  await record({ actorId: user.id, actorEmail: user.email, entityType: 'session', entityId: user.id, action: 'sign-out' });
 }
