@@ -33,6 +33,9 @@ test('quality uploads a multi-part file, sees the plot and releases the batch', 
   await page.getByRole('button', { name: 'Zoom in' }).click();
   await expect.poll(firstTick).not.toBe(before);
 
+  // Measured yield with its Wilson interval, against the forecast (none made for this revision yet).
+  await expect(page.getByTestId('yield-check')).toContainText(/Measured inside the tolerance: \d+ of \d+/);
+  await expect(page.getByTestId('yield-check')).toContainText('95 % interval');
   await page.getByLabel('Release the batch').check();
   await page.getByLabel('Comment').fill('Colour inside the acceptance; released for assembly.');
   await page.getByLabel('Your password (re-enter to sign)').fill(DEMO_PASSWORD);

@@ -3,6 +3,7 @@
  * database and the quality computations, read by the Svelte components).
  */
 import type { Floors } from '../aim/index';
+import type { YieldComparison } from './yield-comparison';
 import type { ChromaticityPlotModel } from './plotModel';
 import type { ColourPoint, PredictionCheck } from './prediction';
 import type { BatchSummary } from './summarise';
@@ -86,6 +87,8 @@ export interface BatchResultsView {
   prediction: PredictionCheck | null;
   /** Which prediction the parts are compared with: the batch's chip bin's, or the revision's. */
   predictionSource: { kind: 'bin' | 'revision'; label: string; binCode: string | null } | null;
+  /** Measured share inside the tolerance (Wilson interval) against the revision's latest yield forecast. */
+  yieldCheck: YieldComparison | null;
   plot: ChromaticityPlotModel;
   corrections: CorrectionView[];
   disposition: DispositionView | null;

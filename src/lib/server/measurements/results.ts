@@ -4,6 +4,8 @@
  * the plot model, correction drafts and the disposition. Computed on read from stored metrics.
  */
 import { getBatch, type BatchDetail } from '../batches/read';
+import { listYieldPredictions } from '../yield-predictions/store';
+import { yieldComparison } from '../../measurements/yield-comparison';
 import type { RevisionRecord } from '../formulations/read';
 import {
   batchAcceptance,
@@ -85,6 +87,14 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
       y: last.predicted.y
     });
   const t = judged.target;
+  const latest = (await listYieldPredictions(revision.id))[0] ?? null;
+  const latestFigures = latest ? (latest.figures as { inTolerance?: number | null }) : null;
+  const yieldCheck = yieldComparison(
+    judged.parts.map((p) => p.metrics),
+    t,
+    revision.content.tolerance,
+    latest ? { inTolerance: latestFigures?.inTolerance ?? null, parts: latest.parts, computedAt: latest.computedAt } : null
+  );
   const view: BatchResultsView = {
     batch: {
       id: b.id,
@@ -118,6 +128,7 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
     })),
     summary: judged.summary,
     prediction,
+    yieldCheck,
     predictionSource: forBatch ? { kind: forBatch.source, label: forBatch.label, binCode: forBatch.bin?.code ?? null } : null,
     plot: chromaticityPlotModel(judged, markers),
     corrections,
