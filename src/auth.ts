@@ -11,7 +11,7 @@ import { checkSignIn } from '$lib/server/auth/sign-in';
 import { authForwardedHeaders, useSecureCookies } from '$lib/server/auth/public-origin';
 import { config } from '$lib/server/config';
 import { safeRedirect } from '$lib/server/auth/safe-redirect';
-import { sessionEpochOf } from '$lib/server/auth/session-epoch';
+import { sessionCurrent, sessionEpochOf } from '$lib/server/auth/session-epoch';
 
 const credentialsSchema = z.object({
   email: z.string().trim().toLowerCase().max(254).pipe(z.email()),
@@ -76,8 +76,7 @@ const authConfig: SvelteKitAuthConfig = {
         return token;
       }
       if (typeof token.uid !== 'string') return token;
-      const current = await sessionEpochOf(Number(token.uid));
-      return current !== null && current === Number(token.epoch ?? 0) ? token : null;
+      return (await sessionCurrent(Number(token.uid), Number(token.epoch ?? 0))) ? token : null;
     },
     session({ session, token }) {
       if (typeof token.uid === 'string') session.user.id = token.uid;

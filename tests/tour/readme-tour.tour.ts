@@ -39,7 +39,7 @@ test('weigh-out ticket', async ({ page }) => {
   const knex = testDb();
   let batchId: number;
   try {
-    batchId = (await knex('batches').orderBy('id').first('id')).id;
+    batchId = (await knex('batches').orderBy('id').first('id'))!.id;
   } finally {
     await knex.destroy();
   }
