@@ -1,8 +1,9 @@
 /**
  * Predict a revision's production yield and keep the figures with it: the revision's own recipe (wt %, path
  * length, target, tolerance) on the loading model of its library materials, the variation model given (or the
- * defaults), N parts, a seed. When the revision holds pump bins (recipe matrix), the pump wavelength is drawn from
- * them by share unless the model states its own spread; the nominal recipe is simulated for every bin.
+ * defaults), N parts, a seed. When the revision holds a recipe per chip bin and no model is given, each bin is
+ * simulated with its own recipe and its share of the N parts (pump uniform inside the bin), and the clouds are
+ * pooled: that is what the line builds. A model given explicitly is run on the nominal recipe.
  */
 import { db } from '../db/index';
 import { notFound, unprocessable } from '../../errors/domain-error';
@@ -13,6 +14,7 @@ import { parseRecipe, loadingOf } from '../../recipe';
 import { predictYield, variationModelSchema, type VariationModel, type YieldFigures } from '../../blend/spread';
 import { loadRevisionComponents } from '../formulations/components';
 import { storeYieldPrediction } from './store';
+import { poolBinForecasts } from './per-bin';
 
 export interface RevisionYieldRequest {
   revisionId: number;
@@ -47,6 +49,27 @@ export async function predictRevisionYield(actor: { id: number; email: string },
   }));
   const model = req.model ?? variationModelSchema.parse(bins.length ? { pump: { kind: 'bins', bins } } : {});
   const target = resolveTarget(content.target);
+  if (bins.length && !req.model) {
+    const pooled = poolBinForecasts(content, bins, {
+      basis,
+      pathLengthMm: content.loading.pathLengthMm,
+      pumpPeakNm: GRID_NM[peak],
+      centre: { x: target.x, y: target.y, cct: target.cct },
+      quadrangle: target.ansiBin,
+      tolerance: content.tolerance,
+      parts: req.parts,
+      seed: req.seed
+    });
+    const id = await storeYieldPrediction(actor, {
+      revisionId: req.revisionId,
+      model,
+      seed: req.seed,
+      parts: req.parts,
+      figures: pooled.stored,
+      source: 'predicted'
+    });
+    return { id, model, figures: pooled.figures, cloud: pooled.cloud };
+  }
   const p = predictYield({
     basis,
     concentrationsWtPct: wt,
