@@ -21,15 +21,23 @@ export async function checkLot(
 ): Promise<CheckedLot> {
   const text = lotNumber.trim();
   if (line.material_id === null) return { lotId: null, lotNumber: text };
-  const known = await knownLots(trx, [line.material_id]);
-  const standing = lotStanding(text, line.code, known.get(line.material_id) ?? [], today.toISOString().slice(0, 10));
-  if (standing.kind === 'unknown') throw invalid(standing.message, [{ path: 'lotNumber', message: `not a known lot of ${line.code}` }]);
+  // The typed lot itself decides; the material's other lots are read only to name them in a refusal.
+  const lot = await trx('material_lots').where({ material_id: line.material_id, lot_number: text }).first('id', 'lot_number', 'expires_on');
+  const known = lot ? [knownLotOf(lot)] : ((await knownLots(trx, [line.material_id])).get(line.material_id) ?? []);
+  const standing = lotStanding(text, line.code, known, today.toISOString().slice(0, 10));
+  if (!lot) {
+    // Not registered: 'unknown', naming the known lots (or 'empty' for a blank lot, said the same way).
+    const message = standing.kind === 'unknown' ? standing.message : `"${text}" is not a known lot of ${line.code}.`;
+    throw invalid(message, [{ path: 'lotNumber', message: `not a known lot of ${line.code}` }]);
+  }
   if (standing.kind === 'expired') throw invalid(standing.message, [{ path: 'lotNumber', message: 'lot expired' }]);
-  const lot = await trx('material_lots').where({ material_id: line.material_id, lot_number: text }).first('id', 'lot_number');
-  if (!lot)
-    throw invalid(`"${text}" is not a known lot of ${line.code}.`, [{ path: 'lotNumber', message: `not a known lot of ${line.code}` }]);
   return { lotId: lot.id, lotNumber: lot.lot_number };
 }
+
+const knownLotOf = (r: { lot_number: string; expires_on: Date | string | null }): KnownLot => ({
+  lotNumber: r.lot_number,
+  expiresOn: r.expires_on === null ? null : new Date(r.expires_on).toISOString().slice(0, 10)
+});
 
 /** Registered lots per material, newest first (for the check above and the weighing page's live hint). */
 export async function knownLots(k: Knex | Knex.Transaction, materialIds: readonly number[]): Promise<Map<number, KnownLot[]>> {
@@ -42,8 +50,7 @@ export async function knownLots(k: Knex | Knex.Transaction, materialIds: readonl
     .select('material_id', 'lot_number', 'expires_on');
   for (const r of rows as { material_id: number; lot_number: string; expires_on: Date | string | null }[]) {
     const list = out.get(r.material_id) ?? [];
-    const expires = r.expires_on === null ? null : new Date(r.expires_on).toISOString().slice(0, 10);
-    list.push({ lotNumber: r.lot_number, expiresOn: expires });
+    list.push(knownLotOf(r));
     out.set(r.material_id, list);
   }
   return out;
