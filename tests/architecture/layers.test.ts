@@ -76,7 +76,7 @@ const RULES: Rule[] = [
   {
     name: 'pure modules import pure modules and computation packages only',
     dirs: PURE.filter((d) => !within(d, lib('spectral', 'blend'))),
-    refuse: pureImports(PURE, ['zod', 'mathjs', 'd3', 'colorjs.io', 'papaparse']),
+    refuse: pureImports(PURE, ['zod', 'mathjs', 'd3', 'colorjs.io', 'papaparse', 'fast-xml-parser']),
     pureCode: true
   },
   {

@@ -1,5 +1,6 @@
 /** Spectra, lots and edit history of a material as pages show them (read on the server). */
 import type { Spd } from '../spectral/types';
+import type { Tm27Meta } from '../spectrum-file/tm27/document';
 
 export const SPECTRUM_KINDS = ['emission', 'excitation'] as const;
 export type SpectrumKind = (typeof SPECTRUM_KINDS)[number];
@@ -17,6 +18,8 @@ export interface StoredSpectrum extends Spd {
   createdBy: number | null;
   createdByName: string | null;
   createdAt: Date;
+  /** IES TM-27 header of the source file, when the spectrum came from one (null otherwise or in lists). */
+  tm27: Tm27Meta | null;
 }
 
 export interface Lot {

@@ -15,6 +15,7 @@ export const LIBRARY_ROUTES: RouteTable = {
     methods: { GET: ALL, PUT: mayEditLibrary.roles, DELETE: mayEditLibrary.roles }
   },
   '/api/v1/phosphors/[id]/spectrum': { sample: '/api/v1/phosphors/999999/spectrum', methods: { POST: mayEditLibrary.roles } },
+  '/api/v1/phosphors/[id]/spectrum/tm27': { sample: '/api/v1/phosphors/999999/spectrum/tm27', methods: { GET: ALL } },
   '/api/v1/phosphors/[id]/thermal': {
     sample: '/api/v1/phosphors/999999/thermal',
     methods: { GET: ALL, PUT: mayEditLibrary.roles, POST: mayEditLibrary.roles }
@@ -22,6 +23,7 @@ export const LIBRARY_ROUTES: RouteTable = {
   '/api/v1/pumps': { sample: '/api/v1/pumps', methods: { GET: ALL, POST: mayEditLibrary.roles } },
   '/api/v1/pumps/[id]': { sample: '/api/v1/pumps/999999', methods: { GET: ALL, PUT: mayEditLibrary.roles, DELETE: mayEditLibrary.roles } },
   '/api/v1/pumps/[id]/spectrum': { sample: '/api/v1/pumps/999999/spectrum', methods: { POST: mayEditLibrary.roles } },
+  '/api/v1/pumps/[id]/spectrum/tm27': { sample: '/api/v1/pumps/999999/spectrum/tm27', methods: { GET: ALL } },
   '/api/v1/pumps/[id]/bins': { sample: '/api/v1/pumps/999999/bins', methods: { GET: ALL, PUT: mayEditLibrary.roles } },
   '/api/v1/pumps/[id]/thermal': {
     sample: '/api/v1/pumps/999999/thermal',

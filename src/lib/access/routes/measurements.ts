@@ -16,6 +16,10 @@ export const MEASUREMENTS_ROUTES: RouteTable = {
     sample: `/api/v1/measurements/${B}/disposition`,
     methods: { POST: mayJudgeBatches.roles }
   },
+  '/api/v1/measurements/[batchId]/uploads/[uploadId]/tm27': {
+    sample: `/api/v1/measurements/${B}/uploads/${B}/tm27`,
+    methods: { GET: ALL }
+  },
   '/api/v1/measurements/[batchId]/uploads/[uploadId]/withdraw': {
     sample: `/api/v1/measurements/${B}/uploads/${B}/withdraw`,
     methods: { POST: mayJudgeBatches.roles }

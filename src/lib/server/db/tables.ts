@@ -245,6 +245,8 @@ export interface MaterialSpectrumRow {
   max_nm: number; // decimal(7,2), read as a number (decimalNumbers)
   source_file_id: number | null;
   origin: string;
+  /** IES TM-27 header and distribution fields of the source file (JSON); null for other sources. */
+  tm27_json: string | null;
   created_by: number | null;
   created_at: Date;
 }
@@ -292,6 +294,8 @@ export interface MeasurementUploadRow {
   withdrawn_at: Date | null;
   withdrawn_by: number | null;
   withdraw_reason: string | null;
+  /** IES TM-27 header and distribution fields of the source file (JSON); null for other sources. */
+  tm27_json: string | null;
 }
 
 export interface PumpBinSetRow {

@@ -17,6 +17,7 @@ import * as detail from './detail';
 import { readUploadedFile } from '../api/upload';
 import { previewSpectrumFile, uploadSpectrum } from './spectrum-upload';
 import { DEFAULT_MAX_BYTES } from '../../spectrum-file/parse';
+import { materialSpectrumTm27, tm27Response } from '../spectrum-exchange/tm27-export';
 import type { MaterialKind } from './records';
 
 type Event = Pick<RequestEvent, 'request' | 'locals' | 'url'> & { params: Record<string, string> };
@@ -93,6 +94,20 @@ const uploadQuerySchema = z.object({
   version: versionSchema.optional(),
   dryRun: z.enum(['0', '1', 'true', 'false']).optional()
 });
+
+const tm27QuerySchema = z.object({ kind: spectrumKindSchema.default('emission') });
+
+/** GET: the material's current spectrum as an IES TM-27-14 document (?kind=emission|excitation). */
+export function spectrumTm27(kind: MaterialKind) {
+  return {
+    GET: (event: Event) =>
+      apiHandler(async () => {
+        requireUser(event.locals, mayRead);
+        const q = readQuery(event.url.searchParams, tm27QuerySchema);
+        return tm27Response(await materialSpectrumTm27(idOf(event), q.kind, kind));
+      })
+  };
+}
 
 export function spectrumUpload(kind: MaterialKind) {
   return {

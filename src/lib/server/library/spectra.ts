@@ -3,6 +3,7 @@ import type { Knex } from 'knex';
 import { db } from '../db/index';
 import type { Spd } from '../../spectral/types';
 import type { SpectrumKind, StoredSpectrum } from '../../library/types';
+import type { Tm27Meta } from '../../spectrum-file/tm27';
 
 export { SPECTRUM_KINDS, type SpectrumKind, type StoredSpectrum } from '../../library/types';
 
@@ -23,7 +24,8 @@ function toSpectrum(r: Row, withData: boolean): StoredSpectrum {
     origin: String(r.origin),
     createdBy: r.created_by == null ? null : Number(r.created_by),
     createdByName: (r.user_name as string) ?? null,
-    createdAt: r.created_at as Date
+    createdAt: r.created_at as Date,
+    tm27: withData && typeof r.tm27_json === 'string' ? (JSON.parse(r.tm27_json) as Tm27Meta) : null
   };
 }
 
@@ -38,6 +40,8 @@ export async function insert(
     sourceFileId: number | null;
     origin: 'upload' | 'api' | 'generated';
     createdBy: number | null;
+    /** Header of an IES TM-27 source file, kept for export. */
+    tm27?: Tm27Meta | null;
   },
   trx: Knex.Transaction
 ): Promise<number> {
@@ -52,6 +56,7 @@ export async function insert(
     max_nm: wavelengths[wavelengths.length - 1],
     source_file_id: input.sourceFileId,
     origin: input.origin,
+    tm27_json: input.tm27 ? JSON.stringify(input.tm27) : null,
     created_by: input.createdBy
   });
   return id;

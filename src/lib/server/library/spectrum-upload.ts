@@ -8,7 +8,9 @@ import { writeTransaction } from '../db/transaction';
 import { emissionCoverage } from '../../library/spectrum-coverage';
 import * as audit from '../db/audit';
 import { putFile } from '../storage/objects';
-import { DEFAULT_MAX_BYTES, formatBytes, parseSpectrumFile } from '../../spectrum-file/parse';
+import { DEFAULT_MAX_BYTES, formatBytes } from '../../spectrum-file/parse';
+import { parseSpectrumUpload } from '../../spectrum-file/read-upload';
+import { EMITTED_QUANTITIES, type Tm27Meta } from '../../spectrum-file/tm27';
 import { decodeText } from '../../spectrum-file/decode';
 import { summariseSpectrum, type SpectrumSummary } from '../../library/spectrum-summary';
 import { SpectrumInputError } from '../../spectral/errors';
@@ -32,6 +34,8 @@ export interface SpectrumPreview {
   summary: SpectrumSummary;
   warnings: string[];
   fileName: string;
+  /** Header of an IES TM-27 file, kept with the spectrum; null for CSV/TXT. */
+  tm27: Tm27Meta | null;
 }
 
 /**
@@ -43,7 +47,9 @@ export function previewSpectrumFile(file: SpectrumFileInput, kind: SpectrumKind 
   if (file.body.length > DEFAULT_MAX_BYTES) {
     throw tooLarge(`The file is ${formatBytes(file.body.length)}; the limit is ${formatBytes(DEFAULT_MAX_BYTES)}. Nothing was saved.`);
   }
-  const parsed = parseSpectrumFile(decodeText(file.body));
+  // An emission spectrum is emitted light; an excitation spectrum may be stated as absorptance too (IES TM-27-14 quantities).
+  const quantities = kind === 'emission' ? EMITTED_QUANTITIES : [...EMITTED_QUANTITIES, 'absorptance' as const, 'other' as const];
+  const parsed = parseSpectrumUpload(decodeText(file.body), { quantities });
   if (!parsed.ok) {
     const n = parsed.errors.length;
     throw unprocessable(
@@ -55,7 +61,13 @@ export function previewSpectrumFile(file: SpectrumFileInput, kind: SpectrumKind 
   const coverage = kind === 'emission' ? emissionCoverage(spd) : { refusal: null, warnings: [] };
   if (coverage.refusal) throw unprocessable(`${file.name} was not saved: ${coverage.refusal}.`, [lineIssue(null, coverage.refusal)]);
   try {
-    return { spd, summary: summariseSpectrum(spd), warnings: [...parsed.warnings, ...coverage.warnings], fileName: file.name };
+    return {
+      spd,
+      summary: summariseSpectrum(spd),
+      warnings: [...parsed.warnings, ...coverage.warnings],
+      fileName: file.name,
+      tm27: parsed.tm27
+    };
   } catch (err) {
     if (err instanceof SpectrumInputError)
       throw unprocessable(`${file.name} was not saved: ${err.message}.`, [lineIssue(null, err.message)]);
@@ -90,7 +102,7 @@ export async function uploadSpectrum(
       trx
     );
     const spectrumId = await spectra.insert(
-      { materialId, kind, spd: preview.spd, sourceFileId: fileId, origin: 'upload', createdBy: actor.id },
+      { materialId, kind, spd: preview.spd, sourceFileId: fileId, origin: 'upload', createdBy: actor.id, tm27: preview.tm27 },
       trx
     );
     const shape = kind === 'emission' ? { peak_nm: round2(preview.summary.peakNm), fwhm_nm: round2(preview.summary.fwhmNm) } : {};

@@ -109,3 +109,20 @@ export async function getDisposition(batchId: number, k: Q = db()): Promise<Disp
     recordFileId: r.record_file_id ?? null
   };
 }
+
+/** One upload's shared wavelengths, IES TM-27 header (if it came from one) and its active parts' spectra. */
+export async function uploadSpectra(
+  batchId: number,
+  uploadId: number,
+  k: Q = db()
+): Promise<{ name: string; wavelengths: number[]; tm27Json: string | null; parts: { label: string; values: number[] }[] } | null> {
+  const upload = await k('measurement_uploads').where({ id: uploadId, batch_id: batchId }).first();
+  if (!upload) return null;
+  const rows = await k('part_measurements').where({ upload_id: uploadId }).orderBy('column_no').select('part_label', 'values_json');
+  return {
+    name: upload.original_name,
+    wavelengths: JSON.parse(upload.wavelengths_json) as number[],
+    tm27Json: upload.tm27_json,
+    parts: rows.map((r) => ({ label: r.part_label, values: JSON.parse(r.values_json) as number[] }))
+  };
+}

@@ -11,7 +11,9 @@ import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import { putFile } from '../storage/objects';
 import { decodeText } from '../../spectrum-file/decode';
-import { formatBytes, parseSpectrumFile } from '../../spectrum-file/parse';
+import { formatBytes } from '../../spectrum-file/parse';
+import { parseSpectrumUpload } from '../../spectrum-file/read-upload';
+import { EMITTED_QUANTITIES, type Tm27Meta } from '../../spectrum-file/tm27';
 import { measurePartsPaced, type MeasuredPart } from '../../measurements/index';
 import { findAnsiBin } from '../../spectral/ansi/c78377';
 import { QUALITY_CORE_VERSION } from '../../measurements/version';
@@ -49,7 +51,7 @@ function stateRefusal(batchNumber: string, state: string): DomainError {
 export async function measureFile(
   file: MeasurementFile,
   onProgress?: (p: UploadProgress) => void
-): Promise<{ parts: MeasuredPart[]; wavelengths: number[]; values: number[][]; warnings: string[] }> {
+): Promise<{ parts: MeasuredPart[]; wavelengths: number[]; values: number[][]; warnings: string[]; tm27: Tm27Meta | null }> {
   if (file.body.length === 0) throw unprocessable(`${file.name || 'The file'} is empty. Nothing was saved.`);
   if (file.body.length > MAX_MEASUREMENT_FILE_BYTES) {
     throw tooLarge(
@@ -57,7 +59,12 @@ export async function measureFile(
     );
   }
   onProgress?.({ phase: 'parsing' });
-  const parsed = parseSpectrumFile(decodeText(file.body), { multiColumn: true, maxBytes: MAX_MEASUREMENT_FILE_BYTES });
+  // CSV/TXT (one column per part) or an IES TM-27 document (one SpectralDistribution per part).
+  const parsed = parseSpectrumUpload(decodeText(file.body), {
+    multiColumn: true,
+    maxBytes: MAX_MEASUREMENT_FILE_BYTES,
+    quantities: EMITTED_QUANTITIES
+  });
   if (!parsed.ok) {
     const n = parsed.errors.length;
     throw unprocessable(
@@ -77,7 +84,13 @@ export async function measureFile(
       issues
     );
   }
-  return { parts: measured.parts, wavelengths: parsed.wavelengths, values: parsed.columns.map((c) => c.values), warnings: parsed.warnings };
+  return {
+    parts: measured.parts,
+    wavelengths: parsed.wavelengths,
+    values: parsed.columns.map((c) => c.values),
+    warnings: parsed.warnings,
+    tm27: parsed.tm27
+  };
 }
 
 type Measured = Awaited<ReturnType<typeof measureFile>>;
@@ -109,6 +122,7 @@ export async function insertMeasurements(
     parts_count: m.parts.length,
     wavelengths_json: JSON.stringify(m.wavelengths),
     warnings_json: JSON.stringify(m.warnings),
+    tm27_json: m.tm27 ? JSON.stringify(m.tm27) : null,
     core_version: QUALITY_CORE_VERSION,
     uploaded_by: uploadedBy
   });
