@@ -3,7 +3,7 @@
  * Prints one line per case with the median wall time, then one JSON line.
  * Budgets: solve pump + 3 phosphors (Ra ≥ 90, R9 ≥ 50, max LER) ≤ 50 ms; pump + 4 ≤ 150 ms;
  * loading-model inverse for 5 phosphors ≤ 1 ms; solve with the loading model and re-absorption,
- * 3 phosphors, 5 proposals ≤ 150 ms. Case keys as arguments run only those cases.
+ * 3 phosphors, 5 proposals ≤ 150 ms; a 20-point LER–Rf trade-off front for 3 phosphors ≤ 1 s. Case keys as arguments run only those cases.
  */
 import { BLUE_PUMP, demoPhosphor } from '../../src/lib/blend/demo-components';
 import { prepareBasis } from '../../src/lib/blend/basis';
@@ -11,6 +11,7 @@ import { beerLambertPhotonBudget } from '../../src/lib/blend/loading/beerLambert
 import { concentrationsForFractions } from '../../src/lib/blend/loading/concentrationsForFractions';
 import { mix } from '../../src/lib/blend/mix';
 import { solveBlend, type SolveProblem } from '../../src/lib/blend/solver/solveBlend';
+import { traceTradeOff } from '../../src/lib/blend/solver/tradeOff';
 import type { BlendComponents } from '../../src/lib/blend/types';
 
 const comps = (...ids: string[]): BlendComponents => ({ pump: BLUE_PUMP, phosphors: ids.map(demoPhosphor) });
@@ -65,6 +66,21 @@ const cases: { key: string; label: string; fn: () => void; runs: number; budgetM
     fn: () => solveBlend({ ...problem(THREE), maxCandidates: 5, loading: { pathLengthMm: 0.3, cascade: true } }),
     runs: 21,
     budgetMs: 150
+  },
+  {
+    key: 'tradeOff3Rf',
+    label: 'trade-off 3, Rf, 20 pts',
+    fn: () =>
+      traceTradeOff({ components: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, floors: { raMin: 80 }, metric: 'rf', points: 20 }),
+    runs: 7,
+    budgetMs: 1000
+  },
+  {
+    key: 'tradeOff3Ra',
+    label: 'trade-off 3, Ra, 20 pts',
+    fn: () => traceTradeOff({ components: THREE, target: { kind: 'ansiBin', nominalCct: 3000 }, metric: 'ra', points: 20 }),
+    runs: 7,
+    budgetMs: 1000
   }
 ];
 

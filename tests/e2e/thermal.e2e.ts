@@ -1,5 +1,6 @@
-import { test, expect as baseExpect, type Page } from '@playwright/test';
+import { test, expect as baseExpect } from '@playwright/test';
 import { DEMO, signInThroughForm, testDb } from './support/accounts';
+import { pickOption as pick } from './support/select';
 
 const expect = baseExpect.configure({ timeout: 15_000 });
 
@@ -15,17 +16,6 @@ async function materialId(code: string): Promise<number> {
   } finally {
     await knex.destroy();
   }
-}
-
-async function pick(page: Page, label: string, code: string): Promise<string> {
-  const select = page.getByLabel(label);
-  const value = await select.evaluate(
-    (el: HTMLSelectElement, c) => [...el.options].find((o) => o.text.startsWith(`${c} `))?.value ?? '',
-    code
-  );
-  expect(value, `${code} is in the demo library`).not.toBe('');
-  await select.selectOption(value);
-  return value;
 }
 
 test('thermal data on a phosphor, a revision aimed at Tj 85 °C, both points, and the cold check on the revision', async ({ page }) => {

@@ -111,3 +111,14 @@ export const correctionRequestSchema = z.object({
 export type MixRequest = z.infer<typeof mixRequestSchema>;
 export type SolveProblemInput = z.infer<typeof solveProblemSchema>;
 export type CorrectionRequest = z.infer<typeof correctionRequestSchema>;
+
+/** `POST /api/v1/solve/trade-off`: the LER front against one rendition metric at a target, floors held. */
+export const tradeOffRequestSchema = z.object({
+  components: componentsFor(2),
+  target: targetSchema,
+  floors: floorsSchema.optional(),
+  metric: z.enum(['ra', 'r9', 'rf'], 'metric must be ra, r9 or rf'),
+  points: z.number().int().min(2, 'at least 2 points').max(50, 'at most 50 points').optional(),
+  loading: loadingParamsSchema.optional()
+});
+export type TradeOffRequest = z.infer<typeof tradeOffRequestSchema>;

@@ -18,6 +18,7 @@ export const CORE_ROUTES: RouteTable = {
   '/api/v1/evaluate': { sample: '/api/v1/evaluate', methods: { POST: ALL } },
   '/api/v1/mix': { sample: '/api/v1/mix', methods: { POST: ALL } },
   '/api/v1/solve': { sample: '/api/v1/solve', methods: { POST: ALL } },
+  '/api/v1/solve/trade-off': { sample: '/api/v1/solve/trade-off', methods: { POST: ALL } },
   '/api/v1/correct': { sample: '/api/v1/correct', methods: { POST: ALL } },
   '/api/v1/yield-predictions': { sample: '/api/v1/yield-predictions', methods: { POST: ALL } }
 };

@@ -12,6 +12,7 @@ import { Worker } from 'node:worker_threads';
 import { config } from '../config';
 import { BlendInputError } from '../../blend/errors';
 import { solveAtCondition, type ConditionSolveProblem, type ConditionSolveResult } from '../../blend/solver/solveAtCondition';
+import { traceTradeOff, type TradeOffProblem, type TradeOffResult } from '../../blend/solver/tradeOff';
 import { SpectrumInputError } from '../../spectral/errors';
 
 const workerFile = (): string => resolve(config().solveWorkerFile);
@@ -20,7 +21,7 @@ interface Slot {
   worker: Worker;
   busy: Set<number>;
 }
-type Pending = { resolve: (r: ConditionSolveResult) => void; reject: (e: Error) => void };
+type Pending = { resolve: (r: never) => void; reject: (e: Error) => void };
 
 let slots: Slot[] | null = null;
 const pending = new Map<number, Pending>();
@@ -37,13 +38,13 @@ function startSlot(): Slot {
   const worker = new Worker(workerFile());
   worker.unref();
   const slot: Slot = { worker, busy: new Set<number>() };
-  worker.on('message', (m: { id: number; result?: ConditionSolveResult; error?: { name: string; message: string } }) => {
+  worker.on('message', (m: { id: number; result?: unknown; error?: { name: string; message: string } }) => {
     slot.busy.delete(m.id);
     const p = pending.get(m.id);
     pending.delete(m.id);
     if (!p) return;
     if (m.error) p.reject(revive(m.error));
-    else p.resolve(m.result!);
+    else p.resolve(m.result as never);
   });
   worker.on('error', (err) => {
     // A crashed worker fails the requests it held and is replaced by a fresh one.
@@ -72,17 +73,28 @@ export function usesWorkers(): boolean {
   return built && workerCount() > 0 && existsSync(workerFile());
 }
 
-/** Solves (at the problem's condition; bench when none) in a worker thread when the bundled worker exists, else in this thread. */
-export function solveOffThread(problem: ConditionSolveProblem): Promise<ConditionSolveResult> {
-  if (!usesWorkers()) return Promise.resolve().then(() => solveAtCondition(problem));
+/** Sends one job to the least busy worker. */
+function post<R>(message: { kind: 'solve' | 'tradeOff'; problem: unknown }): Promise<R> {
   warmSolverPool();
   const slot = slots!.reduce((a, b) => (b.busy.size < a.busy.size ? b : a));
   const id = nextId++;
-  return new Promise<ConditionSolveResult>((resolvePromise, reject) => {
-    pending.set(id, { resolve: resolvePromise, reject });
+  return new Promise<R>((resolvePromise, reject) => {
+    pending.set(id, { resolve: resolvePromise as (r: never) => void, reject });
     slot.busy.add(id);
-    slot.worker.postMessage({ id, problem });
+    slot.worker.postMessage({ id, ...message });
   });
+}
+
+/** Solves (at the problem's condition; bench when none) in a worker thread when the bundled worker exists, else in this thread. */
+export function solveOffThread(problem: ConditionSolveProblem): Promise<ConditionSolveResult> {
+  if (!usesWorkers()) return Promise.resolve().then(() => solveAtCondition(problem));
+  return post<ConditionSolveResult>({ kind: 'solve', problem });
+}
+
+/** Traces an LER trade-off front in a worker thread (in this thread where there are no workers). */
+export function tradeOffOffThread(problem: TradeOffProblem): Promise<TradeOffResult> {
+  if (!usesWorkers()) return Promise.resolve().then(() => traceTradeOff(problem));
+  return post<TradeOffResult>({ kind: 'tradeOff', problem });
 }
 
 export async function closeSolverPool(): Promise<void> {
