@@ -63,3 +63,14 @@ export {
   type AnsiBinMatch
 } from './ansi/c78377';
 export { sdcmSteps, sdcmFromTarget, ellipseForCct, type ChromaticityEllipse } from './ansi/macadam';
+export {
+  designIntents,
+  meetsIntent,
+  describeIntent,
+  DESIGN_INTENTS,
+  INTENT_LEVELS,
+  INTENT_FAMILIES,
+  type IntentLevel,
+  type IntentFamily,
+  type DesignIntentReport
+} from './tm30/design-intents';
