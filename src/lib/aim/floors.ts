@@ -7,6 +7,8 @@
  * [common practice]. A floor "binds" when the candidate sits within
  * BINDING_MARGIN of it: the optimiser pushed against it.
  */
+import { intentDefinition, type IntentLevel } from '../spectral/tm30/design-intents';
+
 export interface Floors {
   raMin?: number;
   r9Min?: number;
@@ -14,6 +16,8 @@ export interface Floors {
   rgMin?: number;
   rgMax?: number;
   lerMin?: number;
+  /** A TM-30-20 Annex E design-intent level the blend must meet (../spectral/tm30/design-intents.ts). */
+  intent?: IntentLevel;
 }
 
 export type Objective = 'maxLer' | 'maxRa' | 'maxRf' | 'minCost';
@@ -24,10 +28,14 @@ export interface LoopMetrics {
   ler: number;
   rf: number | null;
   rg: number | null;
+  /** Local indices of TM-30 hue bin 1 (Rf,h1; Rcs,h1 as a fraction), for the design intents. */
+  rfh1?: number | null;
+  rcsh1?: number | null;
   costPer1000Lm: number | null;
 }
 
-type FloorKey = keyof Floors;
+/** Floors with a numeric limit (the design intent is judged on its own criteria). */
+type FloorKey = Exclude<keyof Floors, 'intent'>;
 
 interface FloorRule {
   key: FloorKey;
@@ -49,7 +57,27 @@ export const FLOOR_RULES: FloorRule[] = [
 export const BINDING_MARGIN = 0.5;
 
 export function needsTm30(floors: Floors, objective: Objective): boolean {
-  return objective === 'maxRf' || floors.rfMin !== undefined || floors.rgMin !== undefined || floors.rgMax !== undefined;
+  return (
+    objective === 'maxRf' ||
+    floors.rfMin !== undefined ||
+    floors.rgMin !== undefined ||
+    floors.rgMax !== undefined ||
+    floors.intent !== undefined
+  );
+}
+
+/** Shortfall of a design-intent level in index points (Rcs,h1 in percentage points); 0 when met. */
+function intentShortfall(level: IntentLevel, m: LoopMetrics): number {
+  const values = { rf: m.rf, rg: m.rg, rfh1: m.rfh1 ?? null, rcsh1: m.rcsh1 ?? null };
+  if (Object.values(values).some((v) => v === null || !Number.isFinite(v))) return 100;
+  let v = 0;
+  for (const c of intentDefinition(level).criteria) {
+    const scale = c.metric === 'rcsh1' ? 100 : 1;
+    const x = values[c.metric]! * scale;
+    if (c.min !== undefined) v += Math.max(0, c.min * scale - x);
+    if (c.max !== undefined) v += Math.max(0, x - c.max * scale);
+  }
+  return v;
 }
 
 /** Sum of floor shortfalls (0 when every floor is met). */
@@ -61,15 +89,18 @@ export function violation(floors: Floors, m: LoopMetrics): number {
     if (limit === undefined || value === null) continue;
     v += Math.max(0, r.sense * (limit - value));
   }
+  if (floors.intent) v += intentShortfall(floors.intent, m);
   return v;
 }
 
 export function violatedFloors(floors: Floors, m: LoopMetrics): string[] {
-  return FLOOR_RULES.filter((r) => {
+  const rules = FLOOR_RULES.filter((r) => {
     const limit = floors[r.key];
     const value = m[r.metric];
     return limit !== undefined && value !== null && r.sense * (limit - value) > 0;
   }).map((r) => `${r.label} ${m[r.metric]?.toFixed(1)} ${r.sense > 0 ? '<' : '>'} ${floors[r.key]}`);
+  const intent = floors.intent && intentShortfall(floors.intent, m) > 0 ? [`TM-30 design intent ${floors.intent} not met`] : [];
+  return [...rules, ...intent];
 }
 
 export function bindingFloors(floors: Floors, m: LoopMetrics): FloorKey[] {

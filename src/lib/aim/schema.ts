@@ -4,6 +4,7 @@
  * bodies, the revision content, the designer and quality.
  */
 import { z } from 'zod';
+import { INTENT_LEVELS } from '../spectral/tm30/design-intents';
 
 export const targetSchema = z.discriminatedUnion('kind', [
   z.object({
@@ -31,6 +32,7 @@ export const floorsSchema = z
     rfMin: z.number().max(100).optional(),
     rgMin: z.number().min(50).max(150).optional(),
     rgMax: z.number().min(50).max(150).optional(),
-    lerMin: z.number().min(0).max(683).optional()
+    lerMin: z.number().min(0).max(683).optional(),
+    intent: z.enum(INTENT_LEVELS, 'intent must be a TM-30 Annex E level, P1–P3, V1–V3 or F1–F3').optional()
   })
   .refine((f) => f.rgMin === undefined || f.rgMax === undefined || f.rgMin <= f.rgMax, 'rgMin must not exceed rgMax');

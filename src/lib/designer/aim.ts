@@ -14,6 +14,7 @@ import {
   type Tolerance
 } from '../aim/index';
 import { fieldLabel, readableIssue, readableSummary } from '../errors/readable-issues';
+import type { IntentLevel } from '../spectral/tm30/design-intents';
 import { ANSI_C78377_2017_TABLE1 } from '../spectral/data/ansi-c78377-2017';
 
 export type TargetKind = Target['kind'];
@@ -23,6 +24,8 @@ export interface AimFloors {
   r9Min: number | null;
   rfMin: number | null;
   lerMin: number | null;
+  /** TM-30-20 Annex E level the blend must meet, or null. */
+  intent: IntentLevel | null;
 }
 
 export interface AimState {
@@ -48,7 +51,7 @@ export const DEFAULT_AIM: AimState = {
   y: 0.4033,
   nominalCct: 3000,
   toleranceSdcm: 3,
-  floors: { raMin: 90, r9Min: 50, rfMin: null, lerMin: null }
+  floors: { raMin: 90, r9Min: 50, rfMin: null, lerMin: null, intent: null }
 };
 
 export const OBJECTIVES: { value: Objective; label: string }[] = [
@@ -76,6 +79,7 @@ export function floorsOf(f: AimFloors): Floors {
   if (!blank(f.r9Min)) out.r9Min = f.r9Min;
   if (!blank(f.rfMin)) out.rfMin = f.rfMin;
   if (!blank(f.lerMin)) out.lerMin = f.lerMin;
+  if (f.intent) out.intent = f.intent;
   return out;
 }
 
@@ -108,6 +112,12 @@ export function aimFrom(target: Target, tolerance: Tolerance, floors: Floors): A
     y: target.kind === 'xy' ? target.y : Number(r.y.toFixed(4)),
     nominalCct: target.kind === 'ansiBin' ? target.nominalCct : DEFAULT_AIM.nominalCct,
     toleranceSdcm: tolerance.kind === 'sdcm' ? tolerance.steps : DEFAULT_AIM.toleranceSdcm,
-    floors: { raMin: floors.raMin ?? null, r9Min: floors.r9Min ?? null, rfMin: floors.rfMin ?? null, lerMin: floors.lerMin ?? null }
+    floors: {
+      raMin: floors.raMin ?? null,
+      r9Min: floors.r9Min ?? null,
+      rfMin: floors.rfMin ?? null,
+      lerMin: floors.lerMin ?? null,
+      intent: floors.intent ?? null
+    }
   };
 }

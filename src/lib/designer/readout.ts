@@ -8,9 +8,10 @@ import { colourDistance, FLOOR_RULES, withinTolerance, type Floors, type Resolve
 import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
 import type { SpectrumEvaluation } from '../spectral/types';
 import { cctMeaningful } from '../spectral/meaningful';
+import { designIntents, type DesignIntentReport, type IntentLevel } from '../spectral/tm30/design-intents';
 
 export interface FloorCheck {
-  key: keyof Floors;
+  key: Exclude<keyof Floors, 'intent'>;
   label: string;
   /** '≥' for a minimum, '≤' for a maximum. */
   sense: '≥' | '≤';
@@ -65,4 +66,27 @@ export function targetStanding(e: SpectrumEvaluation, target: ResolvedTarget, to
     ansiBin: findAnsiBin(e.x, e.y)?.nominalCct ?? null,
     inTargetBin: target.ansiBin ? isInQuadrangle(e.x, e.y, target.ansiBin) : null
   };
+}
+
+export interface IntentStanding {
+  /** Strictest level met per intent (null below level 3), or null when TM-30 is not meaningful here. */
+  best: DesignIntentReport['best'] | null;
+  /** The aim's required level, if any, with what it misses. */
+  required: { level: IntentLevel; pass: boolean; misses: string[] } | null;
+}
+
+/** TM-30-20 Annex E levels the blend meets and the aim's required level (judged only where TM-30 means something). */
+export function intentStanding(floors: Floors, e: SpectrumEvaluation): IntentStanding {
+  const rendering = e.cri.valid && cctMeaningful(e.cct, e.duv);
+  const report = rendering ? designIntents(e.tm30) : null;
+  const level = floors.intent;
+  const required = level
+    ? report
+      ? (() => {
+          const c = report.checks.find((x) => x.level === level)!;
+          return { level, pass: c.met, misses: c.misses };
+        })()
+      : { level, pass: false, misses: ['TM-30 not meaningful this far from white'] }
+    : null;
+  return { best: report?.best ?? null, required };
 }

@@ -41,6 +41,7 @@ const LABELS: readonly [RegExp, Label][] = [
   [/^floors\.rfMin$|^rfMin$/, 'Rf floor'],
   [/^floors\.rgMin$|^rgMin$/, 'Rg lower limit'],
   [/^floors\.rgMax$|^rgMax$/, 'Rg upper limit'],
+  [/^floors\.intent$|^intent$/, 'TM-30 design intent'],
   [/^floors\.lerMin$|^lerMin$/, 'LER floor'],
   [/^packageModelRef(\..*)?$/, 'Package model'],
   [/^name$/, 'Name'],

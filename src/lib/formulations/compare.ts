@@ -110,7 +110,8 @@ export function floorsText(c: RevisionContent): string {
     f.rfMin !== undefined && `Rf ≥ ${f.rfMin}`,
     f.rgMin !== undefined && `Rg ≥ ${f.rgMin}`,
     f.rgMax !== undefined && `Rg ≤ ${f.rgMax}`,
-    f.lerMin !== undefined && `LER ≥ ${f.lerMin}`
+    f.lerMin !== undefined && `LER ≥ ${f.lerMin}`,
+    f.intent !== undefined && `TM-30 design intent ${f.intent}`
   ].filter(Boolean);
   return parts.join(', ') || 'none';
 }

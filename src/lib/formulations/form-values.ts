@@ -26,6 +26,7 @@ export function contentToFormValues(c: RevisionContent): FormValues {
     notes: c.notes
   };
   for (const k of FLOOR_KEYS) v[k] = str(c.floors[k]);
+  v.intent = c.floors.intent ?? '';
   c.phosphors.forEach((p, i) => {
     v[`ph${i}`] = String(p.materialId);
     v[`of${i}`] = String(p.opticalFraction);
@@ -62,8 +63,10 @@ export function formValuesToRaw(v: FormValues): unknown {
       wtPct: num(v[`wt${i}`]) ?? null
     });
   }
-  const floors: Record<string, number | undefined> = {};
+  const floors: Record<string, number | string | undefined> = {};
   for (const k of FLOOR_KEYS) if (v[k]) floors[k] = num(v[k]);
+  // A TM-30 Annex E level; the content schema refuses anything else with a readable message.
+  if (v.intent) floors.intent = v.intent;
   return {
     contentVersion: CONTENT_VERSION,
     pump: { materialId: num(v.pumpId), code: '?', name: '?' },

@@ -10,6 +10,7 @@ import { cctMeaningful } from '../spectral/meaningful';
 import { colourDistance, resolveTarget, violatedFloors, withinTolerance } from '../aim/index';
 import type { BlendComponents } from '../blend/types';
 import { findAnsiBin } from '../spectral/ansi/c78377';
+import { designIntents, type DesignIntentReport } from '../spectral/tm30/design-intents';
 import { fractionsWithLeak, type RevisionContent } from '../recipe';
 
 /** Names the computation that produced a prediction; stored beside it so later readers know. */
@@ -36,6 +37,8 @@ export interface RevisionPrediction {
   sdcm: number;
   withinTolerance: boolean;
   floorsMissed: string[];
+  /** Strictest TM-30-20 Annex E level met per intent (null below level 3); null where TM-30 is not meaningful or on older revisions. */
+  intents?: DesignIntentReport['best'] | null;
   /** Output SPD on the core's grid, scaled to peak 1 (for charts and comparisons). */
   spd: { startNm: number; stepNm: number; values: number[] };
 }
@@ -46,15 +49,15 @@ const round = (v: number, digits: number) => Number(v.toFixed(digits));
 /** Floors the prediction misses; rendering floors count as missed when CIE 13.3 is not meaningful (DC ≥ 5.4e-3). */
 function missedFloors(
   content: RevisionContent,
-  m: { ra: number | null; r9: number | null; rf: number | null; rg: number | null; ler: number }
+  m: { ra: number | null; r9: number | null; rf: number | null; rg: number | null; rfh1: number | null; rcsh1: number | null; ler: number }
 ): string[] {
   const f = content.floors;
-  const renderingFloor = [f.raMin, f.r9Min, f.rfMin, f.rgMin, f.rgMax].some((v) => v !== undefined);
+  const renderingFloor = [f.raMin, f.r9Min, f.rfMin, f.rgMin, f.rgMax, f.intent].some((v) => v !== undefined);
   const undefinedCri =
     renderingFloor && m.ra === null
       ? ['Colour rendering (Ra, R9, Rf, Rg) not defined (colour point too far from the Planckian locus, CIE 13.3 §5.3)']
       : [];
-  return [...undefinedCri, ...violatedFloors(f, { ra: m.ra ?? 100, r9: m.r9 ?? 100, rf: m.rf, rg: m.rg, ler: m.ler, costPer1000Lm: null })];
+  return [...undefinedCri, ...violatedFloors(f, { ...m, ra: m.ra ?? 100, r9: m.r9 ?? 100, costPer1000Lm: null })];
 }
 
 export function predictRevision(content: RevisionContent, components: BlendComponents): RevisionPrediction {
@@ -88,7 +91,16 @@ export function predictRevision(content: RevisionContent, components: BlendCompo
     deltaUvPrime: err.deltaUvPrime,
     sdcm: err.steps,
     withinTolerance: withinTolerance(err, content.tolerance),
-    floorsMissed: missedFloors(content, { ra, r9, rf, rg, ler: e.ler }),
+    floorsMissed: missedFloors(content, {
+      ra,
+      r9,
+      rf,
+      rg,
+      rfh1: rendering ? finite(e.tm30.bins[0]?.rf ?? NaN) : null,
+      rcsh1: rendering ? finite(e.tm30.bins[0]?.rcs ?? NaN) : null,
+      ler: e.ler
+    }),
+    intents: rendering ? (designIntents(e.tm30)?.best ?? null) : null,
     spd: {
       startNm: result.spd.wavelengths[0],
       stepNm: result.spd.wavelengths[1] - result.spd.wavelengths[0],

@@ -7,6 +7,7 @@
  * A floor on a metric the core could not give (CRI not meaningful far from the locus, TM-30 not
  * finite) fails the part: an unknown value is not evidence of compliance [common practice].
  */
+import { intentMisses } from '../spectral/tm30/design-intents';
 import { colourDistance, FLOOR_RULES, withinTolerance, type ColourDistance, type ResolvedTarget, type Tolerance } from '../aim/index';
 import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
 import type { Acceptance, PartFailure, PartMetrics, PartVerdict } from './types';
@@ -47,6 +48,16 @@ export function floorFailures(m: PartMetrics, floors: Acceptance['floors']): Par
     }
     if (r.sense * (limit - value) > 0)
       out.push({ code: r.key, message: `${r.label} ${value.toFixed(1)} ${r.sense > 0 ? '<' : '>'} ${limit}` });
+  }
+  const level = floors.intent;
+  if (level) {
+    const values = { rf: m.rf, rg: m.rg, rfh1: m.rfh1 ?? null, rcsh1: m.rcsh1 ?? null };
+    if (Object.values(values).some((v) => v === null || !Number.isFinite(v)))
+      out.push({ code: 'intent', message: `TM-30 design intent ${level} not judged (Rf, Rg or hue-bin-1 indices not available)` });
+    else {
+      const misses = intentMisses(level, values as Record<keyof typeof values, number>);
+      if (misses.length) out.push({ code: 'intent', message: `TM-30 design intent ${level} not met: ${misses.join(', ')}` });
+    }
   }
   return out;
 }

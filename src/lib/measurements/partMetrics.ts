@@ -25,6 +25,8 @@ export function partMetrics(spd: Spd): PartMetrics {
     criValid: e.cri.valid,
     rf: finiteOrNull(e.tm30.rf),
     rg: finiteOrNull(e.tm30.rg),
+    rfh1: finiteOrNull(e.tm30.bins[0]?.rf ?? NaN),
+    rcsh1: finiteOrNull(e.tm30.bins[0]?.rcs ?? NaN),
     ler: e.ler,
     peakNm: e.peakNm,
     fwhmNm: e.fwhmNm,

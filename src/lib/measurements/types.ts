@@ -23,6 +23,9 @@ export interface PartMetrics {
   /** CIE 224 / TM-30 fidelity and gamut; null when not finite (far from white). */
   rf: number | null;
   rg: number | null;
+  /** TM-30 hue bin 1 local indices (Rf,h1; Rcs,h1 as a fraction), for the Annex E design intents; absent on older parts. */
+  rfh1?: number | null;
+  rcsh1?: number | null;
   ler: number;
   peakNm: number;
   fwhmNm: number;

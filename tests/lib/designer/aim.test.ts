@@ -23,7 +23,7 @@ describe('designer aim → target, tolerance, floors', () => {
   });
 
   it('says what is wrong with a bad target, tolerance or floor', () => {
-    const r = resolveAim(aim({ cct: 500, toleranceSdcm: 0, floors: { raMin: 120, r9Min: null, rfMin: null, lerMin: null } }));
+    const r = resolveAim(aim({ cct: 500, toleranceSdcm: 0, floors: { raMin: 120, r9Min: null, rfMin: null, lerMin: null, intent: null } }));
     expect(r.ok).toBe(false);
     if (r.ok) return;
     expect(r.errors.target).toContain('CCT must be 1000–20000 K');
@@ -34,7 +34,7 @@ describe('designer aim → target, tolerance, floors', () => {
   });
 
   it('leaves empty floors out', () => {
-    expect(floorsOf({ raMin: null, r9Min: 50, rfMin: Number.NaN, lerMin: 300 })).toEqual({ r9Min: 50, lerMin: 300 });
+    expect(floorsOf({ raMin: null, r9Min: 50, rfMin: Number.NaN, lerMin: 300, intent: null })).toEqual({ r9Min: 50, lerMin: 300 });
   });
 
   it('fills the form back from a stored target', () => {

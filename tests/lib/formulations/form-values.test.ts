@@ -44,3 +44,13 @@ describe('draft form fields ↔ content', () => {
     expect(raw.floors).toEqual({});
   });
 });
+
+describe('the TM-30 design intent in the draft form', () => {
+  it('round-trips and an unknown level is refused by the content schema', () => {
+    const withIntent: RevisionContent = { ...content, floors: { raMin: 90, intent: 'P2' } };
+    const values = contentToFormValues(withIntent);
+    expect(values.intent).toBe('P2');
+    expect(revisionContentSchema.parse(formValuesToRaw(values)).floors).toEqual({ raMin: 90, intent: 'P2' });
+    expect(revisionContentSchema.safeParse(formValuesToRaw({ ...values, intent: 'P9' })).success).toBe(false);
+  });
+});

@@ -106,3 +106,16 @@ describe('step tolerance in pass/fail', () => {
     expect(v.failures).toEqual([{ code: 'colour', message: '4.0 steps from target > 3' }]);
   });
 });
+
+describe('a TM-30 design intent on the revision is judged per part', () => {
+  const withIntent: Acceptance = { ...base, floors: { intent: 'F3' } };
+  it('a part below F3 fails with the criterion named (F3: Rf ≥ 85, Rf,h1 ≥ 85, as quoted by ASHRAE 189.1)', () => {
+    const v = judgePart(metricsAt(t.x, t.y, { rf: 84, rg: 100, rfh1: 90, rcsh1: 0 }), t, withIntent);
+    expect(v.failures).toEqual([{ code: 'intent', message: 'TM-30 design intent F3 not met: Rf 84 < 85' }]);
+  });
+  it('a part meeting F3 passes; one measured before hue-bin indices were kept is not judged and fails', () => {
+    expect(judgePart(metricsAt(t.x, t.y, { rf: 90, rg: 100, rfh1: 88, rcsh1: 0 }), t, withIntent).pass).toBe(true);
+    const old = judgePart(metricsAt(t.x, t.y, { rf: 90, rg: 100 }), t, withIntent);
+    expect(old.failures[0].message).toMatch(/not judged/);
+  });
+});

@@ -28,6 +28,8 @@ export function loopMetricsOf(ev: PartialSpectrumEvaluation, cost: number | null
       ler: ev.ler,
       rf: ev.tm30?.rf ?? null,
       rg: ev.tm30?.rg ?? null,
+      rfh1: ev.tm30?.bins[0]?.rf ?? null,
+      rcsh1: ev.tm30?.bins[0]?.rcs ?? null,
       costPer1000Lm: cost
     },
     criValid: ev.cri?.valid ?? false

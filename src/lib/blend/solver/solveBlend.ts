@@ -158,6 +158,7 @@ export function solveBlend(problem: SolveProblem): SolveResult {
     const parts = FLOOR_RULES.filter((r) => floors[r.key] !== undefined).map(
       (r) => `${r.label} ${r.sense > 0 ? '≥' : '≤'} ${floors[r.key]} (best ${bestAchievable[r.key]?.toFixed(1) ?? 'n/a'})`
     );
+    if (floors.intent) parts.push(`TM-30 design intent ${floors.intent}`);
     return {
       ...base,
       status: 'floorsNotMet',

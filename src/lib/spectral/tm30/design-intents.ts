@@ -49,6 +49,10 @@ export const DESIGN_INTENTS: IntentDefinition[] = [
   { level: 'F3', family: 'fidelity', criteria: [q('rf', 85), q('rfh1', 85)] }
 ];
 
+export function intentDefinition(level: IntentLevel): IntentDefinition {
+  return DESIGN_INTENTS.find((d) => d.level === level)!;
+}
+
 export const METRIC_LABEL: Record<IntentMetric, string> = { rf: 'Rf', rg: 'Rg', rfh1: 'Rf,h1', rcsh1: 'Rcs,h1' };
 
 export interface IntentCheck {
@@ -69,18 +73,30 @@ export interface DesignIntentReport {
 
 const show = (metric: IntentMetric, v: number) => (metric === 'rcsh1' ? `${(v * 100).toFixed(0)} %` : v.toFixed(0));
 
-/** Which levels of each intent the TM-30 result meets; null when TM-30 is undefined (NaN indices). */
-export function designIntents(tm30: Tm30Result): DesignIntentReport | null {
+/** The criteria of a level the values miss, e.g. "Rcs,h1 3 % < 7 %"; [] when met. */
+export function intentMisses(level: IntentLevel, values: Record<IntentMetric, number>): string[] {
+  const misses: string[] = [];
+  for (const c of intentDefinition(level).criteria) {
+    const v = values[c.metric];
+    if (c.min !== undefined && v < c.min) misses.push(`${METRIC_LABEL[c.metric]} ${show(c.metric, v)} < ${show(c.metric, c.min)}`);
+    if (c.max !== undefined && v > c.max) misses.push(`${METRIC_LABEL[c.metric]} ${show(c.metric, v)} > ${show(c.metric, c.max)}`);
+  }
+  return misses;
+}
+
+/** Rf, Rg, Rf,h1 and Rcs,h1 of a TM-30 result; null when any is undefined (far from white). */
+export function intentValues(tm30: Tm30Result): Record<IntentMetric, number> | null {
   const h1 = tm30.bins[0];
   const values: Record<IntentMetric, number> = { rf: tm30.rf, rg: tm30.rg, rfh1: h1?.rf ?? NaN, rcsh1: h1?.rcs ?? NaN };
-  if (Object.values(values).some((v) => !Number.isFinite(v))) return null;
+  return Object.values(values).every((v) => Number.isFinite(v)) ? values : null;
+}
+
+/** Which levels of each intent the TM-30 result meets; null when TM-30 is undefined (NaN indices). */
+export function designIntents(tm30: Tm30Result): DesignIntentReport | null {
+  const values = intentValues(tm30);
+  if (!values) return null;
   const checks = DESIGN_INTENTS.map((d) => {
-    const misses: string[] = [];
-    for (const c of d.criteria) {
-      const v = values[c.metric];
-      if (c.min !== undefined && v < c.min) misses.push(`${METRIC_LABEL[c.metric]} ${show(c.metric, v)} < ${show(c.metric, c.min)}`);
-      if (c.max !== undefined && v > c.max) misses.push(`${METRIC_LABEL[c.metric]} ${show(c.metric, v)} > ${show(c.metric, c.max)}`);
-    }
+    const misses = intentMisses(d.level, values);
     return { level: d.level, family: d.family, met: misses.length === 0, misses };
   });
   const best = Object.fromEntries(INTENT_FAMILIES.map((f) => [f, checks.find((c) => c.family === f && c.met)?.level ?? null])) as Record<
@@ -97,9 +113,8 @@ export function meetsIntent(tm30: Tm30Result, level: IntentLevel): boolean {
 
 /** Text of a level's criteria, each marked † when recalled rather than quoted. */
 export function describeIntent(level: IntentLevel): string {
-  const d = DESIGN_INTENTS.find((x) => x.level === level)!;
-  return d.criteria
-    .map((c) => {
+  return intentDefinition(level)
+    .criteria.map((c) => {
       const label = METRIC_LABEL[c.metric];
       const range =
         c.min !== undefined && c.max !== undefined
