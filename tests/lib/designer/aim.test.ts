@@ -42,6 +42,6 @@ describe('designer aim → target, tolerance, floors', () => {
     expect(a.kind).toBe('ansiBin');
     expect(a.nominalCct).toBe(4000);
     expect(a.toleranceSdcm).toBe(5);
-    expect(a.floors).toEqual({ raMin: 80, r9Min: null, rfMin: null, lerMin: null });
+    expect(a.floors).toEqual({ raMin: 80, r9Min: null, rfMin: null, lerMin: null, intent: null });
   });
 });
