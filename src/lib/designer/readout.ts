@@ -7,7 +7,7 @@
 import { colourDistance, FLOOR_RULES, withinTolerance, type Floors, type ResolvedTarget, type Tolerance } from '../aim/index';
 import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
 import type { SpectrumEvaluation } from '../spectral/types';
-import { cctMeaningful } from '../spectral/meaningful';
+import { cctMeaningful, shownMetrics, type ShownMetrics } from '../spectral/meaningful';
 
 export interface FloorCheck {
   key: keyof Floors;
@@ -65,4 +65,9 @@ export function targetStanding(e: SpectrumEvaluation, target: ResolvedTarget, to
     ansiBin: findAnsiBin(e.x, e.y)?.nominalCct ?? null,
     inTargetBin: target.ansiBin ? isInQuadrangle(e.x, e.y, target.ansiBin) : null
   };
+}
+
+/** The figures of an evaluation that are meaningful to show (CIE 13.3-1995 §5.3 for Ra/R9, ANSI/IES TM-30-20 for Rf/Rg). */
+export function shownFor(e: SpectrumEvaluation): ShownMetrics {
+  return shownMetrics({ cct: e.cct, duv: e.duv, criValid: e.cri.valid, ra: e.cri.ra, r9: e.cri.ri[8], rf: e.tm30.rf, rg: e.tm30.rg });
 }
