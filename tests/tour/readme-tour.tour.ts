@@ -20,6 +20,10 @@ test('designer at 1440×900', async ({ page }) => {
   await signInThroughForm(page, DEMO.formulator);
   await page.goto(`/designer?from=${await approvedRevisionId()}`);
   await page.getByTestId('m-cct').filter({ hasText: 'K' }).waitFor();
+  // The proposals for the revision's own aim, beside the readout.
+  await page.getByRole('button', { name: 'Find blends' }).click();
+  await page.getByTestId('solve-status').filter({ hasText: 'Blends found' }).waitFor({ timeout: 30_000 });
+  await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path: 'docs/tour/designer.png' });
 });
 
