@@ -56,6 +56,17 @@ export const FLOOR_RULES: FloorRule[] = [
 /** Within this distance of its limit a floor is reported as binding (index points, lm/W). */
 export const BINDING_MARGIN = 0.5;
 
+/** The same floors moved `margin` inward (minimums up, the Rg maximum down), for a search that must land inside them. */
+export function floorsInside(floors: Floors, margin: number): Floors {
+  // A design intent has no single limit to move; it is kept as it is.
+  const out: Floors = floors.intent ? { intent: floors.intent } : {};
+  for (const r of FLOOR_RULES) {
+    const limit = floors[r.key];
+    if (limit !== undefined) out[r.key] = limit + r.sense * margin;
+  }
+  return out;
+}
+
 export function needsTm30(floors: Floors, objective: Objective): boolean {
   return (
     objective === 'maxRf' ||
