@@ -1,10 +1,12 @@
 import { sveltekit } from '@sveltejs/kit/vite';
-import { defineConfig } from 'vitest/config';
+import { configDefaults, defineConfig } from 'vitest/config';
 
 export default defineConfig({
   plugins: [sveltekit()],
   test: {
     include: ['tests/**/*.test.ts'],
+    // The Galera fault suites need the three-node cluster: `npm run test:cluster` (vitest.cluster.config.ts).
+    exclude: [...configDefaults.exclude, 'tests/cluster/**'],
     setupFiles: ['tests/setup-env.ts'],
     environment: 'node',
     testTimeout: 30_000,

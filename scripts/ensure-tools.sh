@@ -1,12 +1,16 @@
 #!/usr/bin/env bash
 # Installs what is missing on a fresh Debian machine: MariaDB server (and, for tests,
 # Chromium + poppler-utils), then node_modules when missing or older than the lock.
-# Usage: scripts/ensure-tools.sh [--test]
+# Usage: scripts/ensure-tools.sh [--cluster] [--test]   (--cluster: Galera and rsync for the cluster scripts)
 set -euo pipefail
 cd "$(dirname "$0")/.."
 pkgs=()
 command -v mariadbd >/dev/null 2>&1 || [ -x /usr/sbin/mariadbd ] || pkgs+=(mariadb-server)
-if [ "${1:-}" = "--test" ]; then
+if [ "${1:-}" = "--cluster" ] || [ "${PF_PROFILE:-}" = "cluster" ] || [ "${PF_PROFILE:-}" = "cluster-test" ]; then
+  [ -f /usr/lib/galera/libgalera_smm.so ] || pkgs+=(galera-4)
+  command -v rsync >/dev/null 2>&1 || pkgs+=(rsync)
+fi
+if [ "${1:-}" = "--test" ] || [ "${2:-}" = "--test" ]; then
   [ -x /usr/bin/chromium ] || pkgs+=(chromium)
   command -v pdftotext >/dev/null 2>&1 || pkgs+=(poppler-utils)
 fi

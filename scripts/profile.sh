@@ -8,6 +8,15 @@ if [ "$PF_PROFILE" = "load" ]; then
   : "${PF_DB_DIR:=.mariadb-load}" "${PF_DB_PORT:=33308}" "${DB_NAME:=phosforge_load}"
   : "${PORT:=4174}" "${PF_SMTP_PORT:=2527}" "${PF_MAIL_WEB_PORT:=2582}" "${PF_S3_PORT:=4571}"
   : "${AUTH_SECRET:=load-secret-phosforge-at-least-32-characters-long}" "${PF_DB_FAST:=1}"
+elif [ "$PF_PROFILE" = "cluster" ] || [ "$PF_PROFILE" = "cluster-test" ]; then
+  # Three Galera nodes (scripts/cluster/galera.sh), two app instances and the proxy in front of them.
+  if [ "$PF_PROFILE" = "cluster" ]; then k=0; else k=100; fi
+  : "${PF_CLUSTER_DIR:=.cluster$([ $k = 0 ] || echo -test)}" "${PF_CLUSTER_PORT:=$((33411 + k))}" "${PF_CLUSTER_GCOMM_PORT:=$((34561 + k))}"
+  : "${DB_NAME:=phosforge_cluster}" "${PORT:=$((4180 + k / 10))}"
+  : "${PF_APP_A_PORT:=$((4181 + k / 10))}" "${PF_APP_B_PORT:=$((4182 + k / 10))}"
+  : "${PF_SMTP_PORT:=$((2528 + k / 100))}" "${PF_MAIL_WEB_PORT:=$((2584 + k / 100))}" "${PF_S3_PORT:=$((4580 + k / 100))}"
+  : "${AUTH_SECRET:=cluster-secret-phosforge-at-least-32-characters-long}" "${PF_DB_PORT:=$PF_CLUSTER_PORT}" "${PF_DB_DIR:=$PF_CLUSTER_DIR}"
+  export PF_CLUSTER_DIR PF_CLUSTER_PORT PF_CLUSTER_GCOMM_PORT PF_APP_A_PORT PF_APP_B_PORT
 elif [ "$PF_PROFILE" = "test" ]; then
   : "${PF_DB_DIR:=.mariadb-test}" "${PF_DB_PORT:=33307}" "${DB_NAME:=phosforge_test}"
   : "${PORT:=4173}" "${PF_SMTP_PORT:=2526}" "${PF_MAIL_WEB_PORT:=2581}" "${PF_S3_PORT:=4570}"

@@ -13,8 +13,9 @@ const contexts: APIRequestContext[] = [];
 const OWN_PORT = Number(process.env.PORT ?? 4173);
 const SECOND_PORT = Number(process.env.PF_SECOND_PORT ?? (OWN_PORT === 4173 ? 4178 : OWN_PORT + 1000));
 
+// Under `npm run test:cluster` the second instance talks to another Galera node (PF_SECOND_DB_PORT).
 test.beforeAll(async () => {
-  second = await startApp(SECOND_PORT);
+  second = await startApp(SECOND_PORT, process.env.PF_SECOND_DB_PORT ? { DB_PORT: process.env.PF_SECOND_DB_PORT } : {});
 });
 
 test.afterAll(async () => {

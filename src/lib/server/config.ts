@@ -23,6 +23,8 @@ const envSchema = z.object({
   S3_ACCESS_KEY_ID: z.string().default('S3RVER'),
   S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
   S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('true'),
+  /** 1 on a Galera cluster: each session waits for the node to apply every earlier commit before it reads (wsrep_sync_wait). */
+  DB_CAUSAL_READS: z.enum(['0', '1'], 'DB_CAUSAL_READS must be 0 or 1').default('0'),
   DB_POOL_MAX: z.coerce.number().int().min(2, 'DB_POOL_MAX must be at least 2').max(500, 'DB_POOL_MAX must be at most 500').default(20),
   PF_SOLVE_WORKERS: z.preprocess(
     (v) => (v === '' ? undefined : v),
@@ -54,6 +56,8 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env) {
     priceCurrency: env.PRICE_CURRENCY,
     db: connectionSettings(source),
     dbPoolMax: env.DB_POOL_MAX,
+    /** Galera causal reads: a request never reads older data than a write it follows on another node. */
+    dbCausalReads: env.DB_CAUSAL_READS === '1',
     /** Solver worker threads per instance; null = one per core (at most 4). */
     solveWorkers: env.PF_SOLVE_WORKERS ?? null,
     /** The bundled solver worker (built by `npm run build`). */
