@@ -4,7 +4,15 @@
  * §8.1) and which ANSI C78.377-2017 Table 1 bin holds it.
  * Ra and R9 are not meaningful when DC ≥ 5.4e-3 (CIE 13.3-1995 §5.3): such floors fail.
  */
-import { colourDistance, FLOOR_RULES, withinTolerance, type Floors, type ResolvedTarget, type Tolerance } from '../aim/index';
+import {
+  colourDistance,
+  FLOOR_RULES,
+  withinTolerance,
+  type FloorMetric,
+  type Floors,
+  type ResolvedTarget,
+  type Tolerance
+} from '../aim/index';
 import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
 import type { SpectrumEvaluation } from '../spectral/types';
 import { cctMeaningful } from '../spectral/meaningful';
@@ -22,8 +30,17 @@ export interface FloorCheck {
   note: string | null;
 }
 
-function metricValue(e: SpectrumEvaluation, metric: 'ra' | 'r9' | 'rf' | 'rg' | 'ler'): number | null {
-  const v = metric === 'ra' ? e.cri.ra : metric === 'r9' ? e.cri.ri[8] : metric === 'rf' ? e.tm30.rf : metric === 'rg' ? e.tm30.rg : e.ler;
+const METRIC_OF: Record<FloorMetric, (e: SpectrumEvaluation) => number> = {
+  ra: (e) => e.cri.ra,
+  r9: (e) => e.cri.ri[8],
+  rf: (e) => e.tm30.rf,
+  rg: (e) => e.tm30.rg,
+  ler: (e) => e.ler,
+  melDer: (e) => e.alphaOpic.der.melanopic
+};
+
+function metricValue(e: SpectrumEvaluation, metric: FloorMetric): number | null {
+  const v = METRIC_OF[metric](e);
   return Number.isFinite(v) ? v : null;
 }
 

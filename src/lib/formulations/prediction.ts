@@ -49,7 +49,16 @@ const round = (v: number, digits: number) => Number(v.toFixed(digits));
 /** Floors the prediction misses; rendering floors count as missed when CIE 13.3 is not meaningful (DC ≥ 5.4e-3). */
 function missedFloors(
   content: RevisionContent,
-  m: { ra: number | null; r9: number | null; rf: number | null; rg: number | null; rfh1: number | null; rcsh1: number | null; ler: number }
+  m: {
+    ra: number | null;
+    r9: number | null;
+    rf: number | null;
+    rg: number | null;
+    rfh1: number | null;
+    rcsh1: number | null;
+    ler: number;
+    melDer: number;
+  }
 ): string[] {
   const f = content.floors;
   const renderingFloor = [f.raMin, f.r9Min, f.rfMin, f.rgMin, f.rgMax, f.intent].some((v) => v !== undefined);
@@ -98,7 +107,8 @@ export function predictRevision(content: RevisionContent, components: BlendCompo
       rg,
       rfh1: rendering ? finite(e.tm30.bins[0]?.rf ?? NaN) : null,
       rcsh1: rendering ? finite(e.tm30.bins[0]?.rcs ?? NaN) : null,
-      ler: e.ler
+      ler: e.ler,
+      melDer: e.alphaOpic.der.melanopic
     }),
     intents: rendering ? (designIntents(e.tm30)?.best ?? null) : null,
     spd: {
