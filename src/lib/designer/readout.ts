@@ -28,6 +28,8 @@ export interface FloorCheck {
   pass: boolean;
   /** Why the value is missing, when it is. */
   note: string | null;
+  /** Decimals to show the value with. */
+  digits: number;
 }
 
 const METRIC_OF: Record<FloorMetric, (e: SpectrumEvaluation) => number> = {
@@ -59,7 +61,7 @@ export function floorChecks(floors: Floors, e: SpectrumEvaluation): FloorCheck[]
         : renderingMetric
           ? 'not defined: too far from the Planckian locus (CIE 13.3 §5.3)'
           : 'not defined for this spectrum';
-    return { key: r.key, label: r.label, sense: r.sense > 0 ? '≥' : '≤', limit, value, pass, note };
+    return { key: r.key, label: r.label, sense: r.sense > 0 ? '≥' : '≤', limit, value, pass, note, digits: r.digits ?? 1 };
   });
 }
 

@@ -9,6 +9,7 @@ import { mix } from '../blend/mix';
 import { cctMeaningful } from '../spectral/meaningful';
 import { colourDistance, resolveTarget, violatedFloors, withinTolerance } from '../aim/index';
 import type { BlendComponents } from '../blend/types';
+import type { AlphaOpicResult } from '../spectral/types';
 import { findAnsiBin } from '../spectral/ansi/c78377';
 import { designIntents, type DesignIntentReport } from '../spectral/tm30/design-intents';
 import { fractionsWithLeak, type RevisionContent } from '../recipe';
@@ -29,6 +30,8 @@ export interface RevisionPrediction {
   rf: number | null;
   rg: number | null;
   lerLmPerW: number;
+  /** α-opic efficacies, DERs and melanopic EDI per 1,000 lx (CIE S 026/E:2018); absent on older revisions. */
+  alphaOpic?: AlphaOpicResult;
   peakNm: number;
   ansiBin: number | null;
   target: { x: number; y: number; cct: number; duv: number; label: string };
@@ -94,6 +97,7 @@ export function predictRevision(content: RevisionContent, components: BlendCompo
     rf,
     rg,
     lerLmPerW: e.ler,
+    alphaOpic: e.alphaOpic,
     peakNm: e.peakNm,
     ansiBin: findAnsiBin(e.x, e.y)?.nominalCct ?? null,
     target: { x: target.x, y: target.y, cct: target.cct, duv: target.duv, label: target.label },

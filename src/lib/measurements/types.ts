@@ -83,7 +83,8 @@ export interface Stat {
   max: number;
 }
 
-export const SUMMARY_QUANTITIES = ['x', 'y', 'cct', 'duv', 'ra', 'r9', 'rf', 'rg', 'ler'] as const;
+/** Summarised quantities; melDer = melanopic DER (CIE S 026/E:2018), from `PartMetrics.alphaOpic`. */
+export const SUMMARY_QUANTITIES = ['x', 'y', 'cct', 'duv', 'ra', 'r9', 'rf', 'rg', 'ler', 'melDer'] as const;
 export type SummaryQuantity = (typeof SUMMARY_QUANTITIES)[number];
 
 export interface HistogramBin {
