@@ -1,8 +1,8 @@
 /**
  * Batch summary of judged parts: mean and spread (statistics.ts) of x, y, CCT, Duv, Ra, R9,
  * Rf, Rg, LER and melanopic DER (CIE S 026/E:2018; parts measured before it are left out); yield =
- * share of parts passing; the mean chromaticity with its CCT/Duv and its offset from the target; distribution over ANSI C78.377 Table 1 bins; failure counts by reason;
- * histogram data of CCT and Ra.
+ * share of parts passing; the mean chromaticity with its CCT/Duv and its offset from the target;
+ * distribution over ANSI C78.377 Table 1 bins; failure counts by reason; histogram data of CCT and Ra.
  */
 import { colourDistance, type ColourDistance, type ResolvedTarget } from '../aim/index';
 import { histogram } from './histogram';
