@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { judgeBatch, partMetrics, type MeasuredPart } from '../../../src/lib/measurements/index';
+import { judgeBatch, partMetrics, recordMeasurementSummary, type MeasuredPart } from '../../../src/lib/measurements/index';
 import { CIE_ILLUMINANT_A } from '../../../src/lib/spectral/data/cie-illuminants';
 import type { AlphaOpicResult } from '../../../src/lib/spectral/types';
 import { metricsAt } from './support';
@@ -35,5 +35,8 @@ describe('melanopic DER of measured parts (CIE S 026/E:2018)', () => {
     expect(s.n).toBe(2);
     expect(s.mean).toBeCloseTo(0.45, 12);
     expect(s.sd).toBeCloseTo(Math.SQRT2 * 0.01, 9);
+    // The batch record prints it to three decimals (hand-worked from the values above)
+    const rows = recordMeasurementSummary(batch.summary, batch.acceptance, '3000 K', null, null).rows;
+    expect(rows.find((r) => r.label === 'Melanopic DER (CIE S 026)')?.value).toBe('0.450 (s 0.014, 0.440–0.460, n 2)');
   });
 });
