@@ -1,31 +1,13 @@
-import { test, expect as baseExpect, type Page } from '@playwright/test';
+import { test, expect as baseExpect } from '@playwright/test';
 import { DEMO, signInThroughForm, testDb } from './support/accounts';
+import { approvedRevisionId } from './support/revisions';
+import { addPhosphor, choosePump } from './support/designer';
 
 // A loaded 2-core machine can take a few seconds for a first page load; the frame-time bar below is what matters.
 const expect = baseExpect.configure({ timeout: 15_000 });
 
 // The blend designer end to end: a formulator builds a 3000 K blend from the demo library, searches,
 // puts a proposal on the desk and files it; the live loop's frame times while a slider is dragged.
-
-async function addPhosphor(page: Page, code: string): Promise<void> {
-  const select = page.getByLabel('Add a phosphor');
-  const value = await select.evaluate(
-    (el: HTMLSelectElement, c) => [...el.options].find((o) => o.text.startsWith(`${c} `))?.value ?? '',
-    code
-  );
-  expect(value, `${code} is in the demo library`).not.toBe('');
-  await select.selectOption(value);
-  await page.getByRole('button', { name: 'Add', exact: true }).click();
-}
-
-async function choosePump(page: Page, code: string): Promise<void> {
-  const select = page.getByLabel('Pump');
-  const value = await select.evaluate(
-    (el: HTMLSelectElement, c) => [...el.options].find((o) => o.text.startsWith(`${c} `))?.value ?? '',
-    code
-  );
-  await select.selectOption(value);
-}
 
 const unique = () => `E2E-${Date.now().toString(36).toUpperCase()}`;
 
@@ -114,23 +96,9 @@ test('a formulator builds a 3000 K blend, searches, puts a proposal on the desk 
   await expect(page.getByRole('heading', { name: `${code} · revision 1` })).toBeVisible();
 });
 
-/** The approved demo revision KH-W30-90 (seeds/03_formulations.ts): B-450 + GL-530 + YL-568 + RD-625. */
-async function warmWhiteRevisionId(): Promise<number> {
-  const knex = testDb();
-  try {
-    const row = await knex('formulation_revisions as r')
-      .join('formulations as f', 'f.id', 'r.formulation_id')
-      .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' })
-      .first('r.id');
-    return Number(row.id);
-  } finally {
-    await knex.destroy();
-  }
-}
-
 test('dragging a share slider re-evaluates every frame; frame times are recorded', async ({ page }) => {
   await signInThroughForm(page, DEMO.formulator);
-  await page.goto(`/designer?from=${await warmWhiteRevisionId()}`);
+  await page.goto(`/designer?from=${await approvedRevisionId()}`);
   await expect(page.getByTestId('opened')).toContainText('KH-W30-90');
   await expect(page.getByTestId('m-cct')).toHaveText(/^\d+ K$/);
   const slider = page.getByLabel('RD-625 share', { exact: true });
@@ -202,7 +170,7 @@ test('dragging a share slider re-evaluates every frame; frame times are recorded
 
 test('leaving with unfiled changes asks first; staying keeps the desk', async ({ page }) => {
   await signInThroughForm(page, DEMO.formulator);
-  await page.goto(`/designer?from=${await warmWhiteRevisionId()}`);
+  await page.goto(`/designer?from=${await approvedRevisionId()}`);
   await expect(page.getByTestId('m-cct')).toHaveText(/^\d+ K$/);
   const slider = page.getByLabel('GL-530 share', { exact: true });
   await slider.focus();

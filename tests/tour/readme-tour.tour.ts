@@ -1,6 +1,7 @@
 import { execFileSync } from 'node:child_process';
 import { test } from '@playwright/test';
 import { DEMO, signInThroughForm, testDb } from '../e2e/support/accounts';
+import { approvedRevisionId } from '../e2e/support/revisions';
 
 // Screenshots for the README's tour, from the seeded demo data: each role's home page, the designer
 // at 1440×900 and the first page of a weigh-out ticket.
@@ -17,20 +18,12 @@ for (const role of ['formulator', 'technician', 'quality'] as const) {
 
 test('designer at 1440×900', async ({ page }) => {
   await signInThroughForm(page, DEMO.formulator);
-  const knex = testDb();
-  let revisionId: number;
-  try {
-    revisionId = (
-      await knex('formulation_revisions as r')
-        .join('formulations as f', 'f.id', 'r.formulation_id')
-        .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' })
-        .first('r.id')
-    ).id;
-  } finally {
-    await knex.destroy();
-  }
-  await page.goto(`/designer?from=${revisionId}`);
+  await page.goto(`/designer?from=${await approvedRevisionId()}`);
   await page.getByTestId('m-cct').filter({ hasText: 'K' }).waitFor();
+  // The proposals for the revision's own aim, beside the readout.
+  await page.getByRole('button', { name: 'Find blends' }).click();
+  await page.getByTestId('solve-status').filter({ hasText: 'Blends found' }).waitFor({ timeout: 30_000 });
+  await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path: 'docs/tour/designer.png' });
 });
 

@@ -79,6 +79,21 @@ export function formatFloorValue(rule: FloorRule, value: number | undefined): st
 /** Within this distance of its limit a floor is reported as binding (index points, lm/W). */
 export const BINDING_MARGIN = 0.5;
 
+/**
+ * The same floors moved `margin` inward (minimums up, maximums down), for a search that must land inside them.
+ * `margin` is in index points; a rule with a shortfall weight moves by margin / weight in its own unit
+ * (0.05 points = 0.0005 melanopic DER).
+ */
+export function floorsInside(floors: Floors, margin: number): Floors {
+  // A design intent has no single limit to move; it is kept as it is.
+  const out: Floors = floors.intent ? { intent: floors.intent } : {};
+  for (const r of FLOOR_RULES) {
+    const limit = floors[r.key];
+    if (limit !== undefined) out[r.key] = limit + (r.sense * margin) / (r.scale ?? 1);
+  }
+  return out;
+}
+
 export function needsTm30(floors: Floors, objective: Objective): boolean {
   return (
     objective === 'maxRf' ||

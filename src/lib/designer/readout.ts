@@ -15,7 +15,7 @@ import {
 } from '../aim/index';
 import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
 import type { SpectrumEvaluation } from '../spectral/types';
-import { cctMeaningful } from '../spectral/meaningful';
+import { cctMeaningful, shownMetrics, type ShownMetrics } from '../spectral/meaningful';
 import { designIntents, type DesignIntentReport, type IntentLevel } from '../spectral/tm30/design-intents';
 
 export interface FloorCheck {
@@ -108,4 +108,9 @@ export function intentStanding(floors: Floors, e: SpectrumEvaluation): IntentSta
       : { level, pass: false, misses: ['TM-30 not meaningful this far from white'] }
     : null;
   return { best: report?.best ?? null, required };
+}
+
+/** The figures of an evaluation that are meaningful to show (CIE 13.3-1995 §5.3 for Ra/R9, ANSI/IES TM-30-20 for Rf/Rg). */
+export function shownFor(e: SpectrumEvaluation): ShownMetrics {
+  return shownMetrics({ cct: e.cct, duv: e.duv, criValid: e.cri.valid, ra: e.cri.ra, r9: e.cri.ri[8], rf: e.tm30.rf, rg: e.tm30.rg });
 }

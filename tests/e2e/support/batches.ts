@@ -46,16 +46,23 @@ export async function completedBatch(): Promise<{ id: number; batchNumber: strin
     const { id, batchNumber } = await created.json();
     await weighMixComplete(tech, knex, id);
     await tech.dispose();
-    // 12 synthetic parts of the revision (invented), red 3 % high with a little scatter.
-    const content = parseRecipe(rev.content_json);
-    const { components } = await loadRevisionComponents(knex, content);
-    const fractions = fractionsWithLeak(content);
-    return {
-      id,
-      batchNumber,
-      csv: syntheticPartsCsv(components, fractions, { parts: 12, prefix: `${batchNumber}-`, lastPhosphorScale: 1.03, scatter: 0.01 })
-    };
+    // Red 3 % high with a little scatter.
+    return { id, batchNumber, csv: await revisionPartsCsv(knex, rev.id, batchNumber, 1.03) };
   } finally {
     await knex.destroy();
   }
+}
+
+/** A measurement file of 12 synthetic parts of a revision (invented), the last phosphor scaled, 1 % scatter. */
+export async function revisionPartsCsv(
+  knex: ReturnType<typeof testDb>,
+  revisionId: number,
+  batchNumber: string,
+  lastPhosphorScale = 1
+): Promise<string> {
+  const rev = (await knex('formulation_revisions').where({ id: revisionId }).first('content_json'))!;
+  const content = parseRecipe(rev.content_json);
+  const { components } = await loadRevisionComponents(knex, content);
+  const fractions = fractionsWithLeak(content);
+  return syntheticPartsCsv(components, fractions, { parts: 12, prefix: `${batchNumber}-`, lastPhosphorScale, scatter: 0.01 });
 }

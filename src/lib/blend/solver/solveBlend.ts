@@ -28,7 +28,7 @@ import { type CandidateContext, NO_RECIPE, type SolveCandidate, buildCandidate }
 import { type Tolerance, colourDistance, withinTolerance } from '../../aim/distance';
 import { colourPlane } from './colourPlane';
 import { type Point, convexHull, nearestInHull } from './convexHull';
-import { type Floors, type Objective, FLOOR_RULES, formatFloorValue } from '../../aim/floors';
+import { type Floors, type Objective, FLOOR_RULES, floorsInside, formatFloorValue } from '../../aim/floors';
 import { makeLoopEvaluator, type LoopPoint } from './loopMetrics';
 import { type Target, resolveTarget } from '../../aim/target';
 import { distance, meritOf, searchPolytope } from './searchPolytope';
@@ -62,6 +62,13 @@ export interface SolveResult {
 }
 
 const CANDIDATE_SEPARATION = 0.01;
+/**
+ * The search aims this far inside every floor (index points, lm/W): a recipe is filed with optical
+ * fractions rounded to 4 decimals, which moves R9 of a warm white by about 0.002–0.01, so a proposal
+ * found exactly on a floor (R9 50.001) would be filed just under it (49.999). Feasibility is still
+ * judged against the floors as given.
+ */
+export const FLOOR_SEARCH_MARGIN = 0.05;
 const fmt = (v: number, d = 4) => v.toFixed(d);
 
 export function solveBlend(problem: SolveProblem): SolveResult {
@@ -81,12 +88,13 @@ export function solveBlend(problem: SolveProblem): SolveResult {
     basis.components.map((c) => c.xyz),
     [sx, sy]
   );
-  const loop = makeLoopEvaluator(basis, floors, problem.objective, problem.loading);
+  const searchFloors = floorsInside(floors, FLOOR_SEARCH_MARGIN);
+  const loop = makeLoopEvaluator(basis, searchFloors, problem.objective, problem.loading);
   const search =
     near.distance > 0
       ? { samples: plane.vertices.map((w) => loop.evaluate(w)), optima: [] as LoopPoint[] }
-      : searchPolytope(plane, loop.evaluate, { floors, objective: problem.objective, starts: maxCandidates + 2 });
-  const merit = (p: LoopPoint) => meritOf(p, floors, problem.objective);
+      : searchPolytope(plane, loop.evaluate, { floors: searchFloors, objective: problem.objective, starts: maxCandidates + 2 });
+  const merit = (p: LoopPoint) => meritOf(p, searchFloors, problem.objective);
   const pool = [...search.optima.sort((a, b) => merit(a) - merit(b)), ...search.samples.sort((a, b) => merit(a) - merit(b))];
   const model = spectrumModelOf(basis, problem.loading);
   const realised = model.kind === 'loadingWithReabsorption';
@@ -115,7 +123,7 @@ export function solveBlend(problem: SolveProblem): SolveResult {
   let extraEvaluations = 0;
   if (realised) {
     const candidateMerit = (c: SolveCandidate) =>
-      meritOf({ fractions: c.opticalFractions, ...loopMetricsOf(c.evaluation, c.costPer1000Lm) }, floors, problem.objective);
+      meritOf({ fractions: c.opticalFractions, ...loopMetricsOf(c.evaluation, c.costPer1000Lm) }, searchFloors, problem.objective);
     const byMerit = (list: SolveCandidate[]) =>
       list.filter((c) => c.concentrationsWtPct !== null).sort((a, b) => candidateMerit(a) - candidateMerit(b));
     let weighable = byMerit(candidates);

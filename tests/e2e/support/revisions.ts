@@ -1,0 +1,17 @@
+/** Looks up seeded demo revisions for end-to-end tests and the tour. */
+import { testDb } from './accounts';
+
+/** The id of a formulation's approved revision, e.g. KH-W30-90 (seeds/03_formulations.ts: B-450 + GL-530 + YL-568 + RD-625). */
+export async function approvedRevisionId(code = 'KH-W30-90'): Promise<number> {
+  const knex = testDb();
+  try {
+    const row = await knex('formulation_revisions as r')
+      .join('formulations as f', 'f.id', 'r.formulation_id')
+      .where({ 'f.code': code, 'r.state': 'approved' })
+      .first('r.id');
+    if (!row) throw new Error(`no approved revision of ${code} in the test database`);
+    return Number(row.id);
+  } finally {
+    await knex.destroy();
+  }
+}
