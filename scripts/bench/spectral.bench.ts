@@ -4,9 +4,10 @@
  *   npx tsx scripts/bench/spectral.bench.ts
  * Spectra: 200 synthetic pump + phosphor spectra (fixed seed), evaluated round-robin so caches
  * keyed on a single spectrum cannot help. Prints a table of medians and a final JSON line.
- * Budgets: cct+duv+cri ≤ 20 µs, tm30 ≤ 300 µs, evaluateSpectrum ≤ 400 µs.
+ * Budgets: cct+duv+cri ≤ 20 µs, tm30 ≤ 300 µs, α-opic ≤ 2 µs, evaluateSpectrum ≤ 400 µs.
  */
 import {
+  alphaOpicCieS026,
   criCie133,
   evaluateSpectrum,
   resampleToGrid,
@@ -63,6 +64,9 @@ const results: Record<string, number> = {
   tm30: median((i) => {
     sink += tm30Cie224(grids[i], ccts[i]).rf;
   }),
+  'alpha-opic (CIE S 026)': median((i) => {
+    sink += alphaOpicCieS026(grids[i]).der.melanopic;
+  }),
   'evaluate (fast: no cri, no tm30)': median((i) => {
     sink += evaluateSpectrum(spectra[i], { cri: false, tm30: false }).cct;
   }),
@@ -74,7 +78,7 @@ const results: Record<string, number> = {
   })
 };
 
-const budgets: Record<string, number> = { 'cct+duv+cri': 20, tm30: 300, evaluateSpectrum: 400 };
+const budgets: Record<string, number> = { 'cct+duv+cri': 20, tm30: 300, 'alpha-opic (CIE S 026)': 2, evaluateSpectrum: 400 };
 for (const [name, us] of Object.entries(results)) {
   const budget = budgets[name];
   const verdict = budget === undefined ? '' : us <= budget ? `  (budget ${budget} µs: ok)` : `  (budget ${budget} µs: OVER)`;

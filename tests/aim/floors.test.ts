@@ -4,7 +4,7 @@ import { bindingFloors, needsTm30, objectiveValue, violatedFloors, violation, ty
 // "90 CRI" = Ra ≥ 90 and R9 ≥ 50 [common practice]; TM-30 Rg kept within 92–110 [common practice].
 // Worked by hand: Ra 88.4 is 1.6 short of 90, R9 52 meets 50, Rg 111 is 1 over 110; binding: |88.4 − 87| = 1.4 and
 // |300 − 301| = 1 are beyond 0.5, |52 − 52.4| = 0.4 is within.
-const m: LoopMetrics = { ra: 88.4, r9: 52, ler: 300, rf: 86, rg: 111, costPer1000Lm: 4 };
+const m: LoopMetrics = { ra: 88.4, r9: 52, ler: 300, melDer: 0.5, rf: 86, rg: 111, costPer1000Lm: 4 };
 const floors = { raMin: 90, r9Min: 50, rgMin: 92, rgMax: 110 };
 
 describe('floors of a blend', () => {

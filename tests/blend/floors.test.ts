@@ -69,4 +69,11 @@ describe('floorsInside', () => {
     expect(floorsInside({ raMin: 90, r9Min: 50, rgMax: 104 }, 0.05)).toEqual({ raMin: 90.05, r9Min: 50.05, rgMax: 103.95 });
     expect(floorsInside({}, 0.05)).toEqual({});
   });
+
+  it('moves melanopic DER limits by the margin in DER units (0.05 points = 0.0005 DER)', () => {
+    // Arithmetic on the limits (common practice): shortfalls weigh 100 per unit DER, so 0.05 / 100 = 0.0005.
+    const f = floorsInside({ melDerMin: 0.3, melDerMax: 0.45 }, 0.05);
+    expect(f.melDerMin).toBeCloseTo(0.3005, 12);
+    expect(f.melDerMax).toBeCloseTo(0.4495, 12);
+  });
 });

@@ -28,7 +28,15 @@ function gridBest(comps: BlendComponents, target: Target, floors: Floors, object
         const [u, v] = xyzToUvPrime(...superposeXyz(basis, w));
         if (Math.hypot(u - ut, v - vt) > 0.001) continue;
         const e = evaluateGrid(superposeSpd(basis, w), { tm30: false });
-        const m = { ra: e.cri?.ra ?? NaN, r9: e.cri?.ri[8] ?? NaN, ler: e.ler, rf: null, rg: null, costPer1000Lm: null };
+        const m = {
+          ra: e.cri?.ra ?? NaN,
+          r9: e.cri?.ri[8] ?? NaN,
+          ler: e.ler,
+          melDer: e.alphaOpic.der.melanopic,
+          rf: null,
+          rg: null,
+          costPer1000Lm: null
+        };
         if (violation(floors, m) > 0) continue;
         best = Math.max(best, objectiveValue(objective, m));
       }

@@ -2,10 +2,12 @@
  * Floors (minimum/maximum metric values) and objectives of a blend solve.
  *
  * Metrics: Ra and R9 (CIE 13.3-1995), Rf and Rg (ANSI/IES TM-30-20 = CIE 224:2017 for
- * Rf), LER (lm/W, CIE 15:2004 photometry), all from the spectral core. Typical floor
+ * Rf), LER (lm/W, CIE 15:2004 photometry), melanopic DER (CIE S 026/E:2018, as a floor or a
+ * ceiling), all from the spectral core. Typical floor
  * sets: "90 CRI" = Ra ≥ 90 and R9 ≥ 50; TM-30 P2 = Rf ≥ 75 [from memory], Rg ≥ 92
  * [common practice]. A floor "binds" when the candidate sits within
- * BINDING_MARGIN of it: the optimiser pushed against it.
+ * its margin (BINDING_MARGIN, or the rule's own) of it: the optimiser pushed against it.
+ * Melanopic DER shortfalls count 100 per unit DER (0.01 DER weighs as 1 index point).
  */
 import { intentDefinition, type IntentLevel } from '../spectral/tm30/design-intents';
 
@@ -16,16 +18,21 @@ export interface Floors {
   rgMin?: number;
   rgMax?: number;
   lerMin?: number;
+  /** Melanopic daylight efficacy ratio floor and ceiling (CIE S 026/E:2018, dimensionless). */
+  melDerMin?: number;
+  melDerMax?: number;
   /** A TM-30-20 Annex E design-intent level the blend must meet (../spectral/tm30/design-intents.ts). */
   intent?: IntentLevel;
 }
 
-export type Objective = 'maxLer' | 'maxRa' | 'maxRf' | 'minCost';
+export type Objective = 'maxLer' | 'maxRa' | 'maxRf' | 'minCost' | 'maxMelDer' | 'minMelDer';
 
 export interface LoopMetrics {
   ra: number;
   r9: number;
   ler: number;
+  /** Melanopic DER (CIE S 026/E:2018). */
+  melDer: number;
   rf: number | null;
   rg: number | null;
   /** Local indices of TM-30 hue bin 1 (Rf,h1; Rcs,h1 as a fraction), for the design intents. */
@@ -37,12 +44,21 @@ export interface LoopMetrics {
 /** Floors with a numeric limit (the design intent is judged on its own criteria). */
 type FloorKey = Exclude<keyof Floors, 'intent'>;
 
-interface FloorRule {
+/** The metrics a floor can hold. */
+export type FloorMetric = 'ra' | 'r9' | 'rf' | 'rg' | 'ler' | 'melDer';
+
+export interface FloorRule {
   key: FloorKey;
-  metric: 'ra' | 'r9' | 'rf' | 'rg' | 'ler';
+  metric: FloorMetric;
   sense: 1 | -1;
   label: string;
+  /** Shortfall weight per unit (default 1), binding margin (default BINDING_MARGIN), decimals shown (default 1). */
+  scale?: number;
+  margin?: number;
+  digits?: number;
 }
+
+const DER = { scale: 100, margin: 0.005, digits: 3 };
 
 export const FLOOR_RULES: FloorRule[] = [
   { key: 'raMin', metric: 'ra', sense: 1, label: 'Ra' },
@@ -50,19 +66,30 @@ export const FLOOR_RULES: FloorRule[] = [
   { key: 'rfMin', metric: 'rf', sense: 1, label: 'Rf' },
   { key: 'rgMin', metric: 'rg', sense: 1, label: 'Rg' },
   { key: 'rgMax', metric: 'rg', sense: -1, label: 'Rg' },
-  { key: 'lerMin', metric: 'ler', sense: 1, label: 'LER' }
+  { key: 'lerMin', metric: 'ler', sense: 1, label: 'LER' },
+  { key: 'melDerMin', metric: 'melDer', sense: 1, label: 'Melanopic DER', ...DER },
+  { key: 'melDerMax', metric: 'melDer', sense: -1, label: 'Melanopic DER', ...DER }
 ];
+
+/** A floored metric's value as the solver reports it (rule's decimals). */
+export function formatFloorValue(rule: FloorRule, value: number | undefined): string {
+  return value === undefined ? 'n/a' : value.toFixed(rule.digits ?? 1);
+}
 
 /** Within this distance of its limit a floor is reported as binding (index points, lm/W). */
 export const BINDING_MARGIN = 0.5;
 
-/** The same floors moved `margin` inward (minimums up, the Rg maximum down), for a search that must land inside them. */
+/**
+ * The same floors moved `margin` inward (minimums up, maximums down), for a search that must land inside them.
+ * `margin` is in index points; a rule with a shortfall weight moves by margin / weight in its own unit
+ * (0.05 points = 0.0005 melanopic DER).
+ */
 export function floorsInside(floors: Floors, margin: number): Floors {
   // A design intent has no single limit to move; it is kept as it is.
   const out: Floors = floors.intent ? { intent: floors.intent } : {};
   for (const r of FLOOR_RULES) {
     const limit = floors[r.key];
-    if (limit !== undefined) out[r.key] = limit + r.sense * margin;
+    if (limit !== undefined) out[r.key] = limit + (r.sense * margin) / (r.scale ?? 1);
   }
   return out;
 }
@@ -98,7 +125,7 @@ export function violation(floors: Floors, m: LoopMetrics): number {
     const limit = floors[r.key];
     const value = m[r.metric];
     if (limit === undefined || value === null) continue;
-    v += Math.max(0, r.sense * (limit - value));
+    v += Math.max(0, r.sense * (limit - value)) * (r.scale ?? 1);
   }
   if (floors.intent) v += intentShortfall(floors.intent, m);
   return v;
@@ -109,7 +136,7 @@ export function violatedFloors(floors: Floors, m: LoopMetrics): string[] {
     const limit = floors[r.key];
     const value = m[r.metric];
     return limit !== undefined && value !== null && r.sense * (limit - value) > 0;
-  }).map((r) => `${r.label} ${m[r.metric]?.toFixed(1)} ${r.sense > 0 ? '<' : '>'} ${floors[r.key]}`);
+  }).map((r) => `${r.label} ${formatFloorValue(r, m[r.metric] ?? undefined)} ${r.sense > 0 ? '<' : '>'} ${floors[r.key]}`);
   const intent = floors.intent && intentShortfall(floors.intent, m) > 0 ? [`TM-30 design intent ${floors.intent} not met`] : [];
   return [...rules, ...intent];
 }
@@ -118,7 +145,7 @@ export function bindingFloors(floors: Floors, m: LoopMetrics): FloorKey[] {
   return FLOOR_RULES.filter((r) => {
     const limit = floors[r.key];
     const value = m[r.metric];
-    return limit !== undefined && value !== null && Math.abs(value - limit) <= BINDING_MARGIN;
+    return limit !== undefined && value !== null && Math.abs(value - limit) <= (r.margin ?? BINDING_MARGIN);
   }).map((r) => r.key);
 }
 
@@ -133,5 +160,9 @@ export function objectiveValue(objective: Objective, m: LoopMetrics): number {
       return m.rf ?? -Infinity;
     case 'minCost':
       return m.costPer1000Lm === null ? -Infinity : -m.costPer1000Lm;
+    case 'maxMelDer':
+      return m.melDer;
+    case 'minMelDer':
+      return -m.melDer;
   }
 }

@@ -16,7 +16,10 @@ export {
   objectiveValue,
   type Floors,
   type Objective,
-  type LoopMetrics
+  type LoopMetrics,
+  type FloorMetric,
+  type FloorRule,
+  formatFloorValue
 } from './floors';
 export { targetSchema, toleranceSchema, floorsSchema } from './schema';
 export {

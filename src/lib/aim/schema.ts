@@ -1,7 +1,7 @@
 /**
  * zod schemas of the aim: target (CCT + Duv, x,y or ANSI C78.377 bin), colour tolerance (Δu′v′, Δuv or
- * MacAdam-type steps) and metric floors (Ra, R9, Rf, Rg, LER). Shared by the solve and correction API
- * bodies, the revision content, the designer and quality.
+ * MacAdam-type steps) and metric floors (Ra, R9, Rf, Rg, LER; melanopic DER floor and ceiling). Shared by the
+ * solve and correction API bodies, the revision content, the designer and quality.
  */
 import { z } from 'zod';
 import { INTENT_LEVELS } from '../spectral/tm30/design-intents';
@@ -33,6 +33,12 @@ export const floorsSchema = z
     rgMin: z.number().min(50).max(150).optional(),
     rgMax: z.number().min(50).max(150).optional(),
     lerMin: z.number().min(0).max(683).optional(),
+    melDerMin: z.number().min(0, 'melanopic DER must be 0–3').max(3, 'melanopic DER must be 0–3').optional(),
+    melDerMax: z.number().gt(0, 'melanopic DER ceiling must be above 0').max(3, 'melanopic DER must be 0–3').optional(),
     intent: z.enum(INTENT_LEVELS, 'intent must be a TM-30 Annex E level, P1–P3, V1–V3 or F1–F3').optional()
   })
-  .refine((f) => f.rgMin === undefined || f.rgMax === undefined || f.rgMin <= f.rgMax, 'rgMin must not exceed rgMax');
+  .refine((f) => f.rgMin === undefined || f.rgMax === undefined || f.rgMin <= f.rgMax, 'rgMin must not exceed rgMax')
+  .refine(
+    (f) => f.melDerMin === undefined || f.melDerMax === undefined || f.melDerMin <= f.melDerMax,
+    'melanopic DER floor must not exceed its ceiling'
+  );

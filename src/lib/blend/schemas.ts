@@ -85,7 +85,10 @@ export const solveProblemSchema = z.object({
   target: targetSchema,
   tolerance: toleranceSchema.optional(),
   floors: floorsSchema.optional(),
-  objective: z.enum(['maxLer', 'maxRa', 'maxRf', 'minCost'], 'objective must be maxLer, maxRa, maxRf or minCost'),
+  objective: z.enum(
+    ['maxLer', 'maxRa', 'maxRf', 'minCost', 'maxMelDer', 'minMelDer'],
+    'objective must be maxLer, maxRa, maxRf, minCost, maxMelDer or minMelDer'
+  ),
   maxCandidates: z.number().int().min(1).max(10).optional(),
   loading: loadingParamsSchema.optional(),
   /** The condition the target holds at (null or absent = bench); a hot one solves on the components at it. */

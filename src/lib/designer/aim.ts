@@ -1,6 +1,6 @@
 /**
  * The designer's aim: target colour point (nominal CCT + Duv, x,y, or an ANSI C78.377 bin),
- * tolerance in SDCM steps and floors (Ra, R9, Rf, LER), as edited in the form, turned into
+ * tolerance in SDCM steps and floors (Ra, R9, Rf, LER, melanopic DER floor/ceiling), as edited in the form, turned into
  * the blend model's Target / Tolerance / Floors through the same zod schemas the API uses.
  */
 import {
@@ -24,6 +24,9 @@ export interface AimFloors {
   r9Min: number | null;
   rfMin: number | null;
   lerMin: number | null;
+  /** Melanopic DER floor and ceiling (CIE S 026/E:2018); absent in older saved aims. */
+  melDerMin?: number | null;
+  melDerMax?: number | null;
   /** TM-30-20 Annex E level the blend must meet, or null. */
   intent: IntentLevel | null;
 }
@@ -58,7 +61,9 @@ export const OBJECTIVES: { value: Objective; label: string }[] = [
   { value: 'maxLer', label: 'Highest LER (lm/W)' },
   { value: 'maxRa', label: 'Highest Ra' },
   { value: 'maxRf', label: 'Highest Rf' },
-  { value: 'minCost', label: 'Lowest phosphor cost' }
+  { value: 'minCost', label: 'Lowest phosphor cost' },
+  { value: 'maxMelDer', label: 'Highest melanopic DER' },
+  { value: 'minMelDer', label: 'Lowest melanopic DER' }
 ];
 
 export type AimResult =
@@ -79,6 +84,8 @@ export function floorsOf(f: AimFloors): Floors {
   if (!blank(f.r9Min)) out.r9Min = f.r9Min;
   if (!blank(f.rfMin)) out.rfMin = f.rfMin;
   if (!blank(f.lerMin)) out.lerMin = f.lerMin;
+  if (!blank(f.melDerMin)) out.melDerMin = f.melDerMin;
+  if (!blank(f.melDerMax)) out.melDerMax = f.melDerMax;
   if (f.intent) out.intent = f.intent;
   return out;
 }
@@ -117,6 +124,8 @@ export function aimFrom(target: Target, tolerance: Tolerance, floors: Floors): A
       r9Min: floors.r9Min ?? null,
       rfMin: floors.rfMin ?? null,
       lerMin: floors.lerMin ?? null,
+      melDerMin: floors.melDerMin ?? null,
+      melDerMax: floors.melDerMax ?? null,
       intent: floors.intent ?? null
     }
   };

@@ -4,7 +4,15 @@
  * §8.1) and which ANSI C78.377-2017 Table 1 bin holds it.
  * Ra and R9 are not meaningful when DC ≥ 5.4e-3 (CIE 13.3-1995 §5.3): such floors fail.
  */
-import { colourDistance, FLOOR_RULES, withinTolerance, type Floors, type ResolvedTarget, type Tolerance } from '../aim/index';
+import {
+  colourDistance,
+  FLOOR_RULES,
+  withinTolerance,
+  type FloorMetric,
+  type Floors,
+  type ResolvedTarget,
+  type Tolerance
+} from '../aim/index';
 import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
 import type { SpectrumEvaluation } from '../spectral/types';
 import { cctMeaningful, shownMetrics, type ShownMetrics } from '../spectral/meaningful';
@@ -20,10 +28,21 @@ export interface FloorCheck {
   pass: boolean;
   /** Why the value is missing, when it is. */
   note: string | null;
+  /** Decimals to show the value with. */
+  digits: number;
 }
 
-function metricValue(e: SpectrumEvaluation, metric: 'ra' | 'r9' | 'rf' | 'rg' | 'ler'): number | null {
-  const v = metric === 'ra' ? e.cri.ra : metric === 'r9' ? e.cri.ri[8] : metric === 'rf' ? e.tm30.rf : metric === 'rg' ? e.tm30.rg : e.ler;
+const METRIC_OF: Record<FloorMetric, (e: SpectrumEvaluation) => number> = {
+  ra: (e) => e.cri.ra,
+  r9: (e) => e.cri.ri[8],
+  rf: (e) => e.tm30.rf,
+  rg: (e) => e.tm30.rg,
+  ler: (e) => e.ler,
+  melDer: (e) => e.alphaOpic.der.melanopic
+};
+
+function metricValue(e: SpectrumEvaluation, metric: FloorMetric): number | null {
+  const v = METRIC_OF[metric](e);
   return Number.isFinite(v) ? v : null;
 }
 
@@ -42,7 +61,7 @@ export function floorChecks(floors: Floors, e: SpectrumEvaluation): FloorCheck[]
         : renderingMetric
           ? 'not defined: too far from the Planckian locus (CIE 13.3 §5.3)'
           : 'not defined for this spectrum';
-    return { key: r.key, label: r.label, sense: r.sense > 0 ? '≥' : '≤', limit, value, pass, note };
+    return { key: r.key, label: r.label, sense: r.sense > 0 ? '≥' : '≤', limit, value, pass, note, digits: r.digits ?? 1 };
   });
 }
 

@@ -43,6 +43,8 @@ const LABELS: readonly [RegExp, Label][] = [
   [/^floors\.rgMax$|^rgMax$/, 'Rg upper limit'],
   [/^floors\.intent$|^intent$/, 'TM-30 design intent'],
   [/^floors\.lerMin$|^lerMin$/, 'LER floor'],
+  [/^floors\.melDerMin$|^melDerMin$/, 'Melanopic DER floor'],
+  [/^floors\.melDerMax$|^melDerMax$/, 'Melanopic DER ceiling'],
   [/^packageModelRef(\..*)?$/, 'Package model'],
   [/^name$/, 'Name'],
   [/^code$/, 'Code'],

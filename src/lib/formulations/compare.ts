@@ -111,6 +111,8 @@ export function floorsText(c: RevisionContent): string {
     f.rgMin !== undefined && `Rg ≥ ${f.rgMin}`,
     f.rgMax !== undefined && `Rg ≤ ${f.rgMax}`,
     f.lerMin !== undefined && `LER ≥ ${f.lerMin}`,
+    f.melDerMin !== undefined && `melanopic DER ≥ ${f.melDerMin}`,
+    f.melDerMax !== undefined && `melanopic DER ≤ ${f.melDerMax}`,
     f.intent !== undefined && `TM-30 design intent ${f.intent}`
   ].filter(Boolean);
   return parts.join(', ') || 'none';

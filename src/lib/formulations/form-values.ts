@@ -9,7 +9,7 @@ import { CONTENT_VERSION, type RevisionContent } from '../recipe';
 export const MAX_PHOSPHORS = 5;
 export type FormValues = Record<string, string>;
 
-const FLOOR_KEYS = ['raMin', 'r9Min', 'rfMin', 'rgMin', 'rgMax', 'lerMin'] as const;
+const FLOOR_KEYS = ['raMin', 'r9Min', 'rfMin', 'rgMin', 'rgMax', 'lerMin', 'melDerMin', 'melDerMax'] as const;
 
 const str = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(v));
 

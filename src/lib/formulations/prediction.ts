@@ -9,6 +9,7 @@ import { mix } from '../blend/mix';
 import { cctMeaningful } from '../spectral/meaningful';
 import { colourDistance, resolveTarget, violatedFloors, withinTolerance } from '../aim/index';
 import type { BlendComponents } from '../blend/types';
+import type { AlphaOpicResult } from '../spectral/types';
 import { findAnsiBin } from '../spectral/ansi/c78377';
 import { designIntents, type DesignIntentReport } from '../spectral/tm30/design-intents';
 import { fractionsWithLeak, type RevisionContent } from '../recipe';
@@ -29,6 +30,8 @@ export interface RevisionPrediction {
   rf: number | null;
   rg: number | null;
   lerLmPerW: number;
+  /** α-opic efficacies, DERs and melanopic EDI per 1,000 lx (CIE S 026/E:2018); absent on older revisions. */
+  alphaOpic?: AlphaOpicResult;
   peakNm: number;
   ansiBin: number | null;
   target: { x: number; y: number; cct: number; duv: number; label: string };
@@ -49,7 +52,16 @@ const round = (v: number, digits: number) => Number(v.toFixed(digits));
 /** Floors the prediction misses; rendering floors count as missed when CIE 13.3 is not meaningful (DC ≥ 5.4e-3). */
 function missedFloors(
   content: RevisionContent,
-  m: { ra: number | null; r9: number | null; rf: number | null; rg: number | null; rfh1: number | null; rcsh1: number | null; ler: number }
+  m: {
+    ra: number | null;
+    r9: number | null;
+    rf: number | null;
+    rg: number | null;
+    rfh1: number | null;
+    rcsh1: number | null;
+    ler: number;
+    melDer: number;
+  }
 ): string[] {
   const f = content.floors;
   const renderingFloor = [f.raMin, f.r9Min, f.rfMin, f.rgMin, f.rgMax, f.intent].some((v) => v !== undefined);
@@ -85,6 +97,7 @@ export function predictRevision(content: RevisionContent, components: BlendCompo
     rf,
     rg,
     lerLmPerW: e.ler,
+    alphaOpic: e.alphaOpic,
     peakNm: e.peakNm,
     ansiBin: findAnsiBin(e.x, e.y)?.nominalCct ?? null,
     target: { x: target.x, y: target.y, cct: target.cct, duv: target.duv, label: target.label },
@@ -98,7 +111,8 @@ export function predictRevision(content: RevisionContent, components: BlendCompo
       rg,
       rfh1: rendering ? finite(e.tm30.bins[0]?.rf ?? NaN) : null,
       rcsh1: rendering ? finite(e.tm30.bins[0]?.rcs ?? NaN) : null,
-      ler: e.ler
+      ler: e.ler,
+      melDer: e.alphaOpic.der.melanopic
     }),
     intents: rendering ? (designIntents(e.tm30)?.best ?? null) : null,
     spd: {

@@ -3,12 +3,22 @@
  *  colour  — within the allowed tolerance around the target: MacAdam-type steps, Δu′v′ or Δuv
  *            (the revision's tolerance, or a step ellipse quality chose for the batch);
  *  bin     — optionally inside the target's ANSI C78.377 quadrangle (Table 1 or flexible CCT);
- *  floors  — the revision's floors on Ra, R9 (CIE 13.3), Rf, Rg (CIE 224 / TM-30) and LER.
+ *  floors  — the revision's floors on Ra, R9 (CIE 13.3), Rf, Rg (CIE 224 / TM-30), LER and melanopic DER
+ *            (CIE S 026/E:2018; a part measured before it was computed has none and fails such a floor).
  * A floor on a metric the core could not give (CRI not meaningful far from the locus, TM-30 not
  * finite) fails the part: an unknown value is not evidence of compliance [common practice].
  */
 import { intentMisses } from '../spectral/tm30/design-intents';
-import { colourDistance, FLOOR_RULES, withinTolerance, type ColourDistance, type ResolvedTarget, type Tolerance } from '../aim/index';
+import {
+  colourDistance,
+  FLOOR_RULES,
+  withinTolerance,
+  formatFloorValue,
+  type FloorMetric,
+  type ColourDistance,
+  type ResolvedTarget,
+  type Tolerance
+} from '../aim/index';
 import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
 import type { Acceptance, PartFailure, PartMetrics, PartVerdict } from './types';
 
@@ -26,8 +36,9 @@ export function colourFailure(o: ColourDistance, t: Tolerance): string | null {
   return `Δuv ${o.deltaUv.toFixed(4)} > ${t.value}`;
 }
 
-function metricValue(m: PartMetrics, metric: 'ra' | 'r9' | 'rf' | 'rg' | 'ler'): number | null {
+function metricValue(m: PartMetrics, metric: FloorMetric): number | null {
   if ((metric === 'ra' || metric === 'r9') && !m.criValid) return null;
+  if (metric === 'melDer') return m.alphaOpic?.der.melanopic ?? null;
   return m[metric];
 }
 
@@ -47,7 +58,7 @@ export function floorFailures(m: PartMetrics, floors: Acceptance['floors']): Par
       continue;
     }
     if (r.sense * (limit - value) > 0)
-      out.push({ code: r.key, message: `${r.label} ${value.toFixed(1)} ${r.sense > 0 ? '<' : '>'} ${limit}` });
+      out.push({ code: r.key, message: `${r.label} ${formatFloorValue(r, value)} ${r.sense > 0 ? '<' : '>'} ${limit}` });
   }
   const level = floors.intent;
   if (level) {

@@ -1,7 +1,7 @@
 /**
  * Metrics of one measured part from its spectrum: every quantity of the spectral core
  * (`evaluateSpectrum`: CIE 15 colorimetry, Ohno 2014 CCT/Duv, CIE 13.3 CRI, CIE 224 / TM-30,
- * LER, peak/FWHM/centroid). Non-finite TM-30 values (far from white) become null so the
+ * LER, α-opic metrics of CIE S 026/E:2018, peak/FWHM/centroid). Non-finite TM-30 values (far from white) become null so the
  * result stays JSON-safe. Throws SpectrumInputError for a spectrum the core refuses.
  */
 import { evaluateSpectrum } from '../spectral/evaluate';
@@ -28,6 +28,7 @@ export function partMetrics(spd: Spd): PartMetrics {
     rfh1: finiteOrNull(e.tm30.bins[0]?.rf ?? NaN),
     rcsh1: finiteOrNull(e.tm30.bins[0]?.rcs ?? NaN),
     ler: e.ler,
+    alphaOpic: e.alphaOpic,
     peakNm: e.peakNm,
     fwhmNm: e.fwhmNm,
     centroidNm: e.centroidNm

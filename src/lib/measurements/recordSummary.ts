@@ -57,6 +57,8 @@ export function recordMeasurementSummary(
     { label: 'Ra', value: stat(s.ra, 1) },
     { label: 'R9', value: stat(s.r9, 1) },
     { label: 'LER', value: stat(s.ler, 0, ' lm/W') },
+    // Melanopic DER (CIE S 026/E:2018) only where the parts carry it (older uploads do not).
+    ...(s.melDer ? [{ label: 'Melanopic DER (CIE S 026)', value: stat(s.melDer, 3) }] : []),
     {
       label: 'Mean point to target',
       value: summary.meanOffset

@@ -1,14 +1,22 @@
 /**
  * Batch summary of judged parts: mean and spread (statistics.ts) of x, y, CCT, Duv, Ra, R9,
- * Rf, Rg and LER; yield = share of parts passing; the mean chromaticity with its CCT/Duv and its
- * offset from the target; distribution over ANSI C78.377 Table 1 bins; failure counts by reason;
- * histogram data of CCT and Ra.
+ * Rf, Rg, LER and melanopic DER (CIE S 026/E:2018; parts measured before it are left out); yield =
+ * share of parts passing; the mean chromaticity with its CCT/Duv and its offset from the target;
+ * distribution over ANSI C78.377 Table 1 bins; failure counts by reason; histogram data of CCT and Ra.
  */
 import { colourDistance, type ColourDistance, type ResolvedTarget } from '../aim/index';
 import { histogram } from './histogram';
 import { colourPoint, type ColourPoint } from './prediction';
 import { describe } from './statistics';
-import { SUMMARY_QUANTITIES, type FailureCode, type HistogramBin, type JudgedPart, type Stat, type SummaryQuantity } from './types';
+import {
+  SUMMARY_QUANTITIES,
+  type FailureCode,
+  type HistogramBin,
+  type JudgedPart,
+  type PartMetrics,
+  type Stat,
+  type SummaryQuantity
+} from './types';
 
 export interface BatchSummary {
   parts: number;
@@ -28,8 +36,12 @@ export interface BatchSummary {
   histograms: { cct: HistogramBin[]; ra: HistogramBin[] };
 }
 
+function quantityOf(m: PartMetrics, q: SummaryQuantity): number | null {
+  return q === 'melDer' ? (m.alphaOpic?.der.melanopic ?? null) : m[q];
+}
+
 export function summariseBatch(parts: readonly JudgedPart[], target: ResolvedTarget): BatchSummary {
-  const stats = Object.fromEntries(SUMMARY_QUANTITIES.map((q) => [q, describe(parts.map((p) => p.metrics[q]))])) as Record<
+  const stats = Object.fromEntries(SUMMARY_QUANTITIES.map((q) => [q, describe(parts.map((p) => quantityOf(p.metrics, q)))])) as Record<
     SummaryQuantity,
     Stat | null
   >;

@@ -4,6 +4,7 @@
  * Units: x, y CIE 1931 2°; u′, v′ CIE 1976 UCS; CCT in K; Duv in CIE 1960 uv; LER in lm/W.
  */
 import type { ColourDistance, Floors, Tolerance } from '../aim/index';
+import type { AlphaOpicResult } from '../spectral/types';
 
 /** Everything the spectral core says about one measured part. */
 export interface PartMetrics {
@@ -27,6 +28,8 @@ export interface PartMetrics {
   rfh1?: number | null;
   rcsh1?: number | null;
   ler: number;
+  /** α-opic efficacies, DERs and melanopic EDI per 1,000 lx (CIE S 026/E:2018); absent on older parts. */
+  alphaOpic?: AlphaOpicResult;
   peakNm: number;
   fwhmNm: number;
   centroidNm: number;
@@ -80,7 +83,8 @@ export interface Stat {
   max: number;
 }
 
-export const SUMMARY_QUANTITIES = ['x', 'y', 'cct', 'duv', 'ra', 'r9', 'rf', 'rg', 'ler'] as const;
+/** Summarised quantities; melDer = melanopic DER (CIE S 026/E:2018), from `PartMetrics.alphaOpic`. */
+export const SUMMARY_QUANTITIES = ['x', 'y', 'cct', 'duv', 'ra', 'r9', 'rf', 'rg', 'ler', 'melDer'] as const;
 export type SummaryQuantity = (typeof SUMMARY_QUANTITIES)[number];
 
 export interface HistogramBin {

@@ -2,7 +2,7 @@
  * `evaluateSpectrum`: all metrics of one spectrum (the public entry point of the core).
  * Steps: validate and resample to 360–830 nm at 1 nm (`resample.ts`: linear inside the measured
  * range, zero outside) → XYZ (CIE 1931 2°, Y = 100) and chromaticities → CCT/Duv (Ohno 2014)
- * → CIE 13.3 CRI → CIE 224 / TM-30 → LER → peak, centroid, FWHM.
+ * → CIE 13.3 CRI → CIE 224 / TM-30 → LER → α-opic (CIE S 026) → peak, centroid, FWHM.
  * `evaluateGrid` does the same for a spectrum already on the working grid (solver fast path).
  */
 import { uvToCctOhno2014 } from './cct/ohno2014';
@@ -11,6 +11,7 @@ import { spdToXyz } from './colorimetry/tristimulus';
 import { criCie133 } from './cri/cie13-3';
 import { SpectrumInputError } from './errors';
 import { GRID_LENGTH } from './grid';
+import { alphaOpicCieS026 } from './metrics/alpha-opic';
 import { lerLmPerW } from './metrics/ler';
 import { spectralShape } from './metrics/spectral-shape';
 import { resampleToGrid } from './resample';
@@ -60,6 +61,7 @@ export function evaluateGrid(grid: Float64Array, options: EvaluateOptions = {}):
     cri: options.cri === false ? null : criCie133(grid, cct),
     tm30: options.tm30 === false ? null : tm30Cie224(grid, cct),
     ler: lerLmPerW(grid),
+    alphaOpic: alphaOpicCieS026(grid),
     ...shape
   };
 }

@@ -49,6 +49,7 @@ export { createCam02Ucs, type Jab } from './tm30/cam02ucs';
 
 // Other metrics
 export { lerLmPerW, KM_LM_PER_W } from './metrics/ler';
+export { alphaOpicCieS026, ALPHA_OPIC_D65_MW_PER_LM, ALPHA_OPIC_KEYS, type AlphaOpicKey } from './metrics/alpha-opic';
 export { spectralShape, type SpectralShape } from './metrics/spectral-shape';
 
 // Chromaticity bins

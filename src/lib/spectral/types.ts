@@ -39,6 +39,24 @@ export interface Tm30Result {
   bins: Tm30Bin[];
 }
 
+/** One value per α-opic quantity of CIE S 026/E:2018 (s-cone, m-cone, l-cone, rhodopic, melanopic). */
+export interface AlphaOpicValues {
+  sCone: number;
+  mCone: number;
+  lCone: number;
+  rhodopic: number;
+  melanopic: number;
+}
+
+export interface AlphaOpicResult {
+  /** α-opic efficacy of luminous radiation K_α,v, mW/lm (CIE S 026/E:2018). */
+  efficacyMwPerLm: AlphaOpicValues;
+  /** α-opic daylight (D65) efficacy ratio γ_α,v^D65, dimensionless; 1 for D65. */
+  der: AlphaOpicValues;
+  /** Melanopic equivalent daylight (D65) illuminance of 1,000 lx of this light, lx (= 1000 × melanopic DER). */
+  melanopicEdiPer1000Lx: number;
+}
+
 export interface SpectrumEvaluation {
   XYZ: [number, number, number];
   x: number;
@@ -52,6 +70,8 @@ export interface SpectrumEvaluation {
   cri: CriResult;
   tm30: Tm30Result;
   ler: number;
+  /** Non-visual (ipRGC-influenced) metrics, CIE S 026/E:2018. */
+  alphaOpic: AlphaOpicResult;
   peakNm: number;
   centroidNm: number;
   fwhmNm: number;

@@ -42,6 +42,14 @@ describe('designer aim → target, tolerance, floors', () => {
     expect(a.kind).toBe('ansiBin');
     expect(a.nominalCct).toBe(4000);
     expect(a.toleranceSdcm).toBe(5);
-    expect(a.floors).toEqual({ raMin: 80, r9Min: null, rfMin: null, lerMin: null, intent: null });
+    expect(a.floors).toEqual({ raMin: 80, r9Min: null, rfMin: null, lerMin: null, melDerMin: null, melDerMax: null, intent: null });
+  });
+
+  it('carries a melanopic DER floor and ceiling both ways and refuses a floor above the ceiling', () => {
+    // common practice: what the form shows is what is stored, and contradictory limits are refused
+    const a = aimFrom({ kind: 'cctDuv', cct: 3000, duv: 0 }, { kind: 'sdcm', steps: 3 }, { raMin: 80, melDerMin: 0.3, melDerMax: 0.45 });
+    expect(floorsOf(a.floors)).toEqual({ raMin: 80, melDerMin: 0.3, melDerMax: 0.45 });
+    const r = resolveAim({ ...a, floors: { ...a.floors, melDerMin: 0.6 } });
+    expect(!r.ok && r.errors.floors).toContain('ceiling');
   });
 });

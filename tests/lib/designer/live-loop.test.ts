@@ -51,6 +51,16 @@ describe('live evaluation in the designer', () => {
     expect(standing.steps).toBeGreaterThan(0);
   });
 
+  it('judges a melanopic DER ceiling with three decimals, on the pump alone as well', () => {
+    const e = live.evaluate(shares).evaluation;
+    const [cap] = floorChecks({ melDerMax: 0.1 }, e);
+    // common practice: a blue-pumped warm white sits well above a melanopic DER of 0.1 (CIE S 026: D65 = 1)
+    expect(cap).toMatchObject({ label: 'Melanopic DER', sense: '≤', pass: false, digits: 3 });
+    expect(cap.value).toBeCloseTo(e.alphaOpic.der.melanopic, 12);
+    // CIE S 026 is defined for any spectrum, so unlike Ra it is judged far from white too
+    expect(floorChecks({ melDerMin: 0.1 }, live.evaluate([1, 0, 0, 0]).evaluation)[0].value).not.toBeNull();
+  });
+
   it('fails Ra/R9 floors when CIE 13.3 is not meaningful (pump alone: far from white, CIE 13.3 §5.3)', () => {
     const e = live.evaluate([1, 0, 0, 0]).evaluation;
     const [ra] = floorChecks({ raMin: 80 }, e);

@@ -29,4 +29,13 @@ describe('library spectrum summary', () => {
     expect(s.duv).toBeNull();
     expect(s.x).toBeGreaterThan(0.69); // CIE 1931 spectrum locus at 630 nm: x ≈ 0.708 (CIE 15 table, from memory)
   });
+
+  it('gives the α-opic metrics of the spectrum alone (CIE S 026/E:2018)', () => {
+    const cyan = summariseSpectrum(grid((l) => Math.exp(-(((l - 490) / 20) ** 2))));
+    const red = summariseSpectrum(grid((l) => Math.exp(-(((l - 620) / 20) ** 2))));
+    // CIE S 026/E:2018: s_mel peaks near 490 nm and is near zero at 620 nm, so per lumen cyan far exceeds red
+    expect(cyan.alphaOpic.der.melanopic).toBeGreaterThan(10 * red.alphaOpic.der.melanopic);
+    // CIE S 026/E:2018: melanopic EDI = illuminance × melanopic DER
+    expect(cyan.alphaOpic.melanopicEdiPer1000Lx).toBeCloseTo(1000 * cyan.alphaOpic.der.melanopic, 9);
+  });
 });

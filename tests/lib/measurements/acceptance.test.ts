@@ -43,6 +43,22 @@ describe('pass/fail against the revision floors', () => {
       'Rg not available'
     ]);
   });
+  it('a melanopic DER ceiling or floor fails with three decimals; a part measured without α-opic values fails it', () => {
+    // CIE S 026/E:2018 DER; common practice: an unknown value is not evidence of compliance
+    const der = (melanopic: number) => ({
+      efficacyMwPerLm: { sCone: 0, mCone: 0, lCone: 0, rhodopic: 0, melanopic: melanopic * 1.3262 },
+      der: { sCone: 0, mCone: 0, lCone: 0, rhodopic: 0, melanopic },
+      melanopicEdiPer1000Lx: 1000 * melanopic
+    });
+    const ceiling = { ...base, floors: { melDerMax: 0.45 } };
+    expect(judgePart(metricsAt(t.x, t.y, { alphaOpic: der(0.4612) }), t, ceiling).failures).toEqual([
+      { code: 'melDerMax', message: 'Melanopic DER 0.461 > 0.45' }
+    ]);
+    expect(judgePart(metricsAt(t.x, t.y, { alphaOpic: der(0.44) }), t, ceiling).pass).toBe(true);
+    const floor = { ...base, floors: { melDerMin: 0.5 } };
+    expect(judgePart(metricsAt(t.x, t.y, { alphaOpic: der(0.44) }), t, floor).failures[0].message).toBe('Melanopic DER 0.440 < 0.5');
+    expect(judgePart(metricsAt(t.x, t.y), t, floor).failures[0].message).toBe('Melanopic DER not available');
+  });
   it('a floor that is not set is not checked', () => {
     expect(judgePart(metricsAt(t.x, t.y, { ra: 10 }), t, { ...base, floors: {} }).pass).toBe(true);
   });

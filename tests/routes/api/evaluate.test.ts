@@ -31,6 +31,14 @@ describe('POST /api/v1/evaluate', () => {
     expect(Math.round(body.cri.ra)).toBe(83);
   });
 
+  it('returns the α-opic metrics of CIE S 026 (illuminant A)', async () => {
+    const { body } = await call(POST, jsonEvent({ spd: spdOf(CIE_ILLUMINANT_A, CIE_ILLUMINANT_A.values), options: { tm30: false } }));
+    // Published CIE S 026 worked example: illuminant A at 100 lx has melanopic EDI 49.581 lx (DER 0.4958)
+    expect(body.alphaOpic.der.melanopic).toBeCloseTo(0.4958, 2);
+    expect(body.alphaOpic.melanopicEdiPer1000Lx).toBeCloseTo(1000 * body.alphaOpic.der.melanopic, 9);
+    expect(Object.keys(body.alphaOpic.efficacyMwPerLm)).toEqual(['sCone', 'mCone', 'lCone', 'rhodopic', 'melanopic']);
+  });
+
   it('skips TM-30 when asked', async () => {
     const { body } = await call(POST, jsonEvent({ spd: spdOf(CIE_ILLUMINANT_A, CIE_ILLUMINANT_A.values), options: { tm30: false } }));
     expect(body.tm30).toBeNull();

@@ -26,6 +26,7 @@ export function loopMetricsOf(ev: PartialSpectrumEvaluation, cost: number | null
       ra: ev.cri?.ra ?? NaN,
       r9: ev.cri?.ri[8] ?? NaN,
       ler: ev.ler,
+      melDer: ev.alphaOpic.der.melanopic,
       rf: ev.tm30?.rf ?? null,
       rg: ev.tm30?.rg ?? null,
       rfh1: ev.tm30?.bins[0]?.rf ?? null,

@@ -28,7 +28,7 @@ import { type CandidateContext, NO_RECIPE, type SolveCandidate, buildCandidate }
 import { type Tolerance, colourDistance, withinTolerance } from '../../aim/distance';
 import { colourPlane } from './colourPlane';
 import { type Point, convexHull, nearestInHull } from './convexHull';
-import { type Floors, type Objective, FLOOR_RULES, floorsInside } from '../../aim/floors';
+import { type Floors, type Objective, FLOOR_RULES, floorsInside, formatFloorValue } from '../../aim/floors';
 import { makeLoopEvaluator, type LoopPoint } from './loopMetrics';
 import { type Target, resolveTarget } from '../../aim/target';
 import { distance, meritOf, searchPolytope } from './searchPolytope';
@@ -164,7 +164,7 @@ export function solveBlend(problem: SolveProblem): SolveResult {
   }
   if (!candidates.some((c) => c.feasible)) {
     const parts = FLOOR_RULES.filter((r) => floors[r.key] !== undefined).map(
-      (r) => `${r.label} ${r.sense > 0 ? '≥' : '≤'} ${floors[r.key]} (best ${bestAchievable[r.key]?.toFixed(1) ?? 'n/a'})`
+      (r) => `${r.label} ${r.sense > 0 ? '≥' : '≤'} ${floors[r.key]} (best ${formatFloorValue(r, bestAchievable[r.key])})`
     );
     if (floors.intent) parts.push(`TM-30 design intent ${floors.intent}`);
     return {

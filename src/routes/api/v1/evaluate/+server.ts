@@ -5,7 +5,7 @@ import { evaluateSpectrum } from '$lib/spectral';
 import { apiHandler } from '$lib/server/http/api-handler';
 import type { RequestHandler } from './$types';
 
-/** Spectrum → colorimetry, CCT/Duv, CIE 13.3, TM-30, LER (the spectral core's evaluateSpectrum). */
+/** Spectrum → colorimetry, CCT/Duv, CIE 13.3, TM-30, LER, α-opic (CIE S 026) (the spectral core's evaluateSpectrum). */
 export const POST: RequestHandler = (event) =>
   apiHandler(async () => {
     requireUser(event.locals);
