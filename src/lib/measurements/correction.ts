@@ -16,6 +16,13 @@ import { mix } from '../blend/mix';
 import type { CorrectionRequest } from '../blend/schemas';
 import type { BlendComponents } from '../blend/types';
 import { fractionsWithLeak, loadingOf, type RevisionContent } from '../recipe';
+import { dequenchedFractions, quenchedFractions } from '../blend/thermal/fractions';
+import type { ColdCheckPoint } from '../blend/solver/solveAtCondition';
+import { BENCH_CONDITION, describeCondition } from '../aim/condition';
+import { colourDistance } from '../aim/distance';
+import { resolveTarget } from '../aim/target';
+import { uvToCct } from '../spectral/cct/index';
+import { xyToUv } from '../spectral/colorimetry/chromaticity';
 
 /** Default share of the full correction applied in one trim (0.5–0.8 is usual on lines) [common practice]. */
 export const DEFAULT_STEP_FRACTION = 0.8;
@@ -99,4 +106,68 @@ export function correctFromBatch(
 ): BatchCorrection {
   const response = correctBatch(correctionRequest(content, components, measuredMean, stepFraction));
   return { response, content: correctedContent(content, components, response, `${note} ${trimNote(response)}`) };
+}
+
+export interface ConditionCorrection extends BatchCorrection {
+  /** The bench point the corrected recipe should measure (model plus the observed bias): the new cold check. */
+  coldCheck: ColdCheckPoint;
+}
+
+/**
+ * Correction of a revision aimed at an operating condition from parts measured at the bench: the
+ * bias seen cold (measured − predicted bench point) is carried to the hot point, the correction is
+ * solved on the components at the condition so that the hot prediction plus the bias lands on the
+ * target, and the corrected recipe is handed back as the bench weighs it (loading model: the same
+ * wt %; optical fractions: de-quenched). Same correction method as at the bench (`correctBatch`).
+ * `measuredAt` says whether the mean was measured at the bench or at the revision's condition.
+ */
+export function correctFromBatchAtCondition(
+  content: RevisionContent,
+  components: BlendComponents,
+  hot: { components: BlendComponents; quench: number[] },
+  measuredMean: { x: number; y: number },
+  measuredAt: 'bench' | 'condition',
+  note: string,
+  stepFraction = DEFAULT_STEP_FRACTION
+): ConditionCorrection {
+  const bench = revisionRecipe(content, components);
+  const toHot = (r: Recipe): Recipe =>
+    r.kind === 'optical' ? { kind: 'optical', fractions: quenchedFractions(r.fractions, hot.quench) } : r;
+  const toBench = (r: Recipe): Recipe =>
+    r.kind === 'optical' ? { kind: 'optical', fractions: dequenchedFractions(r.fractions, hot.quench) } : r;
+  const coldModel = mix(components, bench).evaluation;
+  const hotModel = mix(hot.components, toHot(bench)).evaluation;
+  // The bias is taken as the same cold and hot: the measured point is moved by the model's cold-to-hot shift.
+  const measuredHot =
+    measuredAt === 'bench' ? { x: measuredMean.x + hotModel.x - coldModel.x, y: measuredMean.y + hotModel.y - coldModel.y } : measuredMean;
+  const response = correctBatch({
+    components: hot.components,
+    recipe: toHot(bench),
+    measured: { kind: 'xy', points: [measuredHot] },
+    target: content.target,
+    stepFraction
+  });
+  const benchResponse = { ...response, recipe: toBench(response.recipe) };
+  const bias = { x: measuredHot.x - hotModel.x, y: measuredHot.y - hotModel.y };
+  const e = mix(components, benchResponse.recipe).evaluation;
+  const x = e.x + bias.x;
+  const y = e.y + bias.y;
+  const { cct, duv } = uvToCct(...xyToUv(x, y));
+  const coldCheck: ColdCheckPoint = {
+    x,
+    y,
+    cct,
+    duv,
+    ra: e.cri.ra,
+    r9: e.cri.ri[8],
+    steps: colourDistance(x, y, resolveTarget(content.target)).steps,
+    condition: BENCH_CONDITION
+  };
+  const corrected = correctedContent(
+    content,
+    components,
+    benchResponse,
+    `${note} ${trimNote(response)} (at ${describeCondition(content.condition)})`
+  );
+  return { response, content: { ...corrected, coldCheck }, coldCheck };
 }

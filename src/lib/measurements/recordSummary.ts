@@ -8,6 +8,7 @@ import { describeTolerance } from './acceptance';
 import type { PredictionCheck } from './prediction';
 import type { BatchSummary } from './summarise';
 import type { Acceptance, Stat } from './types';
+import type { ConditionCheck } from './condition-groups';
 
 export interface RecordSignature {
   decision: 'released' | 'rejected';
@@ -34,7 +35,9 @@ export function recordMeasurementSummary(
   prediction: PredictionCheck | null,
   signature: RecordSignature | null,
   /** Whose prediction the parts were compared with, e.g. "chip bin B3 (452.5–455 nm peak) of revision 2". */
-  predictionSource: string | null = null
+  predictionSource: string | null = null,
+  /** Measured against predicted for each test condition (bench and hot), when the batch has files of more than one or a hot one. */
+  conditionChecks: ConditionCheck[] = []
 ): RecordMeasurementSummary {
   const s = summary.stats;
   const bins = summary.bins.map((b) => `${b.nominalCct === null ? 'no bin' : `${b.nominalCct} K`}: ${b.count}`).join(', ');
@@ -74,6 +77,18 @@ export function recordMeasurementSummary(
       value: `Δx ${prediction.offset.dx.toFixed(4)}, Δy ${prediction.offset.dy.toFixed(4)}, ${prediction.offset.steps.toFixed(1)} steps`
     });
   }
+  const shownConditions = conditionChecks.length > 1 || conditionChecks.some((c) => !c.label.startsWith('bench'));
+  if (shownConditions)
+    for (const c of conditionChecks) {
+      const mean = c.measured ? `${c.measured.x.toFixed(4)}, ${c.measured.y.toFixed(4)}` : '—';
+      const pred = c.predicted ? `${c.predicted.x.toFixed(4)}, ${c.predicted.y.toFixed(4)}` : '—';
+      rows.push({
+        label: `Measured at ${c.label}`,
+        value:
+          `${c.passed} of ${c.parts} pass; mean ${mean} against predicted ${pred}` +
+          `${c.steps === null ? '' : ` (${c.steps.toFixed(1)} steps)`}; judged against ${c.judgedAgainst}`
+      });
+    }
   if (signature) {
     rows.push(
       { label: 'Disposition', value: signature.decision === 'released' ? 'RELEASED' : 'REJECTED' },

@@ -3,6 +3,7 @@
  * acceptance, the correction request, release/reject with an e-signature, and withdrawing an upload.
  */
 import { z } from 'zod';
+import { isBenchCondition, operatingConditionSchema, type OperatingCondition } from '../aim/condition';
 
 const version = z.coerce.number('version is required (the version you read)').int().positive('version is required (the version you read)');
 
@@ -58,3 +59,37 @@ export const withdrawUploadSchema = z.object({
  * this feature's own message; raise both together for bigger exports.
  */
 export const MAX_MEASUREMENT_FILE_BYTES = Math.floor(2.9 * 1024 * 1024);
+
+/**
+ * The test condition of a measurement file, from form fields or query parameters: no temperature =
+ * the bench (25 °C); otherwise the temperature, which point it is taken at, and the drive current if
+ * stated. Checked by the same rules as a revision's operating condition (../aim/condition.ts).
+ */
+export const testConditionFieldsSchema = z
+  .object({
+    testTemperatureC: z.string().trim().max(20).optional(),
+    testReference: z.enum(['junction', 'solderPoint'], 'the test temperature is taken at the junction or the solder point').optional(),
+    testCurrentMa: z.string().trim().max(20).optional()
+  })
+  .transform((f, ctx): OperatingCondition | null => {
+    const number = (raw: string | undefined, path: string, what: string): number | null => {
+      if (!raw) return null;
+      const v = Number(raw.replace(',', '.'));
+      if (Number.isFinite(v)) return v;
+      ctx.addIssue({ code: 'custom', path: [path], message: `${what} "${raw}" is not a number` });
+      return null;
+    };
+    const t = number(f.testTemperatureC, 'testTemperatureC', 'test temperature');
+    const mA = number(f.testCurrentMa, 'testCurrentMa', 'test current');
+    if (t === null) {
+      if (mA !== null) ctx.addIssue({ code: 'custom', path: ['testTemperatureC'], message: 'give the test temperature with the current' });
+      return null;
+    }
+    const parsed = operatingConditionSchema.safeParse({ reference: f.testReference ?? 'junction', temperatureC: t, driveCurrentMa: mA });
+    if (!parsed.success) {
+      for (const i of parsed.error.issues)
+        ctx.addIssue({ code: 'custom', path: [i.path[0] === 'driveCurrentMa' ? 'testCurrentMa' : 'testTemperatureC'], message: i.message });
+      return null;
+    }
+    return isBenchCondition(parsed.data) ? null : parsed.data;
+  });

@@ -3,6 +3,8 @@
  * database and the quality computations, read by the Svelte components).
  */
 import type { Floors } from '../aim/index';
+import type { OperatingCondition } from '../aim/condition';
+import type { ConditionCheck } from './condition-groups';
 import type { YieldComparison } from './yield-comparison';
 import type { ChromaticityPlotModel } from './plotModel';
 import type { ColourPoint, PredictionCheck } from './prediction';
@@ -41,6 +43,8 @@ export interface UploadView {
   withdrawnAt: string | null;
   withdrawnByName: string | null;
   withdrawReason: string | null;
+  /** The condition the file was measured at; null = the bench (25 °C). */
+  condition: OperatingCondition | null;
 }
 
 export interface PartView {
@@ -51,6 +55,8 @@ export interface PartView {
   verdict: PartVerdict;
   /** Steps from the batch's prediction (its chip bin's predicted point with a recipe matrix); null without one. */
   stepsFromPrediction: number | null;
+  /** The test condition of the part's file, e.g. "bench (25 °C)" or "Tj 85 °C, 350 mA". */
+  conditionLabel: string;
 }
 
 export interface CorrectionView {
@@ -92,4 +98,8 @@ export interface BatchResultsView {
   plot: ChromaticityPlotModel;
   corrections: CorrectionView[];
   disposition: DispositionView | null;
+  /** The condition the summary, plot and yield above describe (the bench when bench parts exist); null = bench. */
+  summaryCondition: string;
+  /** Measured mean against the prediction for each test condition with parts (bench first). */
+  conditionChecks: ConditionCheck[];
 }

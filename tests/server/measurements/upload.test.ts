@@ -111,3 +111,24 @@ describe('uploading the measured spectra of a batch', () => {
     }
   });
 });
+
+describe('the test condition of an upload', () => {
+  it('a file measured hot for a revision aimed at the bench is refused with the reason, and nothing is saved', async () => {
+    const before = [await countRows('measurement_uploads'), await countRows('part_measurements')];
+    const hot = { reference: 'junction' as const, temperatureC: 85, driveCurrentMa: 350 };
+    const e = await refusal(
+      uploadMeasurements(quality, batch.batchId, { ...csvFile(csv.replace(/U\d+-/g, 'HOT-'), 'hot.csv'), condition: hot })
+    );
+    expect(e.status).toBe(422);
+    expect(e.message).toBe('hot.csv was not saved: The revision is aimed at the bench; it has no prediction at Tj 85 °C, 350 mA.');
+    expect([await countRows('measurement_uploads'), await countRows('part_measurements')]).toEqual(before);
+  });
+
+  it('bench files are listed at the bench and compared with the prediction for the bench', async () => {
+    const view = (await batchResults(batch.batchId))!;
+    expect(view.uploads.every((u) => u.condition === null)).toBe(true);
+    expect(view.conditionChecks.map((c) => c.label)).toEqual(['bench (25 °C)']);
+    expect(view.conditionChecks[0].parts).toBe(view.parts.length);
+    expect(view.parts.every((p) => p.conditionLabel === 'bench (25 °C)')).toBe(true);
+  });
+});

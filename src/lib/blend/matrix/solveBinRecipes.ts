@@ -4,6 +4,9 @@
  * leaks a different blue, so the nominal recipe drifts off target bin by bin; each bin's recipe is
  * found by Gauss–Newton on the phosphor amounts (`correctRecipe`: minimum-norm step, Penrose 1955)
  * from the nominal recipe, on the loading model when the recipe is in wt %, else on the optical model.
+ * For a revision aimed at an operating condition each bin is solved on its components at that
+ * condition (pump drift and quenching, ../thermal/hotComponents.ts), and the recipe is handed back as
+ * the bench weighs it (wt % unchanged; optical fractions de-quenched); `predicted` is then the hot point.
  */
 import { prepareBasis } from '../basis';
 import { correctRecipe, type Recipe } from '../correction';
@@ -11,6 +14,9 @@ import { mix } from '../mix';
 import type { BlendComponents } from '../types';
 import { colourDistance, type ColourCentre } from '../../aim/distance';
 import { binPump, type WavelengthBasis } from './binPump';
+import { isBenchCondition, type OperatingCondition } from '../../aim/condition';
+import { requireHotComponents, type ThermalById } from '../thermal/hotComponents';
+import { dequenchedFractions, quenchedFractions } from '../thermal/fractions';
 
 export interface BinInput {
   code: string;
@@ -40,24 +46,31 @@ export function solveBinRecipes(
   nominal: Recipe,
   target: ColourCentre,
   bins: readonly BinInput[],
-  basis: WavelengthBasis
+  basis: WavelengthBasis,
+  at: { thermal: ThermalById; condition: OperatingCondition } | null = null
 ): BinRecipeResult[] {
   return bins.map((bin) => {
     const moved = binPump(components.pump, (bin.fromNm + bin.toNm) / 2, basis);
-    const binComponents = { ...components, pump: moved.pump };
-    const before = mix(binComponents, nominal).evaluation;
+    const benchComponents = { ...components, pump: moved.pump };
+    const hot = at && !isBenchCondition(at.condition) ? requireHotComponents(benchComponents, at.thermal, at.condition) : null;
+    const binComponents = hot ? hot.components : benchComponents;
+    const toHot = (r: Recipe): Recipe =>
+      hot && r.kind === 'optical' ? { kind: 'optical', fractions: quenchedFractions(r.fractions, hot.quench) } : r;
+    const start = toHot(nominal);
+    const before = mix(binComponents, start).evaluation;
     // The model's own point as the "measurement": no bias, a full (undamped in total) step to target.
-    const corrected = correctRecipe(prepareBasis(binComponents), nominal, [{ x: before.x, y: before.y }], target, {
+    const corrected = correctRecipe(prepareBasis(binComponents), start, [{ x: before.x, y: before.y }], target, {
       stepFraction: 1,
       maxIterations: 60,
       maxTrimFactor: 10
     });
     const after = mix(binComponents, corrected.recipe);
     const e = after.evaluation;
+    const handedOver = hot ? dequenchedFractions(after.opticalFractions, hot.quench) : after.opticalFractions;
     return {
       code: bin.code,
       shiftNm: moved.shiftNm,
-      opticalFractions: after.opticalFractions,
+      opticalFractions: handedOver,
       wtPct: corrected.recipe.kind === 'loading' ? corrected.recipe.concentrationsWtPct : null,
       predicted: {
         x: e.x,

@@ -296,6 +296,9 @@ export interface MeasurementUploadRow {
   withdraw_reason: string | null;
   /** IES TM-27 header and distribution fields of the source file (JSON); null for other sources. */
   tm27_json: string | null;
+  test_reference: 'junction' | 'solderPoint' | null;
+  test_temperature_c: number | null; // decimal(5,1), read as a number (decimalNumbers)
+  test_current_ma: number | null; // decimal(8,1), read as a number (decimalNumbers)
 }
 
 export interface PumpBinSetRow {
@@ -441,7 +444,7 @@ declare module 'knex/types/tables' {
     material_spectra: Table<MaterialSpectrumRow, 'min_nm' | 'max_nm'>;
     material_thermal: Table<MaterialThermalRow>;
     materials: Table<MaterialRow, 'peak_nm' | 'fwhm_nm' | 'density_g_cm3' | 'iqe' | 'absorption_reference_nm' | 'cost_per_kg' | 'd50_um'>;
-    measurement_uploads: Table<MeasurementUploadRow>;
+    measurement_uploads: Table<MeasurementUploadRow, 'test_temperature_c' | 'test_current_ma'>;
     part_measurements: Table<PartMeasurementRow>;
     pump_bin_sets: Table<PumpBinSetRow>;
     revision_attachments: Table<RevisionAttachmentRow>;

@@ -14,6 +14,9 @@ import { invalid, unprocessable } from '../../errors/domain-error';
 import { getRevision } from './read';
 import { updateDraft } from './save';
 import type { Caller } from './guard';
+import { isBenchCondition } from '../../aim/condition';
+import { thermalByMaterialIds } from '../library/thermal';
+import { BlendInputError } from '../../blend/errors';
 
 export async function solveRevisionMatrix(caller: Caller, revisionId: number, version: number) {
   const rev = await getRevision(revisionId);
@@ -24,13 +27,23 @@ export async function solveRevisionMatrix(caller: Caller, revisionId: number, ve
     throw unprocessable(`The pump ${content.pump.code} has no chip bins: enter them on its library page, then solve the matrix.`);
   const ids = materialIdsOf(content);
   const components = await loadBlendComponents(ids.pump, ids.phosphors);
-  const results = solveBinRecipes(
-    components,
-    revisionRecipe(content, components),
-    resolveTarget(content.target),
-    bins.set.bins,
-    bins.set.basis
-  );
+  // A revision aimed hot solves every bin at its condition, with the library's thermal data.
+  const condition = content.condition && !isBenchCondition(content.condition) ? content.condition : null;
+  const at = condition ? { condition, thermal: await thermalByMaterialIds([ids.pump, ...ids.phosphors]) } : null;
+  let results;
+  try {
+    results = solveBinRecipes(
+      components,
+      revisionRecipe(content, components),
+      resolveTarget(content.target),
+      bins.set.bins,
+      bins.set.basis,
+      at
+    );
+  } catch (err) {
+    if (err instanceof BlendInputError) throw unprocessable(`The recipe matrix cannot be solved, so nothing was saved: ${err.message}`);
+    throw err;
+  }
   let binRecipes;
   try {
     binRecipes = binRecipesFrom(content, bins.set, results);

@@ -13,6 +13,10 @@ import { correctionDraftMessage } from '../mail/templates/correction-draft';
 import { BlendInputError } from '../../blend/errors';
 import { CorrectionRefusedError, type TrimCap } from '../../blend/correctionLimits';
 import { correctFromBatch } from '../../measurements/index';
+import { correctFromBatchAtCondition } from '../../measurements/correction';
+import { describeCondition, isBenchCondition } from '../../aim/condition';
+import { requireHotComponents } from '../../blend/thermal/hotComponents';
+import { thermalByMaterialIds } from '../library/thermal';
 import { materialIdsOf } from '../../recipe';
 import { unprocessable } from '../../errors/domain-error';
 import { conflict, notFound } from './errors';
@@ -40,7 +44,7 @@ export async function makeCorrectionDraft(
   requireQuality(caller, 'A correction draft');
   const ctx = await loadContext(batchId);
   if (!ctx) throw notFound(`Batch ${batchId}`);
-  const { judged } = await computeResults(ctx);
+  const { judged, view } = await computeResults(ctx);
   const mean = judged.summary.meanPoint;
   const b = ctx.detail.batch;
   if (!mean) throw conflict(`Batch ${b.batchNumber} has no measured parts: a correction needs the measured mean.`);
@@ -54,7 +58,14 @@ export async function makeCorrectionDraft(
     `${offset.steps.toFixed(1)} steps from target.`;
   let corrected;
   try {
-    corrected = correctFromBatch(content, components, mean, note, stepFraction);
+    const condition = content.condition;
+    if (condition && !isBenchCondition(condition)) {
+      // Aimed hot: the correction aims the hot point, from whichever condition the summary's parts were measured at.
+      const thermal = await thermalByMaterialIds([ids.pump, ...ids.phosphors]);
+      const hot = requireHotComponents(components, thermal, condition);
+      const measuredAt = view.summaryCondition === describeCondition(null) ? 'bench' : 'condition';
+      corrected = correctFromBatchAtCondition(content, components, hot, mean, measuredAt, note, stepFraction);
+    } else corrected = correctFromBatch(content, components, mean, note, stepFraction);
   } catch (err) {
     // Refused or uncomputable: nothing is saved and nobody is mailed.
     if (err instanceof CorrectionRefusedError) throw unprocessable(`No correction draft was made: ${err.message}`);

@@ -132,7 +132,8 @@ export async function disposeBatch(caller: Caller, batchId: number, input: Dispo
         signedAtText: `${signedAt.toISOString().slice(0, 19).replace('T', ' ')} UTC`,
         contentSha256: signed.sha256
       },
-      view.predictionSource?.label ?? null
+      view.predictionSource?.label ?? null,
+      view.conditionChecks
     );
     const pdf = await buildBatchRecord(doc, { measurementSummary: summary });
     const recordFileId = await putFile(

@@ -3,6 +3,7 @@
  * dispositions) mapped to the view records the page and API show. Snake_case → camelCase.
  */
 import type { Knex } from 'knex';
+import type { OperatingCondition } from '../../aim/condition';
 import { db } from '../db/index';
 import type { MeasuredPart, PartMetrics } from '../../measurements/types';
 import type { CorrectionView, DispositionView, UploadView } from '../../measurements/view';
@@ -26,13 +27,30 @@ export async function listUploads(batchId: number, k: Q = db()): Promise<UploadV
     createdAt: iso(r.created_at)!,
     withdrawnAt: iso(r.withdrawn_at),
     withdrawnByName: r.withdrawn_by_name ?? null,
-    withdrawReason: r.withdraw_reason ?? null
+    withdrawReason: r.withdraw_reason ?? null,
+    condition: conditionOfUpload(r)
   }));
+}
+
+/** The test condition stored with an upload; null for the bench. */
+export function conditionOfUpload(r: {
+  test_reference?: string | null;
+  test_temperature_c?: number | string | null;
+  test_current_ma?: number | string | null;
+}): OperatingCondition | null {
+  if (r.test_temperature_c === null || r.test_temperature_c === undefined) return null;
+  return {
+    reference: r.test_reference === 'solderPoint' ? 'solderPoint' : 'junction',
+    temperatureC: Number(r.test_temperature_c),
+    driveCurrentMa: r.test_current_ma === null || r.test_current_ma === undefined ? null : Number(r.test_current_ma)
+  };
 }
 
 export interface StoredPart extends MeasuredPart {
   id: number;
   uploadId: number;
+  /** Test condition of the part's upload; null = bench. */
+  condition: OperatingCondition | null;
 }
 
 /** Parts of the batch's uploads that are not withdrawn, in upload and column order. */
@@ -43,8 +61,14 @@ export async function activeParts(batchId: number, k: Q = db()): Promise<StoredP
     .whereNull('m.withdrawn_at')
     .orderBy('p.upload_id')
     .orderBy('p.column_no')
-    .select('p.id', 'p.upload_id', 'p.part_label', 'p.metrics_json');
-  return rows.map((r) => ({ id: r.id, uploadId: r.upload_id, label: r.part_label, metrics: JSON.parse(r.metrics_json) as PartMetrics }));
+    .select('p.id', 'p.upload_id', 'p.part_label', 'p.metrics_json', 'm.test_reference', 'm.test_temperature_c', 'm.test_current_ma');
+  return rows.map((r) => ({
+    id: r.id,
+    uploadId: r.upload_id,
+    label: r.part_label,
+    metrics: JSON.parse(r.metrics_json) as PartMetrics,
+    condition: conditionOfUpload(r)
+  }));
 }
 
 export async function activeLabels(batchId: number, k: Q = db()): Promise<Set<string>> {

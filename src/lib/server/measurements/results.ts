@@ -21,7 +21,8 @@ import {
   type PredictionCheck
 } from '../../measurements/index';
 import type { BatchResultsView } from '../../measurements/view';
-import { judgingBasis } from '../../measurements/test-condition';
+import { judgeByCondition } from '../../measurements/judge-by-condition';
+import { describeCondition } from '../../aim/condition';
 import { conflict } from './errors';
 import * as records from './records';
 
@@ -58,14 +59,17 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
     records.listCorrections(b.id),
     records.getDisposition(b.id)
   ]);
-  // Uploads are bench measurements: a hot-aimed revision's parts are judged against its cold check.
-  const basis = judgingBasis(revision.content, predictedPoint(revision), null);
+  // Each file is judged against the prediction for the condition it was measured at (../../measurements/test-condition.ts):
+  // bench parts of a hot-aimed revision against its cold check, parts at the revision's own condition against its target.
   const chosen = batchAcceptance(revision.content, choice);
-  const acceptance = basis.status === 'ok' && basis.dropBinRule ? { ...chosen, requireTargetBin: false } : chosen;
-  const judged = judgeBatch(parts, basis.status === 'ok' ? basis.target : revision.content.target, acceptance);
+  const { groups: judgedGroups, checks: conditionChecks } = judgeByCondition(revision.content, predictedPoint(revision), parts, chosen);
+  // The summary, plot and yield describe one condition: the bench when bench parts exist, else the first measured.
+  const main = judgedGroups[0] ?? null;
+  const acceptance = main?.acceptance ?? chosen;
+  const judged = main ? main.judged : judgeBatch([], revision.content.target, acceptance);
   const mean = judged.summary.meanPoint;
-  // A hot-aimed revision's bench uploads compare with its cold check; a batch of a chip bin with that bin's prediction.
-  const revisionPoint = basis.status === 'ok' ? basis.predicted : predictedPoint(revision);
+  // A batch of a chip bin compares with that bin's prediction; otherwise with the prediction for the summary's condition.
+  const revisionPoint = main?.basis ? main.basis.predicted : predictedPoint(revision);
   const forBatch = batchPrediction(revision.content, revision.revisionNo, revisionPoint, b.chipBinCode);
   const predicted = forBatch?.point ?? null;
   const prediction: PredictionCheck | null = mean && predicted ? predictedVsMeasured(predicted, mean) : null;
@@ -118,21 +122,26 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
       version: choice?.version ?? 0
     },
     uploads,
-    parts: judged.parts.map((p, i) => ({
-      id: parts[i].id,
-      uploadId: parts[i].uploadId,
-      label: p.label,
-      metrics: p.metrics,
-      verdict: p.verdict,
-      stepsFromPrediction: partSteps?.[i] ?? null
-    })),
+    parts: judgedGroups.flatMap(({ group, judged: jg }, gi) =>
+      jg.parts.map((p, i) => ({
+        id: group.parts[i].id,
+        uploadId: group.parts[i].uploadId,
+        label: p.label,
+        metrics: p.metrics,
+        verdict: p.verdict,
+        stepsFromPrediction: gi === 0 ? (partSteps?.[i] ?? null) : null,
+        conditionLabel: group.label
+      }))
+    ),
     summary: judged.summary,
     prediction,
     yieldCheck,
     predictionSource: forBatch ? { kind: forBatch.source, label: forBatch.label, binCode: forBatch.bin?.code ?? null } : null,
     plot: chromaticityPlotModel(judged, markers),
     corrections,
-    disposition
+    disposition,
+    summaryCondition: main?.group.label ?? describeCondition(null),
+    conditionChecks
   };
   return { view, judged };
 }

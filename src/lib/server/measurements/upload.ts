@@ -23,11 +23,17 @@ import { lineIssue, tooLarge, unprocessable, type DomainError } from '../../erro
 import { conflict, notFound } from './errors';
 import { requireQuality, type Caller } from './caller';
 import * as records from './records';
+import { getBatch } from '../batches/read';
+import { predictedPoint } from './results';
+import { judgingBasis } from '../../measurements/test-condition';
+import type { OperatingCondition } from '../../aim/condition';
 
 export interface MeasurementFile {
   name: string;
   contentType: string;
   body: Buffer;
+  /** The condition the parts were measured at; null or absent = the bench (25 °C). */
+  condition?: OperatingCondition | null;
 }
 
 export type UploadProgress = { phase: 'parsing' | 'saving' } | { phase: 'measuring'; done: number; total: number };
@@ -123,6 +129,9 @@ export async function insertMeasurements(
     wavelengths_json: JSON.stringify(m.wavelengths),
     warnings_json: JSON.stringify(m.warnings),
     tm27_json: m.tm27 ? JSON.stringify(m.tm27) : null,
+    test_reference: file.condition ? file.condition.reference : null,
+    test_temperature_c: file.condition ? file.condition.temperatureC : null,
+    test_current_ma: file.condition ? file.condition.driveCurrentMa : null,
     core_version: QUALITY_CORE_VERSION,
     uploaded_by: uploadedBy
   });
@@ -146,6 +155,17 @@ export async function insertMeasurements(
   return { uploadId, storedFileId };
 }
 
+/**
+ * A file measured at a condition the revision has no prediction for is refused before anything is
+ * read or saved (a bench file of a hot-aimed revision is judged against its cold check).
+ */
+async function checkTestCondition(batchId: number, file: MeasurementFile): Promise<void> {
+  const revision = (await getBatch(batchId))?.revision;
+  if (!revision) return;
+  const basis = judgingBasis(revision.content, predictedPoint(revision), file.condition ?? null);
+  if (basis.status === 'refused') throw unprocessable(`${file.name} was not saved: ${basis.reason}`, [lineIssue(null, basis.reason)]);
+}
+
 /** Refuses early (before reading the file) when the caller or the batch cannot take measurements. */
 export async function precheckUpload(caller: Caller, batchId: number): Promise<void> {
   requireQuality(caller, 'Uploading measurements');
@@ -161,6 +181,7 @@ export async function uploadMeasurements(
   onProgress?: (p: UploadProgress) => void
 ): Promise<UploadResult> {
   await precheckUpload(caller, batchId);
+  await checkTestCondition(batchId, file);
   const m = await measureFile(file, onProgress);
   onProgress?.({ phase: 'saving' });
   return writeTransaction(async (trx) => {

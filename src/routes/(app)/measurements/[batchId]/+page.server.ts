@@ -10,6 +10,7 @@ import { computeResults, loadContext } from '$lib/server/measurements/results';
 import { dispositionRefusal, disposeBatch } from '$lib/server/measurements/disposition';
 import { setAcceptance } from '$lib/server/measurements/acceptance';
 import { uploadMeasurements, withdrawUpload } from '$lib/server/measurements/upload';
+import { testConditionFieldsSchema } from '$lib/measurements/schema';
 import { makeCorrectionDraft } from '$lib/server/measurements/correction';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
@@ -27,14 +28,26 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 export const actions: Actions = {
   upload: async ({ locals, params, request }) => {
     const user = requireUser(locals, mayJudgeBatches);
-    const file = (await readForm(request)).get('file');
+    const form = await readForm(request);
+    const file = form.get('file');
     if (!(file instanceof File) || file.size === 0)
       return actionFailure(400, { uploadError: 'Choose a measurement file first.', uploadIssues: [] });
+    const condition = testConditionFieldsSchema.safeParse({
+      testTemperatureC: String(form.get('testTemperatureC') ?? ''),
+      testReference: String(form.get('testReference') ?? 'junction'),
+      testCurrentMa: String(form.get('testCurrentMa') ?? '')
+    });
+    if (!condition.success)
+      return actionFailure(400, {
+        uploadError: `Test condition: ${condition.error.issues.map((i) => i.message).join('; ')}. Nothing was saved.`,
+        uploadIssues: []
+      });
     try {
       const res = await uploadMeasurements(user, batchId(params.batchId), {
         name: file.name,
         contentType: file.type,
-        body: Buffer.from(await file.arrayBuffer())
+        body: Buffer.from(await file.arrayBuffer()),
+        condition: condition.data
       });
       return { uploaded: { parts: res.parts, warnings: res.warnings } };
     } catch (err) {

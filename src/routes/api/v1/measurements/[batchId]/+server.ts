@@ -1,6 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
-import { finiteJson } from '$lib/server/api/body';
+import { finiteJson, readQuery } from '$lib/server/api/body';
+import { testConditionFieldsSchema } from '$lib/measurements/schema';
 import { ndjsonStream, uploadedFile } from '$lib/server/measurements/api';
 import { batchResults } from '$lib/server/measurements/results';
 import { precheckUpload, uploadMeasurements } from '$lib/server/measurements/upload';
@@ -19,13 +20,17 @@ export const GET: RequestHandler = (event) =>
     return finiteJson(view);
   });
 
-/** Upload a measurement file (multipart `file`, or a text/csv body). `Accept: application/x-ndjson` streams progress. */
+/**
+ * Upload a measurement file (multipart `file`, or a text/csv body). `Accept: application/x-ndjson` streams progress.
+ * Query `testTemperatureC`, `testReference` (junction | solderPoint), `testCurrentMa`: the condition it was measured at (none = bench).
+ */
 export const POST: RequestHandler = (event) =>
   apiHandler(async () => {
     const user = requireUser(event.locals, mayJudgeBatches);
     const batchId = idParam(event.params.batchId, `Batch ${event.params.batchId} was not found.`);
     await precheckUpload(user, batchId);
-    const file = await uploadedFile(event.request);
+    const condition = readQuery(event.url.searchParams, testConditionFieldsSchema);
+    const file = { ...(await uploadedFile(event.request)), condition };
     if (!(event.request.headers.get('accept') ?? '').includes('application/x-ndjson')) {
       return json(await uploadMeasurements(user, batchId, file), { status: 201 });
     }
