@@ -9,6 +9,7 @@ import { floorsSchema, targetSchema, toleranceSchema } from '../aim/schema';
 import { plainText } from '../errors/hidden-characters';
 import { operatingConditionSchema } from '../aim/condition';
 import { materialThermalSchema } from './thermal/schema';
+import { TRADE_OFF_METRICS } from './solver/tradeOffMetric';
 
 export const spdSchema = z
   .object({
@@ -120,7 +121,7 @@ export const tradeOffRequestSchema = z.object({
   components: componentsFor(2),
   target: targetSchema,
   floors: floorsSchema.optional(),
-  metric: z.enum(['ra', 'r9', 'rf'], 'metric must be ra, r9 or rf'),
+  metric: z.enum(TRADE_OFF_METRICS, `metric must be one of ${TRADE_OFF_METRICS.join(', ')}`),
   points: z.number().int().min(2, 'at least 2 points').max(50, 'at most 50 points').optional(),
   loading: loadingParamsSchema.optional()
 });

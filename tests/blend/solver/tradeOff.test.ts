@@ -65,3 +65,27 @@ describe('trade-off front of LER against one rendition metric', () => {
     expect(traceTradeOff({ components: twoGreens, target, metric: 'ra' }).status).toBe('unreachable');
   });
 });
+
+describe('trade-off against the melanopic DER (CIE S 026/E:2018)', () => {
+  // A set whose mixes at 3000 K span a range of melanopic DER (a yellow and an orange beside the green and red).
+  const SPREAD = blue('ph-gl530', 'ph-yl568', 'ph-or600', 'ph-rd650');
+  for (const metric of ['melDerHigh', 'melDerLow'] as const) {
+    it(`${metric}: feasible points, none beaten by another mix tried, LER falling as the DER improves`, () => {
+      const r = traceTradeOff({ components: SPREAD, target, floors: { raMin: 80 }, metric, points: 12 });
+      expect(r.status).toBe('ok');
+      expect(r.front.length).toBeGreaterThanOrEqual(3);
+      const better = (a: number, b: number) => (metric === 'melDerHigh' ? a > b : a < b);
+      for (const p of r.front) {
+        expect(p.candidate.evaluation.alphaOpic.der.melanopic).toBeCloseTo(p.metric, 2);
+        const beaten = r.evaluated.some(
+          (e) => e.feasible && !better(p.metric, e.metric) && e.ler >= p.lerLmPerW && (better(e.metric, p.metric) || e.ler > p.lerLmPerW)
+        );
+        expect(beaten).toBe(false);
+      }
+      for (let i = 1; i < r.front.length; i++) {
+        expect(better(r.front[i].metric, r.front[i - 1].metric)).toBe(true);
+        expect(r.front[i].lerLmPerW).toBeLessThan(r.front[i - 1].lerLmPerW);
+      }
+    });
+  }
+});

@@ -24,7 +24,14 @@ import { TRADE_OFF_METRICS, TRADE_OFF_LABEL, type TradeOffMetric } from './trade
 
 export { TRADE_OFF_METRICS, TRADE_OFF_LABEL, type TradeOffMetric };
 
-const FLOOR_OF: Record<TradeOffMetric, keyof Floors> = { ra: 'raMin', r9: 'r9Min', rf: 'rfMin' };
+/** The value read, whether more is better (+1) or less (−1), and the floor that holds a level of it. */
+const AXIS: Record<TradeOffMetric, { value: 'ra' | 'r9' | 'rf' | 'melDer'; sense: 1 | -1; floor: keyof Floors }> = {
+  ra: { value: 'ra', sense: 1, floor: 'raMin' },
+  r9: { value: 'r9', sense: 1, floor: 'r9Min' },
+  rf: { value: 'rf', sense: 1, floor: 'rfMin' },
+  melDerHigh: { value: 'melDer', sense: 1, floor: 'melDerMin' },
+  melDerLow: { value: 'melDer', sense: -1, floor: 'melDerMax' }
+};
 
 export interface TradeOffProblem {
   components: BlendComponents;
@@ -47,7 +54,7 @@ export interface TradeOffResult {
   status: 'ok' | 'unreachable' | 'noFeasibleMix';
   reason: string | null;
   metric: TradeOffMetric;
-  /** Ascending in the metric, descending in LER. */
+  /** From the most efficient point to the best value of the metric: LER falls along it. */
   front: TradeOffPoint[];
   /** Every mix evaluated (metric, LER, whether it met the floors): the cloud behind the front. */
   evaluated: { metric: number; ler: number; feasible: boolean }[];
@@ -58,8 +65,13 @@ const DEFAULT_POINTS = 20;
 const LEVEL_STARTS = 2;
 
 const metricOf = (m: LoopMetrics, metric: TradeOffMetric): number | null => {
-  const v = m[metric];
-  return v === null || !Number.isFinite(v) ? null : v;
+  const v = m[AXIS[metric].value];
+  return v === null || v === undefined || !Number.isFinite(v) ? null : v;
+};
+/** The metric signed so that larger is better (the Pareto filter and the levels work on this). */
+const scoreOf = (m: LoopMetrics, metric: TradeOffMetric): number | null => {
+  const v = metricOf(m, metric);
+  return v === null ? null : AXIS[metric].sense * v;
 };
 
 /** Indices of the points no other point beats on both axes (larger is better on both). */
@@ -93,7 +105,7 @@ export function traceTradeOff(problem: TradeOffProblem): TradeOffResult {
     basis.components.map((c) => c.xyz),
     [target.x, target.y]
   );
-  const floorKey = FLOOR_OF[problem.metric];
+  const axis = AXIS[problem.metric];
   // TM-30 is computed in the loop only when a floor or objective names it: an Rf axis floors Rf at 0.
   const loopFloors: Floors = problem.metric === 'rf' ? { rfMin: 0, ...floors } : floors;
   const loop = makeLoopEvaluator(basis, loopFloors, 'maxLer', problem.loading);
@@ -106,7 +118,7 @@ export function traceTradeOff(problem: TradeOffProblem): TradeOffResult {
   // Ends of the range: the LER optimum under the floors, and the best value of the metric seen.
   searchPolytope(plane, evaluate, { floors: loopFloors, objective: 'maxLer', starts: LEVEL_STARTS });
   const feasibleValues = () =>
-    seen.filter((p) => violation(floors, p.metrics) === 0 && p.criValid).map((p) => metricOf(p.metrics, problem.metric));
+    seen.filter((p) => violation(floors, p.metrics) === 0 && p.criValid).map((p) => scoreOf(p.metrics, problem.metric));
   const values = feasibleValues().filter((v): v is number => v !== null);
   if (values.length === 0) {
     return {
@@ -121,11 +133,15 @@ export function traceTradeOff(problem: TradeOffProblem): TradeOffResult {
   if (plane.dimension > 0 && hi > lo) {
     for (let k = 1; k < wanted; k++) {
       const level = lo + ((hi - lo) * k) / wanted;
-      searchPolytope(plane, evaluate, { floors: { ...loopFloors, [floorKey]: level }, objective: 'maxLer', starts: LEVEL_STARTS });
+      searchPolytope(plane, evaluate, {
+        floors: { ...loopFloors, [axis.floor]: axis.sense * level },
+        objective: 'maxLer',
+        starts: LEVEL_STARTS
+      });
     }
   }
   const feasible = seen.filter((p) => p.criValid && violation(floors, p.metrics) === 0 && metricOf(p.metrics, problem.metric) !== null);
-  const axes = feasible.map((p) => ({ a: metricOf(p.metrics, problem.metric)!, b: p.metrics.ler }));
+  const axes = feasible.map((p) => ({ a: scoreOf(p.metrics, problem.metric)!, b: p.metrics.ler }));
   const frontIdx = paretoFront(axes).sort((i, j) => axes[i].a - axes[j].a);
   // Evenly spread along the metric: the front point nearest each of `wanted` levels, each once.
   const chosen: number[] = [];
@@ -148,7 +164,7 @@ export function traceTradeOff(problem: TradeOffProblem): TradeOffResult {
     solvedAt: [target.x, target.y]
   };
   const front = chosen.map((i, rank) => ({
-    metric: axes[i].a,
+    metric: axis.sense * axes[i].a,
     lerLmPerW: axes[i].b,
     candidate: { ...buildCandidate(ctx, feasible[i].fractions), rank: rank + 1 }
   }));
