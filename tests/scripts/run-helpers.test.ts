@@ -31,7 +31,7 @@ describe('build staleness', () => {
     const scripts = readdirSync('scripts').filter((f) => f.endsWith('.sh') && f !== 'processes.sh');
     for (const f of scripts) expect(readFileSync(`scripts/${f}`, 'utf8'), f).not.toMatch(/-newer|build\/index\.js/);
     const users = scripts.filter((f) => readFileSync(`scripts/${f}`, 'utf8').includes('build_is_stale'));
-    expect(users.sort()).toEqual(['load.sh', 'start.sh']);
+    expect(users.sort()).toEqual(['cluster.sh', 'load.sh', 'start.sh', 'test-cluster.sh']);
   });
 
   it('lists inputs that exist', () => {
