@@ -46,6 +46,8 @@ export const mayJudgeBatches = rolePolicy(QUALITY);
 export const mayReadAudit = rolePolicy(QUALITY);
 /** Invite people and manage roles. */
 export const mayAdminister = rolePolicy(ADMIN);
+/** Set a revision's variation model for yield forecasts, by hand or fitted to a batch (authors and quality). */
+export const maySetVariationModel = rolePolicy(REVISION_ACTORS);
 /** Roles that may draft a correction revision (authors and quality). */
 export const mayDraftCorrection = rolePolicy(REVISION_ACTORS);
 

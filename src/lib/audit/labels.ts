@@ -66,6 +66,8 @@ export const ACTION_LABELS: Readonly<Record<string, string>> = {
   submit: 'Submitted for review',
   supersede: 'Superseded',
   update: 'Edited',
+  'variation-model': 'Variation model set',
+  'variation-model-fit': 'Variation model fitted to a batch',
   'update-draft': 'Draft edited',
   withdraw: 'Withdrawn'
 };

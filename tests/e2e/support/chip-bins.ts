@@ -20,8 +20,8 @@ export interface MatrixRevision {
   formulationCode: string;
   bins: { code: string; fromNm: number; toNm: number; x: number; y: number }[];
   content: RevisionContent;
-  /** Synthetic parts (invented) of a bin's recipe built on chips at the bin's centre. */
-  partsCsv: (binCode: string, parts: number, prefix: string) => string;
+  /** Synthetic parts (invented) of a bin's recipe built on chips at the bin's centre; each phosphor wobbled by up to ±scatter. */
+  partsCsv: (binCode: string, parts: number, prefix: string, scatter?: number) => string;
 }
 
 const round = (v: number, d: number) => Number(v.toFixed(d));
@@ -87,11 +87,11 @@ export async function approvedMatrixRevision(): Promise<MatrixRevision> {
       created_by: base.created_by
     });
     const bins = binRecipes.map((r) => ({ code: r.bin.code, fromNm: r.bin.fromNm, toNm: r.bin.toNm, x: r.predicted.x, y: r.predicted.y }));
-    const partsCsv = (binCode: string, parts: number, prefix: string) => {
+    const partsCsv = (binCode: string, parts: number, prefix: string, scatter = 0.01) => {
       const r = binRecipes.find((b) => b.bin.code === binCode)!;
       const pump = shiftPump(components.pump, r.bin.fromNm + 1.25 - peakNm);
       const fractions = [r.pumpLeakFraction, ...r.phosphors.map((p) => p.opticalFraction)];
-      return syntheticPartsCsv({ ...components, pump }, fractions, { parts, prefix, scatter: 0.01 });
+      return syntheticPartsCsv({ ...components, pump }, fractions, { parts, prefix, scatter });
     };
     return { revisionId, formulationCode, bins, content, partsCsv };
   } finally {

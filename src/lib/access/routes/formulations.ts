@@ -1,6 +1,6 @@
 /** Routes of the formulations feature (owned by that feature; merged in ../route-table.ts). */
 import { ALL, type RouteTable } from './shared';
-import { mayActOnRevisions, mayApprove, mayAuthorFormulations, mayReadAudit, maySignRevisions } from '../policies';
+import { mayActOnRevisions, mayApprove, mayAuthorFormulations, mayReadAudit, maySetVariationModel, maySignRevisions } from '../policies';
 
 const AUTHORS = mayAuthorFormulations.roles;
 const ACTORS = mayActOnRevisions.roles;
@@ -31,6 +31,10 @@ export const FORMULATIONS_ROUTES: RouteTable = {
   '/api/v1/formulations/[id]/revisions': { sample: '/api/v1/formulations/999999/revisions', methods: { GET: ALL, POST: AUTHORS } },
   '/api/v1/formulations/[id]/revisions/[revisionId]': { sample: API_REV, methods: { GET: ALL, PUT: ACTORS } },
   '/api/v1/formulations/[id]/revisions/[revisionId]/spectrum/tm27': { sample: `${API_REV}/spectrum/tm27`, methods: { GET: ALL } },
+  '/api/v1/formulations/[id]/revisions/[revisionId]/variation-model': {
+    sample: `${API_REV}/variation-model`,
+    methods: { GET: ALL, PUT: maySetVariationModel.roles }
+  },
   '/api/v1/formulations/[id]/revisions/[revisionId]/submit': { sample: `${API_REV}/submit`, methods: { POST: ACTORS } },
   '/api/v1/formulations/[id]/revisions/[revisionId]/review': { sample: `${API_REV}/review`, methods: { POST: maySignRevisions.roles } },
   '/api/v1/formulations/[id]/revisions/[revisionId]/approve': { sample: `${API_REV}/approve`, methods: { POST: mayApprove.roles } },

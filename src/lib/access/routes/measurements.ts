@@ -11,6 +11,7 @@ export const MEASUREMENTS_ROUTES: RouteTable = {
   '/(app)/measurements/[batchId]/files/[fileId]': { sample: `/measurements/${B}/files/${B}`, methods: { GET: ALL } },
   '/api/v1/measurements/[batchId]': { sample: `/api/v1/measurements/${B}`, methods: { GET: ALL, POST: mayJudgeBatches.roles } },
   '/api/v1/measurements/[batchId]/acceptance': { sample: `/api/v1/measurements/${B}/acceptance`, methods: { PUT: mayJudgeBatches.roles } },
+  '/api/v1/measurements/[batchId]/spread-fit': { sample: `/api/v1/measurements/${B}/spread-fit`, methods: { POST: mayJudgeBatches.roles } },
   '/api/v1/measurements/[batchId]/correction': { sample: `/api/v1/measurements/${B}/correction`, methods: { POST: mayJudgeBatches.roles } },
   '/api/v1/measurements/[batchId]/disposition': {
     sample: `/api/v1/measurements/${B}/disposition`,

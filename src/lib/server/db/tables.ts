@@ -414,6 +414,16 @@ export interface YieldPredictionRow {
   computed_at: Date;
 }
 
+export interface RevisionVariationModelRow {
+  revision_id: number;
+  model_json: string;
+  source: string;
+  fitted_batch_id: number | null;
+  version: number;
+  updated_by: number;
+  updated_at: Date;
+}
+
 declare module 'knex/types/tables' {
   interface Tables {
     api_tokens: Table<ApiTokenRow>;
@@ -452,6 +462,7 @@ declare module 'knex/types/tables' {
     sign_in_attempts: Table<SignInAttemptRow, never, 'succeeded'>;
     silicone_systems: Table<SiliconeSystemRow, 'ratio_a' | 'ratio_b' | 'density_g_cm3' | 'refractive_index'>;
     stored_files: Table<StoredFileRow>;
+    revision_variation_models: Table<RevisionVariationModelRow>;
     user_roles: Table<UserRoleRow>;
     users: Table<UserRow, never, 'active'>;
     yield_predictions: Table<YieldPredictionRow>;

@@ -14,10 +14,11 @@ import { BlendInputError } from '../../blend/errors';
 import { CorrectionRefusedError, type TrimCap } from '../../blend/correctionLimits';
 import { correctFromBatch } from '../../measurements/index';
 import { correctFromBatchAtCondition } from '../../measurements/correction';
+import { correctBinFromBatch } from '../../measurements/correction-bin';
 import { describeCondition, isBenchCondition } from '../../aim/condition';
 import { requireHotComponents } from '../../blend/thermal/hotComponents';
 import { thermalByMaterialIds } from '../library/thermal';
-import { materialIdsOf } from '../../recipe';
+import { hasRecipeMatrix, materialIdsOf } from '../../recipe';
 import { unprocessable } from '../../errors/domain-error';
 import { conflict, notFound } from './errors';
 import { requireQuality, type Caller } from './caller';
@@ -32,6 +33,8 @@ export interface CorrectionOutcome {
   predictedSteps: number;
   /** Share of the full correction applied and what capped it. */
   cap: TrimCap;
+  /** The chip bin whose recipe was corrected (a batch of a recipe matrix); null = the nominal recipe. */
+  binCode: string | null;
   measuredMean: { x: number; y: number };
 }
 
@@ -57,19 +60,25 @@ export async function makeCorrectionDraft(
     `measured mean x ${mean.x.toFixed(4)}, y ${mean.y.toFixed(4)}, ` +
     `${offset.steps.toFixed(1)} steps from target.`;
   let corrected;
+  const binCode = b.chipBinCode && hasRecipeMatrix(content) ? b.chipBinCode : null;
   try {
     const condition = content.condition;
-    if (condition && !isBenchCondition(condition)) {
-      // Aimed hot: the correction aims the hot point, from whichever condition the summary's parts were measured at.
-      const thermal = await thermalByMaterialIds([ids.pump, ...ids.phosphors]);
+    const measuredAt: 'bench' | 'condition' = view.summaryCondition === describeCondition(null) ? 'bench' : 'condition';
+    // Aimed hot: the correction aims the hot point, from whichever condition the summary's parts were measured at.
+    const thermal = condition && !isBenchCondition(condition) ? await thermalByMaterialIds([ids.pump, ...ids.phosphors]) : null;
+    if (binCode) {
+      // A batch weighed for a chip bin: its bin's recipe, on the pump at the bin's centre, is what gets corrected.
+      const hot = thermal && condition ? { of: (c: typeof components) => requireHotComponents(c, thermal, condition), measuredAt } : null;
+      corrected = correctBinFromBatch(content, components, binCode, mean, note, stepFraction, hot);
+    } else if (thermal && condition) {
       const hot = requireHotComponents(components, thermal, condition);
-      const measuredAt = view.summaryCondition === describeCondition(null) ? 'bench' : 'condition';
       corrected = correctFromBatchAtCondition(content, components, hot, mean, measuredAt, note, stepFraction);
     } else corrected = correctFromBatch(content, components, mean, note, stepFraction);
   } catch (err) {
     // Refused or uncomputable: nothing is saved and nobody is mailed.
     if (err instanceof CorrectionRefusedError) throw unprocessable(`No correction draft was made: ${err.message}`);
     if (err instanceof BlendInputError) throw unprocessable(`The correction cannot be computed: ${err.message}`);
+    if (err instanceof RangeError) throw unprocessable(`No correction draft was made: ${err.message}`);
     throw err;
   }
   const r = corrected.response;
@@ -94,7 +103,8 @@ export async function makeCorrectionDraft(
         errorBefore: r.errorBefore,
         errorAfter: r.errorAfter,
         converged: r.converged,
-        cap: r.cap
+        cap: r.cap,
+        binCode
       })
     });
     await record(
@@ -109,6 +119,7 @@ export async function makeCorrectionDraft(
           revisionId: d.revisionId,
           revisionNo: d.revisionNo,
           stepFraction,
+          binCode,
           measuredMean: mean,
           predicted: r.predicted
         }
@@ -139,6 +150,7 @@ export async function makeCorrectionDraft(
     predicted: r.predicted,
     predictedSteps: r.errorAfter.steps,
     cap: r.cap,
+    binCode,
     measuredMean: { x: mean.x, y: mean.y }
   };
 }

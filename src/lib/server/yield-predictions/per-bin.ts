@@ -1,13 +1,16 @@
 /**
  * The forecast of a revision with a recipe per chip bin: each bin simulated with its own wt %, its
  * share of the parts (largest remainder, so the counts add up to N) and the pump uniform inside the
- * bin; the clouds pooled into one set of figures. Rendering and the variance breakdown are those of
- * the bin with the largest share (a breakdown mixes poorly across recipes).
+ * bin (the other sources from the revision's variation model); the clouds pooled into one set of
+ * figures. Rendering and the variance breakdown are those of the bin with the largest share (a breakdown mixes poorly across recipes).
  */
 import { loadingOf, type RevisionContent } from '../../recipe';
-import { predictYield, variationModelSchema, yieldFigures, type YieldPredictionInput } from '../../blend/spread';
+import { predictYield, yieldFigures, type VariationModel, type YieldPredictionInput } from '../../blend/spread';
 
-type Shared = Omit<YieldPredictionInput, 'concentrationsWtPct' | 'model'>;
+type Shared = Omit<YieldPredictionInput, 'concentrationsWtPct' | 'model'> & {
+  /** The revision's variation model: every source but the chip wavelength, which is uniform inside each bin. */
+  base: VariationModel;
+};
 
 interface Bin {
   code: string;
@@ -34,7 +37,7 @@ export function poolBinForecasts(content: RevisionContent, bins: readonly Bin[],
     if (counts[k] === 0) return null;
     const wt = loadingOf(content, bin.code);
     if (!wt) throw new RangeError(`bin ${bin.code} has no wt % on the loading model`);
-    const model = variationModelSchema.parse({ pump: { kind: 'bins', bins: [{ ...bin, sharePct: 100 }] } });
+    const model: VariationModel = { ...shared.base, pump: { kind: 'bins', bins: [{ ...bin, sharePct: 100 }] } };
     return predictYield({ ...shared, concentrationsWtPct: wt, model, parts: counts[k], seed: shared.seed + k, breakdown: k === largest });
   });
   const live = runs.filter((r): r is NonNullable<typeof r> => r !== null);

@@ -1,7 +1,7 @@
 import { error } from '@sveltejs/kit';
 import { z } from 'zod';
 import { requireUser } from '$lib/server/auth/require';
-import { mayJudgeBatches } from '$lib/access/policies';
+import { mayJudgeBatches, maySetVariationModel } from '$lib/access/policies';
 import { actionFailure } from '$lib/server/http/action-failure';
 import { idParam } from '$lib/server/http/id-param';
 import { acceptanceSchema, correctionSchema, dispositionSchema, withdrawUploadSchema } from '$lib/measurements/schema';
@@ -12,6 +12,8 @@ import { setAcceptance } from '$lib/server/measurements/acceptance';
 import { uploadMeasurements, withdrawUpload } from '$lib/server/measurements/upload';
 import { testConditionFieldsSchema } from '$lib/measurements/schema';
 import { makeCorrectionDraft } from '$lib/server/measurements/correction';
+import { fitSpreadToBatch } from '$lib/server/measurements/fit-spread';
+import { getRevisionVariationModel } from '$lib/server/yield-predictions/variation-model';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/forms/read-form';
 
@@ -21,8 +23,14 @@ export const load: PageServerLoad = async ({ locals, params }) => {
   const user = requireUser(locals);
   const ctx = await loadContext(batchId(params.batchId));
   if (!ctx) error(404, `Batch ${params.batchId} was not found.`);
-  const { view } = await computeResults(ctx);
-  return { results: view, canAct: canActOnMeasurements(user), dispositionBlocked: await dispositionRefusal(user, ctx) };
+  const [{ view }, model] = await Promise.all([computeResults(ctx), getRevisionVariationModel(ctx.revision.id)]);
+  return {
+    results: view,
+    canAct: canActOnMeasurements(user),
+    dispositionBlocked: await dispositionRefusal(user, ctx),
+    variationModel: { version: model.version, source: model.source, fittedBatch: model.fittedBatch?.batchNumber ?? null },
+    canFitSpread: mayJudgeBatches(user) && maySetVariationModel(user)
+  };
 };
 
 export const actions: Actions = {
@@ -94,6 +102,21 @@ export const actions: Actions = {
       return { corrected: await makeCorrectionDraft(user, batchId(params.batchId), parsed.data.stepFraction, url.origin) };
     } catch (err) {
       return actionFailure(err, (r) => ({ correctionError: r.error }));
+    }
+  },
+  fitSpread: async ({ locals, params, request }) => {
+    const user = requireUser(locals, mayJudgeBatches);
+    requireUser(locals, maySetVariationModel);
+    const read = z.coerce
+      .number()
+      .int()
+      .min(0)
+      .safeParse((await readForm(request)).get('version'));
+    if (!read.success) return actionFailure(400, { fitError: 'version missing: reload the page' });
+    try {
+      return { fitted: await fitSpreadToBatch(user, batchId(params.batchId), read.data) };
+    } catch (err) {
+      return actionFailure(err, (r) => ({ fitError: r.error }));
     }
   },
   dispose: async ({ locals, params, request, url }) => {

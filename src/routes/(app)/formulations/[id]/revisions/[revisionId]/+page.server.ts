@@ -10,9 +10,11 @@ import {
   storedContentVerified
 } from '$lib/server/formulations/read';
 import { contentFromForm, editorOptions } from '$lib/server/formulations/page-support';
-import { mayActOnRevisions, mayAuthorFormulations, mayDesign, maySignRevisions } from '$lib/access/policies';
+import { mayActOnRevisions, mayAuthorFormulations, mayDesign, maySetVariationModel, maySignRevisions } from '$lib/access/policies';
 import { listYieldPredictions } from '$lib/server/yield-predictions/store';
 import { predictRevisionYield } from '$lib/server/yield-predictions/predict';
+import { getRevisionVariationModel, putRevisionVariationModel } from '$lib/server/yield-predictions/variation-model';
+import { variationModelFromForm } from '$lib/blend/spread/model-form';
 import { MAX_PARTS } from '$lib/blend/spread';
 import { actionFailure } from '$lib/server/http/action-failure';
 import { idParam } from '$lib/server/http/id-param';
@@ -73,6 +75,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     ref ? citedPackageModel(ref) : null,
     listYieldPredictions(rev.id)
   ]);
+  const variationModel = await getRevisionVariationModel(rev.id);
   const hazardCautions = await hazardCautionsOf(materialIdsOf(rev.content).phosphors);
   return {
     rev,
@@ -87,6 +90,8 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     silicone,
     latestYield: yields[0] ?? null,
     canPredictYield: mayDesign(user),
+    variationModel,
+    canSetVariationModel: maySetVariationModel(user),
     packageModel: ref ? { id: ref.id, version: ref.version, name: cited?.name ?? null } : null,
     hazardCautions
   };
@@ -104,6 +109,22 @@ export const actions: Actions = {
       return { action: 'predictYield', done: 'Yield forecast computed and kept with the revision.' };
     } catch (err) {
       return actionFailure(err, { action: 'predictYield', values });
+    }
+  },
+  setVariationModel: async ({ locals, params, request }) => {
+    const user = requireUser(locals, maySetVariationModel);
+    const rev = await revisionOf(params);
+    const values = formDataToValues(await readForm(request));
+    const read = z.coerce.number().int().min(0).safeParse(values.version);
+    if (!read.success) return actionFailure(400, { action: 'setVariationModel', values, error: 'version missing: reload the page' });
+    const current = await getRevisionVariationModel(rev.id);
+    const parsed = variationModelFromForm(values, current.model);
+    if (!parsed.ok) return actionFailure(400, { action: 'setVariationModel', values, error: parsed.message, field: parsed.field });
+    try {
+      await putRevisionVariationModel(user, rev.id, { model: parsed.model, version: read.data });
+      return { action: 'setVariationModel', done: 'Variation model saved; the next forecast uses it.' };
+    } catch (err) {
+      return actionFailure(err, { action: 'setVariationModel', values });
     }
   },
   solveBins: async ({ locals, params, request }) => {
