@@ -3,6 +3,8 @@ import { configDefaults, defineConfig } from 'vitest/config';
 
 export default defineConfig({
   plugins: [sveltekit()],
+  // The designer's spread worker is an ES module (new Worker(…, { type: 'module' })).
+  worker: { format: 'es' },
   test: {
     include: ['tests/**/*.test.ts'],
     // The Galera fault suites need the three-node cluster: `npm run test:cluster` (vitest.cluster.config.ts).

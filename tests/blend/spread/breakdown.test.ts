@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { opticalDepthsOf } from '../../../src/lib/blend/loading/beerLambertPhotonBudget';
-import { buildPartModel, spreadBreakdown, variationModelSchema } from '../../../src/lib/blend/spread';
+import { buildPartModel, NO_VARIATION, spreadBreakdown, variationModelSchema } from '../../../src/lib/blend/spread';
 import { PUMP_PEAK_NM, TEST_CONCENTRATIONS, TEST_PATH_MM, testBasis } from './basis';
 
 const basis = testBasis();
@@ -9,13 +9,7 @@ const recipe = { opticalDepths: opticalDepthsOf(basis, TEST_CONCENTRATIONS, TEST
 
 describe('variance breakdown', () => {
   it('gives the whole spread to the only source that varies', () => {
-    const model = variationModelSchema.parse({
-      pump: { kind: 'uniform', halfRangeNm: 0 },
-      weighingTolerancePct: 0,
-      absorptionLotCvPct: 0,
-      peakLotSigmaNm: 0,
-      slurryMassCvPct: 3
-    });
+    const model = { ...NO_VARIATION, slurryMassCvPct: 3 };
     const b = spreadBreakdown(part, recipe, model, 3000, 5);
     expect(b.sources.find((s) => s.source === 'slurryMass')?.share).toBe(1);
     expect(b.sumOverTotal).toBeCloseTo(1, 12);

@@ -3,7 +3,7 @@ import { BLUE_PUMP, demoPhosphor } from '../../../src/lib/blend/demo-components'
 import { prepareBasis } from '../../../src/lib/blend/basis';
 import { beerLambertPhotonBudget } from '../../../src/lib/blend/loading/beerLambertPhotonBudget';
 import { evaluateGrid } from '../../../src/lib/spectral/evaluate';
-import { predictYield, variationModelSchema } from '../../../src/lib/blend/spread';
+import { NO_VARIATION, predictYield, variationModelSchema } from '../../../src/lib/blend/spread';
 
 const basis = prepareBasis({ pump: BLUE_PUMP, phosphors: ['ph-gl530', 'ph-yg555', 'ph-rd625'].map(demoPhosphor) }).loading!;
 const common = {
@@ -21,13 +21,7 @@ const common = {
 
 describe('Ra and R9 on the rendering subsample', () => {
   it('with zero variation every part has the nominal Ra and R9 (CIE 13.3 of the photon-budget spectrum)', () => {
-    const none = variationModelSchema.parse({
-      pump: { kind: 'uniform', halfRangeNm: 0 },
-      slurryMassCvPct: 0,
-      weighingTolerancePct: 0,
-      absorptionLotCvPct: 0,
-      peakLotSigmaNm: 0
-    });
+    const none = NO_VARIATION;
     const p = predictYield({ ...common, model: none, renderingSubsample: 20 });
     const cri = evaluateGrid(beerLambertPhotonBudget(basis, [3, 6, 2], 0.3).spd, { tm30: false }).cri!;
     expect(p.rendering!.parts).toBe(20);

@@ -6,6 +6,7 @@ import { uvToCct } from '../../../src/lib/spectral/cct/index';
 import { xyToUv } from '../../../src/lib/spectral/colorimetry/chromaticity';
 import {
   buildPartModel,
+  NO_VARIATION,
   partXyz,
   predictYield,
   simulateSpread,
@@ -17,13 +18,7 @@ import { PUMP_PEAK_NM, TEST_CONCENTRATIONS, TEST_PATH_MM, testBasis } from './ba
 const basis = testBasis();
 const part = buildPartModel(basis);
 const recipe = { opticalDepths: opticalDepthsOf(basis, TEST_CONCENTRATIONS, TEST_PATH_MM), pumpPeakNm: PUMP_PEAK_NM };
-const NONE: VariationModel = variationModelSchema.parse({
-  pump: { kind: 'uniform', halfRangeNm: 0 },
-  slurryMassCvPct: 0,
-  weighingTolerancePct: 0,
-  absorptionLotCvPct: 0,
-  peakLotSigmaNm: 0
-});
+const NONE: VariationModel = NO_VARIATION;
 
 function nominalXy(): [number, number] {
   const out = new Float64Array(4);

@@ -1,5 +1,5 @@
 /** Production spread: variation model, seeded Monte Carlo through the loading model, yield figures, variance breakdown. */
-export { variationModelSchema, pumpSpreadSchema, DEFAULT_VARIATION_MODEL, SPREAD_SOURCES, onlySource } from './model';
+export { variationModelSchema, pumpSpreadSchema, DEFAULT_VARIATION_MODEL, NO_VARIATION, SPREAD_SOURCES, onlySource } from './model';
 export type { VariationModel, VariationModelInput, PumpSpread, SpreadSource } from './model';
 export { seededRandom, type Random } from './prng';
 export { buildPartModel, partXyz, PEAK_RANGE_NM, type PartModel } from './partColour';

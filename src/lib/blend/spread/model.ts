@@ -46,16 +46,19 @@ export const DEFAULT_VARIATION_MODEL: VariationModel = variationModelSchema.pars
 export const SPREAD_SOURCES = ['pump', 'slurryMass', 'weighing', 'absorptionLot', 'peakLot', 'measurement'] as const;
 export type SpreadSource = (typeof SPREAD_SOURCES)[number];
 
+/** Every source off: each part is the nominal recipe. */
+export const NO_VARIATION: VariationModel = {
+  pump: { kind: 'uniform', halfRangeNm: 0 },
+  slurryMassCvPct: 0,
+  weighingTolerancePct: 0,
+  absorptionLotCvPct: 0,
+  peakLotSigmaNm: 0,
+  measurementSigmaUvPrime: 0
+};
+
 /** A model with only `source` left on (the others set to no variation). */
 export function onlySource(model: VariationModel, source: SpreadSource): VariationModel {
-  const off: VariationModel = {
-    pump: { kind: 'uniform', halfRangeNm: 0 },
-    slurryMassCvPct: 0,
-    weighingTolerancePct: 0,
-    absorptionLotCvPct: 0,
-    peakLotSigmaNm: 0,
-    measurementSigmaUvPrime: 0
-  };
+  const off = NO_VARIATION;
   if (source === 'pump') return { ...off, pump: model.pump };
   if (source === 'slurryMass') return { ...off, slurryMassCvPct: model.slurryMassCvPct };
   if (source === 'weighing') return { ...off, weighingTolerancePct: model.weighingTolerancePct };

@@ -47,6 +47,8 @@ export function uvToCctOhno2014(u: number, v: number): CctDuv {
   ensureFineRows(Math.max(lo - 1, 0), Math.min(hi + 1, n - 1));
   let m = nearestRow(u, v, tu, tv, lo, hi);
   m = Math.min(Math.max(m, 1), n - 2);
+  // Past either end of the table the clamp can step outside the rows searched: fill the three rows read.
+  ensureFineRows(m - 1, m + 1);
 
   const t0 = t[m - 1];
   const t1 = t[m];
