@@ -1,23 +1,12 @@
 import { test, expect } from '@playwright/test';
-import { DEMO, signInThroughForm, signedInContext, testDb } from './support/accounts';
+import { DEMO, signInThroughForm, signedInContext } from './support/accounts';
+import { approvedContent } from './support/revisions';
 import { json } from './support/batches';
 
 // A formulator sees the pump's chip bins in the library, then solves a recipe per chip bin on a
 // draft and sees one row per bin with its predicted point.
 test('chip bins on the pump, then a recipe per bin on a draft revision', async ({ page }) => {
-  const knex = testDb();
-  let content: Record<string, unknown>;
-  let pumpId: number;
-  try {
-    const approved = await knex('formulation_revisions as r')
-      .join('formulations as f', 'f.id', 'r.formulation_id')
-      .where({ 'f.code': 'KH-W30-90', 'r.state': 'approved' })
-      .first('r.content_json');
-    content = JSON.parse(approved.content_json);
-    pumpId = (content.pump as { materialId: number }).materialId;
-  } finally {
-    await knex.destroy();
-  }
+  const { content, pumpId } = await approvedContent();
   const api = await signedInContext(DEMO.formulator);
   const created = await json(api, '/api/v1/formulations', { name: 'E2E chip-bin matrix', content: { ...content, binRecipes: [] } });
   expect(created.status(), await created.text()).toBe(201);

@@ -8,6 +8,7 @@
 import { colourDistance, resolveTarget } from '../../../src/lib/aim/index';
 import { mix } from '../../../src/lib/blend/mix';
 import { shiftPump } from '../../../src/lib/pump-bins/shift';
+import { binPump } from '../../../src/lib/blend/matrix/binPump';
 import { predictRevision, PREDICTION_CORE_VERSION } from '../../../src/lib/formulations/prediction';
 import { parseRecipe, type RevisionContent } from '../../../src/lib/recipe';
 import { loadRevisionComponents } from '../../../src/lib/server/formulations/components';
@@ -94,6 +95,27 @@ export async function approvedMatrixRevision(): Promise<MatrixRevision> {
       return syntheticPartsCsv({ ...components, pump }, fractions, { parts, prefix, scatter });
     };
     return { revisionId, formulationCode, bins, content, partsCsv };
+  } finally {
+    await knex.destroy();
+  }
+}
+
+/**
+ * Synthetic parts (invented) of one chip bin's recipe of a stored revision: the pump moved to the bin's
+ * centre (`binPump`), the bin's optical shares, every phosphor wobbled by up to ±scatter.
+ */
+export async function binPartsCsv(revisionId: number, binCode: string, parts: number, prefix: string, scatter: number): Promise<string> {
+  const knex = testDb();
+  try {
+    const row = await knex('formulation_revisions').where({ id: revisionId }).first('content_json');
+    if (!row) throw new Error(`revision ${revisionId} not found`);
+    const content = parseRecipe(row.content_json);
+    const bin = (content.binRecipes ?? []).find((b) => b.bin.code === binCode);
+    if (!bin) throw new Error(`revision ${revisionId} has no recipe for chip bin ${binCode}`);
+    const { components } = await loadRevisionComponents(knex, content);
+    const pump = binPump(components.pump, (bin.bin.fromNm + bin.bin.toNm) / 2, bin.bin.basis).pump;
+    const fractions = [bin.pumpLeakFraction, ...bin.phosphors.map((p) => p.opticalFraction)];
+    return syntheticPartsCsv({ ...components, pump }, fractions, { parts, prefix, scatter });
   } finally {
     await knex.destroy();
   }
