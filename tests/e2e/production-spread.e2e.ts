@@ -103,6 +103,9 @@ test('chip bins → recipe matrix → variation model → seeded forecast → si
   await ines.getByRole('button', { name: 'Upload and measure' }).click();
   await expect(ines.getByTestId('upload-done')).toContainText('30 parts measured and saved');
   await expect(ines.getByTestId('prediction-source')).toContainText('chip bin B4');
+  // The measured parts over the forecast cloud of their own chip bin (a quarter of 4,000 simulated parts, kept 1 in 2).
+  await expect(ines.getByTestId('forecast-legend')).toContainText('simulated parts of chip bin B4');
+  await expect(ines.locator('[data-shape="forecast"]')).toHaveAttribute('data-points', /^\d+$/);
   const check = ines.getByTestId('yield-check');
   await expect(check).toContainText('Measured inside the tolerance');
   await expect(check).toContainText('Forecast:');

@@ -39,12 +39,18 @@ export interface ChromaticityPlotModel {
   markers: PlotMarker[];
   /** Points the initial view must show (target, tolerance, parts, markers); the bin may run past the edges. */
   focus: Pair[];
+  /** The revision's latest yield forecast, drawn under the parts (a sample of its simulated parts). */
+  forecast: { label: string; points: Pair[] } | null;
 }
 
 const REFERENCE_STEPS = [3, 5, 7];
 const round = (p: Pair): Pair => [Number(p[0].toFixed(5)), Number(p[1].toFixed(5))];
 
-export function chromaticityPlotModel(batch: JudgedBatch, markers: PlotMarker[] = []): ChromaticityPlotModel {
+export function chromaticityPlotModel(
+  batch: JudgedBatch,
+  markers: PlotMarker[] = [],
+  forecast: ChromaticityPlotModel['forecast'] = null
+): ChromaticityPlotModel {
   const t = batch.target;
   const tol = batch.acceptance.tolerance;
   const tolerancePts = toleranceOutline(t, tol).map(round);
@@ -81,6 +87,7 @@ export function chromaticityPlotModel(batch: JudgedBatch, markers: PlotMarker[] 
     quadrangles: quads,
     locus: planckianOutline(1800, 10000).map(round),
     markers,
-    focus
+    focus,
+    forecast
   };
 }

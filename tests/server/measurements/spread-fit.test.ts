@@ -18,6 +18,7 @@ import { getRevisionVariationModel, putRevisionVariationModel } from '../../../s
 import { predictRevisionYield } from '../../../src/lib/server/yield-predictions/predict';
 import { listYieldPredictions } from '../../../src/lib/server/yield-predictions/store';
 import { getRevision } from '../../../src/lib/server/formulations/read';
+import { batchResults } from '../../../src/lib/server/measurements/results';
 import { DEFAULT_VARIATION_MODEL } from '../../../src/lib/blend/spread';
 import { approvedMatrixRevision, type MatrixRevision } from '../../e2e/support/chip-bins';
 import type { User } from '../../../src/lib/server/accounts/users';
@@ -106,6 +107,11 @@ describe('fit the spread to a chip bin batch', () => {
     expect(fit.after.slurryMassCvPct).toBeGreaterThan(fit.before.slurryMassCvPct);
     await predictRevisionYield(formulator, { revisionId: m.revisionId, model: null, parts: 1000, seed: 4 });
     expect((await listYieldPredictions(m.revisionId))[0].model.slurryMassCvPct).toBe(fit.after.slurryMassCvPct);
+    // The batch's plot lays the forecast of its own chip bin under the parts: a quarter of the pooled
+    // forecast (four bins of equal share), every point on the C2 recipe's side of the cloud.
+    const plot = (await batchResults(batch.id))!.plot;
+    expect(plot.forecast!.label).toBe('Forecast: 250 simulated parts of chip bin C2');
+    expect(plot.forecast!.points).toHaveLength(250);
   });
 
   it('refuses a stale fit or edit (the version read has moved on)', async () => {

@@ -10,3 +10,4 @@ export { predictYield, type YieldPredictionInput, type YieldPrediction } from '.
 export { wilsonInterval, Z95, type BinomialInterval } from './wilson';
 export { fitSlurryMassCv, type SpreadFit } from './fitSpread';
 export { renderingOfDraws, DEFAULT_RENDERING_SUBSAMPLE, type RenderingFigures } from './renderingSubsample';
+export { cloudSample, samplePointsOf, CLOUD_SAMPLE_MAX, type CloudSample } from './cloud-sample';

@@ -6,6 +6,7 @@
 import { getBatch, type BatchDetail } from '../batches/read';
 import { listYieldPredictions } from '../yield-predictions/store';
 import { yieldComparison } from '../../measurements/yield-comparison';
+import { samplePointsOf, type CloudSample } from '../../blend/spread/cloud-sample';
 import type { RevisionRecord } from '../formulations/read';
 import {
   batchAcceptance,
@@ -99,6 +100,15 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
     revision.content.tolerance,
     latest ? { inTolerance: latestFigures?.inTolerance ?? null, parts: latest.parts, computedAt: latest.computedAt } : null
   );
+  // The forecast cloud under the parts: this batch's chip bin's share of it when the forecast went bin by bin.
+  const sample = latest ? (latest.figures as { cloudSample?: CloudSample }).cloudSample : undefined;
+  const forecastPoints = sample ? samplePointsOf(sample, b.chipBinCode) : [];
+  const forecast = forecastPoints.length
+    ? {
+        label: `Forecast: ${forecastPoints.length} simulated parts${sample?.bins && b.chipBinCode ? ` of chip bin ${b.chipBinCode}` : ''}`,
+        points: forecastPoints
+      }
+    : null;
   const view: BatchResultsView = {
     batch: {
       id: b.id,
@@ -137,7 +147,7 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
     prediction,
     yieldCheck,
     predictionSource: forBatch ? { kind: forBatch.source, label: forBatch.label, binCode: forBatch.bin?.code ?? null } : null,
-    plot: chromaticityPlotModel(judged, markers),
+    plot: chromaticityPlotModel(judged, markers, forecast),
     corrections,
     disposition,
     summaryCondition: main?.group.label ?? describeCondition(null),

@@ -5,7 +5,7 @@
  * figures. Rendering and the variance breakdown are those of the bin with the largest share (a breakdown mixes poorly across recipes).
  */
 import { loadingOf, type RevisionContent } from '../../recipe';
-import { predictYield, yieldFigures, type VariationModel, type YieldPredictionInput } from '../../blend/spread';
+import { cloudSample, predictYield, yieldFigures, type VariationModel, type YieldPredictionInput } from '../../blend/spread';
 
 type Shared = Omit<YieldPredictionInput, 'concentrationsWtPct' | 'model'> & {
   /** The revision's variation model: every source but the chip wavelength, which is uniform inside each bin. */
@@ -28,6 +28,18 @@ export function partsPerBin(bins: readonly Bin[], parts: number): number[] {
   const order = exact.map((e, i) => ({ i, r: e - Math.floor(e) })).sort((a, b) => b.r - a.r);
   for (let k = 0; k < parts - counts.reduce((a, c) => a + c, 0); k++) counts[order[k % order.length].i]++;
   return counts;
+}
+
+/** The bin of part i of a cloud pooled in bin order with `counts` parts each. */
+function binOf(bins: readonly Bin[], counts: readonly number[]): (i: number) => string {
+  const ends = counts.map((_, k) => counts.slice(0, k + 1).reduce((a, c) => a + c, 0));
+  return (i) =>
+    bins[
+      Math.max(
+        0,
+        ends.findIndex((e) => i < e)
+      )
+    ].code;
 }
 
 export function poolBinForecasts(content: RevisionContent, bins: readonly Bin[], shared: Shared) {
@@ -60,7 +72,8 @@ export function poolBinForecasts(content: RevisionContent, bins: readonly Bin[],
       ...figures,
       rendering: main.rendering,
       breakdown: main.breakdown,
-      perBin: bins.map((b, k) => ({ code: b.code, parts: counts[k] }))
+      perBin: bins.map((b, k) => ({ code: b.code, parts: counts[k] })),
+      cloudSample: cloudSample(cloud.x, cloud.y, binOf(bins, counts))
     },
     cloud: { x: Array.from(cloud.x, r5), y: Array.from(cloud.y, r5) }
   };

@@ -9,7 +9,7 @@
 import { db } from '../db/index';
 import { notFound } from '../../errors/domain-error';
 import { parseRecipe } from '../../recipe';
-import { predictYield, type VariationModel, type YieldFigures } from '../../blend/spread';
+import { cloudSample, predictYield, type VariationModel, type YieldFigures } from '../../blend/spread';
 import { storeYieldPrediction } from './store';
 import { poolBinForecasts } from './per-bin';
 import { revisionSpreadSetup } from './setup';
@@ -45,6 +45,6 @@ export async function predictRevisionYield(actor: { id: number; email: string },
     return { id, model, figures: pooled.figures, cloud: pooled.cloud };
   }
   const p = predictYield({ ...shared, concentrationsWtPct: wt, model, parts: req.parts, seed: req.seed });
-  const id = await store({ ...p.figures, rendering: p.rendering, breakdown: p.breakdown });
+  const id = await store({ ...p.figures, rendering: p.rendering, breakdown: p.breakdown, cloudSample: cloudSample(p.cloud.x, p.cloud.y) });
   return { id, model, figures: p.figures, cloud: { x: Array.from(p.cloud.x, r5), y: Array.from(p.cloud.y, r5) } };
 }
