@@ -42,3 +42,27 @@ describe('variation model form', () => {
     expect(r).toEqual({ ok: true, model: { ...bins, peakLotSigmaNm: 2 } });
   });
 });
+
+describe('chip data in the variation model form', () => {
+  const base = variationModelToForm(DEFAULT_VARIATION_MODEL);
+  it('reads pasted chip wavelengths and writes them back', () => {
+    const r = variationModelFromForm(
+      { ...base, pumpKind: 'empirical', chipWavelengthsNm: '448.1, 449.0\n450.2 451' },
+      DEFAULT_VARIATION_MODEL
+    );
+    expect(r).toEqual({
+      ok: true,
+      model: { ...DEFAULT_VARIATION_MODEL, pump: { kind: 'empirical', wavelengthsNm: [448.1, 449, 450.2, 451] } }
+    });
+    if (r.ok) expect(variationModelToForm(r.model)).toMatchObject({ pumpKind: 'empirical', chipWavelengthsNm: '448.1, 449, 450.2, 451' });
+  });
+  it('names the value that is not a wavelength', () => {
+    expect(
+      variationModelFromForm({ ...base, pumpKind: 'empirical', chipWavelengthsNm: '448, 44.9, 450' }, DEFAULT_VARIATION_MODEL)
+    ).toEqual({
+      ok: false,
+      field: 'chipWavelengthsNm',
+      message: 'Chip wavelengths: value 2 ("44.9") is not a wavelength of 360–830 nm'
+    });
+  });
+});

@@ -1,7 +1,7 @@
 /**
  * The variation model as a form: flat text fields ↔ the model. The chip-wavelength spread is chosen by
- * `pumpKind` — uniform ± nm, normal (offset, σ), or kept as it is (chip data or the recipe matrix's bins,
- * which the form shows but does not edit). Errors name the field.
+ * `pumpKind` — uniform ± nm, normal (offset, σ), chip data (the sorted chips' wavelengths, pasted), or
+ * kept as it is (the recipe matrix's bins, which the form shows but does not edit). Errors name the field.
  */
 import { z } from 'zod';
 import { variationModelSchema, type VariationModel } from './model';
@@ -24,8 +24,35 @@ const common = {
   measurementSigmaUvPrime: num('Measurement noise', 0, 0.02)
 };
 
+/** Chip wavelengths from sorting data: numbers separated by commas, spaces or line breaks; each 360–830 nm. */
+const chipData = z
+  .string()
+  .trim()
+  .min(1, "Chip wavelengths: paste the sorted chips' wavelengths (nm)")
+  .transform((s, ctx) => {
+    const cells = s.split(/[\s,;]+/).filter(Boolean);
+    const out: number[] = [];
+    for (let i = 0; i < cells.length; i++) {
+      const v = Number(cells[i]);
+      if (!Number.isFinite(v) || v < 360 || v > 830) {
+        ctx.addIssue({
+          code: 'custom',
+          message: `Chip wavelengths: value ${i + 1} ("${cells[i].slice(0, 20)}") is not a wavelength of 360–830 nm`
+        });
+        return z.NEVER;
+      }
+      out.push(v);
+    }
+    if (out.length > 100_000) {
+      ctx.addIssue({ code: 'custom', message: `Chip wavelengths: at most 100,000 values (${out.length} given)` });
+      return z.NEVER;
+    }
+    return out;
+  });
+
 const formSchema = z.discriminatedUnion('pumpKind', [
   z.object({ pumpKind: z.literal('uniform'), halfRangeNm: num('Chip wavelength ±', 0, 20), ...common }),
+  z.object({ pumpKind: z.literal('empirical'), chipWavelengthsNm: chipData, ...common }),
   z.object({
     pumpKind: z.literal('normal'),
     meanOffsetNm: num('Chip wavelength offset', -20, 20),
@@ -39,7 +66,8 @@ const formSchema = z.discriminatedUnion('pumpKind', [
 export function variationModelToForm(model: VariationModel): VariationModelFormValues {
   const p = model.pump;
   return {
-    pumpKind: p.kind === 'uniform' || p.kind === 'normal' ? p.kind : 'keep',
+    pumpKind: p.kind === 'bins' ? 'keep' : p.kind,
+    chipWavelengthsNm: p.kind === 'empirical' ? p.wavelengthsNm.join(', ') : '',
     halfRangeNm: String(p.kind === 'uniform' ? p.halfRangeNm : 1.25),
     meanOffsetNm: String(p.kind === 'normal' ? p.meanOffsetNm : 0),
     sigmaNm: String(p.kind === 'normal' ? p.sigmaNm : 0.7),
@@ -67,7 +95,9 @@ export function variationModelFromForm(values: VariationModelFormValues, current
       ? { kind: 'uniform' as const, halfRangeNm: d.halfRangeNm }
       : d.pumpKind === 'normal'
         ? { kind: 'normal' as const, meanOffsetNm: d.meanOffsetNm, sigmaNm: d.sigmaNm }
-        : current.pump;
+        : d.pumpKind === 'empirical'
+          ? { kind: 'empirical' as const, wavelengthsNm: d.chipWavelengthsNm }
+          : current.pump;
   return {
     ok: true,
     model: variationModelSchema.parse({
