@@ -16,6 +16,7 @@ export const ENTITY_LABELS: Readonly<Record<string, string>> = {
   'material-lot': 'Material lot',
   'package-model': 'Package model',
   session: 'Sign-in',
+  'tester-profile': 'Tester profile',
   user: 'User account',
   'yield-prediction': 'Yield forecast'
 };

@@ -37,18 +37,34 @@ export function colourFailure(o: ColourDistance, t: Tolerance): string | null {
 }
 
 function metricValue(m: PartMetrics, metric: FloorMetric): number | null {
-  if ((metric === 'ra' || metric === 'r9') && !m.criValid) return null;
+  if ((metric === 'ra' || metric === 'r9') && !m.criValid && m.source !== 'table') return null;
   if (metric === 'melDer') return m.alphaOpic?.der.melanopic ?? null;
   return m[metric];
+}
+
+/**
+ * Floors a part read from a tester table cannot be judged on: the table does not carry the metric (it
+ * needs the spectrum). Shown as "not measured", never a failure and never computed from nothing.
+ */
+export function floorsNotMeasured(m: PartMetrics, floors: Acceptance['floors']): string[] {
+  if (m.source !== 'table') return [];
+  const out: string[] = [];
+  for (const r of FLOOR_RULES)
+    if (floors[r.key] !== undefined && metricValue(m, r.metric) === null)
+      out.push(`${r.label} ${r.sense > 0 ? '≥' : '≤'} ${floors[r.key]}: not measured`);
+  if (floors.intent) out.push(`TM-30 design intent ${floors.intent}: not measured`);
+  return out;
 }
 
 /** Floor failures, e.g. "Ra 78.4 < 80", "R9 not meaningful (source too far from the locus)". */
 export function floorFailures(m: PartMetrics, floors: Acceptance['floors']): PartFailure[] {
   const out: PartFailure[] = [];
+  const fromTable = m.source === 'table';
   for (const r of FLOOR_RULES) {
     const limit = floors[r.key];
     if (limit === undefined) continue;
     const value = metricValue(m, r.metric);
+    if (value === null && fromTable) continue; // judged on what the table carries: see floorsNotMeasured
     if (value === null) {
       const message =
         r.metric === 'ra' || r.metric === 'r9'
@@ -61,7 +77,7 @@ export function floorFailures(m: PartMetrics, floors: Acceptance['floors']): Par
       out.push({ code: r.key, message: `${r.label} ${formatFloorValue(r, value)} ${r.sense > 0 ? '<' : '>'} ${limit}` });
   }
   const level = floors.intent;
-  if (level) {
+  if (level && !fromTable) {
     const values = { rf: m.rf, rg: m.rg, rfh1: m.rfh1 ?? null, rcsh1: m.rcsh1 ?? null };
     if (Object.values(values).some((v) => v === null || !Number.isFinite(v)))
       out.push({ code: 'intent', message: `TM-30 design intent ${level} not judged (Rf, Rg or hue-bin-1 indices not available)` });
@@ -86,5 +102,6 @@ export function judgePart(m: PartMetrics, target: ResolvedTarget, acceptance: Ac
     failures.push({ code: 'bin', message: `outside the ${quad.nominalCct} K bin (${where})` });
   }
   failures.push(...floorFailures(m, acceptance.floors));
-  return { pass: failures.length === 0, failures, ansiBin: bin, inTargetBin, offset };
+  const notMeasured = floorsNotMeasured(m, acceptance.floors);
+  return { pass: failures.length === 0, failures, ansiBin: bin, inTargetBin, offset, ...(notMeasured.length ? { notMeasured } : {}) };
 }

@@ -59,6 +59,11 @@ export const withdrawUploadSchema = z.object({
  * this feature's own message; raise both together for bigger exports.
  */
 export const MAX_MEASUREMENT_FILE_BYTES = Math.floor(2.9 * 1024 * 1024);
+/**
+ * A tester's per-part table: up to 100,000 parts (MAX_TABLE_ROWS) of about 100 bytes a row, under the
+ * server's request limit (BODY_SIZE_LIMIT, 12M in scripts/profile.sh).
+ */
+export const MAX_TABLE_FILE_BYTES = 11 * 1024 * 1024;
 
 /**
  * The test condition of a measurement file, from form fields or query parameters: no temperature =
@@ -93,3 +98,18 @@ export const testConditionFieldsSchema = z
     }
     return isBenchCondition(parsed.data) ? null : parsed.data;
   });
+
+/** Which tester profile reads an upload (form field or query parameter `testerProfile`); absent or empty = spectra. */
+export const testerProfileChoiceSchema = z.object({
+  testerProfile: z
+    .string()
+    .trim()
+    .optional()
+    .transform((v, ctx) => {
+      if (!v) return null;
+      const id = Number(v);
+      if (Number.isInteger(id) && id > 0) return id;
+      ctx.addIssue({ code: 'custom', message: `testerProfile "${v.slice(0, 20)}" is not a profile id` });
+      return z.NEVER;
+    })
+});

@@ -27,12 +27,20 @@ export interface PartMetrics {
   /** TM-30 hue bin 1 local indices (Rf,h1; Rcs,h1 as a fraction), for the Annex E design intents; absent on older parts. */
   rfh1?: number | null;
   rcsh1?: number | null;
-  ler: number;
+  /** null for a part read from a tester table (it needs the spectrum). */
+  ler: number | null;
   /** α-opic efficacies, DERs and melanopic EDI per 1,000 lx (CIE S 026/E:2018); absent on older parts. */
   alphaOpic?: AlphaOpicResult;
-  peakNm: number;
-  fwhmNm: number;
-  centroidNm: number;
+  /** Spectral shape; null for a part read from a tester table (its peak when the tester reports it). */
+  peakNm: number | null;
+  fwhmNm: number | null;
+  centroidNm: number | null;
+  /** Where the metrics come from: a measured spectrum (absent on older parts), or a tester's per-part table. */
+  source?: 'spectrum' | 'table';
+  /** What a tester table carries besides colour: luminous flux (lm), forward voltage (V), its own bin label. */
+  fluxLm?: number | null;
+  forwardVoltageV?: number | null;
+  testerBin?: string | null;
 }
 
 /** A part's identity plus its metrics. */
@@ -67,6 +75,8 @@ export interface PartVerdict {
   inTargetBin: boolean | null;
   /** Where the part sits relative to the target (MacAdam-type steps at the target CCT). */
   offset: ColourDistance;
+  /** Floors not judged because the part's tester table does not carry the metric ("Ra ≥ 90: not measured"). */
+  notMeasured?: string[];
 }
 
 export interface JudgedPart extends MeasuredPart {

@@ -299,6 +299,9 @@ export interface MeasurementUploadRow {
   test_reference: 'junction' | 'solderPoint' | null;
   test_temperature_c: number | null; // decimal(5,1), read as a number (decimalNumbers)
   test_current_ma: number | null; // decimal(8,1), read as a number (decimalNumbers)
+  source_kind: 'spectra' | 'table';
+  tester_profile_id: number | null;
+  tester_profile_version: number | null;
 }
 
 export interface PumpBinSetRow {
@@ -323,7 +326,7 @@ export interface PartMeasurementRow {
   duv: number;
   ra: number | null;
   r9: number | null;
-  ler_lm_per_w: number;
+  ler_lm_per_w: number | null;
   ansi_bin: number | null;
   created_at: Date;
 }
@@ -424,6 +427,17 @@ export interface RevisionVariationModelRow {
   updated_at: Date;
 }
 
+export interface TesterProfileRow {
+  id: number;
+  name: string;
+  profile_json: string;
+  version: number;
+  created_by: number;
+  updated_by: number;
+  created_at: Date;
+  updated_at: Date;
+}
+
 declare module 'knex/types/tables' {
   interface Tables {
     api_tokens: Table<ApiTokenRow>;
@@ -463,6 +477,7 @@ declare module 'knex/types/tables' {
     silicone_systems: Table<SiliconeSystemRow, 'ratio_a' | 'ratio_b' | 'density_g_cm3' | 'refractive_index'>;
     stored_files: Table<StoredFileRow>;
     revision_variation_models: Table<RevisionVariationModelRow>;
+    tester_profiles: Table<TesterProfileRow>;
     user_roles: Table<UserRoleRow>;
     users: Table<UserRow, never, 'active'>;
     yield_predictions: Table<YieldPredictionRow>;

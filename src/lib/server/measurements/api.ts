@@ -1,12 +1,17 @@
 /** Shared plumbing of /api/v1/measurements: the uploaded file and the streamed (NDJSON) answer. */
 import { readUploadedFile } from '../api/upload';
 import { errorAnswer } from '../http/api-handler';
-import { MAX_MEASUREMENT_FILE_BYTES } from '../../measurements/schema';
+import { MAX_MEASUREMENT_FILE_BYTES, MAX_TABLE_FILE_BYTES } from '../../measurements/schema';
 import type { MeasurementFile } from './upload';
 
-/** The file of a measurement upload (see readUploadedFile: multipart `file`, or a text/csv body named by `x-file-name`). */
-export function uploadedFile(request: Request): Promise<MeasurementFile> {
-  return readUploadedFile(request, { maxBytes: MAX_MEASUREMENT_FILE_BYTES, what: 'measurement', defaultName: 'measurements.csv' });
+/**
+ * The file of a measurement upload (see readUploadedFile: multipart `file`, or a text/csv body named by
+ * `x-file-name`); a tester table may be larger.
+ */
+export function uploadedFile(request: Request, table = false): Promise<MeasurementFile> {
+  return table
+    ? readUploadedFile(request, { maxBytes: MAX_TABLE_FILE_BYTES, what: 'tester table', defaultName: 'tester-table.csv' })
+    : readUploadedFile(request, { maxBytes: MAX_MEASUREMENT_FILE_BYTES, what: 'measurement', defaultName: 'measurements.csv' });
 }
 
 /** Newline-delimited JSON stream: progress lines from `run`, then one `done` or `error` line. */

@@ -17,7 +17,10 @@ import { EMITTED_QUANTITIES, type Tm27Meta } from '../../spectrum-file/tm27';
 import { measurePartsPaced, type MeasuredPart } from '../../measurements/index';
 import { findAnsiBin } from '../../spectral/ansi/c78377';
 import { QUALITY_CORE_VERSION } from '../../measurements/version';
-import { MAX_MEASUREMENT_FILE_BYTES } from '../../measurements/schema';
+import { MAX_MEASUREMENT_FILE_BYTES, MAX_TABLE_FILE_BYTES } from '../../measurements/schema';
+import { parseTesterTable } from '../../tester-table/parse';
+import { testerPartMetrics } from '../../tester-table/part-metrics';
+import { getTesterProfile } from './tester-profiles';
 import { lockBatch } from '../batches/lock';
 import { lineIssue, tooLarge, unprocessable, type DomainError } from '../../errors/domain-error';
 import { conflict, notFound } from './errors';
@@ -34,6 +37,8 @@ export interface MeasurementFile {
   body: Buffer;
   /** The condition the parts were measured at; null or absent = the bench (25 °C). */
   condition?: OperatingCondition | null;
+  /** A tester's per-part table read with this profile; absent = spectra (CSV/TXT columns or IES TM-27). */
+  testerProfileId?: number | null;
 }
 
 export type UploadProgress = { phase: 'parsing' | 'saving' } | { phase: 'measuring'; done: number; total: number };
@@ -46,6 +51,8 @@ export interface UploadResult {
 
 const OPEN_STATES = ['complete'];
 const CHUNK = 100;
+/** Table rows are small (no spectrum): more per insert. */
+const TABLE_CHUNK = 1000;
 const pause = () => new Promise<void>((resolve) => setImmediate(resolve));
 
 function stateRefusal(batchNumber: string, state: string): DomainError {
@@ -99,7 +106,43 @@ export async function measureFile(
   };
 }
 
-type Measured = Awaited<ReturnType<typeof measureFile>>;
+type Measured = Awaited<ReturnType<typeof measureFile>> & { profile?: { id: number; version: number } };
+
+/** Checks a tester table with its profile and turns each row into part metrics; saves nothing. */
+export async function readTesterFile(
+  file: MeasurementFile,
+  profileId: number,
+  onProgress?: (p: UploadProgress) => void
+): Promise<Measured> {
+  if (file.body.length === 0) throw unprocessable(`${file.name || 'The file'} is empty. Nothing was saved.`);
+  if (file.body.length > MAX_TABLE_FILE_BYTES) {
+    throw tooLarge(
+      `The file is ${formatBytes(file.body.length)}; the limit for a tester table is ${formatBytes(MAX_TABLE_FILE_BYTES)}. ` +
+        'Nothing was saved.'
+    );
+  }
+  const { id, version, profile } = await getTesterProfile(profileId);
+  onProgress?.({ phase: 'parsing' });
+  const parsed = parseTesterTable(decodeText(file.body), profile);
+  if (!parsed.ok) {
+    const n = parsed.errors.length;
+    throw unprocessable(
+      `${file.name} was not saved (tester profile "${profile.name}"): ` +
+        `${n === 1 ? 'one problem' : `${n} problems`}. ${parsed.errors[0].message}`,
+      parsed.errors.map((e) => lineIssue(e.line, e.message))
+    );
+  }
+  const parts = parsed.rows.map((r) => ({ label: r.label, metrics: testerPartMetrics(r, profile.chromaticity), line: r.line }));
+  onProgress?.({ phase: 'measuring', done: parts.length, total: parts.length });
+  return {
+    parts,
+    wavelengths: [],
+    values: parts.map(() => []),
+    warnings: [`read with tester profile "${profile.name}" (version ${version})`, ...parsed.warnings],
+    tm27: null,
+    profile: { id, version }
+  };
+}
 
 /** Writes a checked file: the raw file to object storage, the upload and its parts (inside `trx`). */
 export async function insertMeasurements(
@@ -129,6 +172,9 @@ export async function insertMeasurements(
     wavelengths_json: JSON.stringify(m.wavelengths),
     warnings_json: JSON.stringify(m.warnings),
     tm27_json: m.tm27 ? JSON.stringify(m.tm27) : null,
+    source_kind: m.profile ? 'table' : 'spectra',
+    tester_profile_id: m.profile?.id ?? null,
+    tester_profile_version: m.profile?.version ?? null,
     test_reference: file.condition ? file.condition.reference : null,
     test_temperature_c: file.condition ? file.condition.temperatureC : null,
     test_current_ma: file.condition ? file.condition.driveCurrentMa : null,
@@ -139,7 +185,7 @@ export async function insertMeasurements(
     upload_id: uploadId,
     batch_id: batchId,
     part_label: p.label.slice(0, 80),
-    column_no: i + 2,
+    column_no: m.profile ? ((m.parts[i] as { line?: number }).line ?? i + 2) : i + 2,
     values_json: JSON.stringify(m.values[i]),
     metrics_json: JSON.stringify(p.metrics),
     x: p.metrics.x,
@@ -151,7 +197,8 @@ export async function insertMeasurements(
     ler_lm_per_w: p.metrics.ler,
     ansi_bin: findAnsiBin(p.metrics.x, p.metrics.y)?.nominalCct ?? null
   }));
-  for (let i = 0; i < rows.length; i += CHUNK) await trx('part_measurements').insert(rows.slice(i, i + CHUNK));
+  const chunk = m.profile ? TABLE_CHUNK : CHUNK;
+  for (let i = 0; i < rows.length; i += chunk) await trx('part_measurements').insert(rows.slice(i, i + chunk));
   return { uploadId, storedFileId };
 }
 
@@ -182,7 +229,9 @@ export async function uploadMeasurements(
 ): Promise<UploadResult> {
   await precheckUpload(caller, batchId);
   await checkTestCondition(batchId, file);
-  const m = await measureFile(file, onProgress);
+  const m: Measured = file.testerProfileId
+    ? await readTesterFile(file, file.testerProfileId, onProgress)
+    : await measureFile(file, onProgress);
   onProgress?.({ phase: 'saving' });
   return writeTransaction(async (trx) => {
     const locked = await lockBatch(trx, batchId);
@@ -205,7 +254,14 @@ export async function uploadMeasurements(
         entityType: 'batch',
         entityId: batchId,
         action: 'measurements-upload',
-        after: { uploadId, storedFileId, file: file.name, parts: m.parts.length, coreVersion: QUALITY_CORE_VERSION }
+        after: {
+          uploadId,
+          storedFileId,
+          file: file.name,
+          parts: m.parts.length,
+          coreVersion: QUALITY_CORE_VERSION,
+          ...(m.profile ? { testerProfileId: m.profile.id, testerProfileVersion: m.profile.version } : {})
+        }
       },
       trx
     );

@@ -10,7 +10,8 @@ import { computeResults, loadContext } from '$lib/server/measurements/results';
 import { dispositionRefusal, disposeBatch } from '$lib/server/measurements/disposition';
 import { setAcceptance } from '$lib/server/measurements/acceptance';
 import { uploadMeasurements, withdrawUpload } from '$lib/server/measurements/upload';
-import { testConditionFieldsSchema } from '$lib/measurements/schema';
+import { testConditionFieldsSchema, testerProfileChoiceSchema } from '$lib/measurements/schema';
+import { listTesterProfiles } from '$lib/server/measurements/tester-profiles';
 import { makeCorrectionDraft } from '$lib/server/measurements/correction';
 import { fitSpreadToBatch } from '$lib/server/measurements/fit-spread';
 import { getRevisionVariationModel } from '$lib/server/yield-predictions/variation-model';
@@ -29,7 +30,8 @@ export const load: PageServerLoad = async ({ locals, params }) => {
     canAct: canActOnMeasurements(user),
     dispositionBlocked: await dispositionRefusal(user, ctx),
     variationModel: { version: model.version, source: model.source, fittedBatch: model.fittedBatch?.batchNumber ?? null },
-    canFitSpread: mayJudgeBatches(user) && maySetVariationModel(user)
+    canFitSpread: mayJudgeBatches(user) && maySetVariationModel(user),
+    testerProfiles: (await listTesterProfiles()).map((p) => ({ id: p.id, name: p.profile.name }))
   };
 };
 
@@ -40,6 +42,9 @@ export const actions: Actions = {
     const file = form.get('file');
     if (!(file instanceof File) || file.size === 0)
       return actionFailure(400, { uploadError: 'Choose a measurement file first.', uploadIssues: [] });
+    const choice = testerProfileChoiceSchema.safeParse({ testerProfile: String(form.get('testerProfile') ?? '') });
+    if (!choice.success)
+      return actionFailure(400, { uploadError: `${choice.error.issues[0].message}. Nothing was saved.`, uploadIssues: [] });
     const condition = testConditionFieldsSchema.safeParse({
       testTemperatureC: String(form.get('testTemperatureC') ?? ''),
       testReference: String(form.get('testReference') ?? 'junction'),
@@ -55,7 +60,8 @@ export const actions: Actions = {
         name: file.name,
         contentType: file.type,
         body: Buffer.from(await file.arrayBuffer()),
-        condition: condition.data
+        condition: condition.data,
+        testerProfileId: choice.data.testerProfile
       });
       return { uploaded: { parts: res.parts, warnings: res.warnings } };
     } catch (err) {

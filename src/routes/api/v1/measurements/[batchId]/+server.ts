@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { finiteJson, readQuery } from '$lib/server/api/body';
-import { testConditionFieldsSchema } from '$lib/measurements/schema';
+import { testConditionFieldsSchema, testerProfileChoiceSchema } from '$lib/measurements/schema';
 import { ndjsonStream, uploadedFile } from '$lib/server/measurements/api';
 import { batchResults } from '$lib/server/measurements/results';
 import { precheckUpload, uploadMeasurements } from '$lib/server/measurements/upload';
@@ -23,6 +23,7 @@ export const GET: RequestHandler = (event) =>
 /**
  * Upload a measurement file (multipart `file`, or a text/csv body). `Accept: application/x-ndjson` streams progress.
  * Query `testTemperatureC`, `testReference` (junction | solderPoint), `testCurrentMa`: the condition it was measured at (none = bench).
+ * Query `testerProfile`: the id of the tester profile that reads a per-part table (none = spectra).
  */
 export const POST: RequestHandler = (event) =>
   apiHandler(async () => {
@@ -30,7 +31,8 @@ export const POST: RequestHandler = (event) =>
     const batchId = idParam(event.params.batchId, `Batch ${event.params.batchId} was not found.`);
     await precheckUpload(user, batchId);
     const condition = readQuery(event.url.searchParams, testConditionFieldsSchema);
-    const file = { ...(await uploadedFile(event.request)), condition };
+    const { testerProfile } = readQuery(event.url.searchParams, testerProfileChoiceSchema);
+    const file = { ...(await uploadedFile(event.request, testerProfile !== null)), condition, testerProfileId: testerProfile };
     if (!(event.request.headers.get('accept') ?? '').includes('application/x-ndjson')) {
       return json(await uploadMeasurements(user, batchId, file), { status: 201 });
     }

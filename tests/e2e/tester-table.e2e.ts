@@ -1,0 +1,42 @@
+import { test, expect } from '@playwright/test';
+import { DEMO, signInThroughForm } from './support/accounts';
+import { completedBatch } from './support/batches';
+
+// Quality saves a tester profile once, then uploads a tester's per-part table to a batch: the parts are
+// judged on what the table carries, and metrics that need a spectrum read "not measured". Values invented.
+test('a tester profile, then a per-part table uploaded with it; spectral metrics read "not measured"', async ({ page }) => {
+  const b = await completedBatch();
+  const name = `E2E tester ${Date.now().toString(36)}`;
+  await signInThroughForm(page, DEMO.quality);
+  await page.goto('/measurements/tester-profiles');
+  await page.getByLabel('Name').fill(name);
+  await page.getByLabel('Delimiter').selectOption(';');
+  await page.getByLabel('Decimal mark').selectOption(',');
+  await page.getByLabel('Part label').fill('Serial');
+  await page.getByLabel('CIE x').fill('x');
+  await page.getByLabel('CIE y').fill('y');
+  await page.getByLabel('Ra', { exact: true }).fill('Ra');
+  await page.getByRole('button', { name: 'Create profile' }).click();
+  await expect(page.getByRole('status')).toContainText(`Profile "${name}" created`);
+  await expect(page.getByTestId('tester-profiles')).toContainText(name);
+
+  await page.goto(`/measurements/${b.id}`);
+  const rows = Array.from({ length: 5 }, (_, i) => `${b.batchNumber}-T${i + 1};0,433${8 + (i % 2)};0,4030;9${i},5`);
+  await page.getByLabel('The file holds').selectOption({ label: `a tester table: ${name}` });
+  await page
+    .getByLabel('Measurement file', { exact: true })
+    .setInputFiles({ name: 'tester.csv', mimeType: 'text/csv', buffer: Buffer.from(['Serial;x;y;Ra', ...rows].join('\n')) });
+  await page.getByRole('button', { name: 'Upload and measure' }).click();
+  await expect(page.getByTestId('upload-done')).toContainText('5 parts measured and saved');
+  const part = page.locator(`tr[data-part="${b.batchNumber}-T1"]`);
+  await expect(part).toContainText('not measured');
+  await expect(part.getByTestId('not-measured')).toContainText('R9 ≥ 50: not measured');
+
+  // A table that does not fit the profile: refused, naming the line and column; nothing saved.
+  await page.getByLabel('The file holds').selectOption({ label: `a tester table: ${name}` });
+  await page
+    .getByLabel('Measurement file', { exact: true })
+    .setInputFiles({ name: 'wrong.csv', mimeType: 'text/csv', buffer: Buffer.from('Serial;x;y;Ra\nW1;0,4338;abc;91\n') });
+  await page.getByRole('button', { name: 'Upload and measure' }).click();
+  await expect(page.getByTestId('upload-error')).toContainText('line 2, column "y": "abc" is not a number');
+});
