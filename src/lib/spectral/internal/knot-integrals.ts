@@ -49,42 +49,58 @@ export function knotSpan(table: KnotTable): [number, number] {
 
 /** Knot weights of a spectrum on the grid for the three CMF channels, and its white over the knot span. */
 export function knotWeights(spd: Float64Array, cmf: CmfGrid, table: KnotTable, out: KnotWeights): void {
-  const { stepNm } = table;
+  const { stepNm, knots } = table;
   const { x, y, z, white } = out;
-  x.fill(0);
-  y.fill(0);
-  z.fill(0);
+  const { xBar, yBar, zBar } = cmf;
+  const [first, last] = knotSpan(table);
+  const invStep = 1 / stepNm;
   let wxSum = 0;
   let wySum = 0;
   let wzSum = 0;
-  const [first, last] = knotSpan(table);
-  const { xBar, yBar, zBar } = cmf;
-  const invStep = 1 / stepNm;
-  for (let i = first; i <= last; i++) {
-    const s = spd[i];
-    if (s === 0) continue;
-    const wx = s * xBar[i];
-    const wy = s * yBar[i];
-    const wz = s * zBar[i];
-    wxSum += wx;
-    wySum += wy;
-    wzSum += wz;
-    const r = i - first;
-    const k = (r / stepNm) | 0;
-    const f = (r - k * stepNm) * invStep;
-    const g = 1 - f;
-    x[k] += wx * g;
-    y[k] += wy * g;
-    z[k] += wz * g;
-    if (f > 0) {
-      x[k + 1] += wx * f;
-      y[k + 1] += wy * f;
-      z[k + 1] += wz * f;
+  // Knot k collects (1 − f) of the grid points at and after it and f of those before it, f = offset / step.
+  let xk = 0;
+  let yk = 0;
+  let zk = 0;
+  for (let k = 0; k < knots - 1; k++) {
+    let xn = 0;
+    let yn = 0;
+    let zn = 0;
+    const base = first + k * stepNm;
+    for (let d = 0; d < stepNm; d++) {
+      const i = base + d;
+      const s = spd[i];
+      const wx = s * xBar[i];
+      const wy = s * yBar[i];
+      const wz = s * zBar[i];
+      wxSum += wx;
+      wySum += wy;
+      wzSum += wz;
+      const f = d * invStep;
+      const g = 1 - f;
+      xk += wx * g;
+      yk += wy * g;
+      zk += wz * g;
+      xn += wx * f;
+      yn += wy * f;
+      zn += wz * f;
     }
+    x[k] = xk;
+    y[k] = yk;
+    z[k] = zk;
+    xk = xn;
+    yk = yn;
+    zk = zn;
   }
-  white[0] = wxSum;
-  white[1] = wySum;
-  white[2] = wzSum;
+  const s = spd[last];
+  const wx = s * xBar[last];
+  const wy = s * yBar[last];
+  const wz = s * zBar[last];
+  x[knots - 1] = xk + wx;
+  y[knots - 1] = yk + wy;
+  z[knots - 1] = zk + wz;
+  white[0] = wxSum + wx;
+  white[1] = wySum + wy;
+  white[2] = wzSum + wz;
 }
 
 /** Sample tristimulus sums: out[3s + c] = scale · Σ_k R_s(λ_k) W_{k,c}; two samples per pass share the weight loads. */

@@ -73,12 +73,14 @@ export interface Cam02White {
   cz: number;
   /** Achromatic response of the white A_w (eq. 19). */
   aw: number;
+  /** N_bb / A_w, so that A / A_w costs no division. */
+  nbbOverAw: number;
   /** (1.64 − 0.29^n)^0.73 · F_L^0.25: eq. 24 and 25 without t and J. */
   mFactor: number;
 }
 
 export function newCam02White(): Cam02White {
-  return { m: new Float64Array(9), nbb: 0, cz: 0, aw: 0, mFactor: 0 };
+  return { m: new Float64Array(9), nbb: 0, cz: 0, aw: 0, nbbOverAw: 0, mFactor: 0 };
 }
 
 /** Fills `v` with the viewing constants of an adopted white (X_w, Y_w, Z_w); allocates nothing. */
@@ -105,6 +107,7 @@ export function setCam02White(white: ArrayLike<number>, v: Cam02White): Cam02Whi
   const ga = compress(m[3] * xw + m[4] * yw + m[5] * zw);
   const ba = compress(m[6] * xw + m[7] * yw + m[8] * zw);
   v.aw = (2 * ra + ga + ba / 20 - 0.305) * v.nbb; // eq. 19
+  v.nbbOverAw = v.nbb / v.aw;
   return v;
 }
 
@@ -114,17 +117,18 @@ export function cam02UcsInto(v: Cam02White, X: number, Y: number, Z: number, out
   const ra = compress(m[0] * X + m[1] * Y + m[2] * Z);
   const ga = compress(m[3] * X + m[4] * Y + m[5] * Z);
   const ba = compress(m[6] * X + m[7] * Y + m[8] * Z);
-  const a = ra - (12 * ga) / 11 + ba / 11; // eq. 15
-  const b = (ra + ga - 2 * ba) / 9;
+  const a = ra - ga * (12 / 11) + ba * (1 / 11); // eq. 15
+  const b = (ra + ga - 2 * ba) * (1 / 9);
   const ab = Math.sqrt(a * a + b * b);
-  const cosH = ab > 0 ? a / ab : 1; // eq. 16: h = atan2(b, a), 0 for a = b = 0
-  const sinH = ab > 0 ? b / ab : 0;
+  const invAb = ab > 0 ? 1 / ab : 0;
+  const cosH = ab > 0 ? a * invAb : 1; // eq. 16: h = atan2(b, a), 0 for a = b = 0
+  const sinH = b * invAb;
   const et = 0.25 * (cosH * COS_2 - sinH * SIN_2 + 3.8); // eq. 18: ¼(cos(h + 2) + 3.8)
-  const lnA = Math.log(((2 * ra + ga + ba / 20 - 0.305) * v.nbb) / v.aw); // eq. 19: ln(A / A_w)
+  const lnA = Math.log((2 * ra + ga + ba * (1 / 20) - 0.305) * v.nbbOverAw); // eq. 19: ln(A / A_w)
   const J = 100 * Math.exp(v.cz * lnA); // eq. 20
   const t = (T_FACTOR * v.nbb * et * ab) / (ra + ga + (21 / 20) * ba); // eq. 23
   const M = v.mFactor * Math.exp(0.9 * Math.log(t) + 0.5 * v.cz * lnA); // eq. 24–25: t^0.9 √(J/100) · …
-  const mp = Math.log(1 + 0.0228 * M) / 0.0228; // Luo 2006 eq. 4
+  const mp = Math.log(1 + 0.0228 * M) * (1 / 0.0228); // Luo 2006 eq. 4
   out[o] = (1.7 * J) / (1 + 0.007 * J);
   out[o + 1] = mp * cosH;
   out[o + 2] = mp * sinH;
