@@ -5,6 +5,8 @@
  * where h_k is the linear "hat" of knot k. The W_k (one plane per channel x̄, ȳ, z̄) are computed
  * once per spectrum; each sample then costs one short dot product per channel. Exactly equal to
  * interpolating the table to 1 nm and summing (no approximation).
+ * The table and the weights are plain arrays of doubles, not Float64Array: V8 (Node 20) runs the
+ * inner product loops about a quarter faster on them (scripts/bench/spectral.bench.ts).
  */
 import { GRID_START_NM } from '../grid';
 import type { CmfGrid } from '../colorimetry/cmf';
@@ -18,27 +20,34 @@ export interface KnotTable {
   startNm: number;
   stepNm: number;
   /** Reflectances, sample-major: values[s * knots + k]. */
-  values: Float64Array;
+  values: number[];
 }
 
 /** Knot weights of one spectrum: one plane per channel (x[k], y[k], z[k]) and Σ S c̄ over the span. */
 export interface KnotWeights {
-  x: Float64Array;
-  y: Float64Array;
-  z: Float64Array;
+  x: number[];
+  y: number[];
+  z: number[];
   white: Float64Array;
+}
+
+/** A plain array of n doubles (kept in V8's packed-double form: filled with a fraction first). */
+function doubles(n: number): number[] {
+  const a: number[] = [];
+  for (let i = 0; i < n; i++) a.push(0.5);
+  return a.fill(0);
 }
 
 export function makeKnotTable(series: readonly (readonly number[])[], startNm: number, stepNm: number): KnotTable {
   const knots = series[0].length;
-  const values = new Float64Array(series.length * knots);
-  series.forEach((s, i) => values.set(s, i * knots));
+  const values = doubles(series.length * knots);
+  series.forEach((s, i) => s.forEach((v, k) => (values[i * knots + k] = v)));
   return { samples: series.length, knots, startNm, stepNm, values };
 }
 
 export function newKnotWeights(table: KnotTable): KnotWeights {
   const n = table.knots;
-  return { x: new Float64Array(n), y: new Float64Array(n), z: new Float64Array(n), white: new Float64Array(3) };
+  return { x: doubles(n), y: doubles(n), z: doubles(n), white: new Float64Array(3) };
 }
 
 /** Grid indices (inclusive) of the first and last knot of a table. */

@@ -65,6 +65,8 @@ function compress(x: number): number {
 
 /** Constants of CIECAM02 that depend only on the adopted white (CIE 159 eq. 9–12, 19, 24). */
 export interface Cam02White {
+  /** Y_w the constants below were set for (all but `m` depend on Y_w alone). */
+  yw: number;
   /** XYZ → adapted Hunt–Pointer–Estévez R'G'B' (CAT02, D = 1, M_H · M_CAT02⁻¹), row-major. */
   m: Float64Array;
   /** N_bb = N_cb (eq. 11). */
@@ -80,7 +82,7 @@ export interface Cam02White {
 }
 
 export function newCam02White(): Cam02White {
-  return { m: new Float64Array(9), nbb: 0, cz: 0, aw: 0, nbbOverAw: 0, mFactor: 0 };
+  return { yw: NaN, m: new Float64Array(9), nbb: 0, cz: 0, aw: 0, nbbOverAw: 0, mFactor: 0 };
 }
 
 /** Fills `v` with the viewing constants of an adopted white (X_w, Y_w, Z_w); allocates nothing. */
@@ -88,10 +90,7 @@ export function setCam02White(white: ArrayLike<number>, v: Cam02White): Cam02Whi
   const xw = white[0];
   const yw = white[1];
   const zw = white[2];
-  const n = Y_B / yw; // eq. 10
-  v.nbb = 0.725 * (1 / n) ** 0.2; // eq. 11: N_bb = N_cb
-  v.cz = C_SURROUND * (1.48 + Math.sqrt(n)); // eq. 12
-  v.mFactor = (1.64 - 0.29 ** n) ** 0.73 * F_L_025;
+  if (yw !== v.yw) setLuminanceConstants(yw, v);
   // eq. 9 with D = 1: R_c = (Y_w / R_w) R; fold CAT02, adaptation and HPE into one matrix.
   const d0 = yw / (M_CAT02[0] * xw + M_CAT02[1] * yw + M_CAT02[2] * zw);
   const d1 = yw / (M_CAT02[3] * xw + M_CAT02[4] * yw + M_CAT02[5] * zw);
@@ -103,20 +102,41 @@ export function setCam02White(white: ArrayLike<number>, v: Cam02White): Cam02Whi
     const h2 = M_HPE_CAT_INV[3 * r + 2];
     for (let c = 0; c < 3; c++) m[3 * r + c] = h0 * (d0 * M_CAT02[c]) + h1 * (d1 * M_CAT02[3 + c]) + h2 * (d2 * M_CAT02[6 + c]);
   }
-  const ra = compress(m[0] * xw + m[1] * yw + m[2] * zw);
-  const ga = compress(m[3] * xw + m[4] * yw + m[5] * zw);
-  const ba = compress(m[6] * xw + m[7] * yw + m[8] * zw);
+  return v;
+}
+
+/** CIE 159 eq. 10–12, 19 and the constant part of eq. 24–25: they depend on Y_w only (D = 1). */
+function setLuminanceConstants(yw: number, v: Cam02White): void {
+  v.yw = yw;
+  const n = Y_B / yw; // eq. 10
+  v.nbb = 0.725 * (1 / n) ** 0.2; // eq. 11: N_bb = N_cb
+  v.cz = C_SURROUND * (1.48 + Math.sqrt(n)); // eq. 12
+  v.mFactor = (1.64 - 0.29 ** n) ** 0.73 * F_L_025;
+  // With D = 1 the adapted white is R_c = G_c = B_c = Y_w (eq. 9), so R'_w = M_H · M_CAT02⁻¹ · (Y_w, Y_w, Y_w).
+  const h = M_HPE_CAT_INV;
+  const ra = compress(yw * (h[0] + h[1] + h[2]));
+  const ga = compress(yw * (h[3] + h[4] + h[5]));
+  const ba = compress(yw * (h[6] + h[7] + h[8]));
   v.aw = (2 * ra + ga + ba / 20 - 0.305) * v.nbb; // eq. 19
   v.nbbOverAw = v.nbb / v.aw;
-  return v;
 }
 
 /** CAM02-UCS J', a', b' of one colour XYZ under the white of `v`, written to out[o..o+2]. */
 export function cam02UcsInto(v: Cam02White, X: number, Y: number, Z: number, out: Float64Array, o: number): void {
   const m = v.m;
-  const ra = compress(m[0] * X + m[1] * Y + m[2] * Z);
-  const ga = compress(m[3] * X + m[4] * Y + m[5] * Z);
-  const ba = compress(m[6] * X + m[7] * Y + m[8] * Z);
+  const rp = m[0] * X + m[1] * Y + m[2] * Z;
+  const gp = m[3] * X + m[4] * Y + m[5] * Z;
+  const bp = m[6] * X + m[7] * Y + m[8] * Z;
+  // eq. 14 as in `compress`, written out: the three channels' logarithms and exponentials run side by side.
+  const lr = Math.log(F_L_100 * Math.abs(rp));
+  const lg = Math.log(F_L_100 * Math.abs(gp));
+  const lb = Math.log(F_L_100 * Math.abs(bp));
+  const pr = Math.exp(0.42 * lr);
+  const pg = Math.exp(0.42 * lg);
+  const pb = Math.exp(0.42 * lb);
+  const ra = (Math.sign(rp) * 400 * pr) / (pr + 27.13) + 0.1;
+  const ga = (Math.sign(gp) * 400 * pg) / (pg + 27.13) + 0.1;
+  const ba = (Math.sign(bp) * 400 * pb) / (pb + 27.13) + 0.1;
   const a = ra - ga * (12 / 11) + ba * (1 / 11); // eq. 15
   const b = (ra + ga - 2 * ba) * (1 / 9);
   const ab = Math.sqrt(a * a + b * b);
