@@ -121,37 +121,91 @@ function setLuminanceConstants(yw: number, v: Cam02White): void {
   v.nbbOverAw = v.nbb / v.aw;
 }
 
+/**
+ * CAM02-UCS J', a', b' of two colours under the white of `v`, written to out[o1..o1+2] and out[o2..o2+2].
+ * Two at a time, step by step, so that the processor overlaps their eleven logarithms and exponentials each
+ * (about a fifth faster than one colour at a time); one colour is the same colour twice.
+ */
+export function cam02UcsPair(
+  v: Cam02White,
+  X1: number,
+  Y1: number,
+  Z1: number,
+  X2: number,
+  Y2: number,
+  Z2: number,
+  out: Float64Array,
+  o1: number,
+  o2: number
+): void {
+  const m = v.m;
+  const rp1 = m[0] * X1 + m[1] * Y1 + m[2] * Z1;
+  const gp1 = m[3] * X1 + m[4] * Y1 + m[5] * Z1;
+  const bp1 = m[6] * X1 + m[7] * Y1 + m[8] * Z1;
+  const rp2 = m[0] * X2 + m[1] * Y2 + m[2] * Z2;
+  const gp2 = m[3] * X2 + m[4] * Y2 + m[5] * Z2;
+  const bp2 = m[6] * X2 + m[7] * Y2 + m[8] * Z2;
+  // eq. 14 as in `compress`, written out: (F_L·|x|/100)^0.42 = exp(0.42·ln(F_L·|x|/100)).
+  const pr1 = Math.exp(0.42 * Math.log(F_L_100 * Math.abs(rp1)));
+  const pg1 = Math.exp(0.42 * Math.log(F_L_100 * Math.abs(gp1)));
+  const pb1 = Math.exp(0.42 * Math.log(F_L_100 * Math.abs(bp1)));
+  const pr2 = Math.exp(0.42 * Math.log(F_L_100 * Math.abs(rp2)));
+  const pg2 = Math.exp(0.42 * Math.log(F_L_100 * Math.abs(gp2)));
+  const pb2 = Math.exp(0.42 * Math.log(F_L_100 * Math.abs(bp2)));
+  const ra1 = (Math.sign(rp1) * 400 * pr1) / (pr1 + 27.13) + 0.1;
+  const ga1 = (Math.sign(gp1) * 400 * pg1) / (pg1 + 27.13) + 0.1;
+  const ba1 = (Math.sign(bp1) * 400 * pb1) / (pb1 + 27.13) + 0.1;
+  const ra2 = (Math.sign(rp2) * 400 * pr2) / (pr2 + 27.13) + 0.1;
+  const ga2 = (Math.sign(gp2) * 400 * pg2) / (pg2 + 27.13) + 0.1;
+  const ba2 = (Math.sign(bp2) * 400 * pb2) / (pb2 + 27.13) + 0.1;
+  // eq. 15: opponent dimensions a, b; their length √(a² + b²).
+  const a1 = ra1 - ga1 * (12 / 11) + ba1 * (1 / 11);
+  const b1 = (ra1 + ga1 - 2 * ba1) * (1 / 9);
+  const a2 = ra2 - ga2 * (12 / 11) + ba2 * (1 / 11);
+  const b2 = (ra2 + ga2 - 2 * ba2) * (1 / 9);
+  const ab1 = Math.sqrt(a1 * a1 + b1 * b1);
+  const ab2 = Math.sqrt(a2 * a2 + b2 * b2);
+  // eq. 16: h = atan2(b, a) (0 for a = b = 0), kept as cos h and sin h.
+  const inv1 = ab1 > 0 ? 1 / ab1 : 0;
+  const inv2 = ab2 > 0 ? 1 / ab2 : 0;
+  const cos1 = ab1 > 0 ? a1 * inv1 : 1;
+  const cos2 = ab2 > 0 ? a2 * inv2 : 1;
+  const sin1 = b1 * inv1;
+  const sin2 = b2 * inv2;
+  // eq. 18: e_t = ¼(cos(h + 2) + 3.8); eq. 23: t.
+  const t1 = (T_FACTOR * v.nbb * 0.25 * (cos1 * COS_2 - sin1 * SIN_2 + 3.8) * ab1) / (ra1 + ga1 + (21 / 20) * ba1);
+  const t2 = (T_FACTOR * v.nbb * 0.25 * (cos2 * COS_2 - sin2 * SIN_2 + 3.8) * ab2) / (ra2 + ga2 + (21 / 20) * ba2);
+  // eq. 19: ln(A / A_w); eq. 20: J = 100 (A / A_w)^(cz); eq. 24–25: M = t^0.9 √(J/100) · (1.64 − 0.29^n)^0.73 · F_L^0.25.
+  const lnA1 = Math.log((2 * ra1 + ga1 + ba1 * (1 / 20) - 0.305) * v.nbbOverAw);
+  const lnA2 = Math.log((2 * ra2 + ga2 + ba2 * (1 / 20) - 0.305) * v.nbbOverAw);
+  const J1 = 100 * Math.exp(v.cz * lnA1);
+  const J2 = 100 * Math.exp(v.cz * lnA2);
+  const M1 = v.mFactor * Math.exp(0.9 * Math.log(t1) + 0.5 * v.cz * lnA1);
+  const M2 = v.mFactor * Math.exp(0.9 * Math.log(t2) + 0.5 * v.cz * lnA2);
+  // Luo 2006 eq. 4: J' and M'; a' = M' cos h, b' = M' sin h.
+  const mp1 = Math.log(1 + 0.0228 * M1) * (1 / 0.0228);
+  const mp2 = Math.log(1 + 0.0228 * M2) * (1 / 0.0228);
+  out[o2] = (1.7 * J2) / (1 + 0.007 * J2);
+  out[o2 + 1] = mp2 * cos2;
+  out[o2 + 2] = mp2 * sin2;
+  out[o1] = (1.7 * J1) / (1 + 0.007 * J1);
+  out[o1 + 1] = mp1 * cos1;
+  out[o1 + 2] = mp1 * sin1;
+}
+
 /** CAM02-UCS J', a', b' of one colour XYZ under the white of `v`, written to out[o..o+2]. */
 export function cam02UcsInto(v: Cam02White, X: number, Y: number, Z: number, out: Float64Array, o: number): void {
-  const m = v.m;
-  const rp = m[0] * X + m[1] * Y + m[2] * Z;
-  const gp = m[3] * X + m[4] * Y + m[5] * Z;
-  const bp = m[6] * X + m[7] * Y + m[8] * Z;
-  // eq. 14 as in `compress`, written out: the three channels' logarithms and exponentials run side by side.
-  const lr = Math.log(F_L_100 * Math.abs(rp));
-  const lg = Math.log(F_L_100 * Math.abs(gp));
-  const lb = Math.log(F_L_100 * Math.abs(bp));
-  const pr = Math.exp(0.42 * lr);
-  const pg = Math.exp(0.42 * lg);
-  const pb = Math.exp(0.42 * lb);
-  const ra = (Math.sign(rp) * 400 * pr) / (pr + 27.13) + 0.1;
-  const ga = (Math.sign(gp) * 400 * pg) / (pg + 27.13) + 0.1;
-  const ba = (Math.sign(bp) * 400 * pb) / (pb + 27.13) + 0.1;
-  const a = ra - ga * (12 / 11) + ba * (1 / 11); // eq. 15
-  const b = (ra + ga - 2 * ba) * (1 / 9);
-  const ab = Math.sqrt(a * a + b * b);
-  const invAb = ab > 0 ? 1 / ab : 0;
-  const cosH = ab > 0 ? a * invAb : 1; // eq. 16: h = atan2(b, a), 0 for a = b = 0
-  const sinH = b * invAb;
-  const et = 0.25 * (cosH * COS_2 - sinH * SIN_2 + 3.8); // eq. 18: ¼(cos(h + 2) + 3.8)
-  const lnA = Math.log((2 * ra + ga + ba * (1 / 20) - 0.305) * v.nbbOverAw); // eq. 19: ln(A / A_w)
-  const J = 100 * Math.exp(v.cz * lnA); // eq. 20
-  const t = (T_FACTOR * v.nbb * et * ab) / (ra + ga + (21 / 20) * ba); // eq. 23
-  const M = v.mFactor * Math.exp(0.9 * Math.log(t) + 0.5 * v.cz * lnA); // eq. 24–25: t^0.9 √(J/100) · …
-  const mp = Math.log(1 + 0.0228 * M) * (1 / 0.0228); // Luo 2006 eq. 4
-  out[o] = (1.7 * J) / (1 + 0.007 * J);
-  out[o + 1] = mp * cosH;
-  out[o + 2] = mp * sinH;
+  cam02UcsPair(v, X, Y, Z, X, Y, Z, out, o, o);
+}
+
+/** CAM02-UCS J'a'b' of `count` colours xyz[3i..3i+2] under the white of `v`, into out[3i..3i+2]. */
+export function cam02UcsSamples(v: Cam02White, xyz: Float64Array, count: number, out: Float64Array): void {
+  let i = 0;
+  for (; i + 1 < count; i += 2) {
+    const o = 3 * i;
+    cam02UcsPair(v, xyz[o], xyz[o + 1], xyz[o + 2], xyz[o + 3], xyz[o + 4], xyz[o + 5], out, o, o + 3);
+  }
+  if (i < count) cam02UcsInto(v, xyz[3 * i], xyz[3 * i + 1], xyz[3 * i + 2], out, 3 * i);
 }
 
 export type Jab = [number, number, number];

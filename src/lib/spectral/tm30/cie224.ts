@@ -14,7 +14,7 @@
  * Rf, Rg and some bins come out NaN: TM-30 is undefined there; callers show "—".
  */
 import { cesUnder, CES_COUNT, newCesSet, tm30ReferenceSamples } from './reference';
-import { cam02UcsInto, newCam02White, setCam02White } from './cam02ucs';
+import { cam02UcsSamples, newCam02White, setCam02White } from './cam02ucs';
 import type { Tm30Bin, Tm30Result } from '../types';
 
 export const TM30_BIN_COUNT = 16;
@@ -74,10 +74,9 @@ function referenceJab(cctK: number): ReferenceJab {
   tm30ReferenceSamples(cctK, ref);
   setCam02White(ref.white, viewR);
   const { jab, bin } = entry;
-  const xyz = ref.samples;
+  cam02UcsSamples(viewR, ref.samples, CES_COUNT, jab);
   for (let i = 0; i < CES_COUNT; i++) {
     const o = 3 * i;
-    cam02UcsInto(viewR, xyz[o], xyz[o + 1], xyz[o + 2], jab, o);
     let h = Math.atan2(jab[o + 2], jab[o + 1]);
     if (h < 0) h += 2 * Math.PI;
     bin[i] = Math.min(Math.floor(h / BIN_WIDTH), TM30_BIN_COUNT - 1);
@@ -97,10 +96,9 @@ export function tm30Cie224(spd: Float64Array, cctK: number): Tm30Result {
   ar.fill(0);
   br.fill(0);
   let sumDE = 0;
-  const xyz = test.samples;
+  cam02UcsSamples(viewT, test.samples, CES_COUNT, jabT);
   for (let i = 0; i < CES_COUNT; i++) {
     const o = 3 * i;
-    cam02UcsInto(viewT, xyz[o], xyz[o + 1], xyz[o + 2], jabT, o);
     const dJ = jabT[o] - jabR[o];
     const da = jabT[o + 1] - jabR[o + 1];
     const db = jabT[o + 2] - jabR[o + 2];
