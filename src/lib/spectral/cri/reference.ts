@@ -8,9 +8,8 @@
  */
 import { CMF_1931_2DEG } from '../colorimetry/cmf';
 import { CIE_13_3_TCS } from '../data/cie-13-3-tcs';
-import { GRID_LENGTH } from '../grid';
 import { DAYLIGHT_S0, DAYLIGHT_S1, DAYLIGHT_S2, daylightCoefficients } from '../illuminants/daylight';
-import { planckSpd } from '../illuminants/planck';
+import { planckSpdShared } from '../illuminants/planck';
 import { knotWeights, makeKnotTable, newKnotWeights, sampleSums, type KnotTable } from '../internal/knot-integrals';
 
 /** CIE 13.3 switches from Planckian to daylight reference at this CCT (K). */
@@ -27,7 +26,6 @@ export interface SampleSet {
 }
 
 const weights = newKnotWeights(TCS_TABLE);
-const buffer = new Float64Array(GRID_LENGTH);
 
 /** Sample XYZ of an arbitrary spectrum on the grid under CIE 1931 2° (white Y = 100). */
 export function tcsUnder(spd: Float64Array, out: SampleSet = newSampleSet()): SampleSet {
@@ -81,5 +79,5 @@ export function criReferenceKind(cctK: number): CriReference {
 /** CIE 13.3 §5.2: reference white and sample XYZ at the test CCT. */
 export function criReferenceSamples(cctK: number, out: SampleSet = newSampleSet()): SampleSet {
   if (criReferenceKind(cctK) === 'daylight') return daylightUnder(cctK, out);
-  return tcsUnder(planckSpd(cctK, buffer), out);
+  return tcsUnder(planckSpdShared(cctK), out);
 }

@@ -40,3 +40,23 @@ export function planckSpdSpan(temperatureK: number, out: Float64Array, first: nu
   for (let i = first; i <= last; i++) out[i] = SCALED_M5[i] / Math.expm1(C2_OVER_LAMBDA[i] * invT);
   return out;
 }
+
+const shared = new Float64Array(GRID_LENGTH);
+let sharedK = NaN;
+let sharedFirst = 0;
+let sharedLast = -1;
+
+/**
+ * Planckian SPD at T over grid indices first…last, in a buffer shared by the callers that evaluate one
+ * spectrum in turn (the CIE 13.3 and CIE 224 references are both Planckian at the same CCT): computed once
+ * per temperature and span. Read it at once; the next call for another temperature overwrites it.
+ */
+export function planckSpdShared(temperatureK: number, first = 0, last = GRID_LENGTH - 1): Float64Array {
+  if (temperatureK !== sharedK || first < sharedFirst || last > sharedLast) {
+    planckSpdSpan(temperatureK, shared, first, last);
+    sharedK = temperatureK;
+    sharedFirst = first;
+    sharedLast = last;
+  }
+  return shared;
+}

@@ -11,7 +11,7 @@ import { CMF_1964_10DEG } from '../colorimetry/cmf';
 import { TM30_CES99 } from '../data/tm30-ces99';
 import { GRID_LENGTH } from '../grid';
 import { DAYLIGHT_S0, DAYLIGHT_S1, DAYLIGHT_S2, daylightCoefficients, daylightSpd } from '../illuminants/daylight';
-import { planckSpd, planckSpdSpan } from '../illuminants/planck';
+import { planckSpd, planckSpdShared } from '../illuminants/planck';
 import { knotSpan, knotWeights, makeKnotTable, newKnotWeights, sampleSums, type KnotTable } from '../internal/knot-integrals';
 
 export const CES_TABLE: KnotTable = makeKnotTable(TM30_CES99.values, TM30_CES99.startNm, TM30_CES99.stepNm);
@@ -30,7 +30,6 @@ export function newCesSet(): CesSet {
 }
 
 const weights = newKnotWeights(CES_TABLE);
-const buffer = new Float64Array(GRID_LENGTH);
 
 /** CES sums of a spectrum on the grid, CIE 1964 10°, 380–780 nm, scaled so the white has Y = whiteY (null: raw). */
 function cesUnderScaled(spd: Float64Array, out: CesSet, whiteY: number | null): CesSet {
@@ -88,10 +87,10 @@ export function daylightFraction(cctK: number): number {
 export function tm30ReferenceSamples(cctK: number, out: CesSet = newCesSet()): CesSet {
   const m = daylightFraction(cctK);
   if (m === 1) return daylightInto(cctK, out, 100, false);
-  planckSpdSpan(cctK, buffer, SPAN_FIRST, SPAN_LAST);
-  if (m === 0) return cesUnder(buffer, out);
+  const planck = planckSpdShared(cctK, SPAN_FIRST, SPAN_LAST);
+  if (m === 0) return cesUnder(planck, out);
   // §4.3: (1 − m)·P/Y_P + m·D/Y_D has Y10 = 1; ×100 gives the white Y10 = 100.
-  cesUnderScaled(buffer, out, 100 * (1 - m));
+  cesUnderScaled(planck, out, 100 * (1 - m));
   return daylightInto(cctK, out, 100 * m, true);
 }
 
