@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   CMF_1964_10DEG,
+  createCam02Ucs,
   planckSpd,
   resampleToGrid,
   spdToXyz,
@@ -233,5 +234,30 @@ describe('CIE 224:2017 / TM-30-20: the product agrees with a plain implementatio
     const pump = led([[450, 20, 1]]);
     const cct = cctOf(pump);
     expect(Number.isNaN(tm30Plain(pump, cct).rf)).toBe(Number.isNaN(tm30Cie224(pump, cct).rf));
+  });
+});
+
+describe('CIE 159:2004 CIECAM02 + CAM02-UCS (Luo et al. 2006): the converter agrees with the equations as printed', () => {
+  const whites = [
+    { name: 'equal-energy white, Y_w = 100', white: [100, 100, 100] },
+    { name: 'warm white (about 2700 K), Y_w = 100', white: [114.6, 100, 35.9] },
+    { name: 'D65-like white at Y_w = 80 (other luminance constants)', white: [76.04, 80, 87.11] }
+  ];
+  const colours = [
+    [19.31, 23.93, 10.14],
+    [57.06, 43.06, 31.96],
+    [3.53, 6.56, 2.14],
+    [19.01, 20, 21.78],
+    [60, 40, 80]
+  ];
+  it.each(whites)('$name: J′, a′, b′ within 1e-12', ({ white }) => {
+    // common practice: an optimised form checked against the printed equations
+    const fast = createCam02Ucs(white);
+    const plain = cam02ucsPlain(white);
+    for (const c of colours) {
+      const got = fast(c[0], c[1], c[2]) ?? [NaN, NaN, NaN];
+      const want = plain(c);
+      for (let k = 0; k < 3; k++) expect(differs(got[k], want[k])).toBeLessThanOrEqual(1e-12);
+    }
   });
 });
