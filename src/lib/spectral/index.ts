@@ -9,7 +9,7 @@ export { evaluateSpectrum, evaluateGrid, type FullEvaluateOptions } from './eval
 
 // Grid and resampling
 export { GRID_START_NM, GRID_END_NM, GRID_STEP_NM, GRID_LENGTH, GRID_WAVELENGTHS_NM, tableToGrid } from './grid';
-export { resampleToGrid, validateSpd } from './resample';
+export { resampleToGrid, resampleToGridInto, validateSpd } from './resample';
 
 // Colorimetry
 export { CMF_1931_2DEG, CMF_1964_10DEG, type Observer, type CmfGrid } from './colorimetry/cmf';

@@ -80,21 +80,31 @@ export function validateSpd(spd: unknown): asserts spd is Spd {
  * extreme (see the header). Throws when no power falls in 360–830 nm.
  */
 export function resampleToGrid(spd: Spd): Float64Array {
+  return resampleToGridInto(spd, new Float64Array(GRID_LENGTH));
+}
+
+/** As `resampleToGrid`, into a caller's buffer of GRID_LENGTH values (callers evaluating many spectra reuse one). */
+export function resampleToGridInto(spd: Spd, out: Float64Array): Float64Array {
   validateSpd(spd);
   const { wavelengths, values } = spd;
   const scale = scaleOf(values);
-  const out = new Float64Array(GRID_LENGTH);
   const n = wavelengths.length;
+  const first = wavelengths[0];
+  const lastNm = wavelengths[n - 1];
   let k = 0;
   let total = 0;
   for (let i = 0; i < GRID_LENGTH; i++) {
     const wl = GRID_START_NM + i;
-    if (wl < wavelengths[0] || wl > wavelengths[n - 1]) continue;
+    if (wl < first || wl > lastNm) {
+      out[i] = 0;
+      continue;
+    }
     while (k < n - 2 && wavelengths[k + 1] < wl) k++;
     const w0 = wavelengths[k];
-    const w1 = wavelengths[k + 1];
-    const f = (wl - w0) / (w1 - w0);
-    const p = (values[k] / scale) * (1 - f) + (values[k + 1] / scale) * f;
+    const f = (wl - w0) / (wavelengths[k + 1] - w0);
+    const v0 = scale === 1 ? values[k] : values[k] / scale; // divide: 1/scale overflows for subnormal maxima
+    const v1 = scale === 1 ? values[k + 1] : values[k + 1] / scale;
+    const p = v0 * (1 - f) + v1 * f;
     const clamped = p > 0 ? p : 0;
     out[i] = clamped;
     total += clamped;

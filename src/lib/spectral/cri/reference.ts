@@ -8,10 +8,9 @@
  */
 import { CMF_1931_2DEG } from '../colorimetry/cmf';
 import { CIE_13_3_TCS } from '../data/cie-13-3-tcs';
-import { GRID_LENGTH } from '../grid';
 import { DAYLIGHT_S0, DAYLIGHT_S1, DAYLIGHT_S2, daylightCoefficients } from '../illuminants/daylight';
-import { planckSpd } from '../illuminants/planck';
-import { knotWeights, makeKnotTable, sampleSums, type KnotTable } from '../internal/knot-integrals';
+import { planckSpdShared } from '../illuminants/planck';
+import { knotWeights, makeKnotTable, newKnotWeights, sampleSums, type KnotTable } from '../internal/knot-integrals';
 
 /** CIE 13.3 switches from Planckian to daylight reference at this CCT (K). */
 export const CRI_DAYLIGHT_FROM_K = 5000;
@@ -26,13 +25,12 @@ export interface SampleSet {
   samples: Float64Array;
 }
 
-const weights = new Float64Array(3 * TCS_TABLE.knots);
-const whiteRaw = new Float64Array(3);
-const buffer = new Float64Array(GRID_LENGTH);
+const weights = newKnotWeights(TCS_TABLE);
 
 /** Sample XYZ of an arbitrary spectrum on the grid under CIE 1931 2° (white Y = 100). */
 export function tcsUnder(spd: Float64Array, out: SampleSet = newSampleSet()): SampleSet {
-  knotWeights(spd, CMF_1931_2DEG, TCS_TABLE, weights, whiteRaw);
+  knotWeights(spd, CMF_1931_2DEG, TCS_TABLE, weights);
+  const whiteRaw = weights.white;
   const k = 100 / whiteRaw[1];
   sampleSums(TCS_TABLE, weights, k, out.samples);
   out.white[0] = whiteRaw[0] * k;
@@ -53,11 +51,10 @@ interface RawSet {
 let daylightParts: RawSet[] | null = null;
 
 function rawUnder(spd: Float64Array): RawSet {
-  const white = new Float64Array(3);
   const samples = new Float64Array(3 * TCS_COUNT);
-  knotWeights(spd, CMF_1931_2DEG, TCS_TABLE, weights, white);
+  knotWeights(spd, CMF_1931_2DEG, TCS_TABLE, weights);
   sampleSums(TCS_TABLE, weights, 1, samples);
-  return { white, samples };
+  return { white: Float64Array.from(weights.white), samples };
 }
 
 function daylightUnder(cctK: number, out: SampleSet): SampleSet {
@@ -82,5 +79,5 @@ export function criReferenceKind(cctK: number): CriReference {
 /** CIE 13.3 §5.2: reference white and sample XYZ at the test CCT. */
 export function criReferenceSamples(cctK: number, out: SampleSet = newSampleSet()): SampleSet {
   if (criReferenceKind(cctK) === 'daylight') return daylightUnder(cctK, out);
-  return tcsUnder(planckSpd(cctK, buffer), out);
+  return tcsUnder(planckSpdShared(cctK), out);
 }

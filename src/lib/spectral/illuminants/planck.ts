@@ -17,12 +17,12 @@ export function planckExitance(wavelengthNm: number, temperatureK: number): numb
   return PLANCK_C1 / (lambdaM ** 5 * Math.expm1(PLANCK_C2 / (lambdaM * temperatureK)));
 }
 
-/** Inverse 5th powers of the grid wavelengths (in m) and c2/λ, precomputed for speed. */
-const LAMBDA_M5 = new Float64Array(GRID_LENGTH);
+/** c1 · 1e-13 / λ⁵ and c2/λ on the grid (λ in m), precomputed for speed. */
+const SCALED_M5 = new Float64Array(GRID_LENGTH);
 const C2_OVER_LAMBDA = new Float64Array(GRID_LENGTH);
 for (let i = 0; i < GRID_LENGTH; i++) {
   const lambdaM = (GRID_START_NM + i) * 1e-9;
-  LAMBDA_M5[i] = 1 / lambdaM ** 5;
+  SCALED_M5[i] = (PLANCK_C1 * 1e-13) / lambdaM ** 5;
   C2_OVER_LAMBDA[i] = PLANCK_C2 / lambdaM;
 }
 
@@ -31,9 +31,32 @@ for (let i = 0; i < GRID_LENGTH; i++) {
  * Writes into `out` when given (hot paths reuse a buffer).
  */
 export function planckSpd(temperatureK: number, out: Float64Array = new Float64Array(GRID_LENGTH)): Float64Array {
+  return planckSpdSpan(temperatureK, out, 0, GRID_LENGTH - 1);
+}
+
+/** As `planckSpd`, but fills only grid indices first…last (inclusive) of `out`; the rest is left as it is. */
+export function planckSpdSpan(temperatureK: number, out: Float64Array, first: number, last: number): Float64Array {
   const invT = 1 / temperatureK;
-  for (let i = 0; i < GRID_LENGTH; i++) {
-    out[i] = (PLANCK_C1 * 1e-13 * LAMBDA_M5[i]) / Math.expm1(C2_OVER_LAMBDA[i] * invT);
-  }
+  for (let i = first; i <= last; i++) out[i] = SCALED_M5[i] / Math.expm1(C2_OVER_LAMBDA[i] * invT);
   return out;
+}
+
+const shared = new Float64Array(GRID_LENGTH);
+let sharedK = NaN;
+let sharedFirst = 0;
+let sharedLast = -1;
+
+/**
+ * Planckian SPD at T over grid indices first…last, in a buffer shared by the callers that evaluate one
+ * spectrum in turn (the CIE 13.3 and CIE 224 references are both Planckian at the same CCT): computed once
+ * per temperature and span. Read it at once; the next call for another temperature overwrites it.
+ */
+export function planckSpdShared(temperatureK: number, first = 0, last = GRID_LENGTH - 1): Float64Array {
+  if (temperatureK !== sharedK || first < sharedFirst || last > sharedLast) {
+    planckSpdSpan(temperatureK, shared, first, last);
+    sharedK = temperatureK;
+    sharedFirst = first;
+    sharedLast = last;
+  }
+  return shared;
 }

@@ -11,13 +11,14 @@ import { CMF_1964_10DEG } from '../colorimetry/cmf';
 import { TM30_CES99 } from '../data/tm30-ces99';
 import { GRID_LENGTH } from '../grid';
 import { DAYLIGHT_S0, DAYLIGHT_S1, DAYLIGHT_S2, daylightCoefficients, daylightSpd } from '../illuminants/daylight';
-import { planckSpd } from '../illuminants/planck';
-import { knotWeights, makeKnotTable, sampleSums, type KnotTable } from '../internal/knot-integrals';
+import { planckSpd, planckSpdShared } from '../illuminants/planck';
+import { knotSpan, knotWeights, makeKnotTable, newKnotWeights, sampleSums, type KnotTable } from '../internal/knot-integrals';
 
 export const CES_TABLE: KnotTable = makeKnotTable(TM30_CES99.values, TM30_CES99.startNm, TM30_CES99.stepNm);
 export const CES_COUNT = CES_TABLE.samples;
 export const BLEND_START_K = 4000;
 export const BLEND_END_K = 5000;
+const [SPAN_FIRST, SPAN_LAST] = knotSpan(CES_TABLE);
 
 export interface CesSet {
   white: Float64Array;
@@ -28,14 +29,25 @@ export function newCesSet(): CesSet {
   return { white: new Float64Array(3), samples: new Float64Array(3 * CES_COUNT) };
 }
 
-const weights = new Float64Array(3 * CES_TABLE.knots);
-const buffer = new Float64Array(GRID_LENGTH);
+const weights = newKnotWeights(CES_TABLE);
+
+/** CES sums of a spectrum on the grid, CIE 1964 10°, 380–780 nm, scaled so the white has Y = whiteY (null: raw). */
+function cesUnderScaled(spd: Float64Array, out: CesSet, whiteY: number | null): CesSet {
+  knotWeights(spd, CMF_1964_10DEG, CES_TABLE, weights);
+  const k = whiteY === null ? 1 : whiteY / weights.white[1];
+  for (let c = 0; c < 3; c++) out.white[c] = weights.white[c] * k;
+  sampleSums(CES_TABLE, weights, k, out.samples);
+  return out;
+}
 
 /** Raw (unscaled) CES sums of a spectrum on the grid, CIE 1964 10°, 380–780 nm. */
 export function cesUnderRaw(spd: Float64Array, out: CesSet = newCesSet()): CesSet {
-  knotWeights(spd, CMF_1964_10DEG, CES_TABLE, weights, out.white);
-  sampleSums(CES_TABLE, weights, 1, out.samples);
-  return out;
+  return cesUnderScaled(spd, out, null);
+}
+
+/** CES sums of a spectrum on the grid, CIE 1964 10°, 380–780 nm, scaled so its white has Y = 100. */
+export function cesUnder(spd: Float64Array, out: CesSet = newCesSet()): CesSet {
+  return cesUnderScaled(spd, out, 100);
 }
 
 /** Scales a set so its white has Y = 100. */
@@ -47,17 +59,20 @@ export function scaleToWhite100(set: CesSet): CesSet {
 }
 
 let parts: CesSet[] | null = null;
-const planckPart = newCesSet();
-const daylightPart = newCesSet();
 
-function daylightRaw(cctK: number, out: CesSet): CesSet {
+/** Adds the daylight (S0 + M1·S1 + M2·S2) CES sums to `out` when `add` (else writes them), scaled so its white has Y = whiteY. */
+function daylightInto(cctK: number, out: CesSet, whiteY: number, add: boolean): CesSet {
   parts ??= [cesUnderRaw(DAYLIGHT_S0), cesUnderRaw(DAYLIGHT_S1), cesUnderRaw(DAYLIGHT_S2)];
   const [p0, p1, p2] = parts;
   const { m1, m2 } = daylightCoefficients(cctK);
-  for (let c = 0; c < 3; c++) out.white[c] = p0.white[c] + m1 * p1.white[c] + m2 * p2.white[c];
-  for (let i = 0; i < out.samples.length; i++) {
-    out.samples[i] = p0.samples[i] + m1 * p1.samples[i] + m2 * p2.samples[i];
-  }
+  const k = whiteY / (p0.white[1] + m1 * p1.white[1] + m2 * p2.white[1]);
+  const a = add ? 1 : 0;
+  for (let c = 0; c < 3; c++) out.white[c] = a * out.white[c] + k * (p0.white[c] + m1 * p1.white[c] + m2 * p2.white[c]);
+  const s = out.samples;
+  const s0 = p0.samples;
+  const s1 = p1.samples;
+  const s2 = p2.samples;
+  for (let i = 0; i < s.length; i++) s[i] = a * s[i] + k * (s0[i] + m1 * s1[i] + m2 * s2[i]);
   return out;
 }
 
@@ -71,17 +86,12 @@ export function daylightFraction(cctK: number): number {
 /** CIE 224 reference: white and CES XYZ (white Y10 = 100). */
 export function tm30ReferenceSamples(cctK: number, out: CesSet = newCesSet()): CesSet {
   const m = daylightFraction(cctK);
-  if (m === 0) return scaleToWhite100(cesUnderRaw(planckSpd(cctK, buffer), out));
-  if (m === 1) return scaleToWhite100(daylightRaw(cctK, out));
-  cesUnderRaw(planckSpd(cctK, buffer), planckPart);
-  daylightRaw(cctK, daylightPart);
-  const kp = (1 - m) / planckPart.white[1];
-  const kd = m / daylightPart.white[1];
-  for (let c = 0; c < 3; c++) out.white[c] = kp * planckPart.white[c] + kd * daylightPart.white[c];
-  for (let i = 0; i < out.samples.length; i++) {
-    out.samples[i] = kp * planckPart.samples[i] + kd * daylightPart.samples[i];
-  }
-  return scaleToWhite100(out);
+  if (m === 1) return daylightInto(cctK, out, 100, false);
+  const planck = planckSpdShared(cctK, SPAN_FIRST, SPAN_LAST);
+  if (m === 0) return cesUnder(planck, out);
+  // §4.3: (1 − m)·P/Y_P + m·D/Y_D has Y10 = 1; ×100 gives the white Y10 = 100.
+  cesUnderScaled(planck, out, 100 * (1 - m));
+  return daylightInto(cctK, out, 100 * m, true);
 }
 
 function y10(spd: Float64Array): number {
