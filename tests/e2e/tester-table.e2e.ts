@@ -32,6 +32,13 @@ test('a tester profile, then a per-part table uploaded with it; spectral metrics
   await expect(part).toContainText('not measured');
   await expect(part.getByTestId('not-measured')).toContainText('R9 ≥ 50: not measured');
 
+  // The parts list is filtered and paged on the server: only T2 and T4 sit at x 0.4339.
+  await page.goto(`/measurements/${b.id}?x0=0.43385&x1=0.43395&y0=0.40&y1=0.41&sort=label&dir=desc`);
+  await expect(page.getByTestId('parts-count')).toContainText('Parts 1–2 of 2 matching');
+  await expect(page.getByTestId('parts-table').locator('tbody tr').first()).toHaveAttribute('data-part', `${b.batchNumber}-T4`);
+  await page.goto(`/measurements/${b.id}?stepsMin=abc`);
+  await expect(page.getByText('Filter not applied: steps from: "abc" is not a number')).toBeVisible();
+
   // A table that does not fit the profile: refused, naming the line and column; nothing saved.
   await page.getByLabel('The file holds').selectOption({ label: `a tester table: ${name}` });
   await page

@@ -41,6 +41,23 @@ export interface ChromaticityPlotModel {
   focus: Pair[];
   /** The revision's latest yield forecast, drawn under the parts (a sample of its simulated parts). */
   forecast: { label: string; points: Pair[] } | null;
+  /** All parts of the batch; `parts` holds at most MAX_PLOT_PARTS of them (every failing part first). */
+  totalParts: number;
+}
+
+/** Parts drawn one by one; a larger lot is drawn with every failing part and an even sample of the passing ones. */
+export const MAX_PLOT_PARTS = 5000;
+
+/** Every failing part (up to the cap), then every k-th passing part to fill it. */
+export function plotSample<T extends { pass: boolean }>(parts: readonly T[], max = MAX_PLOT_PARTS): T[] {
+  if (parts.length <= max) return [...parts];
+  const failing = parts.filter((p) => !p.pass).slice(0, max);
+  const passing = parts.filter((p) => p.pass);
+  const room = max - failing.length;
+  const step = room > 0 ? passing.length / room : Infinity;
+  const sampled: T[] = [];
+  for (let k = 0; k < room && Math.floor(k * step) < passing.length; k++) sampled.push(passing[Math.floor(k * step)]);
+  return [...failing, ...sampled];
 }
 
 const REFERENCE_STEPS = [3, 5, 7];
@@ -79,9 +96,11 @@ export function chromaticityPlotModel(
     cct: p.metrics.cct,
     duv: p.metrics.duv
   }));
-  const focus: Pair[] = [[t.x, t.y], ...tolerancePts, ...parts.map((p): Pair => [p.x, p.y]), ...markers.map((m): Pair => [m.x, m.y])];
+  const drawn = plotSample(parts);
+  const focus: Pair[] = [[t.x, t.y], ...tolerancePts, ...drawn.map((p): Pair => [p.x, p.y]), ...markers.map((m): Pair => [m.x, m.y])];
   return {
-    parts,
+    parts: drawn,
+    totalParts: parts.length,
     target: { x: t.x, y: t.y, label: t.label },
     outlines,
     quadrangles: quads,

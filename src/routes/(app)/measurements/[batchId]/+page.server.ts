@@ -12,6 +12,9 @@ import { setAcceptance } from '$lib/server/measurements/acceptance';
 import { uploadMeasurements, withdrawUpload } from '$lib/server/measurements/upload';
 import { testConditionFieldsSchema, testerProfileChoiceSchema } from '$lib/measurements/schema';
 import { listTesterProfiles } from '$lib/server/measurements/tester-profiles';
+import { DEFAULT_PARTS_QUERY, partsQuerySchema, selectParts } from '$lib/measurements/parts-query';
+
+const PARTS_QUERY_KEYS = Object.keys(partsQuerySchema.shape);
 import { makeCorrectionDraft } from '$lib/server/measurements/correction';
 import { fitSpreadToBatch } from '$lib/server/measurements/fit-spread';
 import { getRevisionVariationModel } from '$lib/server/yield-predictions/variation-model';
@@ -20,13 +23,20 @@ import { readForm } from '$lib/server/forms/read-form';
 
 const batchId = (param: string): number => idParam(param, `Batch ${param} was not found.`);
 
-export const load: PageServerLoad = async ({ locals, params }) => {
+export const load: PageServerLoad = async ({ locals, params, url }) => {
   const user = requireUser(locals);
   const ctx = await loadContext(batchId(params.batchId));
   if (!ctx) error(404, `Batch ${params.batchId} was not found.`);
   const [{ view }, model] = await Promise.all([computeResults(ctx), getRevisionVariationModel(ctx.revision.id)]);
+  // The parts list travels one page at a time, filtered and sorted here (a lot can hold 100,000 parts).
+  const raw = Object.fromEntries([...url.searchParams].filter(([k]) => PARTS_QUERY_KEYS.includes(k)));
+  const asked = partsQuerySchema.safeParse(raw);
+  const { items, ...partsPage } = selectParts(view.parts, asked.success ? asked.data : DEFAULT_PARTS_QUERY);
   return {
-    results: view,
+    results: { ...view, parts: items },
+    partsPage,
+    partsQuery: asked.success ? raw : {},
+    partsQueryError: asked.success ? null : asked.error.issues[0].message,
     canAct: canActOnMeasurements(user),
     dispositionBlocked: await dispositionRefusal(user, ctx),
     variationModel: { version: model.version, source: model.source, fittedBatch: model.fittedBatch?.batchNumber ?? null },
