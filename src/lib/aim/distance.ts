@@ -36,8 +36,15 @@ export interface ColourDistance {
 export type Tolerance = { kind: 'deltaUvPrime'; value: number } | { kind: 'deltaUv'; value: number } | { kind: 'sdcm'; steps: number };
 
 /** The 1-step ellipse used around a centre: IEC 60081 shape at the centre's CCT, centred on it. */
+let lastEllipse: { x: number; y: number; cct: number; ellipse: ChromaticityEllipse } | null = null;
+
 export function stepEllipseAt(centre: ColourCentre): ChromaticityEllipse {
-  return { ...ellipseForCct(centre.cct), x: centre.x, y: centre.y, steps: 1 };
+  // A batch judges every part against one centre: the last ellipse is kept (same inputs, same object, frozen).
+  const last = lastEllipse;
+  if (last && last.x === centre.x && last.y === centre.y && last.cct === centre.cct) return last.ellipse;
+  const ellipse = Object.freeze({ ...ellipseForCct(centre.cct), x: centre.x, y: centre.y, steps: 1 });
+  lastEllipse = { x: centre.x, y: centre.y, cct: centre.cct, ellipse };
+  return ellipse;
 }
 
 export function colourDistance(

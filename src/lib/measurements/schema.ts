@@ -54,11 +54,12 @@ export const withdrawUploadSchema = z.object({
 });
 
 /**
- * Largest measurement file accepted (bytes): 500 parts × 401 points at 6 digits is about 2.2 MB. Kept
- * under the server's request limit (BODY_SIZE_LIMIT, 3M in scripts/profile.sh) so a larger file gets
- * this feature's own message; raise both together for bigger exports.
+ * Largest measurement file accepted (bytes, after gunzip when sent compressed): the 2,000 parts one
+ * upload takes (MAX_PARTS_PER_UPLOAD) × 401 points at 6 digits is about 7.5 MB. Kept under the server's
+ * request limit (BODY_SIZE_LIMIT, 12M in scripts/profile.sh) so a larger file gets this feature's own
+ * message; raise both together for bigger exports.
  */
-export const MAX_MEASUREMENT_FILE_BYTES = Math.floor(2.9 * 1024 * 1024);
+export const MAX_MEASUREMENT_FILE_BYTES = 11 * 1024 * 1024;
 /**
  * A tester's per-part table: up to 100,000 parts (MAX_TABLE_ROWS) of about 100 bytes a row, under the
  * server's request limit (BODY_SIZE_LIMIT, 12M in scripts/profile.sh).

@@ -1,6 +1,6 @@
 /**
  * Fuzz of the measurement reader's pure half (fast-check): bytes decoded as the server decodes an
- * upload, parsed with the server's options (part columns, 2.9 MB), then every part measured by the
+ * upload, parsed with the server's options (part columns, the file limit), then every part measured by the
  * spectral core. Files are malformed ones (see tests/lib/spectrum-file/corruptions.ts) and valid
  * ones with odd part names and values from 1e-300 to 1e300. Proves: measuring never throws — a part
  * the core refuses is a typed error naming a column the file has — and every measured part has a

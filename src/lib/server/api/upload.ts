@@ -20,6 +20,8 @@ export interface UploadKind {
   what: string;
   /** Name used when the request gives none. */
   defaultName: string;
+  /** Also take an application/gzip body (the caller unpacks it). */
+  gzip?: boolean;
 }
 
 const FRAMING_BYTES = 64 * 1024;
@@ -53,12 +55,15 @@ export async function readUploadedFile(request: Request, kind: UploadKind): Prom
   }
   const type = request.headers.get('content-type') ?? '';
   if (/^multipart\/form-data/i.test(type)) return plainName(await formFile(request, kind));
-  if (/^text\/(csv|plain|tab-separated-values)\b/i.test(type)) {
+  if (/^text\/(csv|plain|tab-separated-values)\b/i.test(type) || (kind.gzip && /^application\/(x-)?gzip\b/i.test(type))) {
     return plainName({
       name: request.headers.get('x-file-name')?.slice(0, 200) || kind.defaultName,
       contentType: type.split(';')[0],
       body: Buffer.from(await request.arrayBuffer())
     });
   }
-  throw unsupportedType(`Send the ${kind.what} file as multipart/form-data (field "file") or as a text/csv or text/plain body.`);
+  throw unsupportedType(
+    `Send the ${kind.what} file as multipart/form-data (field "file") or as a text/csv or text/plain body` +
+      (kind.gzip ? ' (or application/gzip).' : '.')
+  );
 }

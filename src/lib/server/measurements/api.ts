@@ -10,8 +10,8 @@ import type { MeasurementFile } from './upload';
  */
 export function uploadedFile(request: Request, table = false): Promise<MeasurementFile> {
   return table
-    ? readUploadedFile(request, { maxBytes: MAX_TABLE_FILE_BYTES, what: 'tester table', defaultName: 'tester-table.csv' })
-    : readUploadedFile(request, { maxBytes: MAX_MEASUREMENT_FILE_BYTES, what: 'measurement', defaultName: 'measurements.csv' });
+    ? readUploadedFile(request, { maxBytes: MAX_TABLE_FILE_BYTES, what: 'tester table', defaultName: 'tester-table.csv', gzip: true })
+    : readUploadedFile(request, { maxBytes: MAX_MEASUREMENT_FILE_BYTES, what: 'measurement', defaultName: 'measurements.csv', gzip: true });
 }
 
 /** Newline-delimited JSON stream: progress lines from `run`, then one `done` or `error` line. */

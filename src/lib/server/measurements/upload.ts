@@ -1,5 +1,5 @@
 /**
- * Measurement upload for a batch. The file is read and checked completely before anything is
+ * Measurement upload for a batch (gzip accepted: ./unpack.ts). The file is read and checked completely before anything is
  * written: parser (src/lib/spectrum-file/parse.ts, several part columns), then every part through
  * the spectral core; part names must be new to the batch. Only then are the raw file (object
  * storage), the upload and its parts saved — one transaction; the object is removed if it fails.
@@ -21,6 +21,7 @@ import { MAX_MEASUREMENT_FILE_BYTES, MAX_TABLE_FILE_BYTES } from '../../measurem
 import { parseTesterTable } from '../../tester-table/parse';
 import { testerPartMetrics } from '../../tester-table/part-metrics';
 import { getTesterProfile } from './tester-profiles';
+import { unpackUpload } from './unpack';
 import { lockBatch } from '../batches/lock';
 import { lineIssue, tooLarge, unprocessable, type DomainError } from '../../errors/domain-error';
 import { conflict, notFound } from './errors';
@@ -71,9 +72,10 @@ export async function measureFile(
       `The file is ${formatBytes(file.body.length)}; the limit is ${formatBytes(MAX_MEASUREMENT_FILE_BYTES)}. Nothing was saved.`
     );
   }
+  const body = unpackUpload(file.body, file.name, MAX_MEASUREMENT_FILE_BYTES);
   onProgress?.({ phase: 'parsing' });
   // CSV/TXT (one column per part) or an IES TM-27 document (one SpectralDistribution per part).
-  const parsed = parseSpectrumUpload(decodeText(file.body), {
+  const parsed = parseSpectrumUpload(decodeText(body), {
     multiColumn: true,
     maxBytes: MAX_MEASUREMENT_FILE_BYTES,
     quantities: EMITTED_QUANTITIES
@@ -121,9 +123,10 @@ export async function readTesterFile(
         'Nothing was saved.'
     );
   }
+  const body = unpackUpload(file.body, file.name, MAX_TABLE_FILE_BYTES);
   const { id, version, profile } = await getTesterProfile(profileId);
   onProgress?.({ phase: 'parsing' });
-  const parsed = parseTesterTable(decodeText(file.body), profile);
+  const parsed = parseTesterTable(decodeText(body), profile);
   if (!parsed.ok) {
     const n = parsed.errors.length;
     throw unprocessable(

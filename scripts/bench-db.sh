@@ -1,0 +1,8 @@
+#!/usr/bin/env bash
+# `npm run bench:db`: speed figures that need the database (a sandbox database of its own on the private
+# server, migrated and seeded): a 100,000-part tester table from upload to summary.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+[ -d node_modules ] || npm ci
+echo "Phosforge database bench — $(node -v), $(nproc) cores, $(date -u +%Y-%m-%dT%H:%MZ)"
+bash scripts/sandbox.sh bench --fresh npx tsx scripts/bench/db/tester-upload.ts
