@@ -36,6 +36,13 @@ test('a tester profile, then a per-part table uploaded with it; spectral metrics
   await page.goto(`/measurements/${b.id}?x0=0.43385&x1=0.43395&y0=0.40&y1=0.41&sort=label&dir=desc`);
   await expect(page.getByTestId('parts-count')).toContainText('Parts 1–2 of 2 matching');
   await expect(page.getByTestId('parts-table').locator('tbody tr').first()).toHaveAttribute('data-part', `${b.batchNumber}-T4`);
+  // The matching parts as CSV, with the same filters: two rows, spectral metrics "not measured".
+  const csv = await page.request.get((await page.getByTestId('parts-csv').getAttribute('href'))!);
+  expect(csv.headers()['content-type']).toContain('text/csv');
+  const lines = (await csv.text()).trim().split('\n');
+  expect(lines).toHaveLength(3);
+  expect(lines[1]).toContain(`${b.batchNumber}-T4`);
+  expect(lines[1]).toContain('not measured');
   await page.goto(`/measurements/${b.id}?stepsMin=abc`);
   await expect(page.getByText('Filter not applied: steps from: "abc" is not a number')).toBeVisible();
 

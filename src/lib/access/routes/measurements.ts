@@ -8,6 +8,7 @@ const B = '999999';
 export const MEASUREMENTS_ROUTES: RouteTable = {
   '/(app)/measurements': { sample: '/measurements', methods: { GET: mayJudgeBatches.roles }, nav: { label: 'Measurements', order: 60 } },
   '/(app)/measurements/[batchId]': { sample: `/measurements/${B}`, methods: { GET: ALL, POST: mayJudgeBatches.roles } },
+  '/(app)/measurements/[batchId]/parts.csv': { sample: `/measurements/${B}/parts.csv`, methods: { GET: ALL } },
   '/(app)/measurements/[batchId]/files/[fileId]': { sample: `/measurements/${B}/files/${B}`, methods: { GET: ALL } },
   '/(app)/measurements/tester-profiles': { sample: '/measurements/tester-profiles', methods: { GET: ALL, POST: mayJudgeBatches.roles } },
   '/api/v1/tester-profiles': { sample: '/api/v1/tester-profiles', methods: { GET: ALL, POST: mayJudgeBatches.roles } },
