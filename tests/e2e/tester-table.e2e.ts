@@ -54,3 +54,34 @@ test('a tester profile, then a per-part table uploaded with it; spectral metrics
   await page.getByRole('button', { name: 'Upload and measure' }).click();
   await expect(page.getByTestId('upload-error')).toContainText('line 2, column "y": "abc" is not a number');
 });
+
+// A lot larger than the plot draws point by point: the density in hexagons, the failing parts as points,
+// the parts list paged. 6,000 parts invented: a spread of about ±6 steps around 3000 K.
+test('a 6,000-part tester table is plotted as a density with the failing parts as points', async ({ page }) => {
+  const b = await completedBatch();
+  const name = `E2E density ${Date.now().toString(36)}`;
+  await signInThroughForm(page, DEMO.quality);
+  await page.goto('/measurements/tester-profiles');
+  await page.getByLabel('Name').fill(name);
+  await page.getByLabel('CIE x').fill('x');
+  await page.getByLabel('CIE y').fill('y');
+  await page.getByRole('button', { name: 'Create profile' }).click();
+  await expect(page.getByRole('status')).toContainText('created');
+  let s = 5;
+  const rnd = () => (s = (s * 16807) % 2147483647) / 2147483647;
+  const rows = Array.from(
+    { length: 6000 },
+    () => `${(0.4338 + 0.012 * (rnd() - 0.5)).toFixed(5)},${(0.403 + 0.008 * (rnd() - 0.5)).toFixed(5)}`
+  );
+  await page.goto(`/measurements/${b.id}`);
+  await page.getByLabel('The file holds').selectOption({ label: `a tester table: ${name}` });
+  await page
+    .getByLabel('Measurement file', { exact: true })
+    .setInputFiles({ name: 'lot.csv', mimeType: 'text/csv', buffer: Buffer.from(['x,y', ...rows].join('\n')) });
+  await page.getByRole('button', { name: 'Upload and measure' }).click();
+  await expect(page.getByTestId('upload-done')).toContainText('6000 parts measured and saved');
+  await expect(page.locator('[data-shape="density"]')).toHaveAttribute('data-bins', /^[1-9]\d+$/);
+  await expect(page.getByTestId('plot-sample')).toContainText('6,000 parts: density in hexagons');
+  await expect(page.getByTestId('parts-count')).toContainText('Parts 1–100 of 6,000 matching');
+  await expect(page.getByTestId('parts-pager')).toContainText('page 1 of 60');
+});

@@ -6,6 +6,7 @@
  * (measured mean, predicted point, corrected prediction). The first view fits the target, the
  * tolerance, the parts and the markers; zooming out shows the whole bin and its neighbours.
  */
+import { hexbin, type HexBin } from './hexbin';
 import { stepEllipseAt } from '../aim/index';
 import { ansiNominalQuadrangles } from '../spectral/ansi/c78377';
 import type { Pair } from '../spectral/colorimetry/chromaticity';
@@ -43,15 +44,28 @@ export interface ChromaticityPlotModel {
   forecast: { label: string; points: Pair[] } | null;
   /** All parts of the batch; `parts` holds at most MAX_PLOT_PARTS of them (every failing part first). */
   totalParts: number;
+  /** Past MAX_PLOT_PARTS: every part counted in hexagons of circumradius `radius` (x,y), drawn as a density under the failing parts. */
+  density: { radius: number; bins: HexBin[] } | null;
+}
+
+/** Hexagon size for a lot's density: a thirtieth of the x range its middle 98 % spans (at least 0.0001 in x,y). */
+export function densityRadius(xs: readonly number[]): number {
+  const sorted = [...xs].sort((a, b) => a - b);
+  const at = (q: number) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
+  return Math.max(1e-4, (at(0.99) - at(0.01)) / 30);
 }
 
 /** Parts drawn one by one; a larger lot is drawn with every failing part and an even sample of the passing ones. */
 export const MAX_PLOT_PARTS = 5000;
 
-/** Every failing part (up to the cap), then every k-th passing part to fill it. */
-export function plotSample<T extends { pass: boolean }>(parts: readonly T[], max = MAX_PLOT_PARTS): T[] {
+/**
+ * A small lot whole; a large one as every failing part (up to the cap, the outliers drawn as points over
+ * the density) — `withPassing` also fills the cap with every k-th passing part.
+ */
+export function plotSample<T extends { pass: boolean }>(parts: readonly T[], max = MAX_PLOT_PARTS, withPassing = true): T[] {
   if (parts.length <= max) return [...parts];
   const failing = parts.filter((p) => !p.pass).slice(0, max);
+  if (!withPassing) return failing;
   const passing = parts.filter((p) => p.pass);
   const room = max - failing.length;
   const step = room > 0 ? passing.length / room : Infinity;
@@ -96,11 +110,30 @@ export function chromaticityPlotModel(
     cct: p.metrics.cct,
     duv: p.metrics.duv
   }));
-  const drawn = plotSample(parts);
-  const focus: Pair[] = [[t.x, t.y], ...tolerancePts, ...drawn.map((p): Pair => [p.x, p.y]), ...markers.map((m): Pair => [m.x, m.y])];
+  const large = parts.length > MAX_PLOT_PARTS;
+  const drawn = plotSample(parts, MAX_PLOT_PARTS, !large);
+  const radius = large ? densityRadius(parts.map((p) => p.x)) : 0;
+  const density = large
+    ? {
+        radius,
+        bins: hexbin(
+          parts.map((p) => p.x),
+          parts.map((p) => p.y),
+          radius
+        )
+      }
+    : null;
+  const focus: Pair[] = [
+    [t.x, t.y],
+    ...tolerancePts,
+    ...drawn.map((p): Pair => [p.x, p.y]),
+    ...(density?.bins.filter((b) => b.n > 1).map((b): Pair => [b.x, b.y]) ?? []),
+    ...markers.map((m): Pair => [m.x, m.y])
+  ];
   return {
     parts: drawn,
     totalParts: parts.length,
+    density,
     target: { x: t.x, y: t.y, label: t.label },
     outlines,
     quadrangles: quads,
