@@ -1,10 +1,12 @@
 /**
  * One entry for every spectrum upload: an IES TM-27-14 XML document (./tm27) or a CSV/TXT table
- * (./parse.ts), told apart by the document's root element. A TM-27 document must state a spectral
+ * (./parse.ts; with several parts also one part per row, ./rows.ts), told apart by the document's root
+ * element and, for tables, by a wavelength header row. A TM-27 document must state a spectral
  * quantity the upload can use (emitted light for an emission spectrum or a measured part).
  * Pure: no I/O.
  */
 import { parseSpectrumFile } from './parse';
+import { looksLikeRowSpectra, parseRowSpectra } from './rows';
 import { looksLikeTm27, parseTm27, type SpectralQuantity, type Tm27Meta } from './tm27';
 import type { ParseOptions, SpectrumFileDialect, SpectrumFileFailed, SpectrumFileOk } from './types';
 
@@ -18,7 +20,11 @@ export interface UploadParseOptions extends ParseOptions {
 
 export function parseSpectrumUpload(text: string, options: UploadParseOptions = {}): SpectrumUploadResult {
   if (!looksLikeTm27(text)) {
-    const table = parseSpectrumFile(text, options);
+    // One part per row (a wavelength header row), or the usual wavelength column with one column per part.
+    const table =
+      options.multiColumn && looksLikeRowSpectra(text, options.minPoints)
+        ? parseRowSpectra(text, options)
+        : parseSpectrumFile(text, options);
     return table.ok ? { ...table, tm27: null } : table;
   }
   const doc = parseTm27(text, options);
