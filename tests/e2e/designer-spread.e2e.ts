@@ -1,6 +1,7 @@
 import { test, expect as baseExpect } from '@playwright/test';
 import { DEMO, signInThroughForm } from './support/accounts';
-import { approvedRevisionId } from './support/revisions';
+import { approvedContent, approvedRevisionId } from './support/revisions';
+import { resetPumpBins } from './support/chip-bins';
 import { dragAndTime } from './support/drag-probe';
 
 // A loaded 2-core machine can take a few seconds for a first page load.
@@ -12,6 +13,7 @@ const expect = baseExpect.configure({ timeout: 20_000 });
 test('the production cloud follows the desk in a worker; the sliders stay at 30 fps or better; chip bins are on the map', async ({
   page
 }) => {
+  await resetPumpBins((await approvedContent()).pumpId);
   await signInThroughForm(page, DEMO.formulator);
   await page.goto(`/designer?from=${await approvedRevisionId()}`);
   await expect(page.getByTestId('m-cct')).toHaveText(/^\d+ K$/);

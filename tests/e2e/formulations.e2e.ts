@@ -92,7 +92,7 @@ test('formulator submits, quality approves with an e-signature, technician sees 
   const ines = await as(browser, DEMO.quality);
   await ines.goto(revisionUrl);
   // The meaning is a deliberate choice: nothing is pre-selected, and no password is asked before it.
-  await expect(ines.getByRole('radio', { checked: true })).toHaveCount(0);
+  await expect(ines.locator('input[name="meaning"]:checked')).toHaveCount(0);
   await expect(ines.getByLabel('Your password')).toHaveCount(0);
   await ines.getByRole('button', { name: 'Continue to signature' }).click();
   await expect(ines.getByRole('alert')).toContainText('Choose what your signature means first.');

@@ -2,7 +2,7 @@ import { test, expect as baseExpect } from '@playwright/test';
 import { DEMO, DEMO_PASSWORD, signInThroughForm, signedInContext, testDb } from './support/accounts';
 import { approvedContent } from './support/revisions';
 import { json, weighMixComplete } from './support/batches';
-import { binPartsCsv } from './support/chip-bins';
+import { binPartsCsv, resetPumpBins } from './support/chip-bins';
 
 const expect = baseExpect.configure({ timeout: 20_000 });
 
@@ -16,6 +16,7 @@ test('chip bins → recipe matrix → variation model → seeded forecast → si
 }) => {
   test.setTimeout(120_000);
   const { content, pumpId } = await approvedContent();
+  await resetPumpBins(pumpId);
   const name = `E2E production spread ${Date.now().toString(36)}`;
   const api = await signedInContext(DEMO.formulator);
   const created = await json(api, '/api/v1/formulations', { name, content: { ...content, binRecipes: [] } });
