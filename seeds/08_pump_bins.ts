@@ -5,7 +5,8 @@
 import type { Knex } from 'knex';
 import { pumpBinSetSchema } from '../src/lib/pump-bins/schema';
 
-const B450 = pumpBinSetSchema.parse({
+/** Also put back by browser tests that need the demo bins (tests/e2e/support/chip-bins.ts). */
+export const B450_CHIP_BINS = pumpBinSetSchema.parse({
   basis: 'peak',
   bins: [
     { code: 'B3', fromNm: 445, toNm: 447.5, sharePct: 15 },
@@ -20,6 +21,6 @@ export async function seed(knex: Knex): Promise<void> {
   const pump = await knex('materials').where({ code: 'B-450', kind: 'pump' }).first('id');
   if (!pump) return;
   if (await knex('pump_bin_sets').where({ material_id: pump.id }).first('material_id')) return;
-  await knex('pump_bin_sets').insert({ material_id: pump.id, set_json: JSON.stringify(B450), version: 1 });
+  await knex('pump_bin_sets').insert({ material_id: pump.id, set_json: JSON.stringify(B450_CHIP_BINS), version: 1 });
   console.log('seed 08_pump_bins: B-450 chip bins B3–B6 (445–455 nm, peak).');
 }

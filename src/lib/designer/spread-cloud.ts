@@ -5,10 +5,9 @@
  * sliders never wait for it. Without ready wt % the shares are turned into wt % first (Beer–Lambert
  * loading model, `concentrationsForFractions`), as the filed revision's forecast will use them.
  */
-import { GRID_NM } from '../blend/grid';
 import type { LoadingBasis } from '../blend/loading/beerLambertPhotonBudget';
 import { concentrationsForFractions } from '../blend/loading/concentrationsForFractions';
-import { predictYield, type YieldFigures, type YieldPredictionInput } from '../blend/spread';
+import { predictYield, pumpPeakNm, type YieldFigures, type YieldPredictionInput } from '../blend/spread';
 
 /** Parts while the desk is moving, and once it rests (seeded, so a resting blend always shows the same cloud). */
 export const MOVING_PARTS = 2000;
@@ -29,13 +28,6 @@ export interface SpreadJob extends Pick<
 export type SpreadJobResult =
   | { id: number; ok: true; parts: number; figures: YieldFigures; x: Float32Array; y: Float32Array; wtPct: number[]; elapsedMs: number }
   | { id: number; ok: false; error: string };
-
-/** The pump's peak on the working grid: where the variation model's chip wavelengths are counted from. */
-export function pumpPeakNm(basis: LoadingBasis): number {
-  let peak = 0;
-  for (let l = 1; l < basis.pump.length; l++) if (basis.pump[l] > basis.pump[peak]) peak = l;
-  return GRID_NM[peak];
-}
 
 export function runSpreadJob(basis: LoadingBasis, job: SpreadJob, now: () => number = () => performance.now()): SpreadJobResult {
   const t0 = now();

@@ -15,6 +15,7 @@ import { loadRevisionComponents } from '../../../src/lib/server/formulations/com
 import { contentSha256 } from '../../../src/lib/server/formulations/hash';
 import { syntheticPartsCsv } from '../../../src/lib/measurements/syntheticParts';
 import { DEMO, signedInContext, testDb } from './accounts';
+import { B450_CHIP_BINS } from '../../../seeds/08_pump_bins';
 
 export interface MatrixRevision {
   revisionId: number;
@@ -121,24 +122,13 @@ export async function binPartsCsv(revisionId: number, binCode: string, parts: nu
   }
 }
 
-/** The demo pump B-450's chip bins as the demo seed sets them (B3–B6, 445–455 nm peak; invented shares). */
-export const DEMO_PUMP_BINS = {
-  basis: 'peak',
-  bins: [
-    { code: 'B3', fromNm: 445, toNm: 447.5, sharePct: 15 },
-    { code: 'B4', fromNm: 447.5, toNm: 450, sharePct: 35 },
-    { code: 'B5', fromNm: 450, toNm: 452.5, sharePct: 35 },
-    { code: 'B6', fromNm: 452.5, toNm: 455, sharePct: 15 }
-  ]
-} as const;
-
 /** Puts the demo bins back on a pump (other suites change them), through the API as a formulator. */
 export async function resetPumpBins(pumpId: number): Promise<void> {
   const api = await signedInContext(DEMO.formulator);
   try {
     const read = await api.get(`/api/v1/pumps/${pumpId}/bins`);
     const { version } = (await read.json()) as { version: number };
-    const put = await api.put(`/api/v1/pumps/${pumpId}/bins`, { data: { version, set: DEMO_PUMP_BINS } });
+    const put = await api.put(`/api/v1/pumps/${pumpId}/bins`, { data: { version, set: B450_CHIP_BINS } });
     if (put.status() !== 200) throw new Error(`resetting the pump bins answered ${put.status()}: ${await put.text()}`);
   } finally {
     await api.dispose();

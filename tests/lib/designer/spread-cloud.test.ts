@@ -4,7 +4,8 @@
  * given without wt % are turned into the same wt % the loading model would solve (Beer–Lambert).
  */
 import { describe, expect, it } from 'vitest';
-import { runSpreadJob, pumpPeakNm, type SpreadJob } from '../../../src/lib/designer/spread-cloud';
+import { runSpreadJob, type SpreadJob } from '../../../src/lib/designer/spread-cloud';
+import { pumpPeakNm } from '../../../src/lib/blend/spread';
 import { NO_VARIATION, variationModelSchema, buildPartModel, partXyz } from '../../../src/lib/blend/spread';
 import { beerLambertPhotonBudget, opticalDepthsOf } from '../../../src/lib/blend/loading/beerLambertPhotonBudget';
 import { PUMP_PEAK_NM, TEST_CONCENTRATIONS, TEST_PATH_MM, testBasis } from '../../blend/spread/basis';

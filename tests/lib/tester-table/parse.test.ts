@@ -7,7 +7,8 @@
 import { describe, expect, it } from 'vitest';
 import { testerProfileSchema, type TesterProfileInput } from '../../../src/lib/tester-table/profile';
 import { parseTesterTable } from '../../../src/lib/tester-table/parse';
-import { testerPartMetrics, uvPrimeOfXy, xyOfUvPrime } from '../../../src/lib/tester-table/part-metrics';
+import { testerPartMetrics } from '../../../src/lib/tester-table/part-metrics';
+import { uvPrimeToXy, xyToUvPrime } from '../../../src/lib/spectral/colorimetry/chromaticity';
 
 const profile = (over: Partial<TesterProfileInput> = {}, columns: Record<string, string> = {}) =>
   testerProfileSchema.parse({
@@ -57,10 +58,10 @@ describe('tester table', () => {
   });
 
   it('turns u′v′ into x,y by CIE 15 (D65 round trip to 4 decimals)', () => {
-    const [x, y] = xyOfUvPrime(0.19783, 0.46832);
+    const [x, y] = uvPrimeToXy(0.19783, 0.46832);
     expect(x).toBeCloseTo(0.31272, 4); // CIE 15:2004 Table T.3
     expect(y).toBeCloseTo(0.32903, 4);
-    const [u, v] = uvPrimeOfXy(0.31272, 0.32903);
+    const [u, v] = xyToUvPrime(0.31272, 0.32903);
     expect(u).toBeCloseTo(0.19783, 4);
     expect(v).toBeCloseTo(0.46832, 4);
     const p = profile(

@@ -11,3 +11,4 @@ export { wilsonInterval, Z95, type BinomialInterval } from './wilson';
 export { fitSlurryMassCv, type SpreadFit } from './fitSpread';
 export { renderingOfDraws, DEFAULT_RENDERING_SUBSAMPLE, type RenderingFigures } from './renderingSubsample';
 export { cloudSample, samplePointsOf, CLOUD_SAMPLE_MAX, type CloudSample } from './cloud-sample';
+export { pumpPeakNm } from './pump-peak';

@@ -6,7 +6,7 @@
 import type { Knex } from 'knex';
 import { unprocessable } from '../../errors/domain-error';
 import { prepareBasis } from '../../blend/basis';
-import { GRID_NM } from '../../blend/grid';
+import { pumpPeakNm } from '../../blend/spread/pump-peak';
 import { resolveTarget } from '../../aim/target';
 import { loadingOf, type RevisionContent } from '../../recipe';
 import { loadRevisionComponents } from '../formulations/components';
@@ -17,8 +17,6 @@ export async function revisionSpreadSetup(knex: Knex, content: RevisionContent) 
   const { components } = await loadRevisionComponents(knex, content);
   const basis = prepareBasis(components).loading;
   if (!basis) throw unprocessable('every phosphor needs an absorption coefficient in the library for a yield prediction');
-  let peak = 0;
-  for (let l = 1; l < basis.pump.length; l++) if (basis.pump[l] > basis.pump[peak]) peak = l;
   const target = resolveTarget(content.target);
   const bins = (content.binRecipes ?? []).map((b) => ({
     code: b.bin.code,
@@ -32,7 +30,7 @@ export async function revisionSpreadSetup(knex: Knex, content: RevisionContent) 
     shared: {
       basis,
       pathLengthMm: content.loading.pathLengthMm,
-      pumpPeakNm: GRID_NM[peak],
+      pumpPeakNm: pumpPeakNm(basis),
       centre: { x: target.x, y: target.y, cct: target.cct },
       quadrangle: target.ansiBin,
       tolerance: content.tolerance

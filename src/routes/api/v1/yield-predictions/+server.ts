@@ -3,9 +3,8 @@ import { finiteJson, readJson } from '$lib/server/api/body';
 import { apiHandler } from '$lib/server/http/api-handler';
 import { unprocessable } from '$lib/errors/domain-error';
 import { prepareBasis } from '$lib/blend/basis';
-import { GRID_NM } from '$lib/blend/grid';
 import { resolveTarget } from '$lib/aim/target';
-import { predictYield } from '$lib/blend/spread';
+import { predictYield, pumpPeakNm } from '$lib/blend/spread';
 import { yieldPredictionRequestSchema } from '$lib/blend/spread/request';
 import type { RequestHandler } from './$types';
 
@@ -21,14 +20,12 @@ export const POST: RequestHandler = (event) =>
     if (body.concentrationsWtPct.length !== basis.emission.length) {
       throw unprocessable(`concentrationsWtPct: expected ${basis.emission.length} values, one per phosphor`);
     }
-    let peak = 0;
-    for (let l = 1; l < basis.pump.length; l++) if (basis.pump[l] > basis.pump[peak]) peak = l;
     const target = resolveTarget(body.target);
     const p = predictYield({
       basis,
       concentrationsWtPct: body.concentrationsWtPct,
       pathLengthMm: body.loading.pathLengthMm,
-      pumpPeakNm: GRID_NM[peak],
+      pumpPeakNm: pumpPeakNm(basis),
       centre: { x: target.x, y: target.y, cct: target.cct },
       quadrangle: target.ansiBin,
       tolerance: body.tolerance ?? null,
