@@ -22,6 +22,8 @@ test('thermal data on a phosphor, a revision aimed at Tj 85 °C, both points, an
   await signInThroughForm(page, DEMO.formulator);
   const yellow = await materialId('YL-568');
   await page.goto(`/library/${yellow}`);
+  // Typing before hydration can be wiped when the form hydrates; wait for the app to be live.
+  await page.locator('body[data-hydrated]').waitFor();
   const panel = page.getByTestId('thermal-panel');
   await expect(panel).toBeVisible();
   // A bad line is refused whole and named.
