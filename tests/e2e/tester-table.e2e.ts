@@ -84,4 +84,16 @@ test('a 6,000-part tester table is plotted as a density with the failing parts a
   await expect(page.getByTestId('plot-sample')).toContainText('6,000 parts: density in hexagons');
   await expect(page.getByTestId('parts-count')).toContainText('Parts 1–100 of 6,000 matching');
   await expect(page.getByTestId('parts-pager')).toContainText('page 1 of 60');
+
+  // Lot statistics of the whole lot: counts, capability, the mean's confidence ellipse, the run trend.
+  const stats = page.getByTestId('lot-statistics');
+  await expect(stats.getByTestId('lot-verdicts')).toContainText('pass');
+  await expect(stats.getByTestId('cpk-colour')).toHaveText(/^-?\d+\.\d\d$/);
+  await expect(page.locator('[data-shape="mean-confidence"]')).toHaveCount(1);
+  await expect(page.getByTestId('mean-confidence-legend')).toContainText('95 % confidence ellipse of the mean');
+  // 6,000 parts in 50 consecutive groups (at most 50 groups: common practice for a readable run chart).
+  await expect(stats.getByTestId('trend-chart')).toHaveAttribute('data-groups', '50');
+  await stats.getByTestId('trend-quantity').selectOption({ label: 'CCT' });
+  await expect(stats.getByTestId('trend-chart')).toHaveAttribute('data-quantity', 'cct');
+  await expect(stats.getByTestId('trend-drift')).toContainText('K per 1,000 parts');
 });

@@ -13,6 +13,7 @@ import type { Pair } from '../spectral/colorimetry/chromaticity';
 import { describeTolerance } from './acceptance';
 import type { JudgedBatch } from './judgeBatch';
 import { ellipseOutline, planckianOutline, quadrangleOutline, toleranceOutline } from './outlines';
+import type { ConfidenceEllipse } from './lot-statistics/types';
 
 export interface PlotPart {
   label: string;
@@ -46,6 +47,18 @@ export interface ChromaticityPlotModel {
   totalParts: number;
   /** Past MAX_PLOT_PARTS: every part counted in hexagons of circumradius `radius` (x,y), drawn as a density under the failing parts. */
   density: { radius: number; bins: HexBin[] } | null;
+  /** The lot mean's confidence ellipse (Hotelling's T²), drawn around the measured mean. */
+  meanConfidence: { label: string; points: Pair[] } | null;
+}
+
+/** Outline of the mean's confidence ellipse in x,y. */
+// Johnson & Wichern (2007) §5.4: centred on x̄, semi-axes along the eigenvectors of S.
+export function meanConfidenceOutline(e: ConfidenceEllipse): { label: string; points: Pair[] } {
+  const shape = { name: 'mean', nominalCct: 0, x: e.mean.x, y: e.mean.y, a: e.semiMajor, b: e.semiMinor, thetaDeg: e.angleDeg };
+  return {
+    label: `${Math.round(e.level * 100)} % confidence ellipse of the mean (Hotelling T², ${e.n.toLocaleString('en')} parts)`,
+    points: ellipseOutline(shape, 1, 72).map(([x, y]): Pair => [Math.round(x * 1e9) / 1e9, Math.round(y * 1e9) / 1e9])
+  };
 }
 
 /** Hexagon size for a lot's density: a thirtieth of the x range its middle 98 % spans (at least 0.0001 in x,y). */
@@ -80,7 +93,8 @@ const round = (p: Pair): Pair => [Number(p[0].toFixed(5)), Number(p[1].toFixed(5
 export function chromaticityPlotModel(
   batch: JudgedBatch,
   markers: PlotMarker[] = [],
-  forecast: ChromaticityPlotModel['forecast'] = null
+  forecast: ChromaticityPlotModel['forecast'] = null,
+  meanEllipse: ConfidenceEllipse | null = null
 ): ChromaticityPlotModel {
   const t = batch.target;
   const tol = batch.acceptance.tolerance;
@@ -140,6 +154,7 @@ export function chromaticityPlotModel(
     locus: planckianOutline(1800, 10000).map(round),
     markers,
     focus,
-    forecast
+    forecast,
+    meanConfidence: meanEllipse ? meanConfidenceOutline(meanEllipse) : null
   };
 }

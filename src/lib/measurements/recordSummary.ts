@@ -9,6 +9,8 @@ import type { PredictionCheck } from './prediction';
 import type { BatchSummary } from './summarise';
 import type { Acceptance, Stat } from './types';
 import type { ConditionCheck } from './condition-groups';
+import type { LotStatistics } from './lot-statistics/types';
+import { capabilityDigits, cpkReading, describeDrift, describeMeanEllipse, formatIndex, formatShare } from './lot-statistics/format';
 
 export interface RecordSignature {
   decision: 'released' | 'rejected';
@@ -37,7 +39,9 @@ export function recordMeasurementSummary(
   /** Whose prediction the parts were compared with, e.g. "chip bin B3 (452.5–455 nm peak) of revision 2". */
   predictionSource: string | null = null,
   /** Measured against predicted for each test condition (bench and hot), when the batch has files of more than one or a hot one. */
-  conditionChecks: ConditionCheck[] = []
+  conditionChecks: ConditionCheck[] = [],
+  /** Counts, capability, the mean's confidence ellipse and the drift of the summary's parts. */
+  lotStats: LotStatistics | null = null
 ): RecordMeasurementSummary {
   const s = summary.stats;
   const bins = summary.bins.map((b) => `${b.nominalCct === null ? 'no bin' : `${b.nominalCct} K`}: ${b.count}`).join(', ');
@@ -89,6 +93,7 @@ export function recordMeasurementSummary(
           `${c.steps === null ? '' : ` (${c.steps.toFixed(1)} steps)`}; judged against ${c.judgedAgainst}`
       });
     }
+  if (lotStats) rows.push(...lotStatisticsRows(lotStats));
   if (signature) {
     rows.push(
       { label: 'Disposition', value: signature.decision === 'released' ? 'RELEASED' : 'REJECTED' },
@@ -100,6 +105,33 @@ export function recordMeasurementSummary(
   return {
     title: 'Measurement summary and disposition',
     rows,
-    note: 'Statistics: mean (sample standard deviation s, range, count). Steps: MacAdam-type steps of the 1-step ellipse at the target CCT.'
+    note:
+      'Statistics: mean (sample standard deviation s, range, count). Steps: MacAdam-type steps of the 1-step ellipse at the target CCT.' +
+      (lotStats
+        ? ' Capability: Cp = (USL − LSL)/6s, Cpk = min(USL − mean, mean − LSL)/3s (NIST/SEMATECH e-Handbook §6.1.6). ' +
+          'Confidence ellipse of the mean from Hotelling T² (Johnson & Wichern 2007 §5.4). Drift: least-squares slope over part index.'
+        : '')
   };
+}
+
+/** The lot statistics as record rows: verdict shares, capability per quantity, the mean's ellipse, drift. */
+// NIST/SEMATECH e-Handbook §6.1.6 (Cp, Cpk); Johnson & Wichern (2007) §5.4 (T² ellipse); Montgomery & Runger (2014) §11-4.1 (slope).
+export function lotStatisticsRows(l: LotStatistics): { label: string; value: string }[] {
+  const rows = [{ label: 'Parts per verdict', value: l.verdicts.map((v) => `${v.label} ${v.count} (${formatShare(v.share)})`).join(', ') }];
+  for (const c of l.capability) {
+    const d = capabilityDigits(c);
+    const lim = [c.lsl === null ? null : `LSL ${c.lsl.toFixed(d)}`, c.usl === null ? null : `USL ${c.usl.toFixed(d)}`]
+      .filter(Boolean)
+      .join(', ');
+    rows.push({
+      label: `Capability, ${c.label}`,
+      value:
+        `Cp ${formatIndex(c.cp)}, Cpk ${formatIndex(c.cpk)} — ${cpkReading(c)}; mean ${c.mean.toFixed(d)}, s ${c.sd.toFixed(d + 1)}` +
+        `${lim ? `, ${lim}` : ''} (${c.limitSource})`
+    });
+  }
+  rows.push({ label: 'Mean point, confidence', value: l.ellipse ? describeMeanEllipse(l.ellipse) : 'fewer than 3 parts: no ellipse' });
+  for (const t of l.trend.filter((s) => s.quantity === 'deltaUvPrime' || s.quantity === 'cct'))
+    rows.push({ label: `Drift of ${t.label}`, value: describeDrift(t) });
+  return rows;
 }

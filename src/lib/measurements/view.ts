@@ -3,6 +3,7 @@
  * database and the quality computations, read by the Svelte components).
  */
 import type { Floors } from '../aim/index';
+import type { LotStatistics } from './lot-statistics/types';
 import type { OperatingCondition } from '../aim/condition';
 import type { ConditionCheck } from './condition-groups';
 import type { YieldComparison } from './yield-comparison';
@@ -102,4 +103,6 @@ export interface BatchResultsView {
   summaryCondition: string;
   /** Measured mean against the prediction for each test condition with parts (bench first). */
   conditionChecks: ConditionCheck[];
+  /** Counts per bin and verdict, capability, the mean's confidence ellipse and the run trend of the summary's parts. */
+  lotStatistics: LotStatistics | null;
 }

@@ -6,32 +6,14 @@
 import { describe, expect, it } from 'vitest';
 import { chromaticityPlotModel, defaultAcceptance, judgeBatch } from '../../../src/lib/measurements/index';
 import { MAX_PLOT_PARTS } from '../../../src/lib/measurements/plotModel';
-import { testerPartMetrics } from '../../../src/lib/tester-table/part-metrics';
+import { testerPartAt } from './support';
 
 const target = { kind: 'ansiBin', nominalCct: 3000 } as const;
 const acceptance = defaultAcceptance({ target, tolerance: { kind: 'sdcm', steps: 3 }, floors: {} });
 function lot(n: number) {
   let s = 3;
   const rnd = () => (s = (s * 16807) % 2147483647) / 2147483647;
-  return Array.from({ length: n }, (_, i) => ({
-    label: `P${i}`,
-    metrics: testerPartMetrics(
-      {
-        label: `P${i}`,
-        line: i + 2,
-        chromaticity: [0.4338 + 0.006 * (rnd() - 0.5), 0.403 + 0.004 * (rnd() - 0.5)],
-        cct: null,
-        duv: null,
-        ra: null,
-        r9: null,
-        fluxLm: null,
-        forwardVoltageV: null,
-        peakNm: null,
-        bin: null
-      },
-      'xy'
-    )
-  }));
+  return Array.from({ length: n }, (_, i) => testerPartAt(i, 0.4338 + 0.006 * (rnd() - 0.5), 0.403 + 0.004 * (rnd() - 0.5)));
 }
 
 describe('plot of a large lot', () => {

@@ -102,6 +102,9 @@ describe('releasing a batch with an e-signature', () => {
     expect(pdf).toContain('RELEASED');
     expect(pdf).toContain(quality.name);
     expect(pdf).toContain('8 of 8 pass');
+    // Lot statistics in the record: capability per the NIST/SEMATECH definition, the mean's Hotelling T² ellipse.
+    expect(pdf).toContain('Capability, CCT');
+    expect(pdf).toContain('Hotelling T²');
     expect(pdf.replace(/\s+/g, '')).toContain(row.content_sha256); // the long hash wraps in the table cell
     const mails = await caughtMail(`Batch ${b.batchNumber} released`);
     expect(mails).toHaveLength(1);

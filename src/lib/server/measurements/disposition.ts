@@ -133,7 +133,8 @@ export async function disposeBatch(caller: Caller, batchId: number, input: Dispo
         contentSha256: signed.sha256
       },
       view.predictionSource?.label ?? null,
-      view.conditionChecks
+      view.conditionChecks,
+      view.lotStatistics
     );
     const pdf = await buildBatchRecord(doc, { measurementSummary: summary });
     const recordFileId = await putFile(

@@ -23,6 +23,7 @@ import {
 } from '../../measurements/index';
 import type { BatchResultsView } from '../../measurements/view';
 import { judgeByCondition } from '../../measurements/judge-by-condition';
+import { lotStatistics } from '../../measurements/lot-statistics/index';
 import { describeCondition } from '../../aim/condition';
 import { conflict } from './errors';
 import * as records from './records';
@@ -109,6 +110,7 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
         points: forecastPoints
       }
     : null;
+  const stats = lotStatistics(judged.parts, t, acceptance.tolerance);
   const view: BatchResultsView = {
     batch: {
       id: b.id,
@@ -147,11 +149,12 @@ export async function computeResults(ctx: BatchQualityContext): Promise<Computed
     prediction,
     yieldCheck,
     predictionSource: forBatch ? { kind: forBatch.source, label: forBatch.label, binCode: forBatch.bin?.code ?? null } : null,
-    plot: chromaticityPlotModel(judged, markers, forecast),
+    plot: chromaticityPlotModel(judged, markers, forecast, stats?.ellipse ?? null),
     corrections,
     disposition,
     summaryCondition: main?.group.label ?? describeCondition(null),
-    conditionChecks
+    conditionChecks,
+    lotStatistics: stats
   };
   return { view, judged };
 }
