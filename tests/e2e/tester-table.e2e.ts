@@ -96,4 +96,19 @@ test('a 6,000-part tester table is plotted as a density with the failing parts a
   await stats.getByTestId('trend-quantity').selectOption({ label: 'CCT' });
   await expect(stats.getByTestId('trend-chart')).toHaveAttribute('data-quantity', 'cct');
   await expect(stats.getByTestId('trend-drift')).toContainText('K per 1,000 parts');
+
+  // A rectangle drawn on the plot lists only the parts inside it (filtered on the server, first page).
+  await page.getByTestId('select-parts').click();
+  const box = (await page.getByTestId('chromaticity-plot').boundingBox())!;
+  await page.mouse.move(box.x + box.width * 0.45, box.y + box.height * 0.4);
+  await page.mouse.down();
+  await page.mouse.move(box.x + box.width * 0.5, box.y + box.height * 0.45, { steps: 5 });
+  await page.mouse.move(box.x + box.width * 0.55, box.y + box.height * 0.5, { steps: 5 });
+  await page.mouse.up();
+  await expect(page).toHaveURL(/x0=0\.\d+&x1=0\.\d+&y0=0\.\d+&y1=0\.\d+/);
+  await expect(page.getByTestId('plot-selection')).toContainText('matching');
+  await expect(page.locator('[data-shape="selection"]')).toHaveCount(1);
+  await expect(page.getByTestId('parts-count')).not.toContainText('of 6,000 matching');
+  await page.getByRole('link', { name: 'List every part' }).click();
+  await expect(page.getByTestId('parts-count')).toContainText('Parts 1–100 of 6,000 matching');
 });

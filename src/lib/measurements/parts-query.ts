@@ -47,6 +47,20 @@ export const partsQuerySchema = z.object({
   pageSize: z.coerce.number('pageSize must be a number').int().min(10, 'pageSize: 10–500').max(500, 'pageSize: 10–500').default(100)
 });
 export type PartsQuery = z.output<typeof partsQuerySchema>;
+
+/** An x,y rectangle in CIE 1931 coordinates (x0 < x1, y0 < y1), as the plot draws it and the filter reads it. */
+export interface XyRect {
+  x0: number;
+  x1: number;
+  y0: number;
+  y1: number;
+}
+
+/** The query's rectangle, when all four sides are given. */
+export function queryRect(q: Partial<Record<'x0' | 'x1' | 'y0' | 'y1', number | null | undefined>>): XyRect | null {
+  const { x0, x1, y0, y1 } = q;
+  return typeof x0 === 'number' && typeof x1 === 'number' && typeof y0 === 'number' && typeof y1 === 'number' ? { x0, x1, y0, y1 } : null;
+}
 export const DEFAULT_PARTS_QUERY: PartsQuery = partsQuerySchema.parse({});
 
 /** What the list needs of a part. */

@@ -1,6 +1,6 @@
 /** The parts list filtered, sorted and paged on the server, and the plot's sample of a large lot. Parts invented. */
 import { describe, expect, it } from 'vitest';
-import { partsQuerySchema, selectParts } from '../../../src/lib/measurements/parts-query';
+import { partsQuerySchema, queryRect, selectParts } from '../../../src/lib/measurements/parts-query';
 import { plotSample } from '../../../src/lib/measurements/plotModel';
 
 const part = (i: number) => ({
@@ -66,5 +66,17 @@ describe('plotSample', () => {
     const passing = s.filter((p) => p.pass).map((p) => p.i);
     expect(passing[0]).toBe(1);
     expect(passing.at(-1)!).toBeGreaterThan(9900); // spread over the whole run
+  });
+});
+
+describe('queryRect', () => {
+  it('is the rectangle when all four sides are given, else none', () => {
+    expect(queryRect(partsQuerySchema.parse({ x0: '0.43', x1: '0.44', y0: '0.40', y1: '0.41' }))).toEqual({
+      x0: 0.43,
+      x1: 0.44,
+      y0: 0.4,
+      y1: 0.41
+    });
+    expect(queryRect(partsQuerySchema.parse({ x0: '0.43', x1: '0.44' }))).toBeNull();
   });
 });

@@ -12,7 +12,7 @@ import { setAcceptance } from '$lib/server/measurements/acceptance';
 import { uploadMeasurements, withdrawUpload } from '$lib/server/measurements/upload';
 import { testConditionFieldsSchema, testerProfileChoiceSchema } from '$lib/measurements/schema';
 import { listTesterProfiles } from '$lib/server/measurements/tester-profiles';
-import { DEFAULT_PARTS_QUERY, partsQuerySchema, selectParts } from '$lib/measurements/parts-query';
+import { DEFAULT_PARTS_QUERY, partsQuerySchema, queryRect, selectParts } from '$lib/measurements/parts-query';
 
 const PARTS_QUERY_KEYS = Object.keys(partsQuerySchema.shape);
 import { makeCorrectionDraft } from '$lib/server/measurements/correction';
@@ -37,6 +37,7 @@ export const load: PageServerLoad = async ({ locals, params, url }) => {
     partsPage,
     partsQuery: asked.success ? raw : {},
     partsQueryError: asked.success ? null : asked.error.issues[0].message,
+    partsRect: asked.success ? queryRect(asked.data) : null,
     canAct: canActOnMeasurements(user),
     dispositionBlocked: await dispositionRefusal(user, ctx),
     variationModel: { version: model.version, source: model.source, fittedBatch: model.fittedBatch?.batchNumber ?? null },
