@@ -32,7 +32,7 @@ case "${1:-}" in
       nohup mariadbd --no-defaults --datadir="$D/data" --socket="$SOCK" --pid-file="$D/mysqld.pid" \
         --port="$PORT" --bind-address=127.0.0.1 --skip-name-resolve --user="$ME" \
         --log-error="$D/error.log" --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \
-        --innodb-buffer-pool-size=128M --max-connections=300 $FAST_OPTS >/dev/null 2>&1 &
+        --innodb-buffer-pool-size=128M --max-connections=300 --max-allowed-packet=64M $FAST_OPTS >/dev/null 2>&1 &
       for _ in $(seq 1 600); do ping_db && break; sleep 0.1; done
       ping_db || { echo "db: server did not answer; see $D/error.log" >&2; tail -20 "$D/error.log" >&2; exit 1; }
       echo "db: MariaDB up on 127.0.0.1:$PORT (data in $D)"
