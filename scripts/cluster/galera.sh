@@ -47,7 +47,8 @@ start_node() {
   if ping_node "$n"; then return 0; fi
   nohup mariadbd --no-defaults --datadir="$d/data" --socket="$(sock "$n")" --pid-file="$d/mysqld.pid" \
     --port="$(sql_port "$n")" --bind-address=127.0.0.1 --skip-name-resolve --user="$RUN_AS" --log-error="$d/error.log" \
-    --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci --innodb-buffer-pool-size=96M --max-connections=300 --max-allowed-packet=64M \
+    --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci --innodb-buffer-pool-size=96M --max-connections=300 \
+    --max-allowed-packet=64M \
     --binlog-format=ROW --default-storage-engine=InnoDB --innodb-autoinc-lock-mode=2 --log-bin-trust-function-creators=1 \
     --wsrep-on=ON --wsrep-provider="$PROVIDER" --wsrep-cluster-name=phosforge \
     --wsrep-cluster-address="gcomm://$(peers)" --wsrep-node-name="node$n" --wsrep-node-address="127.0.0.1:$(gc_port "$n")" \

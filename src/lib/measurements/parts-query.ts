@@ -47,6 +47,12 @@ export const partsQuerySchema = z.object({
   pageSize: z.coerce.number('pageSize must be a number').int().min(10, 'pageSize: 10–500').max(500, 'pageSize: 10–500').default(100)
 });
 export type PartsQuery = z.output<typeof partsQuerySchema>;
+export const PARTS_QUERY_KEYS: readonly string[] = Object.keys(partsQuerySchema.shape);
+
+/** The parts-list parameters of a URL's query (other parameters left out), as raw strings. */
+export function partsQueryParams(params: URLSearchParams): Record<string, string> {
+  return Object.fromEntries([...params].filter(([k]) => PARTS_QUERY_KEYS.includes(k)));
+}
 
 /** An x,y rectangle in CIE 1931 coordinates (x0 < x1, y0 < y1), as the plot draws it and the filter reads it. */
 export interface XyRect {

@@ -74,6 +74,17 @@ describe('GET /api/v1/measurements/{batchId}', () => {
     expect(res.body.parts).toHaveLength(6);
     expect(res.body.summary.parts).toBe(6);
     expect(res.body.plot.parts).toHaveLength(6);
+    expect(res.body.partsPage).toMatchObject({ matched: 6, total: 6, page: 1, pages: 1 });
+    expect(res.body.lotStatistics.parts).toBe(6);
+  });
+  it('pages and sorts the parts on the server; a bad filter is a 400 that names it', async () => {
+    const res = await call(GET, event(tech, { path: '?pageSize=10&sort=label&dir=desc&page=1' }));
+    expect(res.body.parts.map((p: { label: string }) => p.label)).toEqual(
+      [...res.body.parts.map((p: { label: string }) => p.label)].sort().reverse()
+    );
+    const bad = await call(GET, event(tech, { path: '?stepsMin=abc' }));
+    expect(bad.status).toBe(400);
+    expect(bad.body.error).toContain('steps from');
   });
 });
 

@@ -12,9 +12,8 @@ import { setAcceptance } from '$lib/server/measurements/acceptance';
 import { uploadMeasurements, withdrawUpload } from '$lib/server/measurements/upload';
 import { testConditionFieldsSchema, testerProfileChoiceSchema } from '$lib/measurements/schema';
 import { listTesterProfiles } from '$lib/server/measurements/tester-profiles';
-import { DEFAULT_PARTS_QUERY, partsQuerySchema, queryRect, selectParts } from '$lib/measurements/parts-query';
+import { DEFAULT_PARTS_QUERY, partsQueryParams, partsQuerySchema, queryRect, selectParts } from '$lib/measurements/parts-query';
 
-const PARTS_QUERY_KEYS = Object.keys(partsQuerySchema.shape);
 import { makeCorrectionDraft } from '$lib/server/measurements/correction';
 import { fitSpreadToBatch } from '$lib/server/measurements/fit-spread';
 import { getRevisionVariationModel } from '$lib/server/yield-predictions/variation-model';
@@ -29,7 +28,7 @@ export const load: PageServerLoad = async ({ locals, params, url }) => {
   if (!ctx) error(404, `Batch ${params.batchId} was not found.`);
   const [{ view }, model] = await Promise.all([computeResults(ctx), getRevisionVariationModel(ctx.revision.id)]);
   // The parts list travels one page at a time, filtered and sorted here (a lot can hold 100,000 parts).
-  const raw = Object.fromEntries([...url.searchParams].filter(([k]) => PARTS_QUERY_KEYS.includes(k)));
+  const raw = partsQueryParams(url.searchParams);
   const asked = partsQuerySchema.safeParse(raw);
   const { items, ...partsPage } = selectParts(view.parts, asked.success ? asked.data : DEFAULT_PARTS_QUERY);
   return {

@@ -2,6 +2,7 @@ import { json } from '@sveltejs/kit';
 import { requireUser } from '$lib/server/auth/require';
 import { finiteJson, readQuery } from '$lib/server/api/body';
 import { testConditionFieldsSchema, testerProfileChoiceSchema } from '$lib/measurements/schema';
+import { partsQueryParams, partsQuerySchema, selectParts } from '$lib/measurements/parts-query';
 import { ndjsonStream, uploadedFile } from '$lib/server/measurements/api';
 import { batchResults } from '$lib/server/measurements/results';
 import { precheckUpload, uploadMeasurements } from '$lib/server/measurements/upload';
@@ -11,13 +12,19 @@ import { notFound } from '$lib/errors/domain-error';
 import { mayJudgeBatches } from '$lib/access/policies';
 import type { RequestHandler } from './$types';
 
-/** Results of a batch: parts with metrics and verdicts, summary, prediction check, plot data, disposition. */
+/**
+ * Results of a batch: one page of parts with metrics and verdicts (the page's filters and sort: verdict, bin,
+ * stepsMin/Max, x0/x1/y0/y1, sort, dir, page, pageSize ≤ 500), `partsPage` (matched, total, page, pages),
+ * summary, lot statistics, prediction check, plot data, disposition.
+ */
 export const GET: RequestHandler = (event) =>
   apiHandler(async () => {
     requireUser(event.locals);
+    const query = readQuery(new URLSearchParams(partsQueryParams(event.url.searchParams)), partsQuerySchema);
     const view = await batchResults(idParam(event.params.batchId, `Batch ${event.params.batchId} was not found.`));
     if (!view) throw notFound(`Batch ${event.params.batchId} was not found.`);
-    return finiteJson(view);
+    const { items, ...partsPage } = selectParts(view.parts, query);
+    return finiteJson({ ...view, parts: items, partsPage });
   });
 
 /**
