@@ -82,6 +82,9 @@ test('a 6,000-part tester table is plotted as a density with the failing parts a
   await expect(page.getByTestId('upload-done')).toContainText('6000 parts measured and saved');
   await expect(page.locator('[data-shape="density"]')).toHaveAttribute('data-bins', /^[1-9]\d+$/);
   await expect(page.getByTestId('plot-sample')).toContainText('6,000 parts: density in hexagons');
+  // More than a thousand failing parts: drawn on a canvas layer inside the plot, not as SVG circles.
+  await expect(page.getByTestId('parts-canvas')).toHaveAttribute('data-points', /^\d{4}$/);
+  await expect(page.getByTestId('chromaticity-plot').locator('circle[data-part]')).toHaveCount(0);
   await expect(page.getByTestId('parts-count')).toContainText('Parts 1–100 of 6,000 matching');
   await expect(page.getByTestId('parts-pager')).toContainText('page 1 of 60');
 
