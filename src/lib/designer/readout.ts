@@ -13,7 +13,7 @@ import {
   type ResolvedTarget,
   type Tolerance
 } from '../aim/index';
-import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
+import { ansiBinOf, isInQuadrangle } from '../spectral/ansi/c78377';
 import type { SpectrumEvaluation } from '../spectral/types';
 import { cctMeaningful, shownMetrics, type ShownMetrics } from '../spectral/meaningful';
 import { designIntents, type DesignIntentReport, type IntentLevel } from '../spectral/tm30/design-intents';
@@ -82,7 +82,7 @@ export function targetStanding(e: SpectrumEvaluation, target: ResolvedTarget, to
     steps: err.steps,
     deltaUvPrime: err.deltaUvPrime,
     withinTolerance: withinTolerance(err, tolerance),
-    ansiBin: findAnsiBin(e.x, e.y)?.nominalCct ?? null,
+    ansiBin: ansiBinOf(e.x, e.y),
     inTargetBin: target.ansiBin ? isInQuadrangle(e.x, e.y, target.ansiBin) : null
   };
 }

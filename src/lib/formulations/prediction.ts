@@ -10,7 +10,7 @@ import { cctMeaningful } from '../spectral/meaningful';
 import { colourDistance, resolveTarget, violatedFloors, withinTolerance } from '../aim/index';
 import type { BlendComponents } from '../blend/types';
 import type { AlphaOpicResult } from '../spectral/types';
-import { findAnsiBin } from '../spectral/ansi/c78377';
+import { ansiBinOf } from '../spectral/ansi/c78377';
 import { designIntents, type DesignIntentReport } from '../spectral/tm30/design-intents';
 import { fractionsWithLeak, type RevisionContent } from '../recipe';
 
@@ -99,7 +99,7 @@ export function predictRevision(content: RevisionContent, components: BlendCompo
     lerLmPerW: e.ler,
     alphaOpic: e.alphaOpic,
     peakNm: e.peakNm,
-    ansiBin: findAnsiBin(e.x, e.y)?.nominalCct ?? null,
+    ansiBin: ansiBinOf(e.x, e.y),
     target: { x: target.x, y: target.y, cct: target.cct, duv: target.duv, label: target.label },
     deltaUvPrime: err.deltaUvPrime,
     sdcm: err.steps,

@@ -19,7 +19,7 @@ import {
   type ResolvedTarget,
   type Tolerance
 } from '../aim/index';
-import { findAnsiBin, isInQuadrangle } from '../spectral/ansi/c78377';
+import { ansiBinOf, isInQuadrangle } from '../spectral/ansi/c78377';
 import type { Acceptance, PartFailure, PartMetrics, PartVerdict } from './types';
 
 export function describeTolerance(t: Tolerance): string {
@@ -91,7 +91,7 @@ export function floorFailures(m: PartMetrics, floors: Acceptance['floors']): Par
 
 export function judgePart(m: PartMetrics, target: ResolvedTarget, acceptance: Acceptance): PartVerdict {
   const offset = colourDistance(m.x, m.y, target);
-  const bin = findAnsiBin(m.x, m.y)?.nominalCct ?? null;
+  const bin = ansiBinOf(m.x, m.y);
   const quad = target.ansiBin;
   const inTargetBin = quad ? isInQuadrangle(m.x, m.y, quad) : null;
   const failures: PartFailure[] = [];

@@ -55,6 +55,7 @@ export { spectralShape, type SpectralShape } from './metrics/spectral-shape';
 // Chromaticity bins
 export {
   findAnsiBin,
+  ansiBinOf,
   ansiNominalQuadrangles,
   ansiFlexibleQuadrangle,
   ansiDuvTarget,

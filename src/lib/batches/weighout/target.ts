@@ -1,9 +1,9 @@
 /**
  * The target colour point as printed on batch papers: CCT/Duv, CIE 1931 x,y and the ANSI
- * C78.377 bin it falls in (the core's resolveTarget and findAnsiBin), plus the colour tolerance.
+ * C78.377 bin it falls in (the core's resolveTarget and ansiBinOf), plus the colour tolerance.
  */
 import { resolveTarget } from '../../aim/index';
-import { findAnsiBin } from '../../spectral/index';
+import { ansiBinOf } from '../../spectral/index';
 import type { RevisionContent } from '../../recipe';
 
 export interface BatchTarget {
@@ -30,5 +30,5 @@ export function describeTarget(target: RevisionContent['target'], tolerance: Rev
       : tolerance.kind === 'deltaUvPrime'
         ? `Δu'v' ≤ ${tolerance.value}`
         : `Δuv ≤ ${tolerance.value}`;
-  return { description, x: t.x, y: t.y, ansiBin: findAnsiBin(t.x, t.y)?.nominalCct ?? null, tolerance: tol };
+  return { description, x: t.x, y: t.y, ansiBin: ansiBinOf(t.x, t.y), tolerance: tol };
 }

@@ -21,7 +21,13 @@ export interface XyPoint {
 // ISO 3534-1:2006 §1.17/§1.20 (sample variance and covariance with n − 1).
 export function meanAndCovariance(points: readonly XyPoint[]): { mean: XyPoint; xx: number; xy: number; yy: number } {
   const n = points.length;
-  const mean = { x: points.reduce((s, p) => s + p.x, 0) / n, y: points.reduce((s, p) => s + p.y, 0) / n };
+  let sx = 0;
+  let sy = 0;
+  for (const p of points) {
+    sx += p.x;
+    sy += p.y;
+  }
+  const mean = { x: sx / n, y: sy / n };
   let xx = 0;
   let xy = 0;
   let yy = 0;

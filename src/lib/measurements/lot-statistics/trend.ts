@@ -27,11 +27,19 @@ const finite = (v: number | null): v is number => v !== null && Number.isFinite(
 export function groupStatistics(values: readonly (number | null)[], groups: readonly [number, number][]): TrendGroup[] {
   const out: TrendGroup[] = [];
   for (const [first, last] of groups) {
-    const v = values.slice(first, last + 1).filter(finite);
-    if (!v.length) continue;
-    const min = Math.min(...v);
-    const max = Math.max(...v);
-    out.push({ first, last, n: v.length, mean: v.reduce((s, x) => s + x, 0) / v.length, min, max, range: max - min });
+    let n = 0;
+    let sum = 0;
+    let min = Infinity;
+    let max = -Infinity;
+    for (let i = first; i <= last; i++) {
+      const v = values[i];
+      if (!finite(v)) continue;
+      n++;
+      sum += v;
+      if (v < min) min = v;
+      if (v > max) max = v;
+    }
+    if (n) out.push({ first, last, n, mean: sum / n, min, max, range: max - min });
   }
   return out;
 }
@@ -39,22 +47,32 @@ export function groupStatistics(values: readonly (number | null)[], groups: read
 /** Least-squares slope of value against index, per part, with its standard error; null below 3 values. */
 // Montgomery & Runger (2014) eq. 11-7, 11-8 and §11-4.1: β̂₁ = Sxy/Sxx, se(β̂₁) = √(σ̂²/Sxx), σ̂² = SSE/(n − 2).
 export function driftSlope(values: readonly (number | null)[]): { slope: number; se: number } | null {
-  const pts: [number, number][] = [];
-  values.forEach((v, i) => {
-    if (finite(v)) pts.push([i, v]);
-  });
-  const n = pts.length;
+  let n = 0;
+  let si = 0;
+  let sv = 0;
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    if (!finite(v)) continue;
+    n++;
+    si += i;
+    sv += v;
+  }
   if (n < 3) return null;
-  const mx = pts.reduce((s, p) => s + p[0], 0) / n;
-  const my = pts.reduce((s, p) => s + p[1], 0) / n;
+  const mx = si / n;
+  const my = sv / n;
   let sxx = 0;
   let sxy = 0;
-  for (const [i, v] of pts) {
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    if (!finite(v)) continue;
     sxx += (i - mx) ** 2;
     sxy += (i - mx) * (v - my);
   }
   const slope = sxy / sxx;
   let sse = 0;
-  for (const [i, v] of pts) sse += (v - my - slope * (i - mx)) ** 2;
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    if (finite(v)) sse += (v - my - slope * (i - mx)) ** 2;
+  }
   return { slope, se: Math.sqrt(sse / (n - 2) / sxx) };
 }

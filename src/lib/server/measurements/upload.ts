@@ -15,7 +15,7 @@ import { formatBytes } from '../../spectrum-file/parse';
 import { parseSpectrumUpload } from '../../spectrum-file/read-upload';
 import { EMITTED_QUANTITIES, type Tm27Meta } from '../../spectrum-file/tm27';
 import { measurePartsPaced, type MeasuredPart } from '../../measurements/index';
-import { findAnsiBin } from '../../spectral/ansi/c78377';
+import { ansiBinOf } from '../../spectral/ansi/c78377';
 import { QUALITY_CORE_VERSION } from '../../measurements/version';
 import { MAX_MEASUREMENT_FILE_BYTES, MAX_TABLE_FILE_BYTES } from '../../measurements/schema';
 import { parseTesterTable } from '../../tester-table/parse';
@@ -184,24 +184,37 @@ export async function insertMeasurements(
     core_version: QUALITY_CORE_VERSION,
     uploaded_by: uploadedBy
   });
-  const rows = m.parts.map((p, i) => ({
-    upload_id: uploadId,
-    batch_id: batchId,
-    part_label: p.label.slice(0, 80),
-    column_no: m.profile ? ((m.parts[i] as { line?: number }).line ?? i + 2) : i + 2,
-    values_json: JSON.stringify(m.values[i]),
-    metrics_json: JSON.stringify(p.metrics),
-    x: p.metrics.x,
-    y: p.metrics.y,
-    cct_k: p.metrics.cct,
-    duv: p.metrics.duv,
-    ra: p.metrics.ra,
-    r9: p.metrics.r9,
-    ler_lm_per_w: p.metrics.ler,
-    ansi_bin: findAnsiBin(p.metrics.x, p.metrics.y)?.nominalCct ?? null
-  }));
+  const rowOf = (i: number) => {
+    const p = m.parts[i];
+    return {
+      upload_id: uploadId,
+      batch_id: batchId,
+      part_label: p.label.slice(0, 80),
+      column_no: m.profile ? ((p as { line?: number }).line ?? i + 2) : i + 2,
+      values_json: JSON.stringify(m.values[i]),
+      metrics_json: JSON.stringify(p.metrics),
+      x: p.metrics.x,
+      y: p.metrics.y,
+      cct_k: p.metrics.cct,
+      duv: p.metrics.duv,
+      ra: p.metrics.ra,
+      r9: p.metrics.r9,
+      ler_lm_per_w: p.metrics.ler,
+      ansi_bin: ansiBinOf(p.metrics.x, p.metrics.y)
+    };
+  };
+  // Two chunks in flight on the transaction's connection: while the server stores one, the next is built and
+  // written out (the driver queues it), so building and storing overlap; memory stays at two chunks.
   const chunk = m.profile ? TABLE_CHUNK : CHUNK;
-  for (let i = 0; i < rows.length; i += chunk) await trx('part_measurements').insert(rows.slice(i, i + chunk));
+  let inFlight: Promise<unknown> | null = null;
+  for (let i = 0; i < m.parts.length; i += chunk) {
+    const rows = Array.from({ length: Math.min(chunk, m.parts.length - i) }, (_, k) => rowOf(i + k));
+    const next = trx('part_measurements').insert(rows).then();
+    next.catch(() => undefined); // awaited below; marked handled in case the chunk before it fails first
+    if (inFlight) await inFlight;
+    inFlight = next;
+  }
+  await inFlight;
   return { uploadId, storedFileId };
 }
 

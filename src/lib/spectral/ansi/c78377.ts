@@ -100,6 +100,13 @@ export interface AnsiBinMatch {
   duv: number;
 }
 
+/** Nominal CCT of the Table 1 bin that contains (x, y), or null (the same bin findAnsiBin names, without its CCT/Duv). */
+// ANSI C78.377-2017 Table 1 (quadrangle corners).
+export function ansiBinOf(x: number, y: number): number | null {
+  for (const q of ansiNominalQuadrangles()) if (isInQuadrangle(x, y, q)) return q.nominalCct;
+  return null;
+}
+
 /** Which Table 1 nominal bin contains (x, y), or null. */
 export function findAnsiBin(x: number, y: number): AnsiBinMatch | null {
   for (const q of ansiNominalQuadrangles()) {
