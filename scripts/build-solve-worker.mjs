@@ -1,12 +1,7 @@
-// Bundles the solver's worker thread next to the built app (build/solve-worker.js); run after `vite build`.
+// Bundles the worker threads next to the built app, run after `vite build`: the solver's (build/solve-worker.js)
+// and the measurement reader's (build/measure-worker.js).
 import { build } from 'esbuild';
 
-await build({
-  entryPoints: ['src/lib/server/solver/worker.ts'],
-  bundle: true,
-  platform: 'node',
-  format: 'esm',
-  target: 'node20',
-  outfile: 'build/solve-worker.js',
-  logLevel: 'warning'
-});
+const common = { bundle: true, platform: 'node', format: 'esm', target: 'node20', logLevel: 'warning' };
+await build({ ...common, entryPoints: ['src/lib/server/solver/worker.ts'], outfile: 'build/solve-worker.js' });
+await build({ ...common, entryPoints: ['src/lib/server/measurements/read-worker.ts'], outfile: 'build/measure-worker.js' });

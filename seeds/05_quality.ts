@@ -11,7 +11,7 @@ import type { Knex } from 'knex';
 import { fractionsWithLeak, parseRecipe } from '../src/lib/recipe';
 import { loadRevisionComponents } from '../src/lib/server/formulations/components';
 import { syntheticPartsCsv } from '../src/lib/measurements/syntheticParts';
-import { insertMeasurements, measureFile } from '../src/lib/server/measurements/upload';
+import { insertMeasurements, readFile } from '../src/lib/server/measurements/upload';
 
 const BATCH = 'BT-261201-001';
 
@@ -31,7 +31,7 @@ export async function seed(knex: Knex): Promise<void> {
     `# Integrating sphere export, ${BATCH}, 24 parts at 25 °C\n` +
     syntheticPartsCsv(loaded.components, fractions, { parts: 24, prefix: `${BATCH}-P`, lastPhosphorScale: 1.04, scatter: 0.02 });
   const file = { name: `${BATCH}-sphere.csv`, contentType: 'text/csv', body: Buffer.from(text, 'utf8') };
-  const measured = await measureFile(file);
+  const measured = await readFile(file);
   try {
     await knex.transaction(async (trx) => {
       const { uploadId } = await insertMeasurements(trx, batch.id, file, measured, quality.id);

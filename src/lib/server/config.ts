@@ -31,6 +31,7 @@ const envSchema = z.object({
     z.coerce.number(SOLVE_WORKERS_RULE).int(SOLVE_WORKERS_RULE).min(0, SOLVE_WORKERS_RULE).max(16, SOLVE_WORKERS_RULE).optional()
   ),
   PF_SOLVE_WORKER: z.string().min(1).default('build/solve-worker.js'),
+  PF_READ_WORKER: z.string().min(1).default('build/measure-worker.js'),
   PRICE_CURRENCY: z
     .string()
     .regex(/^[A-Z]{3}$/, 'PRICE_CURRENCY must be an ISO 4217 code such as EUR')
@@ -62,6 +63,8 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env) {
     solveWorkers: env.PF_SOLVE_WORKERS ?? null,
     /** The bundled solver worker (built by `npm run build`). */
     solveWorkerFile: env.PF_SOLVE_WORKER,
+    /** The bundled measurement reader (built by `npm run build`). */
+    readWorkerFile: env.PF_READ_WORKER,
     mail: {
       host: env.SMTP_HOST,
       port: env.SMTP_PORT,

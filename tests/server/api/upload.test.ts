@@ -61,4 +61,25 @@ describe('readUploadedFile', () => {
     expect((await refusal(post('400,1', { 'content-type': 'text/csv', 'content-length': String(3 * 1024 * 1024) }))).status).toBe(413);
     expect((await refusal(post('{}', { 'content-type': 'application/json' }))).status).toBe(415);
   });
+
+  it('a raw body without a length is refused as soon as it streams past the limit, reading no further', async () => {
+    let pulled = 0;
+    const chunk = new Uint8Array(256 * 1024).fill(0x31);
+    // An endless body (chunked transfer, no content-length): the reader must stop just past 2 MB.
+    const body = new ReadableStream<Uint8Array>({
+      pull(controller) {
+        pulled++;
+        controller.enqueue(chunk);
+      }
+    });
+    const request = new Request('http://local/upload', {
+      method: 'POST',
+      body,
+      headers: { 'content-type': 'text/csv' },
+      duplex: 'half'
+    } as RequestInit);
+    const err = await refusal(request);
+    expect(err.status).toBe(413);
+    expect(pulled).toBeLessThanOrEqual(10); // 2 MB / 256 kB = 8 chunks, and one past the limit
+  });
 });

@@ -41,6 +41,29 @@ async function formFile(request: Request, kind: UploadKind): Promise<UploadedFil
   return { name: file.name || kind.defaultName, contentType: file.type || 'text/plain', body: Buffer.from(await file.arrayBuffer()) };
 }
 
+/**
+ * A raw body read as it streams in, refused as soon as it passes the limit (a body sent without a length, or
+ * longer than it said, is not held in memory to the end).
+ */
+async function streamedBody(request: Request, kind: UploadKind): Promise<Buffer> {
+  if (!request.body) return Buffer.alloc(0);
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  const reader = request.body.getReader();
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > kind.maxBytes) {
+      await reader.cancel().catch(() => undefined);
+      const mb = Number((kind.maxBytes / 1024 / 1024).toFixed(1));
+      throw tooLarge(`The upload is larger than the ${mb} MB limit for ${kind.what} files. Nothing was saved.`);
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks, size);
+}
+
 /** The file's name must be plain text: a control or text-direction character would disguise it. */
 function plainName(file: UploadedFile): UploadedFile {
   assertPlainFileName(file.name);
@@ -59,7 +82,7 @@ export async function readUploadedFile(request: Request, kind: UploadKind): Prom
     return plainName({
       name: request.headers.get('x-file-name')?.slice(0, 200) || kind.defaultName,
       contentType: type.split(';')[0],
-      body: Buffer.from(await request.arrayBuffer())
+      body: await streamedBody(request, kind)
     });
   }
   throw unsupportedType(

@@ -1,7 +1,8 @@
 /**
- * Measurement upload for a batch (gzip accepted: ./unpack.ts). The file is read and checked completely before anything is
- * written: parser (src/lib/spectrum-file/parse.ts, several part columns), then every part through
- * the spectral core; part names must be new to the batch. Only then are the raw file (object
+ * Measurement upload for a batch (gzip accepted). The file is read and checked completely before anything
+ * is written (./read-file.ts, in a worker thread in the built app: ./read-pool.ts): spectra through the
+ * parser and every part through the spectral core, or a tester table through its profile; part names must
+ * be new to the batch. Only then are the raw file (object
  * storage), the upload and its parts saved — one transaction; the object is removed if it fails.
  * `onProgress` reports the phases and the parts measured so far (the API streams them).
  */
@@ -10,20 +11,13 @@ import { db } from '../db/index';
 import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import { putFile } from '../storage/objects';
-import { decodeText } from '../../spectrum-file/decode';
-import { formatBytes } from '../../spectrum-file/parse';
-import { parseSpectrumUpload } from '../../spectrum-file/read-upload';
-import { EMITTED_QUANTITIES, type Tm27Meta } from '../../spectrum-file/tm27';
-import { measurePartsPaced, type MeasuredPart } from '../../measurements/index';
 import { ansiBinOf } from '../../spectral/ansi/c78377';
 import { QUALITY_CORE_VERSION } from '../../measurements/version';
-import { MAX_MEASUREMENT_FILE_BYTES, MAX_TABLE_FILE_BYTES } from '../../measurements/schema';
-import { parseTesterTable } from '../../tester-table/parse';
-import { testerPartMetrics } from '../../tester-table/part-metrics';
 import { getTesterProfile } from './tester-profiles';
-import { unpackUpload } from './unpack';
+import { readOffThread } from './read-pool';
+import type { ReadMeasurements, UploadProgress } from './read-file';
 import { lockBatch } from '../batches/lock';
-import { lineIssue, tooLarge, unprocessable, type DomainError } from '../../errors/domain-error';
+import { lineIssue, unprocessable, type DomainError } from '../../errors/domain-error';
 import { conflict, notFound } from './errors';
 import { requireQuality, type Caller } from './caller';
 import * as records from './records';
@@ -42,7 +36,7 @@ export interface MeasurementFile {
   testerProfileId?: number | null;
 }
 
-export type UploadProgress = { phase: 'parsing' | 'saving' } | { phase: 'measuring'; done: number; total: number };
+export type { UploadProgress } from './read-file';
 
 export interface UploadResult {
   uploadId: number;
@@ -54,97 +48,20 @@ const OPEN_STATES = ['complete'];
 const CHUNK = 100;
 /** Table rows are small (no spectrum): more per insert. */
 const TABLE_CHUNK = 1000;
-const pause = () => new Promise<void>((resolve) => setImmediate(resolve));
 
 function stateRefusal(batchNumber: string, state: string): DomainError {
   if (state === 'released' || state === 'rejected') return conflict(`Batch ${batchNumber} is ${state}: its measurements are closed.`);
   return conflict(`Batch ${batchNumber} is ${state}: parts are measured once the weigh-out is complete.`);
 }
 
-/** Checks the file and measures its parts; saves nothing. Throws a domain error naming lines or parts. */
-export async function measureFile(
-  file: MeasurementFile,
-  onProgress?: (p: UploadProgress) => void
-): Promise<{ parts: MeasuredPart[]; wavelengths: number[]; values: number[][]; warnings: string[]; tm27: Tm27Meta | null }> {
-  if (file.body.length === 0) throw unprocessable(`${file.name || 'The file'} is empty. Nothing was saved.`);
-  if (file.body.length > MAX_MEASUREMENT_FILE_BYTES) {
-    throw tooLarge(
-      `The file is ${formatBytes(file.body.length)}; the limit is ${formatBytes(MAX_MEASUREMENT_FILE_BYTES)}. Nothing was saved.`
-    );
-  }
-  const body = unpackUpload(file.body, file.name, MAX_MEASUREMENT_FILE_BYTES);
-  onProgress?.({ phase: 'parsing' });
-  // CSV/TXT (one column per part) or an IES TM-27 document (one SpectralDistribution per part).
-  const parsed = parseSpectrumUpload(decodeText(body), {
-    multiColumn: true,
-    maxBytes: MAX_MEASUREMENT_FILE_BYTES,
-    quantities: EMITTED_QUANTITIES
-  });
-  if (!parsed.ok) {
-    const n = parsed.errors.length;
-    throw unprocessable(
-      `${file.name} was not saved: ${n === 1 ? 'one problem' : `${n} problems`} in the file. ${parsed.errors[0].message}`,
-      parsed.errors.map((e) => lineIssue(e.line, e.message))
-    );
-  }
-  const measured = await measurePartsPaced(parsed, pause, (done, total) => onProgress?.({ phase: 'measuring', done, total }));
-  if (!measured.ok) {
-    const issues = measured.errors.map((e) => ({
-      path: `part ${e.part}`,
-      line: null,
-      message: `Part ${e.part} (column ${e.column}): ${e.message}`
-    }));
-    throw unprocessable(
-      `${file.name} was not saved: ${issues.length === 1 ? 'one part' : `${issues.length} parts`} cannot be measured. ${issues[0].message}`,
-      issues
-    );
-  }
-  return {
-    parts: measured.parts,
-    wavelengths: parsed.wavelengths,
-    values: parsed.columns.map((c) => c.values),
-    warnings: parsed.warnings,
-    tm27: parsed.tm27
-  };
-}
+type Measured = ReadMeasurements;
 
-type Measured = Awaited<ReturnType<typeof measureFile>> & { profile?: { id: number; version: number } };
-
-/** Checks a tester table with its profile and turns each row into part metrics; saves nothing. */
-export async function readTesterFile(
-  file: MeasurementFile,
-  profileId: number,
-  onProgress?: (p: UploadProgress) => void
-): Promise<Measured> {
-  if (file.body.length === 0) throw unprocessable(`${file.name || 'The file'} is empty. Nothing was saved.`);
-  if (file.body.length > MAX_TABLE_FILE_BYTES) {
-    throw tooLarge(
-      `The file is ${formatBytes(file.body.length)}; the limit for a tester table is ${formatBytes(MAX_TABLE_FILE_BYTES)}. ` +
-        'Nothing was saved.'
-    );
-  }
-  const body = unpackUpload(file.body, file.name, MAX_TABLE_FILE_BYTES);
-  const { id, version, profile } = await getTesterProfile(profileId);
-  onProgress?.({ phase: 'parsing' });
-  const parsed = parseTesterTable(decodeText(body), profile);
-  if (!parsed.ok) {
-    const n = parsed.errors.length;
-    throw unprocessable(
-      `${file.name} was not saved (tester profile "${profile.name}"): ` +
-        `${n === 1 ? 'one problem' : `${n} problems`}. ${parsed.errors[0].message}`,
-      parsed.errors.map((e) => lineIssue(e.line, e.message))
-    );
-  }
-  const parts = parsed.rows.map((r) => ({ label: r.label, metrics: testerPartMetrics(r, profile.chromaticity), line: r.line }));
-  onProgress?.({ phase: 'measuring', done: parts.length, total: parts.length });
-  return {
-    parts,
-    wavelengths: [],
-    values: parts.map(() => []),
-    warnings: [`read with tester profile "${profile.name}" (version ${version})`, ...parsed.warnings],
-    tm27: null,
-    profile: { id, version }
-  };
+/** Checks the file and reads its parts (spectra, or a tester table with its profile); saves nothing. Off the request thread when built. */
+export async function readFile(file: MeasurementFile, onProgress?: (p: UploadProgress) => void): Promise<Measured> {
+  const body = new Uint8Array(file.body.buffer, file.body.byteOffset, file.body.byteLength);
+  if (!file.testerProfileId) return readOffThread({ kind: 'spectra', name: file.name, body }, onProgress);
+  const { id, version, profile } = await getTesterProfile(file.testerProfileId);
+  return readOffThread({ kind: 'table', name: file.name, body, profile: { id, version, profile } }, onProgress);
 }
 
 /** Writes a checked file: the raw file to object storage, the upload and its parts (inside `trx`). */
@@ -245,9 +162,7 @@ export async function uploadMeasurements(
 ): Promise<UploadResult> {
   await precheckUpload(caller, batchId);
   await checkTestCondition(batchId, file);
-  const m: Measured = file.testerProfileId
-    ? await readTesterFile(file, file.testerProfileId, onProgress)
-    : await measureFile(file, onProgress);
+  const m = await readFile(file, onProgress);
   onProgress?.({ phase: 'saving' });
   return writeTransaction(async (trx) => {
     const locked = await lockBatch(trx, batchId);

@@ -1,0 +1,86 @@
+/**
+ * The measurement reader in a real worker thread (the bundle `npm run build` makes, built here with the same
+ * esbuild settings): a tester table read with its profile, the same table gzip-compressed (RFC 1952), a table
+ * with a bad cell refused as the same DomainError naming the line, and a spectra file measured with progress
+ * reported back. Values invented; the Gaussian test spectra are not a product's.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { gzipSync } from 'node:zlib';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { build } from 'esbuild';
+import { DomainError } from '../../../src/lib/errors/domain-error';
+import { readOn, startReader } from '../../../src/lib/server/measurements/read-pool';
+import type { UploadProgress } from '../../../src/lib/server/measurements/read-file';
+import { testerProfileSchema } from '../../../src/lib/tester-table/profile';
+
+const file = join(tmpdir(), `measure-worker-${process.pid}.mjs`);
+let slot: ReturnType<typeof startReader>;
+const profile = {
+  id: 7,
+  version: 2,
+  profile: testerProfileSchema.parse({
+    name: 'Line 3 tester',
+    headerLines: 0,
+    delimiter: ',',
+    decimalMark: '.',
+    chromaticity: 'xy',
+    columns: { label: 'Serial', x: 'x', y: 'y', ra: 'Ra' }
+  })
+};
+const bytes = (text: string | Buffer) => new Uint8Array(typeof text === 'string' ? Buffer.from(text) : text);
+const table = ['Serial,x,y,Ra', 'W1,0.4338,0.4030,91', 'W2,0.4340,0.4031,92.5', 'W3,0.4336,0.4029,90'].join('\n');
+
+beforeAll(async () => {
+  await build({
+    entryPoints: ['src/lib/server/measurements/read-worker.ts'],
+    bundle: true,
+    platform: 'node',
+    format: 'esm',
+    target: 'node20',
+    outfile: file,
+    logLevel: 'warning'
+  });
+  slot = startReader(file);
+}, 60_000);
+afterAll(async () => {
+  await slot?.worker.terminate();
+});
+
+describe('the measurement reader thread', () => {
+  it('reads a tester table with its profile, and the same table gzip-compressed', async () => {
+    const progress: UploadProgress[] = [];
+    const r = await readOn(slot, { kind: 'table', name: 't.csv', body: bytes(table), profile }, (p) => progress.push(p));
+    expect(r.parts.map((p) => p.label)).toEqual(['W1', 'W2', 'W3']);
+    expect(r.parts[1].metrics).toMatchObject({ x: 0.434, y: 0.4031, ra: 92.5, source: 'table' });
+    expect(r.profile).toEqual({ id: 7, version: 2 });
+    expect(progress[0]).toEqual({ phase: 'parsing' });
+    const gz = await readOn(slot, { kind: 'table', name: 't.csv.gz', body: bytes(gzipSync(table)), profile });
+    expect(gz.parts).toEqual(r.parts);
+  });
+
+  it('refuses a bad cell as the same DomainError, naming the line', async () => {
+    const bad = table.replace('0.4031', 'abc');
+    const err = await readOn(slot, { kind: 'table', name: 'bad.csv', body: bytes(bad), profile }).catch((e) => e);
+    expect(err).toBeInstanceOf(DomainError);
+    expect(err.kind).toBe('unprocessable');
+    expect(err.issues[0].line).toBe(3);
+    expect(err.message).toContain('bad.csv was not saved');
+  });
+
+  it('measures spectra and reports progress per part', async () => {
+    // Two parts: a yellow band with a blue peak (Gaussian shapes, invented), 380–780 nm at 5 nm.
+    const rows = ['nm,A,B'];
+    for (let l = 380; l <= 780; l += 5) {
+      const a = Math.exp(-(((l - 565) / 70) ** 2)) + 0.6 * Math.exp(-(((l - 450) / 10) ** 2));
+      rows.push(`${l},${a.toFixed(6)},${(0.95 * a).toFixed(6)}`);
+    }
+    const progress: UploadProgress[] = [];
+    const r = await readOn(slot, { kind: 'spectra', name: 's.csv', body: bytes(rows.join('\n')) }, (p) => progress.push(p));
+    expect(r.parts.map((p) => p.label)).toEqual(['A', 'B']);
+    // Scaling a spectrum leaves its chromaticity alone (CIE 15:2004 §7.3: x, y are ratios of the tristimulus values).
+    expect(r.parts[1].metrics.x).toBeCloseTo(r.parts[0].metrics.x, 6); // 6 decimals in the file
+    expect(r.values[0]).toHaveLength(81);
+    expect(progress.at(-1)).toEqual({ phase: 'measuring', done: 2, total: 2 });
+  });
+});
