@@ -41,10 +41,10 @@ export async function seed(knex: Knex): Promise<void> {
         entity_type: 'batch',
         entity_id: String(batch.id),
         action: 'measurements-upload',
-        after_json: JSON.stringify({ uploadId, parts: measured.parts.length, seed: true })
+        after_json: JSON.stringify({ uploadId, parts: measured.count, seed: true })
       });
     });
-    console.log(`seed 05_quality: ${BATCH} measured (${measured.parts.length} parts), waiting for a decision.`);
+    console.log(`seed 05_quality: ${BATCH} measured (${measured.count} parts), waiting for a decision.`);
   } catch (err) {
     const reason = (err as Error).message;
     throw new Error(`seed 05_quality: the demo measurements could not be stored (is object storage up at S3_ENDPOINT?): ${reason}`, {

@@ -3,13 +3,20 @@
  * inline tester's per-part table (label, x, y, CCT, Ra, R9, flux, Vf, bin; about 6 MB) read with a profile,
  * turned into part metrics, judged against a 3000 K revision (3-step ellipse, Ra ≥ 80, R9 ≥ 0, ANSI bin)
  * and summarised with the plot model — the pure part of "upload to summary" (the database insert is
- * timed by the upload integration test). Parts invented: a normal spread around the 3000 K centre.
+ * timed by `npm run bench:db`). Then the same file read in the request thread and in the reader worker thread
+ * the built app uses, with the longest stall of the request thread's event loop during each.
+ * Parts invented: a normal spread around the 3000 K centre.
  */
 import { chromaticityPlotModel, defaultAcceptance, judgeBatch } from '../../src/lib/measurements/index';
 import { parseTesterTable } from '../../src/lib/tester-table/parse';
 import { testerPartMetrics } from '../../src/lib/tester-table/part-metrics';
 import { testerProfileSchema } from '../../src/lib/tester-table/profile';
 import { seededRandom } from '../../src/lib/blend/spread/prng';
+import { readAndPack } from '../../src/lib/server/measurements/read-file';
+import { readOn, startReader } from '../../src/lib/server/measurements/read-pool';
+import { build } from 'esbuild';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 
 const PARTS = 100_000;
 const RUNS = 3;
@@ -63,9 +70,42 @@ for (const [k, v] of Object.entries(times)) console.log(`tester-table  ${k.padEn
 console.log(
   `tester-table  yield ${(yieldFraction * 100).toFixed(1)} %; heap ${(process.memoryUsage().heapUsed / 1024 / 1024).toFixed(0)} MB`
 );
+// The reading step (unpack, decode, parse, part metrics) in this thread and in the reader thread, with the
+// longest gap between timer ticks here (what other requests would wait) while it runs.
+async function stalled(read: () => Promise<unknown>): Promise<{ ms: number; stallMs: number }> {
+  let last = performance.now();
+  let stall = 0;
+  const tick = setInterval(() => {
+    const now = performance.now();
+    stall = Math.max(stall, now - last);
+    last = now;
+  }, 5);
+  const t0 = performance.now();
+  await read();
+  const ms = performance.now() - t0;
+  clearInterval(tick);
+  return { ms, stallMs: Math.max(stall, performance.now() - last) };
+}
+const workerFile = join(tmpdir(), `measure-worker-bench-${process.pid}.mjs`);
+const esm = { bundle: true, platform: 'node', format: 'esm', target: 'node20', logLevel: 'warning' } as const;
+await build({ ...esm, entryPoints: ['src/lib/server/measurements/read-worker.ts'], outfile: workerFile });
+const slot = startReader(workerFile);
+const job = { kind: 'table' as const, name: 'lot.csv', body: new Uint8Array(Buffer.from(text)), profile: { id: 1, version: 1, profile } };
+await readOn(slot, job); // warm the thread
+const here = await stalled(() => readAndPack(job));
+const there = await stalled(() => readOn(slot, job));
+await slot.worker.terminate();
+console.log(`tester-table  read in this thread   ${here.ms.toFixed(0).padStart(6)} ms, event loop stalled ${here.stallMs.toFixed(0)} ms`);
+console.log(`tester-table  read in reader thread ${there.ms.toFixed(0).padStart(6)} ms, event loop stalled ${there.stallMs.toFixed(0)} ms`);
 console.log(
   JSON.stringify({
     bench: 'tester-table',
+    read: {
+      thread: Number(here.ms.toFixed(0)),
+      worker: Number(there.ms.toFixed(0)),
+      stallThread: Number(here.stallMs.toFixed(0)),
+      stallWorker: Number(there.stallMs.toFixed(0))
+    },
     unit: 'ms',
     parts: PARTS,
     medians: Object.fromEntries(Object.entries(times).map(([k, v]) => [k, Number(median(v).toFixed(0))]))

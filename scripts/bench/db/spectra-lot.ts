@@ -9,7 +9,11 @@ import { uploadMeasurements } from '../../../src/lib/server/measurements/upload'
 import { batchResults } from '../../../src/lib/server/measurements/results';
 import { disposeBatch } from '../../../src/lib/server/measurements/disposition';
 import { getBatch } from '../../../src/lib/server/batches/read';
+import { closeReadPool } from '../../../src/lib/server/measurements/read-pool';
 import { completedBatch, csvFile, demoUser, DEMO_PASSWORD, partsCsv } from '../../../tests/server/measurements/support';
+
+// Read files in the reader worker thread, as the built app does (config is read on first use, after this line).
+process.env.PF_READ_IN_WORKER ??= '1';
 
 const UPLOADS = Number(process.env.UPLOADS ?? 5);
 const PER_UPLOAD = 2000;
@@ -44,4 +48,5 @@ console.log(
     `release ${(t3 - t2).toFixed(0)} ms (signed content ${(row!.signed_json.length / 1024 / 1024).toFixed(1)} MB); ` +
     `yield ${((view!.summary.yieldFraction ?? 0) * 100).toFixed(1)} %; rss ${(process.memoryUsage().rss / 1024 / 1024).toFixed(0)} MB`
 );
+await closeReadPool();
 await closeDb();

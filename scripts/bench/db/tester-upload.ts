@@ -8,6 +8,7 @@
 import { closeDb, db } from '../../../src/lib/server/db/index';
 import { uploadMeasurements } from '../../../src/lib/server/measurements/upload';
 import { batchResults } from '../../../src/lib/server/measurements/results';
+import { closeReadPool, readsInWorkers } from '../../../src/lib/server/measurements/read-pool';
 import { createTesterProfile } from '../../../src/lib/server/measurements/tester-profiles';
 import { testerProfileSchema } from '../../../src/lib/tester-table/profile';
 import { seededRandom } from '../../../src/lib/blend/spread/prng';
@@ -17,6 +18,9 @@ import { getBatch } from '../../../src/lib/server/batches/read';
 import { markMixed, recordLine } from '../../../src/lib/server/batches/weighing';
 import { completeBatch } from '../../../src/lib/server/batches/complete';
 import { createBatchSchema } from '../../../src/lib/batches/schema';
+
+// Read files in the reader worker thread, as the built app does (config is read on first use, after this line).
+process.env.PF_READ_IN_WORKER ??= '1';
 
 const PARTS = Number(process.env.PARTS ?? 100_000);
 const rnd = seededRandom(11);
@@ -76,9 +80,11 @@ const t1 = performance.now();
 const view = await batchResults(batchId);
 const t2 = performance.now();
 console.log(
-  `tester-upload  ${PARTS.toLocaleString('en')} rows (${(body.length / 1024 / 1024).toFixed(1)} MB): upload ${(t1 - t0).toFixed(0)} ms, ` +
+  `tester-upload  ${PARTS.toLocaleString('en')} rows (${(body.length / 1024 / 1024).toFixed(1)} MB, read in ` +
+    `${readsInWorkers() ? 'the reader thread' : 'this thread'}): upload ${(t1 - t0).toFixed(0)} ms, ` +
     `summary ${(t2 - t1).toFixed(0)} ms, total ${(t2 - t0).toFixed(0)} ms; ` +
     `yield ${((view!.summary.yieldFraction ?? 0) * 100).toFixed(1)} %; ` +
     `rss ${(process.memoryUsage().rss / 1024 / 1024).toFixed(0)} MB`
 );
+await closeReadPool();
 await closeDb();

@@ -32,6 +32,7 @@ const envSchema = z.object({
   ),
   PF_SOLVE_WORKER: z.string().min(1).default('build/solve-worker.js'),
   PF_READ_WORKER: z.string().min(1).default('build/measure-worker.js'),
+  PF_READ_IN_WORKER: z.enum(['0', '1'], 'PF_READ_IN_WORKER must be 0 or 1').optional(),
   PRICE_CURRENCY: z
     .string()
     .regex(/^[A-Z]{3}$/, 'PRICE_CURRENCY must be an ISO 4217 code such as EUR')
@@ -65,6 +66,8 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env) {
     solveWorkerFile: env.PF_SOLVE_WORKER,
     /** The bundled measurement reader (built by `npm run build`). */
     readWorkerFile: env.PF_READ_WORKER,
+    /** Read files in the worker outside the built app too (the database bench); 0 = never. */
+    readInWorker: env.PF_READ_IN_WORKER === undefined ? null : env.PF_READ_IN_WORKER === '1',
     mail: {
       host: env.SMTP_HOST,
       port: env.SMTP_PORT,

@@ -28,6 +28,7 @@ const profile = {
     columns: { label: 'Serial', x: 'x', y: 'y', ra: 'Ra' }
   })
 };
+const metricsOf = (r: { metricsJson: string }) => r.metricsJson.split('\n').map((j) => JSON.parse(j));
 const bytes = (text: string | Buffer) => new Uint8Array(typeof text === 'string' ? Buffer.from(text) : text);
 const table = ['Serial,x,y,Ra', 'W1,0.4338,0.4030,91', 'W2,0.4340,0.4031,92.5', 'W3,0.4336,0.4029,90'].join('\n');
 
@@ -51,12 +52,16 @@ describe('the measurement reader thread', () => {
   it('reads a tester table with its profile, and the same table gzip-compressed', async () => {
     const progress: UploadProgress[] = [];
     const r = await readOn(slot, { kind: 'table', name: 't.csv', body: bytes(table), profile }, (p) => progress.push(p));
-    expect(r.parts.map((p) => p.label)).toEqual(['W1', 'W2', 'W3']);
-    expect(r.parts[1].metrics).toMatchObject({ x: 0.434, y: 0.4031, ra: 92.5, source: 'table' });
+    expect(r.labels).toEqual(['W1', 'W2', 'W3']);
+    expect(metricsOf(r)[1]).toMatchObject({ x: 0.434, y: 0.4031, ra: 92.5, source: 'table' });
+    // Stored columns: x, y, …, Ra; the table's line numbers (header on line 1); ANSI C78.377-2017 Table 1 3000 K bin.
+    expect([r.numbers[8], r.numbers[9], r.numbers[12]]).toEqual([0.434, 0.4031, 92.5]);
+    expect(r.numbers[15]).toBe(3000);
+    expect([...r.columnNo]).toEqual([2, 3, 4]);
     expect(r.profile).toEqual({ id: 7, version: 2 });
     expect(progress[0]).toEqual({ phase: 'parsing' });
     const gz = await readOn(slot, { kind: 'table', name: 't.csv.gz', body: bytes(gzipSync(table)), profile });
-    expect(gz.parts).toEqual(r.parts);
+    expect(gz.metricsJson).toBe(r.metricsJson);
   });
 
   it('refuses a bad cell as the same DomainError, naming the line', async () => {
@@ -77,10 +82,11 @@ describe('the measurement reader thread', () => {
     }
     const progress: UploadProgress[] = [];
     const r = await readOn(slot, { kind: 'spectra', name: 's.csv', body: bytes(rows.join('\n')) }, (p) => progress.push(p));
-    expect(r.parts.map((p) => p.label)).toEqual(['A', 'B']);
+    expect(r.labels).toEqual(['A', 'B']);
+    const [a, b] = metricsOf(r);
     // Scaling a spectrum leaves its chromaticity alone (CIE 15:2004 §7.3: x, y are ratios of the tristimulus values).
-    expect(r.parts[1].metrics.x).toBeCloseTo(r.parts[0].metrics.x, 6); // 6 decimals in the file
-    expect(r.values[0]).toHaveLength(81);
+    expect(b.x).toBeCloseTo(a.x, 6); // 6 decimals in the file
+    expect(JSON.parse(r.valuesJson.split('\n')[0])).toHaveLength(81);
     expect(progress.at(-1)).toEqual({ phase: 'measuring', done: 2, total: 2 });
   });
 });

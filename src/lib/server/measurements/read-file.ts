@@ -14,6 +14,7 @@ import { parseTesterTable } from '../../tester-table/parse';
 import { testerPartMetrics } from '../../tester-table/part-metrics';
 import type { TesterProfile } from '../../tester-table/profile';
 import { lineIssue, tooLarge, unprocessable } from '../../errors/domain-error';
+import { ansiBinOf } from '../../spectral/ansi/c78377';
 import { unpackUpload } from './unpack';
 
 export type UploadProgress = { phase: 'parsing' | 'saving' } | { phase: 'measuring'; done: number; total: number };
@@ -113,4 +114,61 @@ function readTable(
 export async function readMeasurementFile(job: ReadJob, onProgress?: (p: UploadProgress) => void): Promise<ReadMeasurements> {
   const raw = Buffer.from(job.body.buffer, job.body.byteOffset, job.body.byteLength);
   return job.kind === 'table' ? readTable(job.name, raw, job.profile, onProgress) : readSpectra(job.name, raw, onProgress);
+}
+
+/** Numbers stored per part, in this order, NaN for none (ANSI bin: nominal CCT of the Table 1 quadrangle). */
+export const PACKED_COLUMNS = ['x', 'y', 'cct', 'duv', 'ra', 'r9', 'ler', 'ansiBin'] as const;
+
+/**
+ * A read file as the upload stores it: per part its label, column (or line) number, metrics and values as
+ * JSON text and the numbers of the indexed columns. Built once, where the file was read; few large strings
+ * and typed arrays cross a thread boundary in milliseconds, where 100,000 metric objects took a second.
+ */
+export interface PackedMeasurements {
+  count: number;
+  labels: string[];
+  columnNo: Int32Array;
+  /** One JSON document per part, joined by "\n" (JSON text holds no raw line break). */
+  metricsJson: string;
+  valuesJson: string;
+  /** count × PACKED_COLUMNS.length. */
+  numbers: Float64Array;
+  wavelengths: number[];
+  warnings: string[];
+  tm27: Tm27Meta | null;
+  profile?: { id: number; version: number };
+}
+
+// ANSI C78.377-2017 Table 1 (the bin a part's x, y fall in).
+export function packMeasurements(m: ReadMeasurements): PackedMeasurements {
+  const n = m.parts.length;
+  const numbers = new Float64Array(n * PACKED_COLUMNS.length);
+  const columnNo = new Int32Array(n);
+  const metrics: string[] = new Array(n);
+  const values: string[] = new Array(n);
+  const or = (v: number | null | undefined) => (v === null || v === undefined ? NaN : v);
+  m.parts.forEach((p, i) => {
+    const k = p.metrics;
+    numbers.set([k.x, k.y, k.cct, k.duv, or(k.ra), or(k.r9), or(k.ler), or(ansiBinOf(k.x, k.y))], i * PACKED_COLUMNS.length);
+    columnNo[i] = m.profile ? (p.line ?? i + 2) : i + 2;
+    metrics[i] = JSON.stringify(k);
+    values[i] = JSON.stringify(m.values[i] ?? []);
+  });
+  return {
+    count: n,
+    labels: m.parts.map((p) => p.label),
+    columnNo,
+    metricsJson: metrics.join('\n'),
+    valuesJson: values.join('\n'),
+    numbers,
+    wavelengths: m.wavelengths,
+    warnings: m.warnings,
+    tm27: m.tm27,
+    profile: m.profile
+  };
+}
+
+/** Reads a file and packs it for storing. */
+export async function readAndPack(job: ReadJob, onProgress?: (p: UploadProgress) => void): Promise<PackedMeasurements> {
+  return packMeasurements(await readMeasurementFile(job, onProgress));
 }

@@ -11,10 +11,10 @@ import { resolve } from 'node:path';
 import { Worker } from 'node:worker_threads';
 import { config } from '../config';
 import { DomainError, type ErrorKind, type Issue } from '../../errors/domain-error';
-import { readMeasurementFile, type ReadJob, type ReadMeasurements, type UploadProgress } from './read-file';
+import { readAndPack, type PackedMeasurements, type ReadJob, type UploadProgress } from './read-file';
 
 interface Pending {
-  resolve: (r: ReadMeasurements) => void;
+  resolve: (r: PackedMeasurements) => void;
   reject: (e: Error) => void;
   onProgress?: (p: UploadProgress) => void;
 }
@@ -30,9 +30,13 @@ let nextId = 1;
 
 const workerFile = (): string => resolve(config().readWorkerFile);
 
-/** Worker threads only when this module runs from the built app and the bundled worker exists. */
+/**
+ * Worker threads when this module runs from the built app (or PF_READ_IN_WORKER=1) and the bundled worker
+ * exists; PF_READ_IN_WORKER=0: never.
+ */
 export function readsInWorkers(file = workerFile()): boolean {
-  return import.meta.url.includes('/build/server/') && existsSync(file);
+  const wanted = config().readInWorker ?? import.meta.url.includes('/build/server/');
+  return wanted && existsSync(file);
 }
 
 /** A DomainError again from what the worker sent; anything else as a plain error naming the worker. */
@@ -46,7 +50,7 @@ export function startReader(file: string, execArgv?: string[]): Slot {
   const worker = new Worker(file, execArgv ? { execArgv } : undefined);
   worker.unref();
   const slot: Slot = { worker, busy: new Set<number>() };
-  worker.on('message', (m: { id: number; progress?: UploadProgress; result?: ReadMeasurements; error?: WorkerError }) => {
+  worker.on('message', (m: { id: number; progress?: UploadProgress; result?: PackedMeasurements; error?: WorkerError }) => {
     const p = pending.get(m.id);
     if (!p) return;
     if (m.progress) return p.onProgress?.(m.progress);
@@ -67,10 +71,10 @@ export function startReader(file: string, execArgv?: string[]): Slot {
 }
 
 /** Reads `job` on `slot`: a copy of the bytes is moved to the thread (the caller keeps the file to store it). */
-export function readOn(slot: Slot, job: ReadJob, onProgress?: (p: UploadProgress) => void): Promise<ReadMeasurements> {
+export function readOn(slot: Slot, job: ReadJob, onProgress?: (p: UploadProgress) => void): Promise<PackedMeasurements> {
   const id = nextId++;
   const body = job.body.slice();
-  return new Promise<ReadMeasurements>((resolvePromise, reject) => {
+  return new Promise<PackedMeasurements>((resolvePromise, reject) => {
     pending.set(id, { resolve: resolvePromise, reject, onProgress });
     slot.busy.add(id);
     slot.worker.postMessage({ id, job: { ...job, body } }, [body.buffer as ArrayBuffer]);
@@ -78,8 +82,8 @@ export function readOn(slot: Slot, job: ReadJob, onProgress?: (p: UploadProgress
 }
 
 /** Reads a measurement file in a worker thread when the app is built, else here. */
-export function readOffThread(job: ReadJob, onProgress?: (p: UploadProgress) => void): Promise<ReadMeasurements> {
-  if (!readsInWorkers()) return readMeasurementFile(job, onProgress);
+export function readOffThread(job: ReadJob, onProgress?: (p: UploadProgress) => void): Promise<PackedMeasurements> {
+  if (!readsInWorkers()) return readAndPack(job, onProgress);
   slots ??= Array.from({ length: Math.max(1, Math.min(2, availableParallelism())) }, () => startReader(workerFile()));
   const slot = slots.reduce((a, b) => (b.busy.size < a.busy.size ? b : a));
   return readOn(slot, job, onProgress);

@@ -11,11 +11,10 @@ import { db } from '../db/index';
 import { writeTransaction } from '../db/transaction';
 import { record } from '../db/audit';
 import { putFile } from '../storage/objects';
-import { ansiBinOf } from '../../spectral/ansi/c78377';
 import { QUALITY_CORE_VERSION } from '../../measurements/version';
 import { getTesterProfile } from './tester-profiles';
 import { readOffThread } from './read-pool';
-import type { ReadMeasurements, UploadProgress } from './read-file';
+import { PACKED_COLUMNS, type PackedMeasurements, type UploadProgress } from './read-file';
 import { lockBatch } from '../batches/lock';
 import { lineIssue, unprocessable, type DomainError } from '../../errors/domain-error';
 import { conflict, notFound } from './errors';
@@ -54,7 +53,7 @@ function stateRefusal(batchNumber: string, state: string): DomainError {
   return conflict(`Batch ${batchNumber} is ${state}: parts are measured once the weigh-out is complete.`);
 }
 
-type Measured = ReadMeasurements;
+type Measured = PackedMeasurements;
 
 /** Checks the file and reads its parts (spectra, or a tester table with its profile); saves nothing. Off the request thread when built. */
 export async function readFile(file: MeasurementFile, onProgress?: (p: UploadProgress) => void): Promise<Measured> {
@@ -88,7 +87,7 @@ export async function insertMeasurements(
     batch_id: batchId,
     stored_file_id: storedFileId,
     original_name: file.name.slice(0, 255) || 'measurements',
-    parts_count: m.parts.length,
+    parts_count: m.count,
     wavelengths_json: JSON.stringify(m.wavelengths),
     warnings_json: JSON.stringify(m.warnings),
     tm27_json: m.tm27 ? JSON.stringify(m.tm27) : null,
@@ -101,31 +100,35 @@ export async function insertMeasurements(
     core_version: QUALITY_CORE_VERSION,
     uploaded_by: uploadedBy
   });
+  const metrics = m.metricsJson.split('\n');
+  const values = m.valuesJson.split('\n');
+  const W = PACKED_COLUMNS.length;
+  const num = (v: number) => (Number.isNaN(v) ? null : v);
   const rowOf = (i: number) => {
-    const p = m.parts[i];
+    const at = i * W;
     return {
       upload_id: uploadId,
       batch_id: batchId,
-      part_label: p.label.slice(0, 80),
-      column_no: m.profile ? ((p as { line?: number }).line ?? i + 2) : i + 2,
-      values_json: JSON.stringify(m.values[i]),
-      metrics_json: JSON.stringify(p.metrics),
-      x: p.metrics.x,
-      y: p.metrics.y,
-      cct_k: p.metrics.cct,
-      duv: p.metrics.duv,
-      ra: p.metrics.ra,
-      r9: p.metrics.r9,
-      ler_lm_per_w: p.metrics.ler,
-      ansi_bin: ansiBinOf(p.metrics.x, p.metrics.y)
+      part_label: m.labels[i].slice(0, 80),
+      column_no: m.columnNo[i],
+      values_json: values[i],
+      metrics_json: metrics[i],
+      x: m.numbers[at],
+      y: m.numbers[at + 1],
+      cct_k: m.numbers[at + 2],
+      duv: m.numbers[at + 3],
+      ra: num(m.numbers[at + 4]),
+      r9: num(m.numbers[at + 5]),
+      ler_lm_per_w: num(m.numbers[at + 6]),
+      ansi_bin: num(m.numbers[at + 7])
     };
   };
   // Two chunks in flight on the transaction's connection: while the server stores one, the next is built and
   // written out (the driver queues it), so building and storing overlap; memory stays at two chunks.
   const chunk = m.profile ? TABLE_CHUNK : CHUNK;
   let inFlight: Promise<unknown> | null = null;
-  for (let i = 0; i < m.parts.length; i += chunk) {
-    const rows = Array.from({ length: Math.min(chunk, m.parts.length - i) }, (_, k) => rowOf(i + k));
+  for (let i = 0; i < m.count; i += chunk) {
+    const rows = Array.from({ length: Math.min(chunk, m.count - i) }, (_, k) => rowOf(i + k));
     const next = trx('part_measurements').insert(rows).then();
     next.catch(() => undefined); // awaited below; marked handled in case the chunk before it fails first
     if (inFlight) await inFlight;
@@ -168,7 +171,7 @@ export async function uploadMeasurements(
     const locked = await lockBatch(trx, batchId);
     if (!OPEN_STATES.includes(locked.state)) throw stateRefusal(locked.batch_number, locked.state);
     const existing = await records.activeLabels(batchId, trx);
-    const repeated = m.parts.filter((p) => existing.has(p.label)).map((p) => p.label);
+    const repeated = m.labels.filter((label) => existing.has(label));
     if (repeated.length) {
       const list = repeated.slice(0, 10).join(', ') + (repeated.length > 10 ? ` and ${repeated.length - 10} more` : '');
       throw conflict(
@@ -189,14 +192,14 @@ export async function uploadMeasurements(
           uploadId,
           storedFileId,
           file: file.name,
-          parts: m.parts.length,
+          parts: m.count,
           coreVersion: QUALITY_CORE_VERSION,
           ...(m.profile ? { testerProfileId: m.profile.id, testerProfileVersion: m.profile.version } : {})
         }
       },
       trx
     );
-    return { uploadId, parts: m.parts.length, warnings: m.warnings };
+    return { uploadId, parts: m.count, warnings: m.warnings };
   });
 }
 
