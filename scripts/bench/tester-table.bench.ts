@@ -3,13 +3,21 @@
  * inline tester's per-part table (label, x, y, CCT, Ra, R9, flux, Vf, bin; about 6 MB) read with a profile,
  * turned into part metrics, judged against a 3000 K revision (3-step ellipse, Ra ≥ 80, R9 ≥ 0, ANSI bin)
  * and summarised with the plot model — the pure part of "upload to summary" (the database insert is
- * timed by the upload integration test). Parts invented: a normal spread around the 3000 K centre.
+ * timed by the upload integration test). Then the server's path: the same table gzip-compressed, read in a
+ * worker thread (the bundle `npm run build` makes, built here by esbuild) — unpacked, decoded and parsed as
+ * it streams — timed to the result in this thread, with the longest stall of this thread's event loop.
+ * Parts invented: a normal spread around the 3000 K centre.
  */
 import { chromaticityPlotModel, defaultAcceptance, judgeBatch } from '../../src/lib/measurements/index';
 import { parseTesterTable } from '../../src/lib/tester-table/parse';
 import { testerPartMetrics } from '../../src/lib/tester-table/part-metrics';
 import { testerProfileSchema } from '../../src/lib/tester-table/profile';
 import { seededRandom } from '../../src/lib/blend/spread/prng';
+import { gzipSync } from 'node:zlib';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { build } from 'esbuild';
+import { readOn, startReader } from '../../src/lib/server/measurements/read-pool';
 
 const PARTS = 100_000;
 const RUNS = 3;
@@ -69,5 +77,45 @@ console.log(
     unit: 'ms',
     parts: PARTS,
     medians: Object.fromEntries(Object.entries(times).map(([k, v]) => [k, Number(median(v).toFixed(0))]))
+  })
+);
+
+// The worker path: gzip body → worker (stream unpack, decode, parse, metrics) → parts back here.
+const workerFile = join(tmpdir(), `measure-worker-bench-${process.pid}.mjs`);
+const esm = { bundle: true, platform: 'node', format: 'esm', target: 'node20', logLevel: 'warning' } as const;
+await build({ ...esm, entryPoints: ['src/lib/server/measurements/read-worker.ts'], outfile: workerFile });
+const slot = startReader(workerFile);
+const gz = new Uint8Array(gzipSync(text));
+const job = { kind: 'table' as const, name: 'lot.csv.gz', body: gz, profile: { id: 1, version: 1, profile } };
+const worker: number[] = [];
+let stall = 0;
+for (let run = 0; run < RUNS + 1; run++) {
+  let last = performance.now();
+  let longest = 0;
+  const tick = setInterval(() => {
+    const now = performance.now();
+    longest = Math.max(longest, now - last);
+    last = now;
+  }, 5);
+  const t0 = performance.now();
+  const r = await readOn(slot, job);
+  const t1 = performance.now();
+  clearInterval(tick);
+  if (r.parts.length !== PARTS) throw new Error(`worker read ${r.parts.length} parts`);
+  if (run > 0) worker.push(t1 - t0); // the first run warms the thread up
+  stall = Math.max(stall, longest);
+}
+await slot.worker.terminate();
+console.log(
+  `tester-table  worker   median ${median(worker).toFixed(0).padStart(6)} ms (gzip ${(gz.length / 1024 / 1024).toFixed(1)} MB in, ` +
+    `parts back); longest stall of this thread ${stall.toFixed(0)} ms`
+);
+console.log(
+  JSON.stringify({
+    bench: 'tester-table-worker',
+    unit: 'ms',
+    parts: PARTS,
+    median: Number(median(worker).toFixed(0)),
+    stall: Number(stall.toFixed(0))
   })
 );
