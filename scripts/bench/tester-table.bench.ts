@@ -108,7 +108,8 @@ for (let run = 0; run < RUNS + 1; run++) {
 await slot.worker.terminate();
 console.log(
   `tester-table  worker   median ${median(worker).toFixed(0).padStart(6)} ms (gzip ${(gz.length / 1024 / 1024).toFixed(1)} MB in, ` +
-    `parts back); longest stall of this thread ${stall.toFixed(0)} ms`
+    `parts back); longest stall of this thread ${stall.toFixed(0)} ms; peak RSS of the process ` +
+    `${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB`
 );
 console.log(
   JSON.stringify({
