@@ -49,50 +49,133 @@ const RANGES: Partial<Record<TesterField, [number, number]>> = {
   peakNm: [360, 830]
 };
 
-export function parseTesterTable(text: string, profile: TesterProfile): TesterTableResult {
-  const lines = text.replace(/^\uFEFF/, '').split(/\r?\n/);
-  const headerLine = profile.headerLines + 1;
-  const body = lines.slice(profile.headerLines).join('\n');
-  const delimiter = profile.delimiter === 'auto' ? '' : profile.delimiter === 'tab' ? '\t' : profile.delimiter;
-  const parsed = Papa.parse<string[]>(body, { delimiter, skipEmptyLines: false });
-  const table = parsed.data;
-  const head = (table[0] ?? []).map((h) => String(h).trim().toLowerCase());
-  if (!head.length || head.every((h) => h === ''))
-    return { ok: false, errors: [{ line: headerLine, message: `line ${headerLine}: no header row` }] };
-  const index = new Map<TesterField, number>();
-  const missing: string[] = [];
-  for (const f of TESTER_FIELDS) {
-    const name = profile.columns[f];
-    if (!name) continue;
-    const at = head.indexOf(name.toLowerCase());
-    if (at < 0) missing.push(`"${name}" (${TESTER_FIELD_LABELS[f]})`);
-    else index.set(f, at);
+/**
+ * Reads a tester table as its text arrives (RFC 4180 fields split by papaparse one block of whole lines at a
+ * time; a block never ends inside a quoted field): `write` each piece of text, then `end` for the result. Only
+ * the rows kept and the unfinished last line are held, never the whole text; it stops early once refused.
+ */
+export class TesterTableReader {
+  private pending = '';
+  private skip: number;
+  private started = false;
+  private delimiter: string;
+  private head: string[] | null = null;
+  private index = new Map<TesterField, number>();
+  private refused: TableIssue[] | null = null;
+  private readonly errors: TableIssue[] = [];
+  private readonly rows: TesterRow[] = [];
+  private readonly labels = new Map<string, number>();
+  private quotingErrors = 0;
+  private firstQuotingError = '';
+  private r = 0;
+  private readonly headerLine: number;
+
+  constructor(private readonly profile: TesterProfile) {
+    this.skip = profile.headerLines;
+    this.headerLine = profile.headerLines + 1;
+    this.delimiter = profile.delimiter === 'auto' ? '' : profile.delimiter === 'tab' ? '\t' : profile.delimiter;
   }
-  if (missing.length) {
-    const shown = (table[0] ?? [])
-      .slice(0, 20)
-      .map((h) => `"${String(h).trim()}"`)
-      .join(', ');
-    return {
-      ok: false,
-      errors: [{ line: headerLine, message: `line ${headerLine}: column ${missing.join(', ')} not found; the header has ${shown}` }]
-    };
+
+  /** True once the table is refused (later text is not read). */
+  get done(): boolean {
+    return this.refused !== null || this.errors.length >= MAX_ERRORS;
   }
-  const comma = profile.decimalMark === ',';
-  const errors: TableIssue[] = [];
-  const rows: TesterRow[] = [];
-  const labels = new Map<string, number>();
-  const [c1, c2]: TesterField[] = profile.chromaticity === 'xy' ? ['x', 'y'] : ['uPrime', 'vPrime'];
-  for (let r = 1; r < table.length && errors.length < MAX_ERRORS; r++) {
-    const cells = table[r];
-    const line = headerLine + r;
-    if (cells.length === 1 && String(cells[0]).trim() === '') continue;
+
+  write(text: string): void {
+    if (this.done) return;
+    if (!this.started) {
+      this.started = true;
+      text = text.replace(/^\uFEFF/, '');
+    }
+    this.pending += text;
+    // The lines before the header are skipped whole.
+    while (this.skip > 0) {
+      const nl = this.pending.indexOf('\n');
+      if (nl < 0) return;
+      this.pending = this.pending.slice(nl + 1);
+      this.skip--;
+    }
+    // Cut at the last line end outside a quoted field (an even count of quotes before it, RFC 4180 §2.7).
+    let cut = -1;
+    let quoted = false; // the unread text always starts a line
+    for (let i = 0; i < this.pending.length; i++) {
+      const c = this.pending.charCodeAt(i);
+      if (c === 34) quoted = !quoted;
+      else if (c === 10 && !quoted) cut = i;
+    }
+    if (cut < 0) return;
+    let block = this.pending.slice(0, cut);
+    this.pending = this.pending.slice(cut + 1);
+    if (block.endsWith('\r')) block = block.slice(0, -1);
+    this.parseBlock(block);
+  }
+
+  end(): TesterTableResult {
+    if (!this.done && this.skip === 0) {
+      const rest = this.pending.replace(/\r\n/g, '\n');
+      if (rest !== '' || this.head === null) this.parseBlock(rest);
+    }
+    this.pending = '';
+    const { headerLine, errors, rows } = this;
+    if (this.refused) return { ok: false, errors: this.refused };
+    if (this.head === null) return { ok: false, errors: [{ line: headerLine, message: `line ${headerLine}: no header row` }] };
+    if (errors.length) return { ok: false, errors };
+    if (!rows.length) return { ok: false, errors: [{ line: headerLine, message: `no parts below the header on line ${headerLine}` }] };
+    const warnings = this.quotingErrors ? [`${this.quotingErrors} row(s) had quoting problems: ${this.firstQuotingError}`] : [];
+    return { ok: true, rows, warnings };
+  }
+
+  private parseBlock(block: string): void {
+    const parsed = Papa.parse<string[]>(block.replace(/\r\n/g, '\n'), { delimiter: this.delimiter, skipEmptyLines: false });
+    if (!this.delimiter && parsed.meta.delimiter) this.delimiter = parsed.meta.delimiter;
+    if (parsed.errors.length) {
+      if (!this.quotingErrors) this.firstQuotingError = parsed.errors[0].message;
+      this.quotingErrors += parsed.errors.length;
+    }
+    for (const cells of parsed.data) {
+      if (this.done) return;
+      if (this.head === null) this.header(cells);
+      else this.row(cells, this.headerLine + ++this.r);
+    }
+  }
+
+  private header(cells: string[]): void {
+    const { profile, headerLine } = this;
+    const head = cells.map((h) => String(h).trim().toLowerCase());
+    if (!head.length || head.every((h) => h === '')) {
+      this.refused = [{ line: headerLine, message: `line ${headerLine}: no header row` }];
+      return;
+    }
+    this.head = head;
+    const missing: string[] = [];
+    for (const f of TESTER_FIELDS) {
+      const name = profile.columns[f];
+      if (!name) continue;
+      const at = head.indexOf(name.toLowerCase());
+      if (at < 0) missing.push(`"${name}" (${TESTER_FIELD_LABELS[f]})`);
+      else this.index.set(f, at);
+    }
+    if (missing.length) {
+      const shown = cells
+        .slice(0, 20)
+        .map((h) => `"${String(h).trim()}"`)
+        .join(', ');
+      this.refused = [{ line: headerLine, message: `line ${headerLine}: column ${missing.join(', ')} not found; the header has ${shown}` }];
+    }
+  }
+
+  private row(cells: string[], line: number): void {
+    const { profile, index, errors, rows, labels } = this;
+    const comma = profile.decimalMark === ',';
+    const [c1, c2]: TesterField[] = profile.chromaticity === 'xy' ? ['x', 'y'] : ['uPrime', 'vPrime'];
+    if (cells.length === 1 && String(cells[0]).trim() === '') return;
     if (rows.length >= MAX_TABLE_ROWS) {
       errors.push({
         line,
         message: `line ${line}: more than ${MAX_TABLE_ROWS.toLocaleString('en')} parts in one table; split the lot into several uploads`
       });
-      break;
+      this.refused = errors;
+      return;
     }
     const num = (f: TesterField, required: boolean): number | null => {
       const at = index.get(f);
@@ -148,8 +231,11 @@ export function parseTesterTable(text: string, profile: TesterProfile): TesterTa
     labels.set(row.label, line);
     rows.push(row);
   }
-  if (errors.length) return { ok: false, errors };
-  if (!rows.length) return { ok: false, errors: [{ line: headerLine, message: `no parts below the header on line ${headerLine}` }] };
-  const warnings = parsed.errors.length ? [`${parsed.errors.length} row(s) had quoting problems: ${parsed.errors[0].message}`] : [];
-  return { ok: true, rows, warnings };
+}
+
+/** Reads a whole tester table text with its profile (see TesterTableReader). */
+export function parseTesterTable(text: string, profile: TesterProfile): TesterTableResult {
+  const reader = new TesterTableReader(profile);
+  reader.write(text);
+  return reader.end();
 }

@@ -73,6 +73,33 @@ describe('the measurement reader thread', () => {
     expect(err.message).toContain('bad.csv was not saved');
   });
 
+  it('refuses a gzip file unpacking past the limit (413) and one cut short (422), across the thread', async () => {
+    // 60,000 rows of 200 bytes (12 MB) pack to a few hundred kB; the tester-table limit is 11 MB
+    // (src/lib/measurements/schema.ts), reached before the 100,000-row limit.
+    const pad = 'n'.repeat(170);
+    const rows = Array.from({ length: 60_000 }, (_, k) => `P${k},0.4338,0.4030,91,${pad}`);
+    const bomb = bytes(gzipSync(['Serial,x,y,Ra,Note', ...rows].join('\n')));
+    const big = await readOn(slot, { kind: 'table', name: 'big.csv.gz', body: bomb, profile }).catch((e) => e);
+    expect(big).toBeInstanceOf(DomainError);
+    expect(big.kind).toBe('too_large');
+    expect(big.message).toContain('big.csv.gz unpacks to more than');
+    // A gzip stream cut short fails its length and CRC trailer (RFC 1952 §2.3.1).
+    const gz = gzipSync(table);
+    const cut = await readOn(slot, { kind: 'table', name: 'cut.csv.gz', body: bytes(gz.subarray(0, gz.length - 6)), profile }).catch(
+      (e) => e
+    );
+    expect(cut).toBeInstanceOf(DomainError);
+    expect(cut.kind).toBe('unprocessable');
+    expect(cut.message).toContain('damaged or incomplete gzip file');
+  });
+
+  it('reads a Windows-1252 table (not UTF-8) read again from the start, as decodeText does', async () => {
+    // 0xB5 is µ in Windows-1252 (the WHATWG Encoding Standard index) and not valid UTF-8 on its own.
+    const body = Buffer.from('Serial,x,y,Ra\nW1,0.4338,0.4030,91\nW\xb5,0.4340,0.4031,92\n', 'latin1');
+    const r = await readOn(slot, { kind: 'table', name: 'w.csv', body: bytes(body), profile });
+    expect(r.labels).toEqual(['W1', 'Wµ']);
+  });
+
   it('measures spectra and reports progress per part', async () => {
     // Two parts: a yellow band with a blue peak (Gaussian shapes, invented), 380–780 nm at 5 nm.
     const rows = ['nm,A,B'];

@@ -1,7 +1,8 @@
 /**
- * Reading a measurement file, without the database: gzip unpacked (./unpack.ts), text decoded, then either
- * spectra parsed (CSV/TXT columns or rows, IES TM-27) and every part measured by the spectral core, or a
- * tester's per-part table read with its profile. Refusals name the line or part; nothing is saved here.
+ * Reading a measurement file, without the database: gzip unpacked as a stream (./unpack.ts), then either
+ * spectra decoded and parsed whole (CSV/TXT columns or rows, IES TM-27) and every part measured by the
+ * spectral core, or a tester's per-part table decoded and read piece by piece with its profile. Refusals
+ * name the line or part; nothing is saved here.
  * Runs in the request thread or in a worker thread (./read-worker.ts, ./read-pool.ts), so it holds no I/O.
  */
 import { decodeText } from '../../spectrum-file/decode';
@@ -10,12 +11,12 @@ import { parseSpectrumUpload } from '../../spectrum-file/read-upload';
 import { EMITTED_QUANTITIES, type Tm27Meta } from '../../spectrum-file/tm27';
 import { measurePartsPaced, type MeasuredPart } from '../../measurements/index';
 import { MAX_MEASUREMENT_FILE_BYTES, MAX_TABLE_FILE_BYTES } from '../../measurements/schema';
-import { parseTesterTable } from '../../tester-table/parse';
+import { TesterTableReader, type TesterTableResult } from '../../tester-table/parse';
 import { testerPartMetrics } from '../../tester-table/part-metrics';
 import type { TesterProfile } from '../../tester-table/profile';
 import { lineIssue, tooLarge, unprocessable } from '../../errors/domain-error';
 import { ansiBinOf } from '../../spectral/ansi/c78377';
-import { unpackUpload } from './unpack';
+import { unpackedChunks, unpackUpload } from './unpack';
 
 export type UploadProgress = { phase: 'parsing' | 'saving' } | { phase: 'measuring'; done: number; total: number };
 
@@ -41,9 +42,9 @@ function checkSize(name: string, size: number, limit: number, what: string): voi
 }
 
 /** Checks and reads a spectra file: every part measured; saves nothing. Throws a domain error naming lines or parts. */
-async function readSpectra(name: string, raw: Buffer, onProgress?: (p: UploadProgress) => void): Promise<ReadMeasurements> {
+async function readSpectra(name: string, raw: Uint8Array, onProgress?: (p: UploadProgress) => void): Promise<ReadMeasurements> {
   checkSize(name, raw.length, MAX_MEASUREMENT_FILE_BYTES, '');
-  const body = unpackUpload(raw, name, MAX_MEASUREMENT_FILE_BYTES);
+  const body = await unpackUpload(raw, name, MAX_MEASUREMENT_FILE_BYTES);
   onProgress?.({ phase: 'parsing' });
   // CSV/TXT (one column or one row per part) or an IES TM-27 document (one SpectralDistribution per part).
   const parsed = parseSpectrumUpload(decodeText(body), {
@@ -79,18 +80,41 @@ async function readSpectra(name: string, raw: Buffer, onProgress?: (p: UploadPro
   };
 }
 
+/**
+ * A tester table read as it unpacks: the text decoded piece by piece (UTF-8; when the bytes are not UTF-8 it
+ * is read again from the start as Windows-1252, as ../../spectrum-file/decode.ts does) and fed to the reader.
+ */
+async function streamTable(name: string, raw: Uint8Array, profile: TesterProfile): Promise<TesterTableResult> {
+  for (const encoding of ['utf-8', 'windows-1252']) {
+    const decoder = new TextDecoder(encoding, { fatal: encoding === 'utf-8' });
+    const reader = new TesterTableReader(profile);
+    try {
+      for await (const chunk of unpackedChunks(raw, name, MAX_TABLE_FILE_BYTES)) {
+        reader.write(decoder.decode(chunk, { stream: true }));
+        if (reader.done) break; // refused: the rest is not read
+        await pause();
+      }
+      if (!reader.done) reader.write(decoder.decode());
+    } catch (err) {
+      if (err instanceof TypeError && encoding === 'utf-8') continue;
+      throw err;
+    }
+    return reader.end();
+  }
+  throw new Error('unreachable');
+}
+
 /** Checks a tester table with its profile and turns each row into part metrics; saves nothing. */
-function readTable(
+async function readTable(
   name: string,
-  raw: Buffer,
+  raw: Uint8Array,
   p: { id: number; version: number; profile: TesterProfile },
   onProgress?: (p: UploadProgress) => void
-): ReadMeasurements {
+): Promise<ReadMeasurements> {
   checkSize(name, raw.length, MAX_TABLE_FILE_BYTES, ' for a tester table');
-  const body = unpackUpload(raw, name, MAX_TABLE_FILE_BYTES);
   const { profile } = p;
   onProgress?.({ phase: 'parsing' });
-  const parsed = parseTesterTable(decodeText(body), profile);
+  const parsed = await streamTable(name, raw, profile);
   if (!parsed.ok) {
     const n = parsed.errors.length;
     throw unprocessable(
@@ -112,8 +136,7 @@ function readTable(
 
 /** Reads one measurement file (spectra or a tester table). */
 export async function readMeasurementFile(job: ReadJob, onProgress?: (p: UploadProgress) => void): Promise<ReadMeasurements> {
-  const raw = Buffer.from(job.body.buffer, job.body.byteOffset, job.body.byteLength);
-  return job.kind === 'table' ? readTable(job.name, raw, job.profile, onProgress) : readSpectra(job.name, raw, onProgress);
+  return job.kind === 'table' ? readTable(job.name, job.body, job.profile, onProgress) : readSpectra(job.name, job.body, onProgress);
 }
 
 /** Numbers stored per part, in this order, NaN for none (ANSI bin: nominal CCT of the Table 1 quadrangle). */
