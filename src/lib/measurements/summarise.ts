@@ -54,7 +54,9 @@ export function summariseBatch(parts: readonly JudgedPart[], target: ResolvedTar
   for (const p of parts) {
     binCounts.set(p.verdict.ansiBin, (binCounts.get(p.verdict.ansiBin) ?? 0) + 1);
     if (p.verdict.inTargetBin) inTarget++;
-    for (const code of new Set(p.verdict.failures.map((f) => f.code))) failureCounts.set(code, (failureCounts.get(code) ?? 0) + 1);
+    const failures = p.verdict.failures;
+    if (failures.length === 0) continue; // most parts pass: no set to build
+    for (const code of new Set(failures.map((f) => f.code))) failureCounts.set(code, (failureCounts.get(code) ?? 0) + 1);
   }
   const bins = [...binCounts.entries()]
     .map(([nominalCct, count]) => ({ nominalCct, count }))

@@ -21,6 +21,15 @@ describe('histogram', () => {
   it('one repeated value makes one bin centred on it (90/50 = 1.8 → width 2); missing values are left out', () => {
     expect(histogram([90, 90, null, Number.NaN], 10)).toEqual([{ x0: 89, x1: 91, count: 2 }]);
   });
+  it('a value on a bin edge up to binary rounding counts in the bin above it (half-open bins), worked by hand', () => {
+    // 0.1 + 0.2 = 0.30000000000000004 and 0.1 × 7 = 0.7000000000000001 in binary (IEEE 754); 0.7 / 0.1 = 6.999999999999999
+    const bins = histogram([0, 0.1 + 0.2, 0.1 * 7, 0.7, 1], 10);
+    expect(bins).toHaveLength(10);
+    expect(bins[3].count).toBe(1); // [0.3, 0.4)
+    expect(bins[7].count).toBe(2); // [0.7, 0.8): both sevenths, neither in [0.6, 0.7)
+    expect(bins[6].count).toBe(0);
+    expect(bins[9].count).toBe(1); // the top edge 1 in the last bin
+  });
   it('no values, no bins', () => {
     expect(histogram([])).toEqual([]);
   });

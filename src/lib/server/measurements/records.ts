@@ -82,12 +82,19 @@ export async function activeParts(batchId: number, k: Q = db()): Promise<StoredP
   }));
 }
 
+/**
+ * Labels of the batch's parts that are not withdrawn. The batch's active uploads are read first, then their
+ * parts along the (upload, column) index: a join from the uploads side could walk every upload's parts.
+ */
 export async function activeLabels(batchId: number, k: Q = db()): Promise<Set<string>> {
-  const rows: { part_label: string }[] = await k('part_measurements as p')
-    .join('measurement_uploads as m', 'm.id', 'p.upload_id')
-    .where('p.batch_id', batchId)
-    .whereNull('m.withdrawn_at')
-    .select('p.part_label');
+  const uploads: { id: number }[] = await k('measurement_uploads').where({ batch_id: batchId }).whereNull('withdrawn_at').select('id');
+  if (!uploads.length) return new Set();
+  const rows: { part_label: string }[] = await k('part_measurements')
+    .whereIn(
+      'upload_id',
+      uploads.map((u) => u.id)
+    )
+    .select('part_label');
   return new Set(rows.map((r) => r.part_label));
 }
 
