@@ -2,12 +2,14 @@
  * Upload-to-summary of a 100,000-part tester table with the database (run inside a sandbox or after
  * `npm start` set the database up: `bash scripts/sandbox.sh bench npx tsx scripts/bench/db/tester-upload.ts`):
  * a completed demo batch gets the table through `uploadMeasurements` (read, metrics, one transaction of
- * batched inserts), then `batchResults` (every part judged, summary, plot model, the first page of parts).
+ * batched inserts), then `batchResults` (every part judged, summary, plot model, the first page of parts),
+ * then the release e-signature of the lot.
  * Prints the phases and the process's peak memory. Parts invented: a normal spread around 3000 K.
  */
 import { closeDb, db } from '../../../src/lib/server/db/index';
 import { uploadMeasurements } from '../../../src/lib/server/measurements/upload';
 import { batchResults } from '../../../src/lib/server/measurements/results';
+import { disposeBatch } from '../../../src/lib/server/measurements/disposition';
 import { closeReadPool, readsInWorkers } from '../../../src/lib/server/measurements/read-pool';
 import { createTesterProfile } from '../../../src/lib/server/measurements/tester-profiles';
 import { testerProfileSchema } from '../../../src/lib/tester-table/profile';
@@ -85,6 +87,19 @@ console.log(
     `summary ${(t2 - t1).toFixed(0)} ms, total ${(t2 - t0).toFixed(0)} ms; ` +
     `yield ${((view!.summary.yieldFraction ?? 0) * 100).toFixed(1)} %; ` +
     `rss ${(process.memoryUsage().rss / 1024 / 1024).toFixed(0)} MB`
+);
+// Then the release e-signature of the whole lot (signed content binding every part, the record PDF, notices).
+const version = (await getBatch(batchId))!.batch.version;
+const t3 = performance.now();
+await disposeBatch(
+  quality,
+  batchId,
+  { decision: 'release', meaning: 'Release approval: the batch meets its revision', comment: 'bench', password: 'phosforge-demo', version },
+  'http://localhost'
+);
+const signed = await db()('batch_dispositions').where({ batch_id: batchId }).first('signed_json');
+console.log(
+  `tester-upload  release ${(performance.now() - t3).toFixed(0)} ms (signed content ${(signed!.signed_json.length / 1024 / 1024).toFixed(1)} MB)`
 );
 await closeReadPool();
 await closeDb();
