@@ -97,9 +97,9 @@ await disposeBatch(
   { decision: 'release', meaning: 'Release approval: the batch meets its revision', comment: 'bench', password: 'phosforge-demo', version },
   'http://localhost'
 );
+const releaseMs = performance.now() - t3;
 const signed = await db()('batch_dispositions').where({ batch_id: batchId }).first('signed_json');
-console.log(
-  `tester-upload  release ${(performance.now() - t3).toFixed(0)} ms (signed content ${(signed!.signed_json.length / 1024 / 1024).toFixed(1)} MB)`
-);
+const signedMb = signed!.signed_json.length / 1024 / 1024;
+console.log(`tester-upload  release ${releaseMs.toFixed(0)} ms (signed content ${signedMb.toFixed(1)} MB)`);
 await closeReadPool();
 await closeDb();
