@@ -121,6 +121,8 @@ export const init: ServerInit = async () => {
   const { warmSolverPool, closeSolverPool } = await import('$lib/server/solver/pool');
   warmSolverPool();
   process.once('sveltekit:shutdown', () => void closeSolverPool());
+  const { closeReadPool } = await import('$lib/server/measurements/read-pool');
+  process.once('sveltekit:shutdown', () => void closeReadPool());
   // adapter-node stops accepting requests on SIGINT/SIGTERM, then emits this: close the database
   // pool so idle connections do not keep the process alive.
   process.once('sveltekit:shutdown', () => void closeDb());

@@ -13,7 +13,7 @@ import { testerPartMetrics } from '../../src/lib/tester-table/part-metrics';
 import { testerProfileSchema } from '../../src/lib/tester-table/profile';
 import { seededRandom } from '../../src/lib/blend/spread/prng';
 import { readAndPack } from '../../src/lib/server/measurements/read-file';
-import { readOn, startReader } from '../../src/lib/server/measurements/read-pool';
+import { readerPool, readOn } from '../../src/lib/server/measurements/read-pool';
 import { build } from 'esbuild';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -89,12 +89,12 @@ async function stalled(read: () => Promise<unknown>): Promise<{ ms: number; stal
 const workerFile = join(tmpdir(), `measure-worker-bench-${process.pid}.mjs`);
 const esm = { bundle: true, platform: 'node', format: 'esm', target: 'node20', logLevel: 'warning' } as const;
 await build({ ...esm, entryPoints: ['src/lib/server/measurements/read-worker.ts'], outfile: workerFile });
-const slot = startReader(workerFile);
+const readers = readerPool(workerFile, 1);
 const job = { kind: 'table' as const, name: 'lot.csv', body: new Uint8Array(Buffer.from(text)), profile: { id: 1, version: 1, profile } };
-await readOn(slot, job); // warm the thread
+await readOn(readers, job); // warm the thread
 const here = await stalled(() => readAndPack(job));
-const there = await stalled(() => readOn(slot, job));
-await slot.worker.terminate();
+const there = await stalled(() => readOn(readers, job));
+await readers.close();
 console.log(`tester-table  read in this thread   ${here.ms.toFixed(0).padStart(6)} ms, event loop stalled ${here.stallMs.toFixed(0)} ms`);
 console.log(`tester-table  read in reader thread ${there.ms.toFixed(0).padStart(6)} ms, event loop stalled ${there.stallMs.toFixed(0)} ms`);
 console.log(

@@ -10,12 +10,12 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { build } from 'esbuild';
 import { DomainError } from '../../../src/lib/errors/domain-error';
-import { readOn, startReader } from '../../../src/lib/server/measurements/read-pool';
+import { readerPool, readOn } from '../../../src/lib/server/measurements/read-pool';
 import type { UploadProgress } from '../../../src/lib/server/measurements/read-file';
 import { testerProfileSchema } from '../../../src/lib/tester-table/profile';
 
 const file = join(tmpdir(), `measure-worker-${process.pid}.mjs`);
-let slot: ReturnType<typeof startReader>;
+let readers: ReturnType<typeof readerPool>;
 const profile = {
   id: 7,
   version: 2,
@@ -42,16 +42,16 @@ beforeAll(async () => {
     outfile: file,
     logLevel: 'warning'
   });
-  slot = startReader(file);
+  readers = readerPool(file, 1);
 }, 60_000);
 afterAll(async () => {
-  await slot?.worker.terminate();
+  await readers?.close();
 });
 
 describe('the measurement reader thread', () => {
   it('reads a tester table with its profile, and the same table gzip-compressed', async () => {
     const progress: UploadProgress[] = [];
-    const r = await readOn(slot, { kind: 'table', name: 't.csv', body: bytes(table), profile }, (p) => progress.push(p));
+    const r = await readOn(readers, { kind: 'table', name: 't.csv', body: bytes(table), profile }, (p) => progress.push(p));
     expect(r.labels).toEqual(['W1', 'W2', 'W3']);
     expect(metricsOf(r)[1]).toMatchObject({ x: 0.434, y: 0.4031, ra: 92.5, source: 'table' });
     // Stored columns: x, y, …, Ra; the table's line numbers (header on line 1); ANSI C78.377-2017 Table 1 3000 K bin.
@@ -60,13 +60,13 @@ describe('the measurement reader thread', () => {
     expect([...r.columnNo]).toEqual([2, 3, 4]);
     expect(r.profile).toEqual({ id: 7, version: 2 });
     expect(progress[0]).toEqual({ phase: 'parsing' });
-    const gz = await readOn(slot, { kind: 'table', name: 't.csv.gz', body: bytes(gzipSync(table)), profile });
+    const gz = await readOn(readers, { kind: 'table', name: 't.csv.gz', body: bytes(gzipSync(table)), profile });
     expect(gz.metricsJson).toBe(r.metricsJson);
   });
 
   it('refuses a bad cell as the same DomainError, naming the line', async () => {
     const bad = table.replace('0.4031', 'abc');
-    const err = await readOn(slot, { kind: 'table', name: 'bad.csv', body: bytes(bad), profile }).catch((e) => e);
+    const err = await readOn(readers, { kind: 'table', name: 'bad.csv', body: bytes(bad), profile }).catch((e) => e);
     expect(err).toBeInstanceOf(DomainError);
     expect(err.kind).toBe('unprocessable');
     expect(err.issues[0].line).toBe(3);
@@ -79,13 +79,13 @@ describe('the measurement reader thread', () => {
     const pad = 'n'.repeat(170);
     const rows = Array.from({ length: 60_000 }, (_, k) => `P${k},0.4338,0.4030,91,${pad}`);
     const bomb = bytes(gzipSync(['Serial,x,y,Ra,Note', ...rows].join('\n')));
-    const big = await readOn(slot, { kind: 'table', name: 'big.csv.gz', body: bomb, profile }).catch((e) => e);
+    const big = await readOn(readers, { kind: 'table', name: 'big.csv.gz', body: bomb, profile }).catch((e) => e);
     expect(big).toBeInstanceOf(DomainError);
     expect(big.kind).toBe('too_large');
     expect(big.message).toContain('big.csv.gz unpacks to more than');
     // A gzip stream cut short fails its length and CRC trailer (RFC 1952 §2.3.1).
     const gz = gzipSync(table);
-    const cut = await readOn(slot, { kind: 'table', name: 'cut.csv.gz', body: bytes(gz.subarray(0, gz.length - 6)), profile }).catch(
+    const cut = await readOn(readers, { kind: 'table', name: 'cut.csv.gz', body: bytes(gz.subarray(0, gz.length - 6)), profile }).catch(
       (e) => e
     );
     expect(cut).toBeInstanceOf(DomainError);
@@ -96,7 +96,7 @@ describe('the measurement reader thread', () => {
   it('reads a Windows-1252 table (not UTF-8) read again from the start, as decodeText does', async () => {
     // 0xB5 is µ in Windows-1252 (the WHATWG Encoding Standard index) and not valid UTF-8 on its own.
     const body = Buffer.from('Serial,x,y,Ra\nW1,0.4338,0.4030,91\nW\xb5,0.4340,0.4031,92\n', 'latin1');
-    const r = await readOn(slot, { kind: 'table', name: 'w.csv', body: bytes(body), profile });
+    const r = await readOn(readers, { kind: 'table', name: 'w.csv', body: bytes(body), profile });
     expect(r.labels).toEqual(['W1', 'Wµ']);
   });
 
@@ -108,7 +108,7 @@ describe('the measurement reader thread', () => {
       rows.push(`${l},${a.toFixed(6)},${(0.95 * a).toFixed(6)}`);
     }
     const progress: UploadProgress[] = [];
-    const r = await readOn(slot, { kind: 'spectra', name: 's.csv', body: bytes(rows.join('\n')) }, (p) => progress.push(p));
+    const r = await readOn(readers, { kind: 'spectra', name: 's.csv', body: bytes(rows.join('\n')) }, (p) => progress.push(p));
     expect(r.labels).toEqual(['A', 'B']);
     const [a, b] = metricsOf(r);
     // Scaling a spectrum leaves its chromaticity alone (CIE 15:2004 §7.3: x, y are ratios of the tristimulus values).

@@ -53,15 +53,23 @@ export interface StoredPart extends MeasuredPart {
   condition: OperatingCondition | null;
 }
 
+/** The batch's uploads that are not withdrawn, with their test condition (a handful of rows). */
+function activeUploads(
+  batchId: number,
+  k: Q
+): Promise<{ id: number; test_reference: string | null; test_temperature_c: number | null; test_current_ma: number | null }[]> {
+  return k('measurement_uploads')
+    .where({ batch_id: batchId })
+    .whereNull('withdrawn_at')
+    .select('id', 'test_reference', 'test_temperature_c', 'test_current_ma');
+}
+
 /**
  * Parts of the batch's uploads that are not withdrawn, in upload and column order. The uploads are read first
  * (a handful), then the parts along the (upload, column) index — no sort of 100,000 rows with their JSON.
  */
 export async function activeParts(batchId: number, k: Q = db()): Promise<StoredPart[]> {
-  const uploads = await k('measurement_uploads')
-    .where({ batch_id: batchId })
-    .whereNull('withdrawn_at')
-    .select('id', 'test_reference', 'test_temperature_c', 'test_current_ma');
+  const uploads = await activeUploads(batchId, k);
   if (!uploads.length) return [];
   const conditions = new Map(uploads.map((u) => [u.id as number, conditionOfUpload(u)]));
   const rows = await k
@@ -87,7 +95,7 @@ export async function activeParts(batchId: number, k: Q = db()): Promise<StoredP
  * parts along the (upload, column) index: a join from the uploads side could walk every upload's parts.
  */
 export async function activeLabels(batchId: number, k: Q = db()): Promise<Set<string>> {
-  const uploads: { id: number }[] = await k('measurement_uploads').where({ batch_id: batchId }).whereNull('withdrawn_at').select('id');
+  const uploads = await activeUploads(batchId, k);
   if (!uploads.length) return new Set();
   const rows: { part_label: string }[] = await k('part_measurements')
     .whereIn(

@@ -19,10 +19,8 @@ function* slices(body: Uint8Array): Generator<Uint8Array> {
   for (let at = 0; at < body.length; at += SLICE) yield body.subarray(at, Math.min(body.length, at + SLICE));
 }
 
-function gzipRefusal(err: unknown, name: string, maxBytes: number): Error {
+function gzipRefusal(err: unknown, name: string): Error {
   const code = (err as { code?: string }).code;
-  if (code === 'ERR_BUFFER_TOO_LARGE' || (err instanceof RangeError && /length/i.test(err.message)))
-    return tooLarge(`${name} unpacks to more than ${formatBytes(maxBytes)}, the limit. Nothing was saved.`);
   return unprocessable(
     `${name} is a damaged or incomplete gzip file (${code ?? (err as Error).message}): it may have been cut off in transfer. ` +
       'Nothing was saved.'
@@ -49,7 +47,7 @@ export async function* unpackedChunks(body: Uint8Array, name: string, maxBytes: 
     }
   } catch (err) {
     if (err instanceof DomainError) throw err;
-    throw gzipRefusal(err, name, maxBytes);
+    throw gzipRefusal(err, name);
   } finally {
     gunzip.destroy();
   }

@@ -53,10 +53,8 @@ function stateRefusal(batchNumber: string, state: string): DomainError {
   return conflict(`Batch ${batchNumber} is ${state}: parts are measured once the weigh-out is complete.`);
 }
 
-type Measured = PackedMeasurements;
-
 /** Checks the file and reads its parts (spectra, or a tester table with its profile); saves nothing. Off the request thread when built. */
-export async function readFile(file: MeasurementFile, onProgress?: (p: UploadProgress) => void): Promise<Measured> {
+export async function readFile(file: MeasurementFile, onProgress?: (p: UploadProgress) => void): Promise<PackedMeasurements> {
   const body = new Uint8Array(file.body.buffer, file.body.byteOffset, file.body.byteLength);
   if (!file.testerProfileId) return readOffThread({ kind: 'spectra', name: file.name, body }, onProgress);
   const { id, version, profile } = await getTesterProfile(file.testerProfileId);
@@ -68,7 +66,7 @@ export async function insertMeasurements(
   trx: Knex.Transaction,
   batchId: number,
   file: MeasurementFile,
-  m: Measured,
+  m: PackedMeasurements,
   uploadedBy: number
 ): Promise<{ uploadId: number; storedFileId: number }> {
   const storedFileId = await putFile(

@@ -8,24 +8,16 @@
 import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
-import { Worker } from 'node:worker_threads';
 import { config } from '../config';
 import { BlendInputError } from '../../blend/errors';
 import { solveAtCondition, type ConditionSolveProblem, type ConditionSolveResult } from '../../blend/solver/solveAtCondition';
 import { traceTradeOff, type TradeOffProblem, type TradeOffResult } from '../../blend/solver/tradeOff';
 import { SpectrumInputError } from '../../spectral/errors';
+import { runsFromBuild, ThreadPool } from '../workers/thread-pool';
 
 const workerFile = (): string => resolve(config().solveWorkerFile);
 
-interface Slot {
-  worker: Worker;
-  busy: Set<number>;
-}
-type Pending = { resolve: (r: never) => void; reject: (e: Error) => void };
-
-let slots: Slot[] | null = null;
-const pending = new Map<number, Pending>();
-let nextId = 1;
+let pool: ThreadPool<unknown> | null = null;
 
 function revive(error: { name: string; message: string }): Error {
   if (['BlendInputError', 'ThermalRangeError', 'ThermalNotCharacterisedError'].includes(error.name))
@@ -34,32 +26,11 @@ function revive(error: { name: string; message: string }): Error {
   return new Error(`solver worker: ${error.message}`);
 }
 
-function startSlot(): Slot {
-  const worker = new Worker(workerFile());
-  worker.unref();
-  const slot: Slot = { worker, busy: new Set<number>() };
-  worker.on('message', (m: { id: number; result?: unknown; error?: { name: string; message: string } }) => {
-    slot.busy.delete(m.id);
-    const p = pending.get(m.id);
-    pending.delete(m.id);
-    if (!p) return;
-    if (m.error) p.reject(revive(m.error));
-    else p.resolve(m.result as never);
-  });
-  worker.on('error', (err) => {
-    // A crashed worker fails the requests it held and is replaced by a fresh one.
-    for (const id of slot.busy) {
-      pending.get(id)?.reject(err);
-      pending.delete(id);
-    }
-    if (slots) slots = slots.map((s) => (s === slot ? startSlot() : s));
-  });
-  return slot;
-}
-
 /** Starts the workers ahead of the first request (they load the solver and mathjs, about 1–2 s). */
 export function warmSolverPool(): void {
-  if (usesWorkers()) slots ??= Array.from({ length: workerCount() }, startSlot);
+  if (!usesWorkers()) return;
+  pool ??= new ThreadPool(workerFile(), workerCount(), revive);
+  pool.warm();
 }
 
 /** The configured number (PF_SOLVE_WORKERS, validated in config) when set, else one per core (at most 4). */
@@ -69,20 +40,13 @@ export function workerCount(setting: number | null = config().solveWorkers): num
 
 /** Workers only when this module runs from the built app (build/server/…); dev server and tests solve in-thread. */
 export function usesWorkers(): boolean {
-  const built = import.meta.url.includes('/build/server/');
-  return built && workerCount() > 0 && existsSync(workerFile());
+  return runsFromBuild() && workerCount() > 0 && existsSync(workerFile());
 }
 
 /** Sends one job to the least busy worker. */
 function post<R>(message: { kind: 'solve' | 'tradeOff'; problem: unknown }): Promise<R> {
   warmSolverPool();
-  const slot = slots!.reduce((a, b) => (b.busy.size < a.busy.size ? b : a));
-  const id = nextId++;
-  return new Promise<R>((resolvePromise, reject) => {
-    pending.set(id, { resolve: resolvePromise as (r: never) => void, reject });
-    slot.busy.add(id);
-    slot.worker.postMessage({ id, ...message });
-  });
+  return pool!.run(message) as Promise<R>;
 }
 
 /** Solves (at the problem's condition; bench when none) in a worker thread when the bundled worker exists, else in this thread. */
@@ -98,7 +62,7 @@ export function tradeOffOffThread(problem: TradeOffProblem): Promise<TradeOffRes
 }
 
 export async function closeSolverPool(): Promise<void> {
-  const s = slots;
-  slots = null;
-  if (s) await Promise.all(s.map((x) => x.worker.terminate()));
+  const p = pool;
+  pool = null;
+  await p?.close();
 }
